@@ -1,0 +1,12 @@
+using System.CommandLine;
+
+namespace DistTree.Cli.Commands;
+
+/// <summary>Every subcommand of <c>disttree</c>, in the order <c>--help</c> lists them.</summary>
+internal static class CommandCatalog
+{
+    public static IEnumerable<Command> Create(CliContext context)
+    {
+        yield break;
+    }
+}

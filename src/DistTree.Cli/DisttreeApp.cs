@@ -1,0 +1,56 @@
+using System.CommandLine;
+using DistTree.Cli.Commands;
+using DistTree.Diagnostics;
+
+namespace DistTree.Cli;
+
+/// <summary>
+/// Builds the command tree and runs it. The one top-level catch turns user errors into messages
+/// and exit code 2; no stack trace reaches a user for bad input.
+/// </summary>
+public static class DisttreeApp
+{
+    /// <summary>Runs <paramref name="args"/> writing to the given writers; returns the exit code.</summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    {
+        var context = new CliContext(stdout, stderr);
+        var root = new RootCommand(
+            "DistTree: voltage drop, ampacity and upsizing for the distribution tree of a building. " +
+            "A design aid: the code in force and the authority having jurisdiction decide; a qualified person reviews the design.");
+        foreach (var command in CommandCatalog.Create(context))
+        {
+            root.Subcommands.Add(command);
+        }
+
+        var parsed = root.Parse(args);
+        if (parsed.Errors.Count > 0)
+        {
+            foreach (var error in parsed.Errors)
+            {
+                stderr.WriteLine($"disttree: error: {error.Message}");
+            }
+
+            stderr.WriteLine("Run 'disttree --help' for usage.");
+            return ExitCodes.BadInput;
+        }
+
+        try
+        {
+            return parsed.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
+        }
+        catch (ProjectException e)
+        {
+            foreach (var diagnostic in e.Diagnostics)
+            {
+                stderr.WriteLine(diagnostic.ToString());
+            }
+
+            return ExitCodes.BadInput;
+        }
+        catch (UsageException e)
+        {
+            stderr.WriteLine($"disttree: error: {e.Message}");
+            return ExitCodes.BadInput;
+        }
+    }
+}

@@ -1,0 +1,14 @@
+namespace DistTree.Cli;
+
+/// <summary>The exit codes of every command (DESIGN.md section 5).</summary>
+public static class ExitCodes
+{
+    /// <summary>Within all limits.</summary>
+    public const int Ok = 0;
+
+    /// <summary>A limit is exceeded (or, for compare, a new finding appeared).</summary>
+    public const int LimitExceeded = 1;
+
+    /// <summary>Bad input or usage.</summary>
+    public const int BadInput = 2;
+}

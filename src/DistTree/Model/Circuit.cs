@@ -1,0 +1,34 @@
+using DistTree.Diagnostics;
+
+namespace DistTree.Model;
+
+/// <summary>A branch circuit of a panelboard: an end point of the tree.</summary>
+public sealed record Circuit
+{
+    /// <summary>The circuit's id, unique in its panel (e.g. <c>"1"</c>).</summary>
+    public required string Id { get; init; }
+
+    /// <summary>The id unique in the project: <c>PANEL/ID</c>.</summary>
+    public required string FullId { get; init; }
+
+    /// <summary>What the circuit serves.</summary>
+    public string Name { get; init; } = "";
+
+    /// <summary>1 (line-neutral), 2 (line-line) or 3 (three-phase).</summary>
+    public required int Poles { get; init; }
+
+    /// <summary>The supply the panel's system gives a circuit of this many poles.</summary>
+    public required CircuitSupply Supply { get; init; }
+
+    /// <summary>The load at the end of the run.</summary>
+    public required Load Load { get; init; }
+
+    /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it.</summary>
+    public bool Continuous { get; init; }
+
+    /// <summary>The branch-circuit conductors.</summary>
+    public required Run Run { get; init; }
+
+    /// <summary>Where the circuit is in the project file.</summary>
+    public SourceLocation Location { get; init; } = SourceLocation.None;
+}

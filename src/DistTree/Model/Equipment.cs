@@ -1,0 +1,61 @@
+using DistTree.Diagnostics;
+
+namespace DistTree.Model;
+
+/// <summary>What a piece of equipment is.</summary>
+public enum EquipmentKind
+{
+    /// <summary>A switchboard or distribution board.</summary>
+    Switchboard,
+
+    /// <summary>A panelboard; it may have branch circuits.</summary>
+    Panelboard,
+
+    /// <summary>A step-down (or step-up) transformer.</summary>
+    Transformer,
+
+    /// <summary>A splitter or tap box.</summary>
+    Splitter,
+}
+
+/// <summary>A transformer's nameplate data.</summary>
+/// <param name="Kva">Rating in kVA.</param>
+/// <param name="Secondary">The secondary system.</param>
+/// <param name="ImpedancePercent">Percent impedance %Z.</param>
+/// <param name="XOverR">Reactance-to-resistance ratio.</param>
+/// <param name="TapPercent">Tap setting in percent: positive raises the secondary voltage.</param>
+public sealed record TransformerData(double Kva, ElectricalSystem Secondary, double ImpedancePercent, double XOverR, double TapPercent);
+
+/// <summary>A switchboard, panelboard, transformer or splitter, fed from its source by an optional feeder.</summary>
+public sealed record Equipment
+{
+    /// <summary>The equipment's id, unique in the project.</summary>
+    public required string Id { get; init; }
+
+    /// <summary>What it is.</summary>
+    public required EquipmentKind Kind { get; init; }
+
+    /// <summary>The id of the service or equipment that feeds it.</summary>
+    public required string From { get; init; }
+
+    /// <summary>The system its feeder carries (its source's system; a transformer's primary).</summary>
+    public required ElectricalSystem System { get; init; }
+
+    /// <summary>The feeder from its source, or null when it stands at its source (no run, no drop).</summary>
+    public Run? Feeder { get; init; }
+
+    /// <summary>Demand factor applied to everything it feeds (1.0 = none).</summary>
+    public double DemandFactor { get; init; } = 1.0;
+
+    /// <summary>Nameplate data when <see cref="Kind"/> is a transformer.</summary>
+    public TransformerData? Transformer { get; init; }
+
+    /// <summary>Branch circuits (panelboards only).</summary>
+    public IReadOnlyList<Circuit> Circuits { get; init; } = [];
+
+    /// <summary>Where the equipment is in the project file.</summary>
+    public SourceLocation Location { get; init; } = SourceLocation.None;
+
+    /// <summary>The system of what it feeds: the secondary for a transformer, else its own system.</summary>
+    public ElectricalSystem OutputSystem => Transformer?.Secondary ?? System;
+}

@@ -1,0 +1,51 @@
+using DistTree.Diagnostics;
+
+namespace DistTree.Model;
+
+/// <summary>The unit of bare lengths in a project file.</summary>
+public enum UnitSystem
+{
+    /// <summary>Metres.</summary>
+    Metric,
+
+    /// <summary>Feet.</summary>
+    Imperial,
+}
+
+/// <summary>The service: the root of the distribution tree.</summary>
+/// <param name="Id">Its id.</param>
+/// <param name="System">The utility supply system.</param>
+/// <param name="FrequencyHz">Supply frequency in hertz.</param>
+/// <param name="Location">Where it is in the project file.</param>
+public sealed record Service(string Id, ElectricalSystem System, double FrequencyHz, SourceLocation Location);
+
+/// <summary>A loaded, validated project: the model every later stage reads.</summary>
+public sealed record Project
+{
+    /// <summary>The project's name.</summary>
+    public required string Name { get; init; }
+
+    /// <summary>The project file's path as given.</summary>
+    public required string File { get; init; }
+
+    /// <summary>Lower-case hex SHA-256 of the project file's bytes.</summary>
+    public required string Sha256 { get; init; }
+
+    /// <summary>The unit of bare lengths in the file (figures are always in metres in the model).</summary>
+    public UnitSystem Units { get; init; } = UnitSystem.Metric;
+
+    /// <summary>Limits and method choices.</summary>
+    public Rules Rules { get; init; } = Rules.Default;
+
+    /// <summary>Conductor defaults.</summary>
+    public ConductorDefaults Defaults { get; init; } = ConductorDefaults.Standard;
+
+    /// <summary>The service.</summary>
+    public required Service Service { get; init; }
+
+    /// <summary>Every piece of equipment, in file order.</summary>
+    public required IReadOnlyList<Equipment> Equipment { get; init; }
+
+    /// <summary>Warnings found while loading (suspicious but legal input).</summary>
+    public IReadOnlyList<Diagnostic> Warnings { get; init; } = [];
+}

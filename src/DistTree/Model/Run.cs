@@ -1,0 +1,43 @@
+using DistTree.Conductors;
+using DistTree.Diagnostics;
+
+namespace DistTree.Model;
+
+/// <summary>
+/// The conductors of one feeder or branch circuit, as the project gives them (defaults applied).
+/// </summary>
+public sealed record Run
+{
+    /// <summary>One-way length in metres, service side to load side.</summary>
+    public required double LengthM { get; init; }
+
+    /// <summary>The conductor size of each phase conductor.</summary>
+    public required ConductorSize Size { get; init; }
+
+    /// <summary>Number of parallel sets (1 or more).</summary>
+    public int Sets { get; init; } = 1;
+
+    /// <summary>Conductor metal.</summary>
+    public required Material Material { get; init; }
+
+    /// <summary>Insulation rating in °C.</summary>
+    public required int InsulationC { get; init; }
+
+    /// <summary>Raceway kind.</summary>
+    public required Raceway Raceway { get; init; }
+
+    /// <summary>Overcurrent device rating in amperes protecting the run, if stated.</summary>
+    public double? OcpdA { get; init; }
+
+    /// <summary>A limit for this run alone in percent, overriding the rules' feeder or branch limit.</summary>
+    public double? LimitPercent { get; init; }
+
+    /// <summary>Pinned by the user: upsizing must keep this size.</summary>
+    public bool Fixed { get; init; }
+
+    /// <summary>Where the run's mapping starts in the project file.</summary>
+    public SourceLocation Location { get; init; } = SourceLocation.None;
+
+    /// <summary>Where the run's <c>size</c> value is in the project file (for edits and findings).</summary>
+    public SourceLocation SizeLocation { get; init; } = SourceLocation.None;
+}

@@ -1,0 +1,44 @@
+using DistTree.Model;
+using QuikGraph;
+
+namespace DistTree.Network;
+
+/// <summary>
+/// The distribution tree of a project: a QuikGraph graph whose root is the service, with the nodes
+/// also held in an array in which every parent precedes its children, so that stages can walk the
+/// tree iteratively (top-down forwards, bottom-up backwards) without recursion.
+/// </summary>
+public sealed class DistributionNetwork
+{
+    internal DistributionNetwork(Project project, IReadOnlyList<NetworkNode> nodes, BidirectionalGraph<NetworkNode, NetworkRun> graph)
+    {
+        Project = project;
+        Nodes = nodes;
+        Graph = graph;
+    }
+
+    /// <summary>The project the tree was built from.</summary>
+    public Project Project { get; }
+
+    /// <summary>Every node; a parent's index is always smaller than its children's. Index 0 is the service.</summary>
+    public IReadOnlyList<NetworkNode> Nodes { get; }
+
+    /// <summary>The tree as a QuikGraph graph: vertices are nodes, edges are runs.</summary>
+    public BidirectionalGraph<NetworkNode, NetworkRun> Graph { get; }
+
+    /// <summary>The service.</summary>
+    public NetworkNode Root => Nodes[0];
+
+    /// <summary>The path of node indices from the service to <paramref name="node"/>, service first.</summary>
+    public IReadOnlyList<int> PathTo(NetworkNode node)
+    {
+        var path = new List<int>();
+        for (var i = node.Index; i >= 0; i = Nodes[i].ParentIndex)
+        {
+            path.Add(i);
+        }
+
+        path.Reverse();
+        return path;
+    }
+}

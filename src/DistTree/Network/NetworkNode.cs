@@ -1,0 +1,53 @@
+using DistTree.Model;
+
+namespace DistTree.Network;
+
+/// <summary>
+/// A node of the distribution tree: the service, a piece of equipment, or a circuit's end point.
+/// Nodes are numbered so that a parent always comes before its children.
+/// </summary>
+public sealed class NetworkNode
+{
+    internal NetworkNode(int index, string id, NodeKind kind, ElectricalSystem system, int parentIndex)
+    {
+        Index = index;
+        Id = id;
+        Kind = kind;
+        System = system;
+        ParentIndex = parentIndex;
+    }
+
+    /// <summary>Position in <see cref="DistributionNetwork.Nodes"/>; a parent's index is smaller than its children's.</summary>
+    public int Index { get; }
+
+    /// <summary>The node's id: equipment id, the service id, or a circuit's full id (<c>LP1/3</c>).</summary>
+    public string Id { get; }
+
+    /// <summary>What the node is.</summary>
+    public NodeKind Kind { get; }
+
+    /// <summary>The system this node distributes (a transformer's secondary; an end point's panel system).</summary>
+    public ElectricalSystem System { get; }
+
+    /// <summary>The parent's index, or -1 for the service.</summary>
+    public int ParentIndex { get; }
+
+    /// <summary>The run that feeds this node, or null for the service and for equipment standing at its source.</summary>
+    public NetworkRun? Incoming { get; internal set; }
+
+    /// <summary>The equipment this node is, when it is equipment.</summary>
+    public Equipment? Equipment { get; internal init; }
+
+    /// <summary>The circuit this node ends, when it is an end point.</summary>
+    public Circuit? Circuit { get; internal init; }
+
+    /// <summary>Children's indices, in file order.</summary>
+    public IReadOnlyList<int> Children => _children;
+
+    internal List<int> MutableChildren => _children;
+
+    private readonly List<int> _children = [];
+
+    /// <inheritdoc />
+    public override string ToString() => Id;
+}
