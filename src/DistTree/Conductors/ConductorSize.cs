@@ -28,6 +28,9 @@ public readonly record struct ConductorSize : IComparable<ConductorSize>
 
     private ConductorSize(int index) => _index = index;
 
+    /// <summary>Position in <see cref="All"/>: a dense key for per-size arrays.</summary>
+    internal int Index => _index;
+
     /// <summary>Every size DistTree knows, North American first, each series ascending.</summary>
     public static IReadOnlyList<ConductorSize> All { get; } =
         Enumerable.Range(0, Table.Length).Select(i => new ConductorSize(i)).ToArray();

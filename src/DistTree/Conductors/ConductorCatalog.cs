@@ -1,0 +1,323 @@
+using System.Globalization;
+
+namespace DistTree.Conductors;
+
+/// <summary>
+/// The conductor data DistTree computes with: resistance at temperature (physics, and IEC 60228 maxima for
+/// metric sizes), AC resistance with skin, proximity and raceway effects, reactance, and ampacity with its
+/// corrections. The numbers that are data come from a tab-separated file whose header names every column's
+/// source; <see cref="Standard"/> is the one embedded in the library.
+/// </summary>
+public sealed class ConductorCatalog
+{
+    private const double FeetPerKft = 1000.0;
+    private const double MetresPerFoot = 0.3048;
+
+    private readonly CatalogRow?[] _rows;
+
+    private ConductorCatalog(string sourceName, IReadOnlyList<string> header, CatalogRow?[] rows)
+    {
+        SourceName = sourceName;
+        Header = header;
+        _rows = rows;
+    }
+
+    /// <summary>The catalogue embedded in the library (<c>Conductors/Data/conductors.tsv</c>).</summary>
+    public static ConductorCatalog Standard { get; } = LoadEmbedded();
+
+    /// <summary>Where the data came from: the embedded resource's name or the file the project named.</summary>
+    public string SourceName { get; }
+
+    /// <summary>The data file's header comment: what each column is and where it comes from.</summary>
+    public IReadOnlyList<string> Header { get; }
+
+    /// <summary>The sizes the catalogue has data for, in <see cref="ConductorSize.All"/> order.</summary>
+    public IEnumerable<ConductorSize> Sizes => ConductorSize.All.Where(s => _rows[s.Index] is not null);
+
+    /// <summary>Reads a catalogue in the embedded file's layout; throws <see cref="FormatException"/> naming the line.</summary>
+    public static ConductorCatalog Load(TextReader reader, string sourceName) =>
+        CatalogFile.Read(reader, sourceName, (header, rows) => new ConductorCatalog(sourceName, header, Interpolate(rows)));
+
+    /// <summary>True when the catalogue has data for <paramref name="size"/>.</summary>
+    public bool Contains(ConductorSize size) => _rows[size.Index] is not null;
+
+    /// <summary>
+    /// DC resistance at 20 °C, ohm/km: the IEC 60228 maximum for metric sizes that have one, else
+    /// ρ20/A × stranding factor.
+    /// </summary>
+    public double DcResistance20OhmPerKm(ConductorSize size, Material material)
+    {
+        var row = Row(size);
+        var tabulated = material == Material.Copper ? row.R20CuOhmPerKm : row.R20AlOhmPerKm;
+        return tabulated ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, material);
+    }
+
+    /// <summary>Where the 20 °C resistance of <paramref name="size"/> comes from, in words.</summary>
+    public string DcResistanceBasis(ConductorSize size, Material material)
+    {
+        var row = Row(size);
+        var tabulated = material == Material.Copper ? row.R20CuOhmPerKm : row.R20AlOhmPerKm;
+        return tabulated is null ? "area × resistivity × stranding" : "IEC 60228 maximum";
+    }
+
+    /// <summary>DC resistance at <paramref name="temperatureC"/>, ohm/km.</summary>
+    public double DcResistanceOhmPerKm(ConductorSize size, Material material, double temperatureC) =>
+        ConductorPhysics.AtTemperature(DcResistance20OhmPerKm(size, material), material, temperatureC);
+
+    /// <summary>
+    /// AC resistance at <paramref name="temperatureC"/>, ohm/km per conductor: DC resistance × (1 + ys + yp)
+    /// (IEC 60287-1-1, conductors touching in a triangle) × the raceway's extra loss (NEC Chapter 9
+    /// Table 9's steel-to-PVC ratio; aluminium conduit takes the steel ratio as an upper bound).
+    /// </summary>
+    public double AcResistanceOhmPerKm(ConductorSize size, Material material, Raceway raceway, double temperatureC, double frequencyHz)
+    {
+        var row = Row(size);
+        var rdc = DcResistanceOhmPerKm(size, material, temperatureC);
+        var dc = ConductorPhysics.StrandedDiameterMm(size.AreaMm2);
+        var acOverDc = ConductorPhysics.AcOverDc(rdc, frequencyHz, dc, dc + (2.0 * row.InsulationMm));
+        var racewayFactor = raceway == Raceway.Pvc ? 1.0 : (material == Material.Copper ? row.SteelRatioCu : row.SteelRatioAl);
+        return rdc * acOverDc * racewayFactor;
+    }
+
+    /// <summary>Inductive reactance per conductor, ohm/km, scaled from the data's frequency to <paramref name="frequencyHz"/>.</summary>
+    public double ReactanceOhmPerKm(ConductorSize size, Raceway raceway, double frequencyHz)
+    {
+        var row = Row(size);
+        var x = raceway == Raceway.Steel ? row.XSteel : row.XPvc;
+        return ToOhmPerKm(x, row.PerKft) * frequencyHz / (row.PerKft ? 60.0 : 50.0);
+    }
+
+    /// <summary>
+    /// The tabulated ampacity in amperes at 30 °C for the 60, 75 or 90 °C column, or null where the table
+    /// has none (14 AWG aluminium, metric 60 °C, metric 400 mm² and up).
+    /// </summary>
+    public double? TableAmpacityA(ConductorSize size, Material material, int columnC)
+    {
+        var row = Row(size);
+        var column = columnC switch
+        {
+            60 => 0,
+            75 => 1,
+            90 => 2,
+            _ => throw new ArgumentOutOfRangeException(nameof(columnC), columnC, "60, 75 or 90"),
+        };
+        return material == Material.Copper ? row.AmpacityCu[column] : row.AmpacityAl[column];
+    }
+
+    /// <summary>
+    /// The temperature that a column's conductors are rated at, °C: the column itself, except the metric
+    /// 75 column, which holds IEC PVC figures rated 70 °C.
+    /// </summary>
+    public static double RatedTemperatureC(ConductorSize size, int columnC) =>
+        size.Kind == SizeKind.Metric && columnC == 75 ? 70.0 : columnC;
+
+    /// <summary>
+    /// The conductor's own ampacity Iz at the ambient, amperes: its insulation column × ambient factor ×
+    /// adjustment factor. This drives the temperature estimate. Null where the table has no figure.
+    /// </summary>
+    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarryingConductors = 3)
+    {
+        var table = TableAmpacityA(size, material, insulationC);
+        return table * Ampacity.AmbientFactor(RatedTemperatureC(size, insulationC), ambientC)
+            * Ampacity.AdjustmentFactor(currentCarryingConductors);
+    }
+
+    /// <summary>
+    /// The allowable ampacity, amperes: the thermal ampacity, but not above the column of the terminal rating
+    /// (the lower of terminal and insulation ratings; NEC 110.14(C), read). Metric sizes have no terminal
+    /// column: their thermal ampacity is the allowable one. Null where the table has no figure.
+    /// </summary>
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarryingConductors = 3)
+    {
+        var thermal = ThermalAmpacityA(size, material, insulationC, ambientC, currentCarryingConductors);
+        if (thermal is null || size.Kind == SizeKind.Metric)
+        {
+            return thermal;
+        }
+
+        var terminal = TableAmpacityA(size, material, Math.Min(terminalC, insulationC));
+        return terminal is null ? thermal : Math.Min(thermal.Value, terminal.Value);
+    }
+
+    /// <summary>The largest overcurrent device a small conductor may have (NEC 240.4(D)), amperes, or null.</summary>
+    public double? SmallConductorMaxOcpdA(ConductorSize size, Material material)
+    {
+        var row = Row(size);
+        return material == Material.Copper ? row.MaxOcpdCuA : row.MaxOcpdAlA;
+    }
+
+    internal static double ToOhmPerKm(double value, bool perKft) =>
+        perKft ? value / (FeetPerKft * MetresPerFoot) * 1000.0 : value;
+
+    private CatalogRow Row(ConductorSize size) =>
+        _rows[size.Index] ?? throw new KeyNotFoundException($"the conductor catalogue '{SourceName}' has no data for {size}");
+
+    private static ConductorCatalog LoadEmbedded()
+    {
+        const string name = "DistTree.Conductors.Data.conductors.tsv";
+        using var stream = typeof(ConductorCatalog).Assembly.GetManifestResourceStream(name)
+            ?? throw new InvalidOperationException($"embedded resource {name} is missing");
+        using var reader = new StreamReader(stream);
+        return Load(reader, "conductors.tsv (embedded)");
+    }
+
+    // Fills blank reactance cells by log-area interpolation between neighbours of the same series (held
+    // beyond the last), and turns the Table 9 resistance pairs into steel ratios (1 below the first pair,
+    // interpolated between pairs, held above the last; metric sizes interpolate at equal area).
+    private static CatalogRow?[] Interpolate(RawRow?[] raw)
+    {
+        var rows = new CatalogRow?[raw.Length];
+        var northAmerican = ConductorSize.InSeries(SizeSeries.NorthAmerican).Where(s => raw[s.Index] is not null).ToArray();
+        var cuPairs = Points(northAmerican, raw, r => r.RsteelCu / r.RpvcCu);
+        var alPairs = Points(northAmerican, raw, r => r.RsteelAl / r.RpvcAl);
+        foreach (var series in new[] { SizeSeries.NorthAmerican, SizeSeries.Metric })
+        {
+            var present = ConductorSize.InSeries(series).Where(s => raw[s.Index] is not null).ToArray();
+            var xPvc = Points(present, raw, r => r.XPvc);
+            var xSteel = Points(present, raw, r => r.XSteel);
+            foreach (var size in present)
+            {
+                var r = raw[size.Index]!;
+                rows[size.Index] = new CatalogRow(
+                    r.PerKft,
+                    r.XPvc ?? LogInterpolate(xPvc, size.AreaMm2, belowFirst: null),
+                    r.XSteel ?? LogInterpolate(xSteel, size.AreaMm2, belowFirst: null),
+                    LogInterpolate(cuPairs, size.AreaMm2, belowFirst: 1.0),
+                    LogInterpolate(alPairs, size.AreaMm2, belowFirst: 1.0),
+                    r.R20Cu,
+                    r.R20Al,
+                    [r.Cu60, r.Cu75, r.Cu90],
+                    [r.Al60, r.Al75, r.Al90],
+                    r.InsulationMm,
+                    r.OcpdCu,
+                    r.OcpdAl);
+            }
+        }
+
+        return rows;
+    }
+
+    private static (double AreaMm2, double Value)[] Points(IEnumerable<ConductorSize> sizes, RawRow?[] raw, Func<RawRow, double?> value) =>
+        sizes.Select(s => (s.AreaMm2, Value: value(raw[s.Index]!)))
+            .Where(p => p.Value is not null)
+            .Select(p => (p.AreaMm2, p.Value!.Value))
+            .ToArray();
+
+    // Below the first point: belowFirst, or the first point's value when null. Above the last: the last's.
+    private static double LogInterpolate((double AreaMm2, double Value)[] points, double areaMm2, double? belowFirst)
+    {
+        if (points.Length == 0)
+        {
+            return belowFirst ?? throw new FormatException("a reactance column has no value at all");
+        }
+
+        if (areaMm2 < points[0].AreaMm2 * (1 - 1e-9))
+        {
+            return belowFirst ?? points[0].Value;
+        }
+
+        for (var i = 1; i < points.Length; i++)
+        {
+            if (areaMm2 <= points[i].AreaMm2)
+            {
+                var (a0, v0) = points[i - 1];
+                var (a1, v1) = points[i];
+                var t = Math.Log(areaMm2 / a0) / Math.Log(a1 / a0);
+                return v0 + (t * (v1 - v0));
+            }
+        }
+
+        return points[^1].Value;
+    }
+
+    internal sealed record RawRow(
+        bool PerKft, double? XPvc, double? XSteel, double? RpvcCu, double? RsteelCu, double? RpvcAl, double? RsteelAl,
+        double? R20Cu, double? R20Al, double? Cu60, double? Cu75, double? Cu90, double? Al60, double? Al75, double? Al90,
+        double InsulationMm, double? OcpdCu, double? OcpdAl);
+
+    private sealed record CatalogRow(
+        bool PerKft, double XPvc, double XSteel, double SteelRatioCu, double SteelRatioAl, double? R20CuOhmPerKm, double? R20AlOhmPerKm,
+        double?[] AmpacityCu, double?[] AmpacityAl, double InsulationMm, double? MaxOcpdCuA, double? MaxOcpdAlA);
+
+    private static class CatalogFile
+    {
+        private static readonly string[] Columns =
+        [
+            "size", "per", "x_pvc", "x_steel", "rpvc_cu", "rsteel_cu", "rpvc_al", "rsteel_al", "r20_cu", "r20_al",
+            "cu60", "cu75", "cu90", "al60", "al75", "al90", "ins_mm", "ocpd_cu", "ocpd_al",
+        ];
+
+        public static ConductorCatalog Read(TextReader reader, string sourceName, Func<IReadOnlyList<string>, RawRow?[], ConductorCatalog> make)
+        {
+            var header = new List<string>();
+            var rows = new RawRow?[ConductorSize.All.Count];
+            var sawColumns = false;
+            var lineNumber = 0;
+            while (reader.ReadLine() is { } line)
+            {
+                lineNumber++;
+                if (line.StartsWith('#'))
+                {
+                    header.Add(line.Length > 1 ? line[2..] : "");
+                    continue;
+                }
+
+                if (line.Length == 0)
+                {
+                    continue;
+                }
+
+                var cells = line.Split('\t');
+                if (!sawColumns)
+                {
+                    if (!cells.SequenceEqual(Columns))
+                    {
+                        throw new FormatException($"{sourceName}:{lineNumber}: expected the columns {string.Join(", ", Columns)}");
+                    }
+
+                    sawColumns = true;
+                    continue;
+                }
+
+                if (cells.Length != Columns.Length)
+                {
+                    throw new FormatException($"{sourceName}:{lineNumber}: expected {Columns.Length} cells, found {cells.Length}");
+                }
+
+                if (!ConductorSize.TryParse(cells[0], out var size, out var error))
+                {
+                    throw new FormatException($"{sourceName}:{lineNumber}: {error}");
+                }
+
+                rows[size.Index] = ParseRow(cells, sourceName, lineNumber);
+            }
+
+            return make(header, rows);
+        }
+
+        private static RawRow ParseRow(string[] c, string sourceName, int lineNumber)
+        {
+            double? N(int i)
+            {
+                if (c[i].Length == 0)
+                {
+                    return null;
+                }
+
+                return double.TryParse(c[i], NumberStyles.Float, CultureInfo.InvariantCulture, out var v) && double.IsFinite(v) && v > 0
+                    ? v
+                    : throw new FormatException($"{sourceName}:{lineNumber}: column {Columns[i]}: '{c[i]}' is not a positive number");
+            }
+
+            var perKft = c[1] switch
+            {
+                "kft" => true,
+                "km" => false,
+                _ => throw new FormatException($"{sourceName}:{lineNumber}: column per: expected kft or km, found '{c[1]}'"),
+            };
+            return new RawRow(
+                perKft, N(2), N(3), N(4), N(5), N(6), N(7), N(8), N(9), N(10), N(11), N(12), N(13), N(14), N(15),
+                N(16) ?? throw new FormatException($"{sourceName}:{lineNumber}: column ins_mm is required"), N(17), N(18));
+        }
+    }
+}
