@@ -1,0 +1,42 @@
+namespace DistTree.Cli;
+
+/// <summary>
+/// Writes an output file safely: to a temporary file beside it, then renamed into place, so a reader never
+/// sees half a file; and never over an input file unless the command was asked to.
+/// </summary>
+internal static class OutputFile
+{
+    /// <summary>Writes <paramref name="content"/> (UTF-8, no byte-order mark) to <paramref name="path"/>, or to standard output for <c>-</c>.</summary>
+    /// <param name="context">Where standard output goes.</param>
+    /// <param name="path">The output path, or <c>-</c>.</param>
+    /// <param name="content">The text.</param>
+    /// <param name="inputs">Files the command read: the output may not be one of them.</param>
+    public static void Write(CliContext context, string path, string content, params string[] inputs)
+    {
+        if (path == "-")
+        {
+            context.Out.Write(content);
+            return;
+        }
+
+        var full = Path.GetFullPath(path);
+        if (inputs.Any(i => string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
+        {
+            throw new UsageException($"'{path}' is an input file; DistTree never overwrites its input");
+        }
+
+        var directory = Path.GetDirectoryName(full)!;
+        Directory.CreateDirectory(directory);
+        var temporary = Path.Combine(directory, $".{Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
+        try
+        {
+            File.WriteAllText(temporary, content, new System.Text.UTF8Encoding(false));
+            File.Move(temporary, full, overwrite: true);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            File.Delete(temporary);
+            throw new UsageException($"cannot write '{path}': {e.Message}");
+        }
+    }
+}

@@ -1,0 +1,78 @@
+using System.Globalization;
+using DistTree.Solving;
+
+namespace DistTree.Reports;
+
+/// <summary>Formats a solution as plain text for a terminal: a summary, the worst paths, every finding.</summary>
+public static class ConsoleReport
+{
+    /// <summary>The full analysis text.</summary>
+    public static void WriteAnalysis(TextWriter o, Solution s, int worst)
+    {
+        var p = s.Project;
+        o.WriteLine($"DistTree analysis: {p.Name}");
+        o.WriteLine($"  file   {p.File} (sha256 {p.Sha256[..12]}…)");
+        o.WriteLine($"  rules  {RuleText.Summary(p.Rules)}");
+        o.WriteLine();
+        WriteSummaryLine(o, s);
+        o.WriteLine();
+        o.WriteLine(F($"Worst paths (total drop; each run's share in percent, service first):"));
+        var rank = 0;
+        foreach (var e in s.WorstEndPoints(worst))
+        {
+            rank++;
+            var mark = e.Findings.Count > 0 ? "over" : "ok";
+            o.WriteLine(F($"  {rank,3}. {e.Id,-14} {e.TotalDropPercent,6:0.00} %  {mark,-4}  {Truncate(e.Name, 40)}"));
+            var shares = e.RunIndices.Select(i => s.Runs[i]).Select(r => F($"{Label(r)} {r.DropPercent:0.00}"));
+            o.WriteLine($"        {string.Join("  +  ", shares)}");
+        }
+
+        o.WriteLine();
+        WriteFindings(o, s);
+        o.WriteLine();
+        o.WriteLine($"Caution: {Caution.Text}");
+    }
+
+    /// <summary>The terse check text: a verdict line and the findings.</summary>
+    public static void WriteCheck(TextWriter o, Solution s)
+    {
+        var verdict = s.HasFindings ? "FAIL" : "PASS";
+        o.WriteLine(F($"{verdict}: {s.Project.File}: {s.Summary.EndPoints} end points, {s.Summary.Findings} findings, worst total {s.Summary.WorstTotalDropPercent:0.00} % at {s.Summary.WorstEndPoint ?? "-"}"));
+        foreach (var f in s.AllFindings)
+        {
+            o.WriteLine($"{f.Location}: {f.Code}: {f.Message}");
+        }
+    }
+
+    private static void WriteSummaryLine(TextWriter o, Solution s)
+    {
+        var sum = s.Summary;
+        o.WriteLine(F($"Summary: {sum.EndPoints} end points, {sum.Runs} runs, {sum.Findings} findings; worst total {sum.WorstTotalDropPercent:0.00} % at {sum.WorstEndPoint ?? "-"} (limit {s.Project.Rules.TotalLimitPercent:0.##} %)"));
+        var byKind = s.AllFindings.GroupBy(f => f.Code).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => $"{g.Key} {g.Count()}");
+        if (sum.Findings > 0)
+        {
+            o.WriteLine($"Findings by kind: {string.Join(", ", byKind)}");
+        }
+    }
+
+    private static void WriteFindings(TextWriter o, Solution s)
+    {
+        if (!s.HasFindings)
+        {
+            o.WriteLine("Findings: none; every run and end point is within its limits.");
+            return;
+        }
+
+        o.WriteLine(F($"Findings ({s.Summary.Findings}):"));
+        foreach (var f in s.AllFindings)
+        {
+            o.WriteLine($"  {f.Location}: {f.Code}: {f.Message}");
+        }
+    }
+
+    private static string Label(RunResult r) => r.Kind == RunResultKind.Transformer ? $"{r.Id}(xfmr)" : r.Id;
+
+    private static string Truncate(string text, int length) => text.Length <= length ? text : text[..(length - 1)] + "…";
+
+    private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,35 @@
+using System.Globalization;
+using DistTree.Model;
+
+namespace DistTree.Reports;
+
+/// <summary>The words and codes that outputs use for the rules in force.</summary>
+public static class RuleText
+{
+    /// <summary>The <c>branch_current</c> value as written in project files.</summary>
+    public static string BranchCurrent(Rules rules) => rules.BranchCurrent switch
+    {
+        BranchCurrentBasis.Ocpd80 => "ocpd_80",
+        BranchCurrentBasis.Lesser => "lesser",
+        _ => "connected",
+    };
+
+    /// <summary>The <c>conductor_temperature</c> value as written in project files.</summary>
+    public static string Temperature(Rules rules) => rules.Temperature switch
+    {
+        TemperatureMode.Rated => "rated",
+        TemperatureMode.Fixed => (rules.FixedTemperatureC ?? 0).ToString("0.##", CultureInfo.InvariantCulture),
+        _ => "estimated",
+    };
+
+    /// <summary>The <c>transformer_drop</c> value as written in project files.</summary>
+    public static string TransformerDrop(Rules rules) =>
+        rules.TransformerDrop == TransformerDropMode.NewOrigin ? "new_origin" : "count";
+
+    /// <summary>One line summing up the rules.</summary>
+    public static string Summary(Rules rules) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, total {rules.TotalLimitPercent:0.##} %; " +
+        $"branch current: {BranchCurrent(rules)}; conductor temperature: {Temperature(rules)}; transformers: {TransformerDrop(rules)}; " +
+        $"ambient {rules.AmbientC:0.#} °C; terminals {rules.TerminalC} °C");
+}

@@ -1,0 +1,110 @@
+using DistTree.Diagnostics;
+
+namespace DistTree.Solving;
+
+/// <summary>What a result row describes.</summary>
+public enum RunResultKind
+{
+    /// <summary>A feeder.</summary>
+    Feeder,
+
+    /// <summary>A branch circuit.</summary>
+    Branch,
+
+    /// <summary>A transformer's regulation.</summary>
+    Transformer,
+}
+
+/// <summary>The solved figures of one feeder, branch circuit or transformer.</summary>
+public sealed record RunResult
+{
+    /// <summary>The id of the node it feeds.</summary>
+    public required string Id { get; init; }
+
+    /// <summary>Feeder, branch or transformer.</summary>
+    public required RunResultKind Kind { get; init; }
+
+    /// <summary>The source node's id.</summary>
+    public required string From { get; init; }
+
+    /// <summary>The fed node's id.</summary>
+    public required string To { get; init; }
+
+    /// <summary>Index of the fed node in the network.</summary>
+    public required int NodeIndex { get; init; }
+
+    /// <summary>The system designation the run carries.</summary>
+    public required string System { get; init; }
+
+    /// <summary>Nominal voltage in volts that the percentages refer to.</summary>
+    public required double VoltageV { get; init; }
+
+    /// <summary>Phases: 1 or 3.</summary>
+    public required int Phases { get; init; }
+
+    /// <summary>Line current in amperes the drop is computed at.</summary>
+    public required double CurrentA { get; init; }
+
+    /// <summary>Design current in amperes for the ampacity check (125 % of continuous load plus the rest).</summary>
+    public required double DesignCurrentA { get; init; }
+
+    /// <summary>Power factor of the power carried.</summary>
+    public required double PowerFactor { get; init; }
+
+    /// <summary>Apparent power carried, in VA.</summary>
+    public required double ApparentPowerVa { get; init; }
+
+    /// <summary>Conductor size text, or null for a transformer.</summary>
+    public string? Size { get; init; }
+
+    /// <summary><c>cu</c> or <c>al</c>, or null for a transformer.</summary>
+    public string? Material { get; init; }
+
+    /// <summary><c>pvc</c>, <c>aluminum</c> or <c>steel</c>, or null for a transformer.</summary>
+    public string? Raceway { get; init; }
+
+    /// <summary>Parallel sets.</summary>
+    public int Sets { get; init; } = 1;
+
+    /// <summary>One-way length in metres (0 for a transformer).</summary>
+    public double LengthM { get; init; }
+
+    /// <summary>Conductor temperature in °C used for resistance, or null for a transformer.</summary>
+    public double? TemperatureC { get; init; }
+
+    /// <summary>AC resistance per conductor in ohm/km.</summary>
+    public double? ResistanceOhmPerKm { get; init; }
+
+    /// <summary>Reactance per conductor in ohm/km.</summary>
+    public double? ReactanceOhmPerKm { get; init; }
+
+    /// <summary>Allowable ampacity of all sets, in amperes (for a transformer: its rated current).</summary>
+    public double? AmpacityA { get; init; }
+
+    /// <summary>Overcurrent device rating in amperes, if given.</summary>
+    public double? OcpdA { get; init; }
+
+    /// <summary>Voltage drop in volts.</summary>
+    public required double DropV { get; init; }
+
+    /// <summary>Voltage drop in percent of <see cref="VoltageV"/>.</summary>
+    public required double DropPercent { get; init; }
+
+    /// <summary>The run's own limit in percent, or null for a transformer.</summary>
+    public double? LimitPercent { get; init; }
+
+    /// <summary>Longest length in metres at which the run meets its own limit, the rest unchanged; null when unbounded.</summary>
+    public double? MaxLengthM { get; init; }
+
+    /// <summary>Longest length in metres at which every end point below it meets the total limit; null when unbounded.</summary>
+    public double? MaxLengthTotalM { get; init; }
+
+    /// <summary>True when this run's drop counts in the totals of the end points below it.</summary>
+    public bool CountsInTotal { get; init; } = true;
+
+    /// <summary>The limits this run exceeds.</summary>
+    public IReadOnlyList<Finding> Findings { get; init; } = [];
+
+    /// <summary>Where the run is in the project file.</summary>
+    public SourceLocation Location { get; init; } = SourceLocation.None;
+}
