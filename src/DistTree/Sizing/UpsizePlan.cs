@@ -1,0 +1,68 @@
+using DistTree.Diagnostics;
+using DistTree.Solving;
+
+namespace DistTree.Sizing;
+
+/// <summary>One run's change in an upsize plan.</summary>
+public sealed record UpsizeChange
+{
+    /// <summary>The run's id (the node it feeds).</summary>
+    public required string RunId { get; init; }
+
+    /// <summary>Feeder or branch circuit.</summary>
+    public required RunResultKind Kind { get; init; }
+
+    /// <summary>Size before, canonical text.</summary>
+    public required string SizeBefore { get; init; }
+
+    /// <summary>Size after, canonical text.</summary>
+    public required string SizeAfter { get; init; }
+
+    /// <summary>Parallel sets before.</summary>
+    public required int SetsBefore { get; init; }
+
+    /// <summary>Parallel sets after.</summary>
+    public required int SetsAfter { get; init; }
+
+    /// <summary>The run's drop before, percent.</summary>
+    public required double DropPercentBefore { get; init; }
+
+    /// <summary>The run's drop after, percent.</summary>
+    public required double DropPercentAfter { get; init; }
+
+    /// <summary>Conductor material added: Δ(area × length × current-carrying conductors × sets), in mm²·m (or the price table's unit).</summary>
+    public required double CostAdded { get; init; }
+
+    /// <summary>A note for the equipment grounding conductor when it must grow in proportion (NEC 250.122(B)), or null.</summary>
+    public string? GroundingNote { get; init; }
+
+    /// <summary>Where the run's size value is in the project file.</summary>
+    public SourceLocation SizeLocation { get; init; } = SourceLocation.None;
+}
+
+/// <summary>A path or run that no allowed choice can bring within its limits, and what it would take.</summary>
+/// <param name="Subject">The end point or run id.</param>
+/// <param name="Message">What fails even at the largest choice, and what would fix it.</param>
+public sealed record UnresolvableLimit(string Subject, string Message);
+
+/// <summary>The least-material set of upsizes that brings the tree within its limits, proved by re-solving.</summary>
+public sealed record UpsizePlan
+{
+    /// <summary>The runs that change, in network order.</summary>
+    public required IReadOnlyList<UpsizeChange> Changes { get; init; }
+
+    /// <summary>Total cost of the changes (material added, or priced).</summary>
+    public required double TotalCostAdded { get; init; }
+
+    /// <summary>The cost unit: <c>mm2·m</c> of conductor, or the price table's currency.</summary>
+    public required string CostUnit { get; init; }
+
+    /// <summary>Limits no allowed choice satisfies.</summary>
+    public IReadOnlyList<UnresolvableLimit> Unresolvable { get; init; } = [];
+
+    /// <summary>The solution before the plan.</summary>
+    public required Solution Before { get; init; }
+
+    /// <summary>The tree re-solved with the plan applied: the proof that every limit holds.</summary>
+    public required Solution After { get; init; }
+}
