@@ -7,6 +7,6 @@ internal static class CommandCatalog
 {
     public static IEnumerable<Command> Create(CliContext context)
     {
-        yield break;
+        yield return ValidateCommand.Create(context);
     }
 }
