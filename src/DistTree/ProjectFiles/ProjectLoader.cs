@@ -45,7 +45,7 @@ public static class ProjectLoader
     /// <see cref="Project.Sha256"/> is the hash of the text's UTF-8 bytes.
     /// </summary>
     /// <exception cref="ProjectException">The text is not a valid project; carries every error and warning.</exception>
-    public static Project Parse(string text, string file) => Parse(text, file, Hash(StrictUtf8.GetBytes(text)));
+    public static Project Parse(string text, string file) => Parse(text, file, Hash(Encoding.UTF8.GetBytes(text)));
 
     private static Project Parse(string text, string file, string sha256)
     {

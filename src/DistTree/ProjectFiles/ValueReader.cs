@@ -278,7 +278,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     // YAML 1.2 core schema: int (decimal, 0o octal, 0x hex) and float (including .inf, .nan).
-    [GeneratedRegex(@"^(?:[-+]?[0-9]+|0o[0-7]+|0x[0-9a-fA-F]{1,15}|[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)(?:[eE][-+]?[0-9]+)?|[-+]?\.(?:inf|Inf|INF)|\.(?:nan|NaN|NAN))$")]
+    [GeneratedRegex(@"^(?:[-+]?[0-9]+|0o[0-7]{1,20}|0x[0-9a-fA-F]{1,15}|[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)(?:[eE][-+]?[0-9]+)?|[-+]?\.(?:inf|Inf|INF)|\.(?:nan|NaN|NAN))$")]
     private static partial Regex NumberPattern();
 
     [GeneratedRegex(@"^\s*(?<number>[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)(?:[eE][-+]?[0-9]+)?)\s*(?<unit>[A-Za-z]+)\s*$")]
