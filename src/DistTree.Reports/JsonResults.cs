@@ -29,6 +29,12 @@ public static class JsonResults
             WriteProject(w, solution);
             WriteRules(w, solution);
             WriteSummary(w, solution.Summary);
+            w.WriteStartObject("load_flow");
+            w.WriteBoolean("converged", solution.LoadFlow.Converged);
+            w.WriteNumber("iterations", solution.LoadFlow.Iterations);
+            w.WriteNumber("tolerance_pu", LoadFlow.TolerancePu);
+            w.WriteNumber("base_kva", LoadFlow.BaseVa / 1000.0);
+            w.WriteEndObject();
             w.WriteStartArray("runs");
             foreach (var run in solution.Runs)
             {
@@ -91,7 +97,7 @@ public static class JsonResults
     {
         var r = s.Project.Rules;
         w.WriteStartObject("rules");
-        w.WriteString("method", "percent_sum");
+        w.WriteString("method", r.Method == DistTree.Model.SolutionMethod.LoadFlow ? "load_flow" : "percent_sum");
         w.WriteNumber("feeder_limit_percent", r.FeederLimitPercent);
         w.WriteNumber("branch_limit_percent", r.BranchLimitPercent);
         w.WriteNumber("total_limit_percent", r.TotalLimitPercent);
@@ -100,6 +106,7 @@ public static class JsonResults
         w.WriteString("transformer_drop", RuleText.TransformerDrop(r));
         w.WriteNumber("ambient_c", r.AmbientC);
         w.WriteNumber("terminal_c", r.TerminalC);
+        w.WriteNumber("motor_start_limit_percent", r.MotorStartLimitPercent);
         w.WriteNumber("frequency_hz", s.Project.Service.FrequencyHz);
         w.WriteEndObject();
     }
@@ -147,6 +154,8 @@ public static class JsonResults
         Number(w, "ocpd_a", r.OcpdA, 1);
         Number(w, "drop_v", r.DropV, 3);
         Number(w, "drop_percent", r.DropPercent, 4);
+        Number(w, "drop_percent_percent_sum", r.PercentSumDropPercent, 4);
+        Number(w, "drop_percent_load_flow", r.LoadFlowDropPercent, 4);
         Number(w, "limit_percent", r.LimitPercent, 4);
         Number(w, "max_length_m", r.MaxLengthM, 2);
         Number(w, "max_length_total_m", r.MaxLengthTotalM, 2);
@@ -177,6 +186,22 @@ public static class JsonResults
         Number(w, "total_drop_percent", e.TotalDropPercent, 4);
         Number(w, "limit_percent", e.LimitPercent, 4);
         Number(w, "end_voltage_v", e.EndVoltageV, 3);
+        Number(w, "total_drop_percent_percent_sum", e.PercentSumTotalDropPercent, 4);
+        Number(w, "total_drop_percent_load_flow", e.LoadFlowTotalDropPercent, 4);
+        Number(w, "end_voltage_v_load_flow", e.LoadFlowEndVoltageV, 3);
+        if (e.MotorStart is { } m)
+        {
+            w.WriteStartObject("motor_start");
+            Number(w, "locked_rotor_kva", m.LockedRotorVa / 1000.0, 3);
+            Number(w, "terminal_dip_percent", m.TerminalDipPercent, 4);
+            Number(w, "panel_dip_percent", m.PanelDipPercent, 4);
+            Number(w, "limit_percent", m.LimitPercent, 4);
+            w.WriteEndObject();
+        }
+        else
+        {
+            w.WriteNull("motor_start");
+        }
         w.WriteStartArray("findings");
         foreach (var f in e.Findings)
         {
