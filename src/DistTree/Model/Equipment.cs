@@ -50,7 +50,7 @@ public sealed record Equipment
     /// <summary>Nameplate data when <see cref="Kind"/> is a transformer.</summary>
     public TransformerData? Transformer { get; init; }
 
-    /// <summary>Branch circuits (panelboards only).</summary>
+    /// <summary>Branch circuits (panelboards and switchboards; never transformers or splitters).</summary>
     public IReadOnlyList<Circuit> Circuits { get; init; } = [];
 
     /// <summary>Where the equipment is in the project file.</summary>

@@ -1,0 +1,78 @@
+using DistTree.Diagnostics;
+using DistTree.Model;
+
+namespace DistTree.ProjectFiles;
+
+/// <summary>What the reader took from the file before the tree checks; null fields were missing or wrong (reported).</summary>
+internal sealed class ProjectDraft
+{
+    public string? Name { get; set; }
+
+    public UnitSystem Units { get; set; } = UnitSystem.Metric;
+
+    public Rules Rules { get; set; } = Rules.Default;
+
+    public ConductorDefaults Defaults { get; set; } = ConductorDefaults.Standard;
+
+    public Service? Service { get; set; }
+
+    public List<EquipmentDraft> Equipment { get; } = [];
+}
+
+/// <summary>One equipment entry as read.</summary>
+internal sealed class EquipmentDraft(SourceLocation location)
+{
+    public SourceLocation Location { get; } = location;
+
+    public string? Id { get; set; }
+
+    public SourceLocation IdLocation { get; set; } = location;
+
+    public EquipmentKind? Kind { get; set; }
+
+    public string? From { get; set; }
+
+    public SourceLocation FromLocation { get; set; } = location;
+
+    /// <summary>False when the feeder was given but could not be read.</summary>
+    public bool FeederOk { get; set; } = true;
+
+    public Run? Feeder { get; set; }
+
+    public double DemandFactor { get; set; } = 1.0;
+
+    /// <summary>Transformer data; null when not a transformer or when it could not be read.</summary>
+    public TransformerData? Transformer { get; set; }
+
+    public ElectricalSystem? Primary { get; set; }
+
+    public SourceLocation PrimaryLocation { get; set; } = location;
+
+    public List<CircuitDraft> Circuits { get; } = [];
+
+    /// <summary>The system its feeder carries, set by the tree checks once its source is known.</summary>
+    public ElectricalSystem? System { get; set; }
+
+    /// <summary>What it distributes: a transformer's secondary, else its own system.</summary>
+    public ElectricalSystem? OutputSystem => Kind == EquipmentKind.Transformer ? Transformer?.Secondary : System;
+}
+
+/// <summary>One circuit entry as read.</summary>
+internal sealed class CircuitDraft(SourceLocation location)
+{
+    public SourceLocation Location { get; } = location;
+
+    public string? Id { get; set; }
+
+    public string Name { get; set; } = "";
+
+    public int? Poles { get; set; }
+
+    public SourceLocation PolesLocation { get; set; } = location;
+
+    public Load? Load { get; set; }
+
+    public bool Continuous { get; set; }
+
+    public Run? Run { get; set; }
+}

@@ -1,0 +1,36 @@
+namespace DistTree.ProjectFiles;
+
+/// <summary>
+/// The keys each mapping of a project file may hold (format 1). The schema in
+/// <c>schema/project.schema.json</c> and <c>docs/project-file.md</c> list the same keys; a test keeps them in step.
+/// </summary>
+internal static class ProjectKeys
+{
+    public static readonly string[] Top = ["disttree", "project", "rules", "defaults", "service", "equipment"];
+
+    public static readonly string[] Project = ["name", "units", "description"];
+
+    public static readonly string[] Rules =
+    [
+        "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "branch_current",
+        "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c",
+    ];
+
+    public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];
+
+    public static readonly string[] Service = ["id", "system", "frequency_hz"];
+
+    public static readonly string[] TransformerOnly = ["kva", "primary", "secondary", "impedance_percent", "x_r", "tap_percent"];
+
+    public static readonly string[] Equipment =
+        ["id", "kind", "from", "feeder", "demand_factor", "circuits", .. TransformerOnly];
+
+    public static readonly string[] Run =
+        ["length", "size", "sets", "material", "insulation_c", "raceway", "ocpd", "limit_percent", "fixed"];
+
+    public static readonly string[] Circuit = ["id", "name", "poles", "ocpd", "load", "continuous", "run"];
+
+    public static readonly string[] LoadQuantities = ["va", "kva", "kw", "amps", "hp"];
+
+    public static readonly string[] Load = [.. LoadQuantities, "pf"];
+}

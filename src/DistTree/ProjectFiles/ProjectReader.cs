@@ -1,0 +1,605 @@
+using System.Globalization;
+using DistTree.Conductors;
+using DistTree.Diagnostics;
+using DistTree.Model;
+
+namespace DistTree.ProjectFiles;
+
+/// <summary>
+/// Reads the sections of a project file into drafts, reporting every unknown, missing, duplicate or
+/// wrongly typed value. The tree checks (ids, sources, cycles, systems) come after, in <see cref="FeedChecker"/>.
+/// </summary>
+internal sealed class ProjectReader(DiagnosticBag bag)
+{
+    /// <summary>Branch runs longer than this are probably a typo (2000 ft, common practice as a sanity bound).</summary>
+    public const double LongBranchM = 2000 * ValueReader.MetresPerFoot;
+
+    private static readonly (string, UnitSystem)[] UnitWords = [("metric", UnitSystem.Metric), ("imperial", UnitSystem.Imperial)];
+
+    private static readonly (string, BranchCurrentBasis)[] BranchCurrentWords =
+        [("connected", BranchCurrentBasis.Connected), ("ocpd_80", BranchCurrentBasis.Ocpd80), ("lesser", BranchCurrentBasis.Lesser)];
+
+    private static readonly (string, TransformerDropMode)[] TransformerDropWords =
+        [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)];
+
+    private static readonly (string, Material)[] MaterialWords = [("cu", Material.Copper), ("al", Material.Aluminum)];
+
+    private static readonly (string, Raceway)[] RacewayWords =
+        [("pvc", Raceway.Pvc), ("aluminum", Raceway.Aluminum), ("steel", Raceway.Steel)];
+
+    private static readonly (string, EquipmentKind)[] KindWords =
+    [
+        ("switchboard", EquipmentKind.Switchboard), ("panelboard", EquipmentKind.Panelboard),
+        ("transformer", EquipmentKind.Transformer), ("splitter", EquipmentKind.Splitter),
+    ];
+
+    private static readonly (string, LoadKind)[] LoadWords =
+        [("va", LoadKind.Va), ("kva", LoadKind.Kva), ("kw", LoadKind.Kw), ("amps", LoadKind.Amps), ("hp", LoadKind.Hp)];
+
+    private static readonly int[] TemperatureRatings = [60, 75, 90];
+
+    private static readonly int[] PoleCounts = [1, 2, 3];
+
+    private readonly ValueReader _values = new(bag);
+
+    private ProjectDraft _draft = new();
+
+    /// <summary>Reads the whole document; the draft holds what could be read.</summary>
+    public ProjectDraft Read(SourceNode root)
+    {
+        _draft = new ProjectDraft();
+        if (root is not SourceMapping mapping)
+        {
+            bag.Error(root.Location, $"a project file is a mapping of keys (disttree, project, service, equipment); found {root.Describe()}");
+            return _draft;
+        }
+
+        var top = new MappingReader(mapping, "the project file", ProjectKeys.Top, bag);
+        ReadVersion(top.Required("disttree", " (the format version: 1)"));
+        ReadProject(Map(top.Required("project"), "'project'", "the project section", ProjectKeys.Project));
+        ReadRules(Map(top.Optional("rules"), "'rules'", "the rules", ProjectKeys.Rules));
+        ReadDefaults(Map(top.Optional("defaults"), "'defaults'", "the defaults", ProjectKeys.Defaults));
+        ReadService(top.Required("service"));
+        ReadEquipment(top.Required("equipment"));
+        return _draft;
+    }
+
+    private MappingReader? Map(SourceNode? node, string what, string context, IReadOnlyList<string> keys)
+    {
+        if (node is null)
+        {
+            return null;
+        }
+
+        if (node is SourceMapping mapping)
+        {
+            return new MappingReader(mapping, context, keys, bag);
+        }
+
+        if (!node.IsInvalid)
+        {
+            bag.Error(node.Location, $"{what} must be a mapping of keys; found {node.Describe()}");
+        }
+
+        return null;
+    }
+
+    private void ReadVersion(SourceNode? node)
+    {
+        if (node is not null && _values.Integer(node, "'disttree' (the format version)") is { } version && version != 1)
+        {
+            bag.Error(node.Location, $"unsupported format version {version}; this DistTree reads 'disttree: 1'");
+        }
+    }
+
+    private void ReadProject(MappingReader? m)
+    {
+        if (m is null)
+        {
+            return;
+        }
+
+        if (m.Required("name") is { } name)
+        {
+            _draft.Name = _values.Text(name, "'name' of the project");
+        }
+
+        if (m.Optional("units") is { } units && _values.Choice(units, "'units'", "unit system", UnitWords) is { } u)
+        {
+            _draft.Units = u;
+        }
+
+        if (m.Optional("description") is { } description)
+        {
+            _values.Text(description, "'description'");
+        }
+    }
+
+    private void ReadRules(MappingReader? m)
+    {
+        if (m is null)
+        {
+            return;
+        }
+
+        var rules = Rules.Default;
+        if (Positive(m, "feeder_limit_percent") is { } feeder)
+        {
+            rules = rules with { FeederLimitPercent = feeder };
+        }
+
+        if (Positive(m, "branch_limit_percent") is { } branch)
+        {
+            rules = rules with { BranchLimitPercent = branch };
+        }
+
+        if (Positive(m, "total_limit_percent") is { } total)
+        {
+            rules = rules with { TotalLimitPercent = total };
+        }
+
+        if (m.Optional("branch_current") is { } basisNode && _values.Choice(basisNode, "'branch_current'", "branch_current", BranchCurrentWords) is { } basis)
+        {
+            rules = rules with { BranchCurrent = basis };
+        }
+
+        if (m.Optional("conductor_temperature") is { } temperature)
+        {
+            rules = ReadTemperature(temperature, rules);
+        }
+
+        if (m.Optional("transformer_drop") is { } dropNode && _values.Choice(dropNode, "'transformer_drop'", "transformer_drop", TransformerDropWords) is { } drop)
+        {
+            rules = rules with { TransformerDrop = drop };
+        }
+
+        if (m.Optional("ambient_c") is { } ambientNode && _values.Number(ambientNode, "'ambient_c'") is { } ambient)
+        {
+            rules = rules with { AmbientC = ambient };
+        }
+
+        if (m.Optional("terminal_c") is { } terminalNode && _values.IntegerOf(terminalNode, "'terminal_c'", TemperatureRatings) is { } terminal)
+        {
+            rules = rules with { TerminalC = terminal };
+        }
+
+        _draft.Rules = rules;
+    }
+
+    private Rules ReadTemperature(SourceNode node, Rules rules)
+    {
+        if (node is SourceScalar { IsPlain: true } scalar && ValueReader.IsNumberText(scalar.Value))
+        {
+            return _values.Positive(node, "'conductor_temperature'") is { } c
+                ? rules with { Temperature = TemperatureMode.Fixed, FixedTemperatureC = c }
+                : rules;
+        }
+
+        var text = _values.Text(node, "'conductor_temperature'");
+        switch (text)
+        {
+            case null:
+                return rules;
+            case "estimated":
+                return rules with { Temperature = TemperatureMode.Estimated };
+            case "rated":
+                return rules with { Temperature = TemperatureMode.Rated };
+            default:
+                var near = Suggestions.Closest(text, ["estimated", "rated"]);
+                var hint = near is null ? "" : $"; did you mean '{near}'?";
+                bag.Error(node.Location, $"unknown conductor_temperature '{text}'{hint} (expected 'estimated', 'rated' or a number in °C)");
+                return rules;
+        }
+    }
+
+    private void ReadDefaults(MappingReader? m)
+    {
+        if (m is null)
+        {
+            return;
+        }
+
+        var defaults = ConductorDefaults.Standard;
+        if (m.Optional("material") is { } materialNode && _values.Choice(materialNode, "'material'", "material", MaterialWords) is { } material)
+        {
+            defaults = defaults with { Material = material };
+        }
+
+        if (m.Optional("insulation_c") is { } insulationNode && _values.IntegerOf(insulationNode, "'insulation_c'", TemperatureRatings) is { } insulation)
+        {
+            defaults = defaults with { InsulationC = insulation };
+        }
+
+        if (m.Optional("raceway") is { } racewayNode && _values.Choice(racewayNode, "'raceway'", "raceway", RacewayWords) is { } raceway)
+        {
+            defaults = defaults with { Raceway = raceway };
+        }
+
+        _draft.Defaults = defaults;
+    }
+
+    private void ReadService(SourceNode? node)
+    {
+        if (node is SourceSequence sequence)
+        {
+            if (sequence.Items.Count > 1)
+            {
+                bag.Error(sequence.Items[1].Location, $"a project has exactly one service (the root of the tree); found {sequence.Items.Count}");
+            }
+            else
+            {
+                bag.Error(node.Location, "'service' must be a mapping of keys, not a sequence");
+            }
+
+            return;
+        }
+
+        var m = Map(node, "'service'", "the service", ProjectKeys.Service);
+        if (m is null)
+        {
+            return;
+        }
+
+        var id = m.Required("id") is { } idNode ? Id(idNode, "'id' of the service") : null;
+        var system = m.Required("system", " (e.g. 480Y/277)") is { } systemNode ? _values.SystemOf(systemNode, "'system' of the service") : null;
+        var frequency = m.Optional("frequency_hz") is { } hz ? _values.Positive(hz, "'frequency_hz'") : 60;
+        if (id is not null && system is not null && frequency is not null)
+        {
+            _draft.Service = new Service(id, system, frequency.Value, m.Node.Location);
+        }
+    }
+
+    private void ReadEquipment(SourceNode? node)
+    {
+        if (node is null)
+        {
+            return;
+        }
+
+        if (node is not SourceSequence sequence)
+        {
+            if (!node.IsInvalid)
+            {
+                bag.Error(node.Location, $"'equipment' must be a sequence of entries ('- id: ...'); found {node.Describe()}");
+            }
+
+            return;
+        }
+
+        if (sequence.Items.Count == 0)
+        {
+            bag.Error(node.Location, "'equipment' lists nothing; a project needs at least one piece of equipment");
+        }
+
+        foreach (var item in sequence.Items)
+        {
+            if (item is SourceMapping mapping)
+            {
+                _draft.Equipment.Add(ReadOneEquipment(mapping));
+            }
+            else if (!item.IsInvalid)
+            {
+                bag.Error(item.Location, $"an equipment entry must be a mapping of keys; found {item.Describe()}");
+            }
+        }
+    }
+
+    private EquipmentDraft ReadOneEquipment(SourceMapping mapping)
+    {
+        var draft = new EquipmentDraft(mapping.Location);
+        var peeked = PeekId(mapping);
+        var name = peeked ?? $"at line {mapping.Location.Line}";
+        var m = new MappingReader(mapping, peeked is null ? $"the equipment entry at line {mapping.Location.Line}" : $"equipment '{peeked}'", ProjectKeys.Equipment, bag);
+        if (m.Required("id") is { } idNode)
+        {
+            draft.Id = Id(idNode, "'id' of equipment");
+            draft.IdLocation = idNode.Location;
+        }
+
+        if (m.Required("kind", " (switchboard, panelboard, transformer or splitter)") is { } kindNode)
+        {
+            draft.Kind = _values.Choice(kindNode, $"'kind' of '{name}'", "kind", KindWords);
+        }
+
+        if (m.Required("from", " (the id of the service or equipment that feeds it)") is { } fromNode)
+        {
+            draft.From = _values.Text(fromNode, $"'from' of '{name}'");
+            draft.FromLocation = fromNode.Location;
+        }
+
+        if (m.Optional("feeder") is { } feederNode)
+        {
+            draft.Feeder = ReadRun(feederNode, $"the feeder of '{name}'", false, out _);
+            draft.FeederOk = draft.Feeder is not null;
+        }
+
+        if (m.Optional("demand_factor") is { } demandNode && _values.Positive(demandNode, $"'demand_factor' of '{name}'") is { } demand)
+        {
+            draft.DemandFactor = demand;
+            if (demand > 1)
+            {
+                bag.Warning(demandNode.Location, $"the demand factor of '{name}' is {ValueReader.Format(demand)}, above 1: it raises the load it applies to");
+            }
+        }
+
+        ReadTransformer(m, draft, name);
+        ReadCircuits(m, draft, name);
+        return draft;
+    }
+
+    private void ReadTransformer(MappingReader m, EquipmentDraft draft, string name)
+    {
+        if (draft.Kind is null)
+        {
+            return;
+        }
+
+        if (draft.Kind != EquipmentKind.Transformer)
+        {
+            foreach (var key in ProjectKeys.TransformerOnly.Where(m.Has))
+            {
+                bag.Error(m.KeyLocation(key), $"'{key}' applies to transformers only; '{name}' is a {KindWord(draft.Kind.Value)}");
+            }
+
+            return;
+        }
+
+        var kva = m.Required("kva", " (the rating in kVA)") is { } kvaNode ? _values.Positive(kvaNode, $"'kva' of '{name}'") : null;
+        var secondary = m.Required("secondary", " (the secondary system, e.g. 208Y/120)") is { } secondaryNode
+            ? _values.SystemOf(secondaryNode, $"'secondary' of '{name}'")
+            : null;
+        var impedance = m.Required("impedance_percent", " (the nameplate %Z)") is { } zNode ? _values.Positive(zNode, $"'impedance_percent' of '{name}'") : null;
+        var xr = m.Required("x_r", " (the X/R ratio)") is { } xrNode ? _values.Positive(xrNode, $"'x_r' of '{name}'") : null;
+        var tap = m.Optional("tap_percent") is { } tapNode ? _values.Number(tapNode, $"'tap_percent' of '{name}'") : 0;
+        if (m.Optional("primary") is { } primaryNode)
+        {
+            draft.Primary = _values.SystemOf(primaryNode, $"'primary' of '{name}'");
+            draft.PrimaryLocation = primaryNode.Location;
+        }
+
+        if (kva is not null && secondary is not null && impedance is not null && xr is not null && tap is not null)
+        {
+            draft.Transformer = new TransformerData(kva.Value, secondary, impedance.Value, xr.Value, tap.Value);
+        }
+    }
+
+    private void ReadCircuits(MappingReader m, EquipmentDraft draft, string panel)
+    {
+        if (m.Optional("circuits") is not { } node)
+        {
+            return;
+        }
+
+        if (draft.Kind is EquipmentKind.Transformer or EquipmentKind.Splitter)
+        {
+            bag.Error(m.KeyLocation("circuits"), $"'{panel}' is a {KindWord(draft.Kind.Value)}: branch circuits are fed from a panelboard or a switchboard");
+            return;
+        }
+
+        if (node is not SourceSequence sequence)
+        {
+            bag.Error(node.Location, $"'circuits' of '{panel}' must be a sequence of entries ('- id: ...'); found {node.Describe()}");
+            return;
+        }
+
+        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        foreach (var item in sequence.Items)
+        {
+            if (item is not SourceMapping mapping)
+            {
+                if (!item.IsInvalid)
+                {
+                    bag.Error(item.Location, $"a circuit entry must be a mapping of keys; found {item.Describe()}");
+                }
+
+                continue;
+            }
+
+            var circuit = ReadCircuit(mapping, panel);
+            if (circuit.Id is { } id)
+            {
+                if (seen.TryGetValue(id, out var first))
+                {
+                    bag.Error(circuit.Location, $"duplicate circuit id '{id}' in '{panel}' (first given at line {first.Line})");
+                    continue;
+                }
+
+                seen.Add(id, circuit.Location);
+            }
+
+            draft.Circuits.Add(circuit);
+        }
+    }
+
+    private CircuitDraft ReadCircuit(SourceMapping mapping, string panel)
+    {
+        var draft = new CircuitDraft(mapping.Location);
+        var peeked = PeekId(mapping);
+        var full = peeked is null ? $"the circuit at line {mapping.Location.Line} of '{panel}'" : $"circuit '{panel}/{peeked}'";
+        var m = new MappingReader(mapping, full, ProjectKeys.Circuit, bag);
+        if (m.Required("id") is { } idNode)
+        {
+            draft.Id = Id(idNode, "'id' of a circuit");
+        }
+
+        if (m.Optional("name") is { } nameNode)
+        {
+            draft.Name = _values.Text(nameNode, $"'name' of {full}") ?? "";
+        }
+
+        if (m.Required("poles", " (1, 2 or 3)") is { } polesNode)
+        {
+            draft.Poles = _values.IntegerOf(polesNode, $"'poles' of {full}", PoleCounts);
+            draft.PolesLocation = polesNode.Location;
+        }
+
+        var ocpd = m.Optional("ocpd") is { } ocpdNode ? _values.Positive(ocpdNode, $"'ocpd' of {full}") : null;
+        if (m.Optional("continuous") is { } continuousNode)
+        {
+            draft.Continuous = _values.Bool(continuousNode, $"'continuous' of {full}") ?? false;
+        }
+
+        if (m.Required("load") is { } loadNode)
+        {
+            draft.Load = ReadLoad(loadNode, $"the load of {full}");
+        }
+
+        if (m.Required("run", " (its length and size)") is { } runNode)
+        {
+            var run = ReadRun(runNode, $"the run of {full}", true, out var runOcpdLocation);
+            if (run is not null && ocpd is not null && run.OcpdA is not null)
+            {
+                bag.Error(runOcpdLocation!, $"'ocpd' is given both on {full} and on its run; give it once");
+                run = null;
+            }
+
+            draft.Run = run is not null && ocpd is not null ? run with { OcpdA = ocpd } : run;
+        }
+
+        return draft;
+    }
+
+    private Load? ReadLoad(SourceNode node, string context)
+    {
+        var m = Map(node, $"{context}", context, ProjectKeys.Load);
+        if (m is null)
+        {
+            return null;
+        }
+
+        var given = m.Node.Entries
+            .Where(e => ProjectKeys.LoadQuantities.Contains(e.Key.Value, StringComparer.Ordinal))
+            .Select(e => e.Key)
+            .DistinctBy(k => k.Value)
+            .ToArray();
+        if (given.Length == 0)
+        {
+            bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of 'va', 'kva', 'kw', 'amps' or 'hp'");
+            return null;
+        }
+
+        if (given.Length > 1)
+        {
+            bag.Error(given[1].Location, $"{context} gives both '{given[0].Value}' and '{given[1].Value}'; give exactly one of 'va', 'kva', 'kw', 'amps' or 'hp'");
+            return null;
+        }
+
+        var kind = LoadWords.First(w => w.Item1 == given[0].Value).Item2;
+        var value = m.Required(given[0].Value) is { } valueNode ? _values.NotNegative(valueNode, $"'{given[0].Value}' of {context}") : null;
+        double? pf = 1.0;
+        if (m.Optional("pf") is { } pfNode)
+        {
+            pf = _values.Number(pfNode, $"'pf' of {context}");
+            if (pf is <= 0 or > 1)
+            {
+                bag.Error(pfNode.Location, $"a power factor must be greater than 0 and at most 1; found {ValueReader.Format(pf.Value)}");
+                pf = null;
+            }
+        }
+        else if (kind == LoadKind.Hp)
+        {
+            bag.Error(m.Node.Location, $"missing key 'pf' in {context} (a motor load needs its power factor)");
+            pf = null;
+        }
+
+        return value is not null && pf is not null ? new Load(kind, value.Value, pf.Value) : null;
+    }
+
+    private Run? ReadRun(SourceNode node, string context, bool branch, out SourceLocation? ocpdLocation)
+    {
+        ocpdLocation = null;
+        var m = Map(node, context, context, ProjectKeys.Run);
+        if (m is null)
+        {
+            return null;
+        }
+
+        var lengthNode = m.Required("length");
+        var length = lengthNode is null ? null : _values.LengthM(lengthNode, $"'length' of {context}", _draft.Units);
+        if (branch && length > LongBranchM)
+        {
+            bag.Warning(lengthNode!.Location, $"{context} is {length.Value.ToString("0.##", CultureInfo.InvariantCulture)} m long, more than 609.6 m (2000 ft); check the length");
+        }
+
+        ConductorSize? size = null;
+        var sizeNode = m.Required("size", " (e.g. 12 AWG, 250 kcmil or 95 mm2)");
+        if (sizeNode is not null && _values.Text(sizeNode, $"'size' of {context}") is { } sizeText)
+        {
+            if (ConductorSize.TryParse(sizeText, out var parsed, out var error))
+            {
+                size = parsed;
+            }
+            else
+            {
+                bag.Error(sizeNode.Location, error);
+            }
+        }
+
+        var sets = 1;
+        if (m.Optional("sets") is { } setsNode && _values.Integer(setsNode, $"'sets' of {context}") is { } s)
+        {
+            if (s < 1)
+            {
+                bag.Error(setsNode.Location, $"'sets' of {context} must be 1 or more; found {s}");
+            }
+
+            sets = s;
+        }
+
+        var defaults = _draft.Defaults;
+        var material = m.Optional("material") is { } materialNode ? _values.Choice(materialNode, $"'material' of {context}", "material", MaterialWords) : defaults.Material;
+        var insulation = m.Optional("insulation_c") is { } insulationNode ? _values.IntegerOf(insulationNode, $"'insulation_c' of {context}", TemperatureRatings) : defaults.InsulationC;
+        var raceway = m.Optional("raceway") is { } racewayNode ? _values.Choice(racewayNode, $"'raceway' of {context}", "raceway", RacewayWords) : defaults.Raceway;
+        double? ocpd = null;
+        if (m.Optional("ocpd") is { } ocpdNode)
+        {
+            ocpd = _values.Positive(ocpdNode, $"'ocpd' of {context}");
+            ocpdLocation = m.KeyLocation("ocpd");
+        }
+
+        var limit = m.Optional("limit_percent") is { } limitNode ? _values.Positive(limitNode, $"'limit_percent' of {context}") : null;
+        var isFixed = m.Optional("fixed") is { } fixedNode && (_values.Bool(fixedNode, $"'fixed' of {context}") ?? false);
+        if (length is null || size is null || sets < 1 || material is null || insulation is null || raceway is null
+            || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
+        {
+            return null;
+        }
+
+        return new Run
+        {
+            LengthM = length.Value,
+            Size = size.Value,
+            Sets = sets,
+            Material = material.Value,
+            InsulationC = insulation.Value,
+            Raceway = raceway.Value,
+            OcpdA = ocpd,
+            LimitPercent = limit,
+            Fixed = isFixed,
+            Location = m.Node.Location,
+            SizeLocation = sizeNode!.Location,
+        };
+    }
+
+    private double? Positive(MappingReader m, string key) =>
+        m.Optional(key) is { } node ? _values.Positive(node, $"'{key}'") : null;
+
+    private string? Id(SourceNode node, string what)
+    {
+        var id = _values.Text(node, what);
+        if (id is not null && id.Contains('/', StringComparison.Ordinal))
+        {
+            bag.Error(node.Location, $"the id '{id}' must not contain '/' (it joins a panel's id and a circuit's: LP1/3)");
+            return null;
+        }
+
+        return id;
+    }
+
+    private static string? PeekId(SourceMapping mapping) =>
+        mapping.Entries.FirstOrDefault(e => e.Key.Value == "id").Value is SourceScalar { IsNull: false } scalar && scalar.Value.Trim().Length > 0
+            ? scalar.Value.Trim()
+            : null;
+
+    private static string KindWord(EquipmentKind kind) => KindWords.First(w => w.Item2 == kind).Item1;
+}

@@ -1,0 +1,286 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using DistTree.Model;
+
+namespace DistTree.ProjectFiles;
+
+/// <summary>
+/// Typed values from scalars, following the YAML 1.2 core schema for plain scalars (a quoted
+/// <c>"20"</c> is text, not a number). Each method reports what is wrong and returns null.
+/// </summary>
+internal sealed partial class ValueReader(DiagnosticBag bag)
+{
+    /// <summary>Feet to metres, exact by definition (international foot).</summary>
+    public const double MetresPerFoot = 0.3048;
+
+    /// <summary>A finite number.</summary>
+    public double? Number(SourceNode node, string what)
+    {
+        if (node is not SourceScalar scalar || !scalar.IsPlain || !IsNumberText(scalar.Value))
+        {
+            if (!node.IsInvalid)
+            {
+                var hint = node is SourceScalar { IsPlain: false } quoted && IsNumberText(quoted.Value)
+                    ? " (write numbers without quotes)"
+                    : "";
+                bag.Error(node.Location, $"{what} must be a number; found {node.Describe()}{hint}");
+            }
+
+            return null;
+        }
+
+        return Finite(scalar, what);
+    }
+
+    /// <summary>A number greater than zero.</summary>
+    public double? Positive(SourceNode node, string what)
+    {
+        var value = Number(node, what);
+        if (value is <= 0)
+        {
+            bag.Error(node.Location, $"{what} must be greater than zero; found {Format(value.Value)}");
+            return null;
+        }
+
+        return value;
+    }
+
+    /// <summary>A number zero or greater.</summary>
+    public double? NotNegative(SourceNode node, string what)
+    {
+        var value = Number(node, what);
+        if (value is < 0)
+        {
+            bag.Error(node.Location, $"{what} must not be negative; found {Format(value.Value)}");
+            return null;
+        }
+
+        return value;
+    }
+
+    /// <summary>A whole number.</summary>
+    public int? Integer(SourceNode node, string what)
+    {
+        var value = Number(node, what);
+        if (value is null)
+        {
+            return null;
+        }
+
+        if (value.Value != Math.Floor(value.Value) || Math.Abs(value.Value) > int.MaxValue)
+        {
+            bag.Error(node.Location, $"{what} must be a whole number; found {Format(value.Value)}");
+            return null;
+        }
+
+        return (int)value.Value;
+    }
+
+    /// <summary>One of a few whole numbers (60, 75, 90).</summary>
+    public int? IntegerOf(SourceNode node, string what, IReadOnlyList<int> allowed)
+    {
+        var value = Integer(node, what);
+        if (value is { } v && !allowed.Contains(v))
+        {
+            var words = allowed.Select(a => a.ToString(CultureInfo.InvariantCulture)).ToArray();
+            bag.Error(node.Location, $"{what} must be {string.Join(", ", words[..^1])} or {words[^1]}; found {v}");
+            return null;
+        }
+
+        return value;
+    }
+
+    /// <summary><c>true</c> or <c>false</c>.</summary>
+    public bool? Bool(SourceNode node, string what)
+    {
+        if (node is SourceScalar { IsPlain: true } scalar)
+        {
+            switch (scalar.Value)
+            {
+                case "true" or "True" or "TRUE":
+                    return true;
+                case "false" or "False" or "FALSE":
+                    return false;
+            }
+        }
+
+        if (!node.IsInvalid)
+        {
+            bag.Error(node.Location, $"{what} must be true or false; found {node.Describe()}");
+        }
+
+        return null;
+    }
+
+    /// <summary>Text: a string, or a plain number or word taken as its text (ids, names, sizes, systems).</summary>
+    public string? Text(SourceNode node, string what)
+    {
+        if (node is SourceScalar { IsNull: false } scalar && (!scalar.IsPlain || !IsBoolText(scalar.Value)))
+        {
+            if (scalar.Value.Trim().Length == 0)
+            {
+                bag.Error(node.Location, $"{what} must not be empty");
+                return null;
+            }
+
+            return scalar.Value.Trim();
+        }
+
+        if (!node.IsInvalid)
+        {
+            bag.Error(node.Location, $"{what} must be text; found {node.Describe()}");
+        }
+
+        return null;
+    }
+
+    /// <summary>One word of a fixed list, with a "did you mean" hint.</summary>
+    public T? Choice<T>(SourceNode node, string what, string noun, IReadOnlyList<(string Word, T Value)> options)
+        where T : struct
+    {
+        var text = Text(node, what);
+        if (text is null)
+        {
+            return null;
+        }
+
+        foreach (var (word, value) in options)
+        {
+            if (string.Equals(word, text, StringComparison.Ordinal))
+            {
+                return value;
+            }
+        }
+
+        bag.Error(node.Location, $"unknown {noun} '{text}'{Suggestions.Hint(text, options.Select(o => o.Word).ToArray())}");
+        return null;
+    }
+
+    /// <summary>A system designation such as <c>208Y/120</c>.</summary>
+    public ElectricalSystem? SystemOf(SourceNode node, string what)
+    {
+        var text = Text(node, what);
+        if (text is null)
+        {
+            return null;
+        }
+
+        var system = ElectricalSystem.Find(text);
+        if (system is null)
+        {
+            bag.Error(node.Location, $"unknown system '{text}'{Suggestions.Hint(text, ElectricalSystem.Names)}");
+        }
+
+        return system;
+    }
+
+    /// <summary>
+    /// A one-way length in metres, greater than zero: a bare number in the project's unit, or text with
+    /// its unit (<c>28 m</c>, <c>92 ft</c>).
+    /// </summary>
+    public double? LengthM(SourceNode node, string what, UnitSystem units)
+    {
+        double? metres;
+        if (node is SourceScalar { IsPlain: true } plain && IsNumberText(plain.Value))
+        {
+            metres = Finite(plain, what) * (units == UnitSystem.Imperial ? MetresPerFoot : 1.0);
+        }
+        else if (node is SourceScalar { IsNull: false } scalar && !IsBoolText(scalar.Value))
+        {
+            metres = LengthText(scalar, what);
+        }
+        else
+        {
+            if (!node.IsInvalid)
+            {
+                bag.Error(node.Location, $"{what} must be a length (a number, or a number with m or ft); found {node.Describe()}");
+            }
+
+            return null;
+        }
+
+        if (metres is <= 0)
+        {
+            bag.Error(node.Location, $"{what} must be greater than zero; found {((SourceScalar)node).Value.Trim()}");
+            return null;
+        }
+
+        return metres;
+    }
+
+    /// <summary>Formats a number for a message: shortest round-trip text, invariant culture.</summary>
+    public static string Format(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    /// <summary>True when plain text reads as a YAML 1.2 core-schema number (including .inf and .nan).</summary>
+    public static bool IsNumberText(string text) => NumberPattern().IsMatch(text);
+
+    /// <summary>True when plain text reads as a YAML 1.2 core-schema boolean.</summary>
+    public static bool IsBoolText(string text) =>
+        text is "true" or "True" or "TRUE" or "false" or "False" or "FALSE";
+
+    private double? LengthText(SourceScalar scalar, string what)
+    {
+        var match = LengthPattern().Match(scalar.Value);
+        if (!match.Success)
+        {
+            bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', which is not a length; expected a number (in the project's unit) or a number with its unit, e.g. '28 m' or '92 ft'");
+            return null;
+        }
+
+        var number = double.Parse(match.Groups["number"].Value, NumberStyles.Float, CultureInfo.InvariantCulture);
+        if (!double.IsFinite(number))
+        {
+            bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', which is not a finite number");
+            return null;
+        }
+
+        var unit = match.Groups["unit"].Value;
+        switch (unit)
+        {
+            case "m":
+                return number;
+            case "ft":
+                return number * MetresPerFoot;
+            default:
+                bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', whose unit '{unit}' is not a unit of length; use m or ft");
+                return null;
+        }
+    }
+
+    private double? Finite(SourceScalar scalar, string what)
+    {
+        var text = scalar.Value;
+        double value;
+        if (text.StartsWith("0x", StringComparison.Ordinal))
+        {
+            value = long.Parse(text[2..], NumberStyles.AllowHexSpecifier, CultureInfo.InvariantCulture);
+        }
+        else if (text.StartsWith("0o", StringComparison.Ordinal))
+        {
+            value = Convert.ToInt64(text[2..], 8);
+        }
+        else if (text.Contains(".inf", StringComparison.OrdinalIgnoreCase) || text.Contains(".nan", StringComparison.OrdinalIgnoreCase))
+        {
+            value = double.NaN;
+        }
+        else
+        {
+            value = double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+        }
+
+        if (!double.IsFinite(value))
+        {
+            bag.Error(scalar.Location, $"{what} must be a finite number; found '{text}'");
+            return null;
+        }
+
+        return value;
+    }
+
+    // YAML 1.2 core schema: int (decimal, 0o octal, 0x hex) and float (including .inf, .nan).
+    [GeneratedRegex(@"^(?:[-+]?[0-9]+|0o[0-7]{1,20}|0x[0-9a-fA-F]{1,15}|[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)(?:[eE][-+]?[0-9]+)?|[-+]?\.(?:inf|Inf|INF)|\.(?:nan|NaN|NAN))$")]
+    private static partial Regex NumberPattern();
+
+    [GeneratedRegex(@"^\s*(?<number>[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)(?:[eE][-+]?[0-9]+)?)\s*(?<unit>[A-Za-z]+)\s*$")]
+    private static partial Regex LengthPattern();
+}

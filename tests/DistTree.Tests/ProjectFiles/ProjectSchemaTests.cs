@@ -1,0 +1,106 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using DistTree.ProjectFiles;
+using Json.Schema;
+
+namespace DistTree.Tests.ProjectFiles;
+
+/// <summary>schema/project.schema.json: every project file passes it, and it lists the keys the loader reads.</summary>
+public sealed class ProjectSchemaTests
+{
+    private const string SchemaComment = "# yaml-language-server: $schema=../schema/project.schema.json";
+
+    private static readonly JsonSchema Schema =
+        JsonSchema.FromText(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "project.schema.json")));
+
+    public static TheoryData<string> ProjectFileNames()
+    {
+        var data = new TheoryData<string>();
+        foreach (var file in TestPaths.ProjectFiles())
+        {
+            data.Add(Path.GetFileName(file));
+        }
+
+        return data;
+    }
+
+    [Fact]
+    public void ProjectsFolder_HasAtLeastOneFile()
+    {
+        Assert.NotEmpty(TestPaths.ProjectFiles());
+    }
+
+    [Theory]
+    [MemberData(nameof(ProjectFileNames))]
+    public void Evaluate_EveryProjectFile_IsValid(string name)
+    {
+        var text = File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "projects", name));
+        var results = Evaluate(text);
+        Assert.True(results.IsValid, Describe(results));
+    }
+
+    [Theory]
+    [MemberData(nameof(ProjectFileNames))]
+    public void ProjectFile_FirstLine_NamesTheSchema(string name)
+    {
+        var first = File.ReadLines(Path.Combine(TestPaths.RepoRoot, "projects", name)).First();
+        Assert.Equal(SchemaComment, first);
+    }
+
+    [Theory]
+    [InlineData("  units: metric\n", "  units: metric\n  colour: red\n")]
+    [InlineData("poles: 1", "poles: 4")]
+    [InlineData("load: { va: 1000 }", "load: { va: 1000, kw: 1 }")]
+    [InlineData("size: 12 AWG }", "size: 12 AWG, sets: 0 }")]
+    [InlineData("length: 20, size: 12 AWG", "length: 12 kg, size: 12 AWG")]
+    [InlineData("kind: panelboard", "kind: transformer")]
+    public void Evaluate_BrokenFile_IsInvalid(string original, string replacement)
+    {
+        var good = File.ReadAllText(Path.Combine(TestPaths.Cases, "good", "minimal.yaml"));
+        Assert.True(Evaluate(good).IsValid);
+        Assert.Contains(original, good, StringComparison.Ordinal);
+        Assert.False(Evaluate(good.Replace(original, replacement, StringComparison.Ordinal)).IsValid);
+    }
+
+    [Fact]
+    public void Schema_Keys_MatchTheLoader()
+    {
+        var schema = JsonNode.Parse(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "project.schema.json")))!;
+        var defs = schema["$defs"]!;
+        AssertKeys(ProjectKeys.Top, schema["properties"]);
+        AssertKeys(ProjectKeys.Project, schema["properties"]!["project"]!["properties"]);
+        AssertKeys(ProjectKeys.Rules, schema["properties"]!["rules"]!["properties"]);
+        AssertKeys(ProjectKeys.Defaults, schema["properties"]!["defaults"]!["properties"]);
+        AssertKeys(ProjectKeys.Service, schema["properties"]!["service"]!["properties"]);
+        AssertKeys(ProjectKeys.Equipment, defs["equipment"]!["properties"]);
+        AssertKeys(ProjectKeys.Circuit, defs["circuit"]!["properties"]);
+        AssertKeys(ProjectKeys.Run, defs["run"]!["properties"]);
+        AssertKeys(ProjectKeys.Load, defs["load"]!["properties"]);
+    }
+
+    [Fact]
+    public void Docs_EveryKey_IsDescribed()
+    {
+        var doc = File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "docs", "project-file.md"));
+        string[][] all = [ProjectKeys.Top, ProjectKeys.Project, ProjectKeys.Rules, ProjectKeys.Defaults, ProjectKeys.Service, ProjectKeys.Equipment, ProjectKeys.Circuit, ProjectKeys.Run, ProjectKeys.Load];
+        var missing = all.SelectMany(k => k).Distinct().Where(k => !doc.Contains($"`{k}`", StringComparison.Ordinal)).ToArray();
+        Assert.Empty(missing);
+    }
+
+    private static void AssertKeys(string[] expected, JsonNode? properties)
+    {
+        var actual = properties!.AsObject().Select(p => p.Key).Order(StringComparer.Ordinal).ToArray();
+        Assert.Equal(expected.Order(StringComparer.Ordinal).ToArray(), actual);
+    }
+
+    private static EvaluationResults Evaluate(string yaml)
+    {
+        var json = YamlToJson.Convert(yaml)!.ToJsonString();
+        using var document = JsonDocument.Parse(json);
+        return Schema.Evaluate(document.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
+    }
+
+    private static string Describe(EvaluationResults results) =>
+        string.Join(Environment.NewLine, (results.Details ?? []).Where(d => d.Errors is not null)
+            .SelectMany(d => d.Errors!.Select(e => $"{d.InstanceLocation}: {e.Key}: {e.Value}")));
+}

@@ -1,0 +1,28 @@
+namespace DistTree.Tests.ProjectFiles;
+
+/// <summary>Small project texts for tests, built from a valid minimal project (invented data).</summary>
+internal static class ProjectText
+{
+    /// <summary>A valid project: one panel on the given system with one circuit.</summary>
+    public static string Minimal(string units = "metric", string system = "208Y/120", string feeder = "{ length: 20, size: 2 AWG }",
+        string circuit = "poles: 1\n        ocpd: 20\n        load: { va: 1000 }\n        run: { length: 20, size: 12 AWG }",
+        string extraTop = "", string extraPanel = "") =>
+        $"""
+        disttree: 1
+        project:
+          name: Test
+          units: {units}
+        {extraTop}service:
+          id: SVC
+          system: {system}
+        equipment:
+          - id: LP1
+            kind: panelboard
+            from: SVC
+            feeder: {feeder}
+        {extraPanel}    circuits:
+              - id: "1"
+                {circuit}
+
+        """;
+}

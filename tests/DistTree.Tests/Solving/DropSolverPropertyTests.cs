@@ -1,0 +1,66 @@
+using DistTree.Solving;
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
+
+namespace DistTree.Tests.Solving;
+
+public sealed class DropSolverPropertyTests
+{
+    // Percent-sum method (DESIGN.md section 4): an end point's total is the sum of its path's drops.
+    [Property(MaxTest = 60)]
+    public Property Total_EqualsSumOfPathDrops() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var s = SolverHarness.Solve(tree.ToYaml());
+        return s.EndPoints.All(e =>
+        {
+            var onPath = new HashSet<string>(e.Path.Skip(1), StringComparer.Ordinal);
+            var sum = s.Runs.Where(r => onPath.Contains(r.To)).Sum(r => r.DropPercent);
+            return Math.Abs(sum - e.TotalDropPercent) < 1e-9;
+        });
+    });
+
+    // A larger conductor on any run never raises any end point's total (estimated temperature, so the
+    // temperature falls too).
+    [Property(MaxTest = 60)]
+    public Property LargerConductor_NeverRaisesATotal() => Prop.ForAll(RandomTree.Arbitrary, Arb.From(Gen.Choose(0, 100)), (tree, pick) =>
+    {
+        var rules = "conductor_temperature: estimated";
+        var before = SolverHarness.Solve(tree.ToYaml(rules: rules));
+        var after = SolverHarness.Solve(tree.ToYaml(rules: rules, bumpRun: pick % tree.RunCount));
+        return before.EndPoints.Zip(after.EndPoints).All(p => p.Second.TotalDropPercent <= p.First.TotalDropPercent + 1e-12);
+    });
+
+    // At a fixed temperature, doubling every length doubles every drop (ΔV ∝ L).
+    [Property(MaxTest = 40)]
+    public Property DoublingLength_DoublesDrop() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var one = SolverHarness.Solve(tree.ToYaml());
+        var two = SolverHarness.Solve(tree.ToYaml(lengthScale: 2));
+        return one.Runs.Zip(two.Runs).All(p => Math.Abs((2 * p.First.DropV) - p.Second.DropV) < 1e-9 * Math.Max(1, p.Second.DropV));
+    });
+
+    // The same design in metric and imperial lengths gives the same figures (1 ft = 0.3048 m).
+    [Property(MaxTest = 40)]
+    public Property MetricAndImperial_GiveTheSameFigures() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var feet = SolverHarness.Solve(tree.ToYaml(units: "imperial"));
+        var metres = SolverHarness.Solve(tree.ToYaml(units: "metric", lengthScale: 0.3048));
+        return feet.EndPoints.Zip(metres.EndPoints).All(p => Math.Abs(p.First.TotalDropPercent - p.Second.TotalDropPercent) < 1e-9);
+    });
+
+    // Demand factor 1 everywhere: a feeder carries the plain phasor sum of the loads below it.
+    [Property(MaxTest = 40)]
+    public Property DemandFactorOne_IsThePlainPhasorSum() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var plain = tree with { Panels = tree.Panels.Select(p => p with { DemandFactor = 1.0 }).ToArray() };
+        var s = SolverHarness.Solve(plain.ToYaml());
+        return s.Runs.Where(r => r.Kind == RunResultKind.Feeder).All(feeder =>
+        {
+            var below = s.EndPoints.Where(e => e.Path.Contains(feeder.To)).Select(e => s.Network.Nodes[e.NodeIndex].Circuit!.Load);
+            var p = below.Sum(l => l.Value * l.PowerFactor);
+            var q = below.Sum(l => l.Value * Math.Sqrt(1 - (l.PowerFactor * l.PowerFactor)));
+            return Math.Abs(Math.Sqrt((p * p) + (q * q)) - feeder.ApparentPowerVa) < 1e-6;
+        });
+    });
+}
