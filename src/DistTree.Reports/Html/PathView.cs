@@ -8,6 +8,7 @@ internal sealed record PathsView(
     string LimitX,
     string NearX,
     string NearWidth,
+    string OverWidth,
     string LimitLabel,
     IReadOnlyList<AxisTick> Ticks,
     IReadOnlyList<PathView> Items);

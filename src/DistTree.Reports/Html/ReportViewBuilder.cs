@@ -25,6 +25,9 @@ internal sealed class ReportViewBuilder
     /// <summary>Equipment nodes drawn in the tree at most.</summary>
     public const int TreeNodeCap = 300;
 
+    /// <summary>Trees this deep or less are scaled to the page width; deeper ones scroll sideways (and scale when printed).</summary>
+    public const int FitDepth = 8;
+
     /// <summary>The share of the total limit from which an end point counts as near its limit.</summary>
     public const double NearFraction = 0.8;
 
@@ -439,6 +442,7 @@ internal sealed class ReportViewBuilder
             Coordinate(X(limit)),
             Coordinate(X(NearFraction * limit)),
             Coordinate(X(limit) - X(NearFraction * limit)),
+            Coordinate(Math.Max(0, width - X(limit))),
             Limit(limit),
             ticks,
             items);
@@ -447,10 +451,10 @@ internal sealed class ReportViewBuilder
     // The equipment tree, left to right: depth is the column, leaves take rows in depth-first order.
     private TreeView BuildTree()
     {
-        const double margin = 14, nodeW = 176, nodeH = 54, colW = 214, rowH = 66;
+        const double margin = 12, nodeW = 174, nodeH = 54, colW = 202, rowH = 64;
         var layout = TreeLayout.Compute(_nodes, TreeNodeCap);
         var views = new List<TreeNodeView>(layout.Order.Count);
-        var edges = new List<string>(layout.Order.Count);
+        var edges = new List<TreeEdge>(layout.Order.Count);
         foreach (var i in layout.Order)
         {
             var node = _nodes[i];
@@ -462,19 +466,20 @@ internal sealed class ReportViewBuilder
                 var px = margin + (layout.Depth[parent] * colW) + nodeW;
                 var py = margin + (layout.Row[parent] * rowH) + (nodeH / 2);
                 var bus = px + ((colW - nodeW) / 2);
-                edges.Add($"M{Coordinate(px)} {Coordinate(py)}H{Coordinate(bus)}V{Coordinate(y + (nodeH / 2))}H{Coordinate(x)}");
+                edges.Add(new TreeEdge($"M{Coordinate(px)} {Coordinate(py)}H{Coordinate(bus)}V{Coordinate(y + (nodeH / 2))}H{Coordinate(x)}", BandClass(_bandBelow[i])));
             }
 
             views.Add(TreeNode(node, x, y, layout.HiddenBelow[i]));
         }
 
         var drawn = layout.Order.Count;
-        var note = drawn == layout.EquipmentCount
+        var fit = layout.MaxDepth <= FitDepth ? " The drawing is scaled to the page width." : " The drawing scrolls sideways on screen and is scaled to the page when printed.";
+        var note = (drawn == layout.EquipmentCount
             ? $"All {Count(layout.EquipmentCount)} nodes of equipment are drawn (the service included); circuits are summarised per panel as a count and their worst total."
-            : $"{Count(drawn)} of {Count(layout.EquipmentCount)} nodes of equipment are drawn: whole levels while at most {TreeNodeCap} fit{(layout.DepthLimit == int.MaxValue ? "" : $" (down to depth {layout.DepthLimit})")}, then depth-first order; a node marked \u201c+N\u201d has N more below it, listed in the panel tables. Circuits are summarised per panel.";
+            : $"{Count(drawn)} of {Count(layout.EquipmentCount)} nodes of equipment are drawn: whole levels while at most {TreeNodeCap} fit{(layout.DepthLimit == int.MaxValue ? "" : $" (down to depth {layout.DepthLimit})")}, then depth-first order; a node marked \u201c+N\u201d has N more below it, listed in the panel tables. Circuits are summarised per panel.") + fit;
         var width = (margin * 2) + (layout.MaxDepth * colW) + nodeW;
         var height = (margin * 2) + ((layout.Rows - 1) * rowH) + nodeH;
-        return new TreeView(Coordinate(width), Coordinate(height), views, edges, note);
+        return new TreeView(layout.MaxDepth <= FitDepth ? "fit" : "scroll", Coordinate(width), Coordinate(height), Coordinate(nodeW), Coordinate(nodeH), Coordinate(nodeW - 10), views, edges, note);
     }
 
     private TreeNodeView TreeNode(NetworkNode node, double x, double y, int hidden)
@@ -517,7 +522,7 @@ internal sealed class ReportViewBuilder
             line3 = $"+{Count(hidden)} below, not drawn";
         }
 
-        var id = node.Id.Length > 20 ? node.Id[..19] + "…" : node.Id;
+        var id = node.Id.Length > 16 ? node.Id[..15] + "…" : node.Id;
         var kind = node.Kind switch
         {
             NodeKind.Service => "svc",
@@ -651,7 +656,7 @@ internal sealed class ReportViewBuilder
         new("branch_limit_percent", Limit(r.BranchLimitPercent) + " %", "The largest drop allowed in any one branch circuit, in percent of the circuit voltage."),
         new("total_limit_percent", Limit(r.TotalLimitPercent) + " %", "The largest sum of the percent drops from the service (or from a new origin, below) to any point of use."),
         new("branch_current", Escape(RuleText.BranchCurrent(r)), "The current a branch circuit's drop is computed at: connected = the connected load; ocpd_80 = 80 % of the overcurrent device rating; lesser = the smaller of the two."),
-        new("conductor_temperature", Escape(RuleText.Temperature(r)), "The temperature of the conductor resistance: estimated = from loading (formula below); rated = the insulation rating; a number = that temperature in °C."),
+        new("conductor_temperature", Escape(RuleText.Temperature(r)), "The temperature of the conductor resistance: estimated = from loading (formula above); rated = the insulation rating; a number = that temperature in °C."),
         new("transformer_drop", Escape(RuleText.TransformerDrop(r)), "count = a transformer's regulation adds to the totals below it; new_origin = its secondary starts a new total budget."),
         new("ambient_c", Limit(r.AmbientC) + " °C", "Ambient temperature for ampacity correction and for the temperature estimate."),
         new("terminal_c", Count(r.TerminalC) + " °C", "Terminal rating: the ampacity column used is at most this temperature."),

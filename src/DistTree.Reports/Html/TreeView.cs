@@ -1,7 +1,19 @@
 namespace DistTree.Reports.Html;
 
 /// <summary>The equipment tree drawing.</summary>
-internal sealed record TreeView(string Width, string Height, IReadOnlyList<TreeNodeView> Nodes, IReadOnlyList<string> Edges, string Note);
+internal sealed record TreeView(
+    string Fit,
+    string Width,
+    string Height,
+    string NodeWidth,
+    string NodeHeight,
+    string FlagX,
+    IReadOnlyList<TreeNodeView> Nodes,
+    IReadOnlyList<TreeEdge> Edges,
+    string Note);
+
+/// <summary>A feeder's line in the drawing, marked by the band of the node it feeds.</summary>
+internal sealed record TreeEdge(string D, string Band);
 
 /// <summary>One equipment node placed in the drawing.</summary>
 internal sealed record TreeNodeView
