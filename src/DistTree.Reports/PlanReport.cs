@@ -1,0 +1,110 @@
+using System.Globalization;
+using System.Text.Json;
+using DistTree.Sizing;
+using DistTree.Solving;
+
+namespace DistTree.Reports;
+
+/// <summary>Formats an upsize plan: console text, and the <c>upsize_plan</c> object of the results document.</summary>
+public static class PlanReport
+{
+    /// <summary>The plan as text: each change, the total, what no size can fix.</summary>
+    public static void WriteConsole(TextWriter o, UpsizePlan plan)
+    {
+        var p = plan.Before.Project;
+        o.WriteLine($"DistTree upsize plan: {p.Name}");
+        o.WriteLine($"  file   {p.File} (sha256 {p.Sha256[..12]}…)");
+        o.WriteLine(F($"  before {plan.Before.Summary.Findings} findings, worst total {plan.Before.Summary.WorstTotalDropPercent:0.00} %; after {plan.After.Summary.Findings} findings, worst total {plan.After.Summary.WorstTotalDropPercent:0.00} %"));
+        o.WriteLine();
+        if (plan.Changes.Count == 0)
+        {
+            o.WriteLine("No run needs a larger size.");
+        }
+        else
+        {
+            o.WriteLine(F($"{"run",-14} {"kind",-7} {"size before → after",-34} {"drop before → after",-22} {"added (" + plan.CostUnit + ")",14}"));
+            foreach (var c in plan.Changes)
+            {
+                var sizes = $"{Sets(c.SetsBefore)}{c.SizeBefore} → {Sets(c.SetsAfter)}{c.SizeAfter}";
+                var drops = F($"{c.DropPercentBefore:0.00} % → {c.DropPercentAfter:0.00} %");
+                o.WriteLine(F($"{c.RunId,-14} {Kind(c.Kind),-7} {sizes,-34} {drops,-22} {c.CostAdded,14:0.#}"));
+                if (c.GroundingNote is { } note)
+                {
+                    o.WriteLine($"{"",-14} note: {note}");
+                }
+            }
+
+            o.WriteLine(F($"Total added: {plan.TotalCostAdded:0.#} {plan.CostUnit} over {plan.Changes.Count} runs."));
+        }
+
+        if (plan.Unresolvable.Count > 0)
+        {
+            o.WriteLine();
+            o.WriteLine("No allowed size fixes these:");
+            foreach (var u in plan.Unresolvable)
+            {
+                o.WriteLine($"  {u.Message}");
+            }
+        }
+
+        o.WriteLine();
+        o.WriteLine("The plan was proved by solving the tree again with it applied.");
+        o.WriteLine($"Caution: {Caution.Text}");
+    }
+
+    /// <summary>Writes the <c>upsize_plan</c> property.</summary>
+    public static void WriteJson(Utf8JsonWriter w, UpsizePlan plan)
+    {
+        w.WriteStartObject("upsize_plan");
+        w.WriteString("cost_unit", plan.CostUnit);
+        JsonResults.Number(w, "total_cost_added", plan.TotalCostAdded, 3);
+        w.WriteNumber("findings_before", plan.Before.Summary.Findings);
+        w.WriteNumber("findings_after", plan.After.Summary.Findings);
+        JsonResults.Number(w, "worst_total_drop_percent_after", plan.After.Summary.WorstTotalDropPercent, 4);
+        w.WriteStartArray("changes");
+        foreach (var c in plan.Changes)
+        {
+            w.WriteStartObject();
+            w.WriteString("run", c.RunId);
+            w.WriteString("kind", Kind(c.Kind));
+            w.WriteString("size_before", c.SizeBefore);
+            w.WriteString("size_after", c.SizeAfter);
+            w.WriteNumber("sets_before", c.SetsBefore);
+            w.WriteNumber("sets_after", c.SetsAfter);
+            JsonResults.Number(w, "drop_percent_before", c.DropPercentBefore, 4);
+            JsonResults.Number(w, "drop_percent_after", c.DropPercentAfter, 4);
+            JsonResults.Number(w, "cost_added", c.CostAdded, 3);
+            if (c.GroundingNote is { } note)
+            {
+                w.WriteString("grounding_note", note);
+            }
+            else
+            {
+                w.WriteNull("grounding_note");
+            }
+
+            w.WriteNumber("line", c.SizeLocation.Line);
+            w.WriteNumber("column", c.SizeLocation.Column);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteStartArray("unresolvable");
+        foreach (var u in plan.Unresolvable)
+        {
+            w.WriteStartObject();
+            w.WriteString("subject", u.Subject);
+            w.WriteString("message", u.Message);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static string Sets(int sets) => sets > 1 ? $"{sets}×" : "";
+
+    private static string Kind(RunResultKind kind) => kind == RunResultKind.Branch ? "branch" : "feeder";
+
+    private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

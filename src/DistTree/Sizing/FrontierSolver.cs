@@ -1,0 +1,173 @@
+namespace DistTree.Sizing;
+
+/// <summary>
+/// The exact optimiser on the budget grid: a bottom-up dynamic programme over the tree. For every node,
+/// H[b] is the least cost of its subtree (its incoming run included) when b grid steps of drop are left
+/// at its input; a node's bus sums its children's H; a run takes the best choice
+/// H[b] = min over choices (cost + bus[b − steps]). Leaves need only a sorted sweep. The choices are then
+/// read back top-down from the service with the whole budget. Iterative over the parent-first node array.
+/// </summary>
+internal static class FrontierSolver
+{
+    /// <summary>The chosen option index per node (−1 without a run), and the total cost; cost is +∞ when infeasible.</summary>
+    public static (int[] Choice, double Cost) Solve(SizingProblem problem)
+    {
+        var nodes = problem.Network.Nodes;
+        var n = nodes.Count;
+        var b = problem.BudgetSteps;
+        var bus = new double[]?[n];
+        var choices = new short[]?[n];
+        for (var i = n - 1; i >= 0; i--)
+        {
+            var node = nodes[i];
+            var parent = node.ParentIndex;
+            if (node.Circuit is not null)
+            {
+                AddLeaf(ParentBus(bus, parent, b), problem.Options[i]!, problem.Excluded[i]);
+                continue;
+            }
+
+            var own = bus[i] ?? new double[b + 1];
+            bus[i] = null;
+            if (parent < 0)
+            {
+                return (ReadBack(problem, choices), own[b]);
+            }
+
+            var atInput = Transform(problem, i, own);
+            var h = problem.Options[i] is { } options ? BestChoice(atInput, options, out choices[i]) : atInput;
+            var target = ParentBus(bus, parent, b);
+            for (var k = 0; k <= b; k++)
+            {
+                target[k] += h[k];
+            }
+        }
+
+        throw new InvalidOperationException("the network has no service node");
+    }
+
+    private static double[] ParentBus(double[]?[] bus, int parent, int budget) => bus[parent] ??= new double[budget + 1];
+
+    // A leaf adds the step function min{cost : steps ≤ k}; left out of the budget, its cheapest choice.
+    private static void AddLeaf(double[] target, RunOption[] options, bool excluded)
+    {
+        if (excluded)
+        {
+            var cheapest = options.Min(o => o.Cost);
+            for (var k = 0; k < target.Length; k++)
+            {
+                target[k] += cheapest;
+            }
+
+            return;
+        }
+
+        var bySteps = options.OrderBy(o => o.Steps).ToArray();
+        var best = double.PositiveInfinity;
+        var j = 0;
+        for (var k = 0; k < target.Length; k++)
+        {
+            while (j < bySteps.Length && bySteps[j].Steps <= k)
+            {
+                best = Math.Min(best, bySteps[j].Cost);
+                j++;
+            }
+
+            target[k] += best;
+        }
+    }
+
+    // From a node's bus to its input side (after its run): a transformer shifts the budget by its regulation,
+    // or, at a new origin, gives its secondary the whole budget whatever is left above.
+    private static double[] Transform(SizingProblem problem, int node, double[] own)
+    {
+        if (problem.Network.Nodes[node].Kind != Network.NodeKind.Transformer)
+        {
+            return own;
+        }
+
+        var b = own.Length - 1;
+        var shifted = new double[b + 1];
+        for (var k = 0; k <= b; k++)
+        {
+            var at = problem.NewOrigin ? b : k - problem.TransformerSteps[node];
+            shifted[k] = at < 0 ? double.PositiveInfinity : own[Math.Min(at, b)];
+        }
+
+        return shifted;
+    }
+
+    private static double[] BestChoice(double[] below, RunOption[] options, out short[] choice)
+    {
+        var b = below.Length - 1;
+        var h = new double[b + 1];
+        choice = new short[b + 1];
+        for (var k = 0; k <= b; k++)
+        {
+            var best = double.PositiveInfinity;
+            short pick = 0;
+            for (short j = 0; j < options.Length; j++)
+            {
+                var rest = k - options[j].Steps;
+                if (rest < 0)
+                {
+                    continue;
+                }
+
+                var cost = options[j].Cost + below[rest];
+                if (cost < best)
+                {
+                    best = cost;
+                    pick = j;
+                }
+            }
+
+            h[k] = best;
+            choice[k] = pick;
+        }
+
+        return h;
+    }
+
+    // Top-down: each node gets the steps left at its input; its run's choice uses some, a transformer more.
+    private static int[] ReadBack(SizingProblem problem, short[]?[] choices)
+    {
+        var nodes = problem.Network.Nodes;
+        var left = new int[nodes.Count];
+        var choice = new int[nodes.Count];
+        Array.Fill(choice, -1);
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            var node = nodes[i];
+            var atInput = node.ParentIndex < 0 ? problem.BudgetSteps : left[node.ParentIndex];
+            var afterRun = atInput;
+            if (problem.Options[i] is { } options)
+            {
+                var pick = node.Circuit is not null ? LeafChoice(options, atInput, problem.Excluded[i]) : choices[i]![Math.Clamp(atInput, 0, problem.BudgetSteps)];
+                choice[i] = pick;
+                afterRun = atInput - options[pick].Steps;
+            }
+
+            // Bus steps left = budget − steps used; a transformer uses its regulation, a new origin restores the whole budget.
+            left[i] = node.Kind == Network.NodeKind.Transformer
+                ? (problem.NewOrigin ? problem.BudgetSteps : Math.Min(problem.BudgetSteps, afterRun - problem.TransformerSteps[i]))
+                : afterRun;
+        }
+
+        return choice;
+    }
+
+    private static int LeafChoice(RunOption[] options, int stepsLeft, bool excluded)
+    {
+        var pick = -1;
+        for (var j = 0; j < options.Length; j++)
+        {
+            if ((excluded || options[j].Steps <= stepsLeft) && (pick < 0 || options[j].Cost < options[pick].Cost))
+            {
+                pick = j;
+            }
+        }
+
+        return pick < 0 ? 0 : pick;
+    }
+}

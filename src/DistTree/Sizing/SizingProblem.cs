@@ -1,0 +1,227 @@
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
+using DistTree.Solving;
+
+namespace DistTree.Sizing;
+
+/// <summary>One allowed choice for a run: a size and a number of sets, with its drop and cost.</summary>
+/// <param name="Size">Conductor size.</param>
+/// <param name="Sets">Parallel sets.</param>
+/// <param name="DropPercent">The run's drop at this choice, percent (exact).</param>
+/// <param name="Steps">The drop on the optimiser's grid, rounded up: ceil(drop / resolution).</param>
+/// <param name="Cost">Cost added against the present choice (material in mm²·m, or priced).</param>
+/// <param name="MeetsRunLimits">True when the choice meets the run's own drop limit, ampacity and device rules.</param>
+internal readonly record struct RunOption(ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits);
+
+/// <summary>
+/// The upsizing problem of a solved tree, on a budget grid: per node the choices of its incoming run (only
+/// those that meet the run's own limits, unless none does), the transformers' regulation in grid steps,
+/// and the end points whose total no choice can bring within the limit (left out of the budget and
+/// reported). Loads are fixed, so a run's drop depends on its own choice alone.
+/// </summary>
+internal sealed class SizingProblem
+{
+    private SizingProblem(Solution solution, int budgetSteps, double resolution, RunOption[]?[] options, int[] transformerSteps,
+        bool[] excluded, List<UnresolvableLimit> unresolvable)
+    {
+        Solution = solution;
+        BudgetSteps = budgetSteps;
+        ResolutionPercent = resolution;
+        Options = options;
+        TransformerSteps = transformerSteps;
+        Excluded = excluded;
+        Unresolvable = unresolvable;
+    }
+
+    public Solution Solution { get; }
+
+    public DistributionNetwork Network => Solution.Network;
+
+    /// <summary>The total limit in grid steps.</summary>
+    public int BudgetSteps { get; }
+
+    public double ResolutionPercent { get; }
+
+    /// <summary>Per node index, the choices of its incoming run (present choice first), or null without a run.</summary>
+    public RunOption[]?[] Options { get; }
+
+    /// <summary>Per node index, a transformer's regulation in grid steps (0 elsewhere).</summary>
+    public int[] TransformerSteps { get; }
+
+    /// <summary>Per node index, true for an end point left out of the budget (no choice fixes it).</summary>
+    public bool[] Excluded { get; }
+
+    public List<UnresolvableLimit> Unresolvable { get; }
+
+    public bool NewOrigin => Solution.Project.Rules.TransformerDrop == TransformerDropMode.NewOrigin;
+
+    /// <summary>Builds the problem. <paramref name="maxSteps"/> limits each run to that many sizes above its own (tests).</summary>
+    public static SizingProblem Build(Solution solution, ConductorCatalog catalog, int? maxSteps = null)
+    {
+        var project = solution.Project;
+        var sizing = project.Sizing;
+        var resolution = sizing.ResolutionPercent;
+        var nodes = solution.Network.Nodes;
+        var options = new RunOption[]?[nodes.Count];
+        var transformerSteps = new int[nodes.Count];
+        var unresolvable = new List<UnresolvableLimit>();
+        foreach (var row in solution.Runs)
+        {
+            if (row.Kind == RunResultKind.Transformer)
+            {
+                transformerSteps[row.NodeIndex] = Steps(row.DropPercent, resolution);
+                continue;
+            }
+
+            var run = nodes[row.NodeIndex].Incoming!;
+            var all = Candidates(run, row, project, catalog, maxSteps).ToArray();
+            var fitting = all.Where(o => o.MeetsRunLimits).ToArray();
+            if (fitting.Length == 0)
+            {
+                unresolvable.Add(new UnresolvableLimit(row.Id, UnfixableRun(row, run, all)));
+            }
+
+            options[row.NodeIndex] = Pareto(fitting.Length > 0 ? fitting : all);
+        }
+
+        var budget = (int)Math.Floor((project.Rules.TotalLimitPercent / resolution) + 1e-9);
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, new bool[nodes.Count], unresolvable);
+        problem.ExcludeUnfixableEndPoints();
+        return problem;
+    }
+
+    /// <summary>A drop on the grid, rounded up (the safe side); exact multiples are not pushed up by rounding noise.</summary>
+    public static int Steps(double dropPercent, double resolution) => (int)Math.Ceiling((dropPercent / resolution) - 1e-9);
+
+    // An end point is fixable when its path at every run's least-drop choice fits the budget. All end points
+    // can reach their least drops at once, so the others need no more than that.
+    private void ExcludeUnfixableEndPoints()
+    {
+        var nodes = Network.Nodes;
+        var least = new int[nodes.Count];
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            var parent = nodes[i].ParentIndex;
+            var above = parent < 0 ? 0 : BusSteps(parent, least[parent]);
+            least[i] = above + (Options[i] is { } o ? o.Min(x => x.Steps) : 0);
+        }
+
+        foreach (var e in Solution.EndPoints)
+        {
+            if (least[e.NodeIndex] > BudgetSteps)
+            {
+                Excluded[e.NodeIndex] = true;
+                var best = least[e.NodeIndex] * ResolutionPercent;
+                Unresolvable.Add(new UnresolvableLimit(e.Id, FormattableString.Invariant(
+                    $"end point {e.Id}: even with every run on its path at its largest allowed size and sets the total is about {best:0.00} % against the {e.LimitPercent:0.##} % limit; it would take more parallel sets (sizing: max_sets), a shorter run, or a panel nearer the load")));
+            }
+        }
+    }
+
+    /// <summary>Steps used at a node's bus, given the steps used at its input plus its run: adds a transformer's regulation, or restarts at a new origin.</summary>
+    public int BusSteps(int node, int stepsAtInputAfterRun)
+    {
+        if (Network.Nodes[node].Kind != NodeKind.Transformer)
+        {
+            return stepsAtInputAfterRun;
+        }
+
+        return NewOrigin ? 0 : stepsAtInputAfterRun + TransformerSteps[node];
+    }
+
+    private static IEnumerable<RunOption> Candidates(NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, int? maxSteps)
+    {
+        var conductors = run.Conductors;
+        var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
+        var cos = row.PowerFactor;
+        var sin = Math.Sqrt(Math.Max(0, 1 - (cos * cos)));
+        var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
+        var steps = 0;
+        for (ConductorSize? size = conductors.Size; size is { } s; size = conductors.Fixed ? null : s.NextLarger, steps++)
+        {
+            if (maxSteps is { } limit && steps > limit)
+            {
+                yield break;
+            }
+
+            if (!catalog.Contains(s))
+            {
+                continue;
+            }
+
+            for (var sets = conductors.Sets; sets <= maxSets; sets++)
+            {
+                var isPresent = s == conductors.Size && sets == conductors.Sets;
+                var cost = Cost(conductors, s, sets, run.Supply, project.Sizing);
+                if (cost is null && !isPresent)
+                {
+                    continue;
+                }
+
+                var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, run.Supply, project.Service.FrequencyHz, row.CurrentA, cos, sin);
+                var meets = figures.DropPercent <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
+                yield return new RunOption(s, sets, figures.DropPercent, Steps(figures.DropPercent, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
+            }
+        }
+    }
+
+    private static bool MeetsCurrentRules(ConductorCatalog catalog, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
+    {
+        if (ampacityA is not { } ampacity)
+        {
+            // No tabulated ampacity (e.g. metric 400 mm² and up): only the present choice, which the solver already reported on.
+            return size == conductors.Size && sets == conductors.Sets;
+        }
+
+        if (row.DesignCurrentA > ampacity + 1e-9 || (row.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity)))
+        {
+            return false;
+        }
+
+        return row.OcpdA is not { } device || catalog.SmallConductorMaxOcpdA(size, conductors.Material) is not { } smallMax || device <= (smallMax * sets) + 1e-9;
+    }
+
+    // Material: area × length × current-carrying conductors × sets (mm²·m); with a price table, price × length × conductors × sets.
+    private static double? Cost(Run conductors, ConductorSize size, int sets, CircuitSupply supply, SizingOptions sizing)
+    {
+        var conductorsPerSet = supply.Phases == 3 ? 3 : 2;
+        if (sizing.Prices.Count == 0)
+        {
+            return size.AreaMm2 * conductors.LengthM * conductorsPerSet * sets;
+        }
+
+        return sizing.Prices.TryGetValue(size, out var price) ? price * conductors.LengthM * conductorsPerSet * sets : null;
+    }
+
+    // Keeps the choices no other choice beats on both drop and cost; present choice first, then by cost.
+    private static RunOption[] Pareto(RunOption[] options)
+    {
+        var ordered = options.Select((o, i) => (o, i)).OrderBy(p => p.o.Cost).ThenBy(p => p.o.Steps).ThenBy(p => p.i).Select(p => p.o);
+        var kept = new List<RunOption>();
+        var bestSteps = int.MaxValue;
+        foreach (var o in ordered)
+        {
+            if (o.Steps < bestSteps)
+            {
+                kept.Add(o);
+                bestSteps = o.Steps;
+            }
+        }
+
+        return [.. kept];
+    }
+
+    private static string UnfixableRun(RunResult row, NetworkRun run, RunOption[] all)
+    {
+        var what = row.Kind == RunResultKind.Branch ? "branch circuit" : "feeder";
+        if (run.Conductors.Fixed)
+        {
+            return $"{what} {row.Id}: pinned (fixed: true) and over its limits at {row.Size}; unpin it, shorten it, or move the load";
+        }
+
+        var best = all.MinBy(o => o.DropPercent);
+        return FormattableString.Invariant(
+            $"{what} {row.Id}: no allowed size meets its own limits; the best, {best.Sets}×{best.Size}, drops {best.DropPercent:0.00} % against {row.LimitPercent:0.##} %; it would take more parallel sets (sizing: max_sets), a shorter run, or a panel nearer the load");
+    }
+}

@@ -1,0 +1,54 @@
+using System.Text.Json;
+
+namespace DistTree.Tests.Cli.Commands;
+
+public sealed class UpsizeCommandTests
+{
+    private static string Demo => Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml");
+
+    // The --apply round trip: the applied copy checks clean, and a line diff shows only size lines changed.
+    [Fact]
+    public void Upsize_Apply_ThenCheckPasses_AndOnlySizeLinesChange()
+    {
+        var output = Path.Combine(Path.GetTempPath(), $"disttree-{Guid.NewGuid():N}.yaml");
+        try
+        {
+            var before = File.ReadAllBytes(Demo);
+            var result = CliRunner.Run("upsize", Demo, "--apply", output);
+            Assert.Equal(0, result.ExitCode);
+            Assert.Equal(before, File.ReadAllBytes(Demo));
+            Assert.Equal(0, CliRunner.Run("check", output).ExitCode);
+            var old = File.ReadAllLines(Demo);
+            var @new = File.ReadAllLines(output);
+            Assert.Equal(old.Length, @new.Length);
+            var changed = old.Zip(@new).Where(p => p.First != p.Second).ToArray();
+            Assert.NotEmpty(changed);
+            Assert.All(changed, p => Assert.Contains("size:", p.Second, StringComparison.Ordinal));
+            Assert.All(changed, p => Assert.Equal(p.First.Replace(Size(p.First), "", StringComparison.Ordinal), p.Second.Replace(Size(p.Second), "", StringComparison.Ordinal)));
+        }
+        finally
+        {
+            File.Delete(output);
+        }
+    }
+
+    [Fact]
+    public void Upsize_Json_HasThePlan()
+    {
+        var result = CliRunner.Run("upsize", Demo, "--json", "-");
+        using var doc = JsonDocument.Parse(result.Out);
+        var plan = doc.RootElement.GetProperty("upsize_plan");
+        Assert.True(plan.GetProperty("changes").GetArrayLength() > 0);
+        Assert.Equal(0, plan.GetProperty("findings_after").GetInt32());
+    }
+
+    [Fact]
+    public void Upsize_ApplyOntoTheInput_IsRefused() => Assert.Equal(2, CliRunner.Run("upsize", Demo, "--apply", Demo).ExitCode);
+
+    private static string Size(string line)
+    {
+        var at = line.IndexOf("size: ", StringComparison.Ordinal) + 6;
+        var end = line.IndexOfAny([',', '}'], at);
+        return line[at..(end < 0 ? line.Length : end)];
+    }
+}

@@ -1,0 +1,125 @@
+using DistTree.Conductors;
+using DistTree.Sizing;
+using DistTree.Solving;
+using DistTree.Tests.Solving;
+
+namespace DistTree.Tests.Sizing;
+
+public sealed class UpsizerTests
+{
+    private static string Demo => Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml");
+
+    private static UpsizePlan PlanFor(string yaml) => Upsizer.Standard.Plan(SolverHarness.Solve(yaml));
+
+    [Fact]
+    public void Plan_Demo_ClearsEveryFindingAndNeverDownsizes()
+    {
+        var before = SolverHarness.Solve(File.ReadAllText(Demo), Demo);
+        var plan = Upsizer.Standard.Plan(before);
+        Assert.True(before.HasFindings);
+        Assert.False(plan.After.HasFindings);
+        Assert.Empty(plan.Unresolvable);
+        Assert.NotEmpty(plan.Changes);
+        Assert.All(plan.Changes, c => Assert.True(ConductorSize.Parse(c.SizeAfter) >= ConductorSize.Parse(c.SizeBefore) && c.SetsAfter >= c.SetsBefore));
+        Assert.All(plan.Changes, c => Assert.True(c.CostAdded > 0));
+        Assert.Equal(plan.Changes.Sum(c => c.CostAdded), plan.TotalCostAdded, 9);
+    }
+
+    // Upsizing one shared feeder fixes many circuits at once: the optimiser never costs more than the greedy
+    // fix that upsizes each failing end point's own branch circuit first.
+    [Fact]
+    public void Plan_Demo_CostsNoMoreThanTheGreedyFix()
+    {
+        var before = SolverHarness.Solve(File.ReadAllText(Demo), Demo);
+        var plan = Upsizer.Standard.Plan(before);
+        Assert.True(plan.TotalCostAdded <= GreedyBaseline.CostAdded(before, ConductorCatalog.Standard) + 1e-6);
+    }
+
+    [Fact]
+    public void Plan_SharedFeeder_UpsizesTheFeederNotEveryBranch()
+    {
+        // Four 16 A circuits share a long 6 AWG feeder that is over its own limit; upsizing the feeder once
+        // fixes every total, where upsizing the branches could not fix the feeder.
+        var circuits = string.Join("\n", Enumerable.Range(1, 4).Select(i =>
+            $"      - {{ id: \"{i}\", poles: 1, ocpd: 20, load: {{ amps: 16 }}, run: {{ length: 10, size: 12 AWG }} }}"));
+        var yaml = $"""
+            disttree: 1
+            project: {"{"} name: Shared, units: metric {"}"}
+            service: {"{"} id: SVC, system: 208Y/120 {"}"}
+            equipment:
+              - id: P
+                kind: panelboard
+                from: SVC
+                feeder: {"{"} length: 150, size: 6 AWG {"}"}
+                circuits:
+            {circuits}
+            """;
+        var plan = PlanFor(yaml);
+        Assert.Contains(plan.Before.AllFindings, f => f.Code == "feeder_drop");
+        Assert.False(plan.After.HasFindings);
+        Assert.Contains(plan.Changes, c => c.RunId == "P");
+        Assert.True(plan.Changes.Count(c => c.Kind == RunResultKind.Branch) < 4);
+    }
+
+    [Fact]
+    public void Plan_PinnedRun_KeepsItsSizeAndIsReportedWhenItFails()
+    {
+        var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 200, size: 12 AWG, fixed: true } }"));
+        Assert.Empty(plan.Changes);
+        Assert.Contains(plan.Unresolvable, u => u.Subject == "P/1" && u.Message.Contains("pinned", StringComparison.Ordinal));
+        Assert.True(plan.After.HasFindings);
+    }
+
+    [Fact]
+    public void Plan_NoSizeBigEnough_SaysWhatItWouldTake()
+    {
+        // 120 V, 80 A, 3,000 ft: even 2000 kcmil drops about 4 % on one set (2 × 80 A × 0.914 km × 0.034 ohm/km).
+        var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 100, load: { amps: 80 }, run: { length: 3000, size: 2 AWG } }"));
+        var u = Assert.Single(plan.Unresolvable, u => u.Subject == "P/1" && u.Message.Contains("branch circuit", StringComparison.Ordinal));
+        Assert.Contains("parallel sets", u.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Plan_MaxSets_LetsAFeederTakeParallelSets()
+    {
+        var yaml = """
+            disttree: 1
+            project: { name: Sets, units: imperial }
+            sizing: { max_sets: 4 }
+            service: { id: SVC, system: 480Y/277 }
+            equipment:
+              - id: P
+                kind: panelboard
+                from: SVC
+                feeder: { length: 1400, size: 500 kcmil, sets: 1, ocpd: 600 }
+                circuits:
+                  - { id: "1", poles: 3, ocpd: 500, load: { amps: 350, pf: 0.9 }, run: { length: 10, size: 500 kcmil } }
+            """;
+        var plan = PlanFor(yaml);
+        Assert.False(plan.After.HasFindings);
+        Assert.Contains(plan.Changes, c => c.RunId == "P" && c.SetsAfter > 1);
+    }
+
+    [Fact]
+    public void Plan_PriceTable_MinimisesPriceAndNamesTheCurrency()
+    {
+        var yaml = SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 90, size: 12 AWG } }")
+            .Replace("equipment:", "sizing: { currency: USD, prices: { 10 AWG: 5.0, 8 AWG: 1.0, 6 AWG: 9.0 } }\nequipment:", StringComparison.Ordinal);
+        var plan = PlanFor(yaml);
+        // 10 AWG would do, but the (invented) price table makes 8 AWG cheaper.
+        Assert.Equal("8 AWG", Assert.Single(plan.Changes).SizeAfter);
+        Assert.Equal("USD", plan.CostUnit);
+        Assert.Equal(1.0 * 90 * 0.3048 * 2, plan.TotalCostAdded, 6);
+    }
+
+    [Fact]
+    public void Plan_Upsize_CarriesTheGroundingNote()
+    {
+        var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 90, size: 12 AWG } }"));
+        Assert.Contains("250.122(B)", Assert.Single(plan.Changes).GroundingNote, StringComparison.Ordinal);
+    }
+}
