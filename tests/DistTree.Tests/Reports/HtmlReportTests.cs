@@ -281,15 +281,26 @@ public sealed class HtmlReportTests
             After = s,
         };
         var doc = ReportFixtures.RenderDemo(new HtmlReportOptions { Plan = plan });
-        var rows = doc.QuerySelectorAll("#plan table.plan tbody tr").ToArray();
+        var rows = doc.QuerySelectorAll("#plan table.plan tbody tr:not(.note-row)").ToArray();
         Assert.Equal(3, rows.Length);
         Assert.Equal("HG", rows[0].QuerySelector("td")!.TextContent);
         Assert.Contains("8 AWG → 3 AWG", rows[0].TextContent, StringComparison.Ordinal);
         Assert.Contains("1 → 2", rows[1].TextContent, StringComparison.Ordinal);
-        Assert.Contains("grow the EGC in proportion", rows[0].TextContent, StringComparison.Ordinal);
+        Assert.Contains("grow the EGC in proportion", doc.QuerySelector("#plan tr.note-row")!.TextContent, StringComparison.Ordinal);
         Assert.Contains("1333.5", rows[2].TextContent, StringComparison.Ordinal);
         Assert.Contains("even 2000 kcmil leaves 5.2 %", doc.QuerySelector("#plan .unresolvable")!.TextContent, StringComparison.Ordinal);
         Assert.Null(ReportFixtures.RenderDemo().QuerySelector("#plan"));
+    }
+
+    [Fact]
+    public void Render_DemoWithItsUpsizePlan_ListsEveryChangeOfThePlan()
+    {
+        var plan = Upsizer.Standard.Plan(ReportFixtures.Demo);
+        Assert.NotEmpty(plan.Changes);
+        var doc = ReportFixtures.RenderDemo(new HtmlReportOptions { Plan = plan });
+        var runs = doc.QuerySelectorAll("#plan table.plan tbody tr.change td:first-child").Select(td => td.TextContent).ToArray();
+        Assert.Equal(plan.Changes.Select(c => c.RunId), runs);
+        Assert.Equal(plan.Unresolvable.Count, doc.QuerySelectorAll("#plan .unresolvable li").Length);
     }
 
     [Fact]
