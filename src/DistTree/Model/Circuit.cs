@@ -20,8 +20,11 @@ public sealed record Circuit
     /// <summary>The supply the panel's system gives a circuit of this many poles.</summary>
     public required CircuitSupply Supply { get; init; }
 
-    /// <summary>The load at the end of the run.</summary>
+    /// <summary>The load at the end of the run; for a circuit with <see cref="Points"/>, their sum as apparent power.</summary>
     public required Load Load { get; init; }
+
+    /// <summary>Loads along the run, nearest first; empty for a load at the end. The farthest point is the end point.</summary>
+    public IReadOnlyList<LoadPoint> Points { get; init; } = [];
 
     /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it.</summary>
     public bool Continuous { get; init; }

@@ -36,6 +36,16 @@ public enum TemperatureMode
     Fixed,
 }
 
+/// <summary>Which method's figures the findings rest on.</summary>
+public enum SolutionMethod
+{
+    /// <summary>The percent-sum of run drops by the effective-impedance formula (hand-calculation practice).</summary>
+    PercentSum,
+
+    /// <summary>The exact backward/forward sweep load flow.</summary>
+    LoadFlow,
+}
+
 /// <summary>The limits and choices of method in force for a project; defaults are common practice.</summary>
 public sealed record Rules
 {
@@ -65,6 +75,12 @@ public sealed record Rules
 
     /// <summary>Terminal temperature rating in °C that limits the ampacity column used (60, 75 or 90).</summary>
     public int TerminalC { get; init; } = 75;
+
+    /// <summary>The largest voltage dip at a motor's terminals while it starts, in percent (default 15: NEMA MG 1 motors start at 85 % of rated voltage; memory).</summary>
+    public double MotorStartLimitPercent { get; init; } = 15;
+
+    /// <summary>Which method the findings rest on; both are always reported.</summary>
+    public SolutionMethod Method { get; init; } = SolutionMethod.PercentSum;
 
     /// <summary>The defaults, as a shared instance.</summary>
     public static Rules Default { get; } = new();

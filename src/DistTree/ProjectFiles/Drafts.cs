@@ -74,6 +74,11 @@ internal sealed class CircuitDraft(SourceLocation location)
 
     public Load? Load { get; set; }
 
+    /// <summary>Loads along the run, when given instead of a load at the end.</summary>
+    public IReadOnlyList<LoadPoint> Points { get; set; } = [];
+
+    public SourceLocation? PointsLocation { get; set; }
+
     public bool Continuous { get; set; }
 
     public Run? Run { get; set; }

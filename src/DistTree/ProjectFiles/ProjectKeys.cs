@@ -13,7 +13,7 @@ internal static class ProjectKeys
     public static readonly string[] Rules =
     [
         "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "branch_current",
-        "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c",
+        "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c", "method", "motor_start_limit_percent",
     ];
 
     public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];
@@ -30,9 +30,13 @@ internal static class ProjectKeys
     public static readonly string[] Run =
         ["length", "size", "sets", "material", "insulation_c", "raceway", "ocpd", "limit_percent", "fixed"];
 
-    public static readonly string[] Circuit = ["id", "name", "poles", "ocpd", "load", "continuous", "run"];
+    public static readonly string[] Circuit = ["id", "name", "poles", "ocpd", "load", "points", "continuous", "run"];
 
-    public static readonly string[] LoadQuantities = ["va", "kva", "kw", "amps", "hp"];
+    public static readonly string[] Point = ["at", "load"];
 
-    public static readonly string[] Load = [.. LoadQuantities, "pf"];
+    public static readonly string[] LoadQuantities = ["va", "kva", "kw", "amps", "hp", "fla"];
+
+    public static readonly string[] MotorStart = ["code_letter", "lrc_multiple", "starting_pf"];
+
+    public static readonly string[] Load = [.. LoadQuantities, "pf", "model", .. MotorStart];
 }

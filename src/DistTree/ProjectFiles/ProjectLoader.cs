@@ -85,7 +85,8 @@ public static class ProjectLoader
                 Name = c.Name,
                 Poles = c.Poles!.Value,
                 Supply = output.CircuitFor(c.Poles.Value)!.Value,
-                Load = c.Load!,
+                Load = c.Load ?? Combined(c.Points, output.CircuitFor(c.Poles.Value)!.Value),
+                Points = c.Points,
                 Continuous = c.Continuous,
                 Run = c.Run!,
                 Location = c.Location,
@@ -117,6 +118,28 @@ public static class ProjectLoader
             Equipment = equipment,
             Warnings = warnings,
         };
+    }
+
+    // The sum of the points' loads as one apparent power (phasor sum; points carry no motors).
+    private static Load Combined(IReadOnlyList<LoadPoint> points, CircuitSupply supply)
+    {
+        double p = 0, q = 0;
+        foreach (var point in points)
+        {
+            var l = point.Load;
+            var va = l.Kind switch
+            {
+                LoadKind.Kva => l.Value * 1000,
+                LoadKind.Kw => l.Value * 1000 / l.PowerFactor,
+                LoadKind.Amps => l.Value * supply.VoltageV * (supply.Phases == 3 ? Math.Sqrt(3) : 1),
+                _ => l.Value,
+            };
+            p += va * l.PowerFactor;
+            q += va * Math.Sqrt(1 - (l.PowerFactor * l.PowerFactor));
+        }
+
+        var s = Math.Sqrt((p * p) + (q * q));
+        return new Load(LoadKind.Va, s, s > 0 ? p / s : 1.0);
     }
 
     private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));

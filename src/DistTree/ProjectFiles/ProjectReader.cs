@@ -34,7 +34,20 @@ internal sealed class ProjectReader(DiagnosticBag bag)
     ];
 
     private static readonly (string, LoadKind)[] LoadWords =
-        [("va", LoadKind.Va), ("kva", LoadKind.Kva), ("kw", LoadKind.Kw), ("amps", LoadKind.Amps), ("hp", LoadKind.Hp)];
+        [("va", LoadKind.Va), ("kva", LoadKind.Kva), ("kw", LoadKind.Kw), ("amps", LoadKind.Amps), ("hp", LoadKind.Hp), ("fla", LoadKind.Fla)];
+
+    private static readonly (string, LoadModel)[] LoadModelWords =
+        [("power", LoadModel.ConstantPower), ("current", LoadModel.ConstantCurrent), ("impedance", LoadModel.ConstantImpedance)];
+
+    private static readonly (string, SolutionMethod)[] MethodWords =
+        [("percent_sum", SolutionMethod.PercentSum), ("load_flow", SolutionMethod.LoadFlow)];
+
+    // NEMA locked-rotor code letters (NEC Table 430.7(B)); I, O and Q are not used.
+    private static readonly string[] CodeLetters =
+        ["A", "B", "C", "D", "E", "F", "G", "H", "J", "K", "L", "M", "N", "P", "R", "S", "T", "U", "V"];
+
+    // Transformer taps in 2.5 % steps (common practice for dry-type distribution transformers).
+    private static readonly double[] TapSteps = [-5, -2.5, 0, 2.5, 5];
 
     private static readonly int[] TemperatureRatings = [60, 75, 90];
 
@@ -162,6 +175,16 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         if (m.Optional("terminal_c") is { } terminalNode && _values.IntegerOf(terminalNode, "'terminal_c'", TemperatureRatings) is { } terminal)
         {
             rules = rules with { TerminalC = terminal };
+        }
+
+        if (m.Optional("method") is { } methodNode && _values.Choice(methodNode, "'method'", "method", MethodWords) is { } method)
+        {
+            rules = rules with { Method = method };
+        }
+
+        if (Positive(m, "motor_start_limit_percent") is { } motorStart)
+        {
+            rules = rules with { MotorStartLimitPercent = motorStart };
         }
 
         _draft.Rules = rules;
@@ -426,6 +449,11 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         var impedance = m.Required("impedance_percent", " (the nameplate %Z)") is { } zNode ? _values.Positive(zNode, $"'impedance_percent' of '{name}'") : null;
         var xr = m.Required("x_r", " (the X/R ratio)") is { } xrNode ? _values.Positive(xrNode, $"'x_r' of '{name}'") : null;
         var tap = m.Optional("tap_percent") is { } tapNode ? _values.Number(tapNode, $"'tap_percent' of '{name}'") : 0;
+        if (tap is { } t && !TapSteps.Contains(t))
+        {
+            bag.Error(m.KeyLocation("tap_percent"), $"'tap_percent' of '{name}' is {ValueReader.Format(t)}; taps come in 2.5 % steps: -5, -2.5, 0, 2.5 or 5");
+            tap = null;
+        }
         if (m.Optional("primary") is { } primaryNode)
         {
             draft.Primary = _values.SystemOf(primaryNode, $"'primary' of '{name}'");
@@ -514,9 +542,23 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             draft.Continuous = _values.Bool(continuousNode, $"'continuous' of {full}") ?? false;
         }
 
-        if (m.Required("load") is { } loadNode)
+        var loadNode = m.Optional("load");
+        var pointsNode = m.Optional("points");
+        if (loadNode is not null && pointsNode is not null)
+        {
+            bag.Error(m.KeyLocation("points"), $"{full} gives both 'load' and 'points'; give its load at the end ('load') or along the run ('points')");
+        }
+        else if (loadNode is not null)
         {
             draft.Load = ReadLoad(loadNode, $"the load of {full}");
+        }
+        else if (pointsNode is not null)
+        {
+            ReadPoints(pointsNode, draft, full);
+        }
+        else
+        {
+            bag.Error(m.Node.Location, $"missing key 'load' in {full} (or 'points' for loads along the run)");
         }
 
         if (m.Required("run", " (its length and size)") is { } runNode)
@@ -531,7 +573,65 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             draft.Run = run is not null && ocpd is not null ? run with { OcpdA = ocpd } : run;
         }
 
+        if (draft.Points.Count > 0 && draft.Run is { } withPoints && draft.Points[^1].AtM > withPoints.LengthM + 1e-9)
+        {
+            bag.Error(draft.PointsLocation!, $"the farthest point of {full} is {ValueReader.Format(draft.Points[^1].AtM)} m along a run of {ValueReader.Format(withPoints.LengthM)} m; a point lies on its run");
+        }
+
         return draft;
+    }
+
+    private void ReadPoints(SourceNode node, CircuitDraft draft, string full)
+    {
+        if (node is not SourceSequence sequence || sequence.Items.Count == 0)
+        {
+            if (!node.IsInvalid)
+            {
+                bag.Error(node.Location, $"'points' of {full} must be a sequence of one or more '{{ at: LENGTH, load: {{ ... }} }}'; found {node.Describe()}");
+            }
+
+            return;
+        }
+
+        var points = new List<LoadPoint>();
+        var ok = true;
+        foreach (var item in sequence.Items)
+        {
+            var m = Map(item, $"a point of {full}", $"a point of {full}", ProjectKeys.Point);
+            if (m is null)
+            {
+                ok = false;
+                continue;
+            }
+
+            var at = m.Required("at", " (its distance along the run)") is { } atNode ? _values.LengthM(atNode, $"'at' of a point of {full}", _draft.Units) : null;
+            var load = m.Required("load") is { } loadNode ? ReadLoad(loadNode, $"the load of a point of {full}") : null;
+            if (load is { IsMotor: true })
+            {
+                bag.Error(m.KeyLocation("load"), $"a point of {full} carries a motor; a motor is a circuit of its own");
+                load = null;
+            }
+
+            if (at is null || load is null)
+            {
+                ok = false;
+                continue;
+            }
+
+            if (points.Count > 0 && at.Value < points[^1].AtM)
+            {
+                bag.Error(item.Location, $"the points of {full} must be listed nearest first");
+                ok = false;
+            }
+
+            points.Add(new LoadPoint(at.Value, load));
+        }
+
+        if (ok)
+        {
+            draft.Points = points;
+            draft.PointsLocation = sequence.Location;
+        }
     }
 
     private Load? ReadLoad(SourceNode node, string context)
@@ -549,13 +649,13 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             .ToArray();
         if (given.Length == 0)
         {
-            bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of 'va', 'kva', 'kw', 'amps' or 'hp'");
+            bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
             return null;
         }
 
         if (given.Length > 1)
         {
-            bag.Error(given[1].Location, $"{context} gives both '{given[0].Value}' and '{given[1].Value}'; give exactly one of 'va', 'kva', 'kw', 'amps' or 'hp'");
+            bag.Error(given[1].Location, $"{context} gives both '{given[0].Value}' and '{given[1].Value}'; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
             return null;
         }
 
@@ -571,13 +671,89 @@ internal sealed class ProjectReader(DiagnosticBag bag)
                 pf = null;
             }
         }
-        else if (kind == LoadKind.Hp)
+        else if (kind is LoadKind.Hp or LoadKind.Fla)
         {
             bag.Error(m.Node.Location, $"missing key 'pf' in {context} (a motor load needs its power factor)");
             pf = null;
         }
 
-        return value is not null && pf is not null ? new Load(kind, value.Value, pf.Value) : null;
+        var model = LoadModel.ConstantPower;
+        if (m.Optional("model") is { } modelNode && _values.Choice(modelNode, "'model'", "load model", LoadModelWords) is { } chosen)
+        {
+            model = chosen;
+        }
+
+        var start = ReadMotorStart(m, context, kind is LoadKind.Hp or LoadKind.Fla, out var startOk);
+        return value is not null && pf is not null && startOk ? new Load(kind, value.Value, pf.Value) { Model = model, Start = start } : null;
+    }
+
+    private MotorStart? ReadMotorStart(MappingReader m, string context, bool motor, out bool ok)
+    {
+        ok = true;
+        var given = ProjectKeys.MotorStart.Where(m.Has).ToArray();
+        if (!motor)
+        {
+            foreach (var key in given)
+            {
+                bag.Error(m.KeyLocation(key), $"'{key}' in {context} applies to motors only (loads given as 'hp' or 'fla')");
+                ok = false;
+            }
+
+            return null;
+        }
+
+        if (given.Length == 0)
+        {
+            return null;
+        }
+
+        string? letter = null;
+        if (m.Optional("code_letter") is { } letterNode && _values.Text(letterNode, $"'code_letter' of {context}") is { } text)
+        {
+            letter = text.ToUpperInvariant();
+            if (!CodeLetters.Contains(letter, StringComparer.Ordinal))
+            {
+                bag.Error(letterNode.Location, $"'{text}' is not a locked-rotor code letter; expected one of {string.Join(", ", CodeLetters)}");
+                ok = false;
+            }
+        }
+
+        if (letter is not null && m.Has("fla"))
+        {
+            bag.Error(m.KeyLocation("code_letter"), $"a code letter gives kVA per horsepower: {context} needs 'hp' with it, or 'lrc_multiple' with 'fla'");
+            ok = false;
+        }
+
+        double? multiple = null;
+        if (m.Optional("lrc_multiple") is { } multipleNode)
+        {
+            multiple = _values.Positive(multipleNode, $"'lrc_multiple' of {context}");
+            if (multiple is < 1)
+            {
+                bag.Error(multipleNode.Location, $"'lrc_multiple' of {context} is the locked-rotor current over the full-load current: at least 1");
+                ok = false;
+            }
+
+            if (letter is not null)
+            {
+                bag.Error(multipleNode.Location, $"{context} gives both 'code_letter' and 'lrc_multiple'; give one");
+                ok = false;
+            }
+        }
+
+        var startingPf = MotorStart.DefaultPowerFactor;
+        if (m.Optional("starting_pf") is { } spfNode && _values.Number(spfNode, $"'starting_pf' of {context}") is { } spf)
+        {
+            if (spf is <= 0 or > 1)
+            {
+                bag.Error(spfNode.Location, $"a power factor must be greater than 0 and at most 1; found {ValueReader.Format(spf)}");
+                ok = false;
+            }
+
+            startingPf = spf;
+        }
+
+        return new MotorStart(letter, multiple, startingPf);
     }
 
     private Run? ReadRun(SourceNode node, string context, bool branch, out SourceLocation? ocpdLocation)

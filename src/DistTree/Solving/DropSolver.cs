@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Numerics;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
@@ -7,9 +8,9 @@ using DistTree.Network;
 namespace DistTree.Solving;
 
 /// <summary>
-/// Solves the voltage drop of every run and every end point of a tree by the percent-sum method
-/// (DESIGN.md section 4), and finds every limit exceeded. Walks the node array iteratively:
-/// bottom-up for power, top-down for totals, bottom-up again for reach.
+/// Solves the voltage drop of every run and every end point of a tree (DESIGN.md section 4) by the percent-sum
+/// method and by an exact load flow, and finds every limit exceeded on the method the rules choose. Walks the
+/// node array iteratively: bottom-up for power, top-down for totals, bottom-up again for reach.
 /// </summary>
 public sealed class DropSolver
 {
@@ -21,7 +22,7 @@ public sealed class DropSolver
     /// <summary>A solver on the embedded catalogue.</summary>
     public static DropSolver Standard { get; } = new(ConductorCatalog.Standard);
 
-    /// <summary>Solves <paramref name="network"/>.</summary>
+    /// <summary>Solves <paramref name="network"/>. Throws <see cref="ProjectException"/> when the rules ask for the load flow and it does not converge.</summary>
     public Solution Solve(DistributionNetwork network)
     {
         var project = network.Project;
@@ -34,37 +35,39 @@ public sealed class DropSolver
         var continuous = new ComplexPower[n];
         AccumulatePower(nodes, power, continuous);
 
+        // Runs in network order, each transformer's row after its primary feeder's.
         var runs = new List<RunResult>(n + 8);
         var incomingRow = new int[n];
         var transformerRow = new int[n];
         Array.Fill(incomingRow, -1);
         Array.Fill(transformerRow, -1);
-        var totalIn = new double[n];
-        var totalOut = new double[n];
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
-            var before = node.ParentIndex >= 0 ? totalOut[node.ParentIndex] : 0.0;
             if (node.Incoming is { } run)
             {
                 incomingRow[i] = runs.Count;
-                var row = SolveRun(run, power[i], continuous[i], rules, frequency);
-                runs.Add(row);
-                before += row.DropPercent;
+                runs.Add(SolveRun(run, power, continuous[i], rules, frequency));
             }
 
-            totalIn[i] = before;
-            totalOut[i] = before;
             if (node.Equipment?.Transformer is { } transformer)
             {
                 transformerRow[i] = runs.Count;
-                var row = SolveTransformer(node, transformer, power[i], rules);
-                runs.Add(row);
-                totalOut[i] = rules.TransformerDrop == TransformerDropMode.NewOrigin ? 0.0 : before + row.DropPercent;
+                runs.Add(SolveTransformer(node, transformer, power[i], rules));
             }
         }
 
-        var endPoints = SolveEndPoints(network, runs, incomingRow, transformerRow, totalIn, rules);
+        var flow = SolveLoadFlow(network, power, runs, incomingRow);
+        ChooseMethod(network, runs, incomingRow, transformerRow, flow, rules);
+        for (var r = 0; r < runs.Count; r++)
+        {
+            if (runs[r].Kind != RunResultKind.Transformer)
+            {
+                runs[r] = runs[r] with { Findings = RunFindings(runs[r], nodes[runs[r].NodeIndex].Incoming!.Conductors) };
+            }
+        }
+
+        var endPoints = SolveEndPoints(network, runs, incomingRow, transformerRow, power, flow, rules);
         AddReach(network, runs, incomingRow, endPoints, rules);
         var findings = runs.Sum(r => r.Findings.Count) + endPoints.Sum(e => e.Findings.Count);
         var worst = endPoints.Count == 0 ? null : endPoints.OrderByDescending(e => e.TotalDropPercent).ThenBy(e => e.Id, StringComparer.Ordinal).First();
@@ -75,6 +78,7 @@ public sealed class DropSolver
             Runs = runs,
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, runs.Count, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
+            LoadFlow = flow,
             CatalogName = _catalog.SourceName,
         };
     }
@@ -113,17 +117,26 @@ public sealed class DropSolver
         }
     }
 
-    private RunResult SolveRun(NetworkRun run, ComplexPower carried, ComplexPower continuousPart, Rules rules, double frequencyHz)
+    private RunResult SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
+        var carried = power[run.Target.Index];
         var connectedA = LoadPower.CurrentA(carried.VoltAmperes, supply);
-        var currentA = run.Kind == RunKind.Branch ? BranchCurrent(connectedA, conductors.OcpdA, rules.BranchCurrent) : connectedA;
+        var points = run.Target.Circuit?.Points ?? [];
+        var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(connectedA, conductors.OcpdA, rules.BranchCurrent) : connectedA;
+
         // Design current: 125 % of the continuous part plus the rest, as a phasor sum: S + 0.25·S_continuous.
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
-        var result = new RunResult
+        if (points.Count > 0)
+        {
+            figures = figures with { DropV = SpanDropV(points, supply, conductors, figures), };
+            figures = figures with { DropPercent = figures.DropV / supply.VoltageV * 100.0 };
+        }
+
+        return new RunResult
         {
             Id = run.Id,
             Kind = run.Kind == RunKind.Branch ? RunResultKind.Branch : RunResultKind.Feeder,
@@ -139,7 +152,7 @@ public sealed class DropSolver
             ApparentPowerVa = carried.VoltAmperes,
             Size = conductors.Size.Text,
             Material = conductors.Material == Material.Copper ? "cu" : "al",
-            Raceway = conductors.Raceway.ToString().ToLowerInvariant(),
+            Raceway = RacewayWord(conductors.Raceway),
             Sets = conductors.Sets,
             LengthM = conductors.LengthM,
             TemperatureC = figures.TemperatureC,
@@ -149,11 +162,44 @@ public sealed class DropSolver
             OcpdA = conductors.OcpdA,
             DropV = figures.DropV,
             DropPercent = figures.DropPercent,
+            PercentSumDropPercent = figures.DropPercent,
             LimitPercent = run.LimitPercent,
             Location = conductors.Location,
         };
-        return result with { Findings = RunFindings(result, conductors) };
     }
+
+    // Loads along a run: span by span, each span carrying the phasor sum of the loads beyond it, at the
+    // resistance and reactance of the whole run (temperature from the head current, the safe side).
+    private static double SpanDropV(IReadOnlyList<LoadPoint> points, CircuitSupply supply, Run conductors, RunFigures figures)
+    {
+        var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
+        var beyond = new ComplexPower[points.Count];
+        var sum = ComplexPower.Zero;
+        for (var j = points.Count - 1; j >= 0; j--)
+        {
+            sum += LoadPower.Of(points[j].Load, supply);
+            beyond[j] = sum;
+        }
+
+        var dropV = 0.0;
+        var from = 0.0;
+        for (var j = 0; j < points.Count; j++)
+        {
+            var spanKm = (points[j].AtM - from) / 1000.0;
+            var currentA = LoadPower.CurrentA(beyond[j].VoltAmperes, supply);
+            dropV += k * currentA * spanKm * ((figures.ResistanceOhmPerKm * beyond[j].PowerFactor) + (figures.ReactanceOhmPerKm * beyond[j].SinTheta)) / conductors.Sets;
+            from = points[j].AtM;
+        }
+
+        return dropV;
+    }
+
+    private static string RacewayWord(Raceway raceway) => raceway switch
+    {
+        Raceway.Pvc => "pvc",
+        Raceway.Aluminum => "aluminum",
+        _ => "steel",
+    };
 
     private static double BranchCurrent(double connectedA, double? ocpdA, BranchCurrentBasis basis) => (basis, ocpdA) switch
     {
@@ -161,6 +207,61 @@ public sealed class DropSolver
         (BranchCurrentBasis.Lesser, { } ocpd) => Math.Min(connectedA, 0.8 * ocpd),
         _ => connectedA,
     };
+
+    // The load flow on the same impedances the percent sum used.
+    private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, List<RunResult> runs, int[] incomingRow)
+    {
+        var n = network.Nodes.Count;
+        var z = new Complex[n];
+        for (var i = 0; i < n; i++)
+        {
+            if (incomingRow[i] >= 0)
+            {
+                var r = runs[incomingRow[i]];
+                var km = r.LengthM / 1000.0 / r.Sets;
+                z[i] = new Complex(r.ResistanceOhmPerKm!.Value * km, r.ReactanceOhmPerKm!.Value * km);
+            }
+        }
+
+        return LoadFlow.Solve(network, power, z);
+    }
+
+    // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
+    private static void ChooseMethod(DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
+    {
+        if (!flow.Converged)
+        {
+            if (rules.Method == SolutionMethod.LoadFlow)
+            {
+                throw ProjectException.At(network.Project.Service.Location, Invariant(
+                    $"the load flow did not converge in {flow.Iterations} sweeps: the loads are too heavy for the conductors and transformers (a voltage collapse); fix the worst runs, or use 'method: percent_sum' to see them"));
+            }
+
+            return;
+        }
+
+        var nodes = network.Nodes;
+        for (var i = 1; i < nodes.Count; i++)
+        {
+            if (incomingRow[i] >= 0)
+            {
+                var row = runs[incomingRow[i]];
+                var drop = (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0;
+                runs[incomingRow[i]] = rules.Method == SolutionMethod.LoadFlow
+                    ? row with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * row.VoltageV }
+                    : row with { LoadFlowDropPercent = drop };
+            }
+
+            if (transformerRow[i] >= 0)
+            {
+                var row = runs[transformerRow[i]];
+                var drop = (flow.InputPu[i] - flow.BusPu[i]) * 100.0;
+                runs[transformerRow[i]] = rules.Method == SolutionMethod.LoadFlow
+                    ? row with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * row.VoltageV }
+                    : row with { LoadFlowDropPercent = drop };
+            }
+        }
+    }
 
     private List<Finding> RunFindings(RunResult r, Run conductors)
     {
@@ -202,7 +303,7 @@ public sealed class DropSolver
             }
         }
 
-        if (r.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > smallMax * conductors.Sets + 1e-9)
+        if (r.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > (smallMax * conductors.Sets) + 1e-9)
         {
             findings.Add(new Finding(
                 FindingKind.OcpdAboveAmpacity,
@@ -220,8 +321,7 @@ public sealed class DropSolver
     private static RunResult SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules)
     {
         var supply = data.Secondary.FeederSupply;
-        var percentR = data.ImpedancePercent / Math.Sqrt(1 + (data.XOverR * data.XOverR));
-        var percentX = percentR * data.XOverR;
+        var (percentR, percentX) = PercentRx(data);
         var loading = carried.VoltAmperes / (data.Kva * 1000.0);
         var dropPercent = (((percentR * carried.PowerFactor) + (percentX * carried.SinTheta)) * loading) - data.TapPercent;
         var ratedA = LoadPower.CurrentA(data.Kva * 1000.0, supply);
@@ -255,14 +355,21 @@ public sealed class DropSolver
             AmpacityA = ratedA,
             DropV = dropPercent / 100.0 * supply.VoltageV,
             DropPercent = dropPercent,
+            PercentSumDropPercent = dropPercent,
             CountsInTotal = rules.TransformerDrop == TransformerDropMode.Count,
             Findings = findings,
             Location = node.Equipment!.Location,
         };
     }
 
+    private static (double PercentR, double PercentX) PercentRx(TransformerData data)
+    {
+        var percentR = data.ImpedancePercent / Math.Sqrt(1 + (data.XOverR * data.XOverR));
+        return (percentR, percentR * data.XOverR);
+    }
+
     private static List<EndPointResult> SolveEndPoints(
-        DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, double[] totalIn, Rules rules)
+        DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, ComplexPower[] power, LoadFlowResult flow, Rules rules)
     {
         var nodes = network.Nodes;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
@@ -300,20 +407,39 @@ public sealed class DropSolver
 
             path.Reverse();
             counted.Reverse();
-            var total = totalIn[node.Index];
+            double total = 0, percentSum = 0, loadFlow = 0;
+            foreach (var r in counted)
+            {
+                total += runs[r].DropPercent;
+                percentSum += runs[r].PercentSumDropPercent;
+                loadFlow += runs[r].LoadFlowDropPercent ?? 0;
+            }
+
             var limit = rules.TotalLimitPercent;
-            var findings = total > limit + 1e-9
-                ? new[]
-                {
-                    new Finding(
-                        FindingKind.TotalDrop,
-                        circuit.FullId,
-                        total,
-                        limit,
-                        Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && counted.Count < path.Count - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
-                        circuit.Location),
-                }
-                : [];
+            var findings = new List<Finding>(1);
+            if (total > limit + 1e-9)
+            {
+                findings.Add(new Finding(
+                    FindingKind.TotalDrop,
+                    circuit.FullId,
+                    total,
+                    limit,
+                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && counted.Count < path.Count - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    circuit.Location));
+            }
+
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, runs, incomingRow, transformerRow, node, power[node.Index], rules) : null;
+            if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
+            {
+                findings.Add(new Finding(
+                    FindingKind.MotorStart,
+                    circuit.FullId,
+                    start.TerminalDipPercent,
+                    start.LimitPercent,
+                    Invariant($"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit"),
+                    circuit.Location));
+            }
+
             endPoints.Add(new EndPointResult
             {
                 Id = circuit.FullId,
@@ -324,8 +450,12 @@ public sealed class DropSolver
                 RunIndices = counted.ToArray(),
                 VoltageV = circuit.Supply.VoltageV,
                 TotalDropPercent = total,
+                PercentSumTotalDropPercent = percentSum,
+                LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null,
+                LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[node.Index] * circuit.Supply.VoltageV : null,
                 LimitPercent = limit,
                 EndVoltageV = circuit.Supply.VoltageV * (1 - (total / 100.0)),
+                MotorStart = start,
                 Findings = findings,
             });
         }
@@ -333,9 +463,51 @@ public sealed class DropSolver
         return endPoints;
     }
 
-    // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it), so
-    // L_max = L·limit/drop. Total: the least slack (limit − total) of the end points whose totals include
-    // the run, found bottom-up; L_max = L·(drop + slack)/drop.
+    // The extra drop of ΔS = S_locked-rotor − S_running on each run: 100·(ΔP·R_loop + ΔQ·X_loop)/V², R_loop and
+    // X_loop the run's impedance (both conductors for single-phase); on a transformer (%R·ΔP + %X·ΔQ)/S_rated.
+    // Superposed on the steady drops of the whole path (a new origin does not stop a physical dip).
+    private static MotorStartResult MotorStartCheck(
+        DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
+    {
+        var nodes = network.Nodes;
+        var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
+        var delta = lockedRotor + (running * -1.0);
+        double terminal = 0, panel = 0;
+        for (var i = motor.Index; i > 0; i = nodes[i].ParentIndex)
+        {
+            var extraHere = 0.0;
+            var steadyHere = 0.0;
+            if (incomingRow[i] >= 0)
+            {
+                var r = runs[incomingRow[i]];
+                var loop = r.Phases == 3 ? 1.0 : 2.0;
+                var km = r.LengthM / 1000.0 / r.Sets * loop;
+                extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm!.Value * km) + (delta.Vars * r.ReactanceOhmPerKm!.Value * km)) / (r.VoltageV * r.VoltageV);
+                steadyHere += r.DropPercent;
+            }
+
+            if (transformerRow[i] >= 0 && i != motor.Index)
+            {
+                var t = nodes[i].Equipment!.Transformer!;
+                var (percentR, percentX) = PercentRx(t);
+                extraHere += ((percentR * delta.Watts) + (percentX * delta.Vars)) / (t.Kva * 1000.0);
+                steadyHere += runs[transformerRow[i]].DropPercent;
+            }
+
+            terminal += extraHere + steadyHere;
+            if (i != motor.Index)
+            {
+                panel += extraHere + steadyHere;
+            }
+        }
+
+        // A transformer's own row sits on its node; the loop above adds it when walking past that node.
+        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, panel, rules.MotorStartLimitPercent);
+    }
+
+    // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it; points
+    // scale with the run), so L_max = L·limit/drop. Total: the least slack (limit − total) of the end points
+    // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
     private static void AddReach(DistributionNetwork network, List<RunResult> runs, int[] incomingRow, List<EndPointResult> endPoints, Rules rules)
     {
         var nodes = network.Nodes;
@@ -350,10 +522,10 @@ public sealed class DropSolver
         for (var i = nodes.Count - 1; i > 0; i--)
         {
             var node = nodes[i];
+            var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
             if (incomingRow[i] >= 0)
             {
                 var row = runs[incomingRow[i]];
-                var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
                 runs[incomingRow[i]] = row with
                 {
                     MaxLengthM = Reach(row.LengthM, row.DropPercent, row.LimitPercent!.Value),
@@ -361,9 +533,8 @@ public sealed class DropSolver
                 };
             }
 
-            var up = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
             var parent = node.ParentIndex;
-            slack[parent] = Math.Min(slack[parent], up);
+            slack[parent] = Math.Min(slack[parent], visible);
         }
     }
 

@@ -33,6 +33,18 @@ public sealed record EndPointResult
     /// <summary>The voltage at the point of use: nominal × (1 − total/100).</summary>
     public required double EndVoltageV { get; init; }
 
+    /// <summary>The total by the percent-sum method, percent.</summary>
+    public double PercentSumTotalDropPercent { get; init; }
+
+    /// <summary>The total by the load flow, percent; null when it did not converge.</summary>
+    public double? LoadFlowTotalDropPercent { get; init; }
+
+    /// <summary>The voltage at the point of use by the load flow, volts; null when it did not converge.</summary>
+    public double? LoadFlowEndVoltageV { get; init; }
+
+    /// <summary>The starting check of a motor end point; null for other loads.</summary>
+    public MotorStartResult? MotorStart { get; init; }
+
     /// <summary>The limits this end point exceeds (the total; its own runs' findings are on the runs).</summary>
     public IReadOnlyList<Finding> Findings { get; init; } = [];
 }

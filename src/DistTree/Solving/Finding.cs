@@ -22,6 +22,9 @@ public enum FindingKind
 
     /// <summary>A transformer is loaded above its rating.</summary>
     TransformerOverload,
+
+    /// <summary>A motor's terminals dip more than the limit while it starts.</summary>
+    MotorStart,
 }
 
 /// <summary>A limit exceeded, with the figures that prove it.</summary>
@@ -42,6 +45,7 @@ public sealed record Finding(FindingKind Kind, string Subject, double Value, dou
         FindingKind.Ampacity => "ampacity",
         FindingKind.OcpdAboveAmpacity => "ocpd_above_ampacity",
         FindingKind.TransformerOverload => "transformer_overload",
+        FindingKind.MotorStart => "motor_start",
         _ => "unknown",
     };
 }

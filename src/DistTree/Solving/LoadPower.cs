@@ -19,7 +19,7 @@ public static class LoadPower
             LoadKind.Va => ComplexPower.FromApparent(load.Value, pf),
             LoadKind.Kva => ComplexPower.FromApparent(load.Value * 1000, pf),
             LoadKind.Kw => ComplexPower.FromApparent(load.Value * 1000 / pf, pf),
-            LoadKind.Amps => ComplexPower.FromApparent(ApparentFromCurrent(load.Value, supply), pf),
+            LoadKind.Amps or LoadKind.Fla => ComplexPower.FromApparent(ApparentFromCurrent(load.Value, supply), pf),
             LoadKind.Hp => ComplexPower.FromApparent(
                 ApparentFromCurrent(
                     MotorTables.FullLoadCurrentA(load.Value, supply)
@@ -34,6 +34,7 @@ public static class LoadPower
     public static double CurrentA(double voltAmperes, CircuitSupply supply) =>
         supply.Phases == 3 ? voltAmperes / (Math.Sqrt(3) * supply.VoltageV) : voltAmperes / supply.VoltageV;
 
-    private static double ApparentFromCurrent(double currentA, CircuitSupply supply) =>
+    /// <summary>The apparent power in VA that <paramref name="currentA"/> draws at nominal voltage.</summary>
+    public static double ApparentFromCurrent(double currentA, CircuitSupply supply) =>
         supply.Phases == 3 ? Math.Sqrt(3) * supply.VoltageV * currentA : supply.VoltageV * currentA;
 }

@@ -87,8 +87,14 @@ public sealed record RunResult
     /// <summary>Voltage drop in volts.</summary>
     public required double DropV { get; init; }
 
-    /// <summary>Voltage drop in percent of <see cref="VoltageV"/>.</summary>
+    /// <summary>Voltage drop in percent of <see cref="VoltageV"/>, by the method the rules choose.</summary>
     public required double DropPercent { get; init; }
+
+    /// <summary>The drop by the percent-sum (effective-impedance) method, percent.</summary>
+    public double PercentSumDropPercent { get; init; }
+
+    /// <summary>The drop by the load flow, percent (difference of the per-unit voltages at its ends); null when it did not converge.</summary>
+    public double? LoadFlowDropPercent { get; init; }
 
     /// <summary>The run's own limit in percent, or null for a transformer.</summary>
     public double? LimitPercent { get; init; }

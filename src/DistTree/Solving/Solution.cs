@@ -29,6 +29,9 @@ public sealed record Solution
     /// <summary>Counts and the worst figure.</summary>
     public required SolutionSummary Summary { get; init; }
 
+    /// <summary>The load flow's outcome: converged, and in how many sweeps.</summary>
+    public required LoadFlowResult LoadFlow { get; init; }
+
     /// <summary>The conductor catalogue's name.</summary>
     public required string CatalogName { get; init; }
 

@@ -77,13 +77,14 @@ public sealed class ProjectSchemaTests
         AssertKeys(ProjectKeys.Circuit, defs["circuit"]!["properties"]);
         AssertKeys(ProjectKeys.Run, defs["run"]!["properties"]);
         AssertKeys(ProjectKeys.Load, defs["load"]!["properties"]);
+        AssertKeys(ProjectKeys.Point, defs["point"]!["properties"]);
     }
 
     [Fact]
     public void Docs_EveryKey_IsDescribed()
     {
         var doc = File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "docs", "project-file.md"));
-        string[][] all = [ProjectKeys.Top, ProjectKeys.Project, ProjectKeys.Rules, ProjectKeys.Defaults, ProjectKeys.Sizing, ProjectKeys.Service, ProjectKeys.Equipment, ProjectKeys.Circuit, ProjectKeys.Run, ProjectKeys.Load];
+        string[][] all = [ProjectKeys.Top, ProjectKeys.Project, ProjectKeys.Rules, ProjectKeys.Defaults, ProjectKeys.Sizing, ProjectKeys.Service, ProjectKeys.Equipment, ProjectKeys.Circuit, ProjectKeys.Run, ProjectKeys.Load, ProjectKeys.Point];
         var missing = all.SelectMany(k => k).Distinct().Where(k => !doc.Contains($"`{k}`", StringComparison.Ordinal)).ToArray();
         Assert.Empty(missing);
     }
