@@ -4,8 +4,9 @@ using DistTree.Reports;
 namespace DistTree.Cli.Commands;
 
 /// <summary>
-/// <c>disttree analyze FILE [--json PATH|-] [--worst N]</c>: the summary, the worst paths with each run's
-/// share of the drop, and every finding; exit 0 within limits, 1 a limit exceeded, 2 bad input.
+/// <c>disttree analyze FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--worst N]</c>: the summary, the worst
+/// paths with each run's share of the drop, and every finding; optionally the results document and the HTML
+/// review report; exit 0 within limits, 1 a limit exceeded, 2 bad input.
 /// </summary>
 internal static class AnalyzeCommand
 {
@@ -13,11 +14,18 @@ internal static class AnalyzeCommand
     {
         var file = new Argument<string>("FILE") { Description = "The project file (YAML, format 1)." };
         var json = new Option<string?>("--json") { Description = "Write the results document (disttree-results/1) to PATH, or '-' for standard output.", HelpName = "PATH" };
-        var worst = new Option<int>("--worst") { Description = "How many worst paths to show.", DefaultValueFactory = _ => 10 };
-        var command = new Command("analyze", "Solve the voltage drop of every run and end point; print the worst paths and every finding.\n" +
-            "Example: disttree analyze projects/quillfeather-medical.yaml --json reports/results.json")
+        var html = new Option<string?>("--html")
         {
-            file, json, worst,
+            Description = "Write the HTML review report to PATH (default reports/<project file name>.html).",
+            HelpName = "PATH",
+            Arity = ArgumentArity.ZeroOrOne,
+        };
+        var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
+        var worst = new Option<int>("--worst") { Description = "How many worst paths to show (console and HTML).", DefaultValueFactory = _ => 10 };
+        var command = new Command("analyze", "Solve the voltage drop of every run and end point; print the worst paths and every finding.\n" +
+            "Example: disttree analyze projects/quillfeather-medical.yaml --json reports/results.json --html")
+        {
+            file, json, html, date, worst,
         };
         command.SetAction(parsed =>
         {
@@ -35,7 +43,14 @@ internal static class AnalyzeCommand
                 OutputFile.Write(context, jsonPath, JsonResults.Write(solution), path);
             }
 
-            if (jsonPath != "-")
+            var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
+            if (htmlPath is not null)
+            {
+                var options = new HtmlReportOptions { Worst = count, Date = parsed.GetValue(date) };
+                OutputFile.Write(context, htmlPath, HtmlReport.Render(solution, options), path);
+            }
+
+            if (jsonPath != "-" && htmlPath != "-")
             {
                 ConsoleReport.WriteAnalysis(context.Out, solution, count);
             }
@@ -44,4 +59,8 @@ internal static class AnalyzeCommand
         });
         return command;
     }
+
+    /// <summary><c>reports/NAME.html</c> for the project file <c>…/NAME.yaml</c>, relative to the working directory.</summary>
+    internal static string DefaultHtmlPath(string projectPath) =>
+        Path.Combine("reports", Path.GetFileNameWithoutExtension(projectPath) + ".html");
 }

@@ -1,0 +1,70 @@
+using System.Globalization;
+using System.Text;
+
+namespace DistTree.Reports.Html;
+
+/// <summary>Escaping and invariant number formatting for the HTML report: every string the template prints comes from here.</summary>
+internal static class HtmlText
+{
+    private const double MetresPerFoot = 0.3048;
+
+    /// <summary>Escapes text for HTML element content and quoted attribute values.</summary>
+    public static string Escape(string? text)
+    {
+        if (string.IsNullOrEmpty(text))
+        {
+            return "";
+        }
+
+        if (text.AsSpan().IndexOfAny("&<>\"'") < 0)
+        {
+            return text;
+        }
+
+        var sb = new StringBuilder(text.Length + 16);
+        foreach (var c in text)
+        {
+            sb.Append(c switch
+            {
+                '&' => "&amp;",
+                '<' => "&lt;",
+                '>' => "&gt;",
+                '"' => "&quot;",
+                '\'' => "&#39;",
+                _ => null,
+            } ?? c.ToString());
+        }
+
+        return sb.ToString();
+    }
+
+    /// <summary>A percentage with two decimals, e.g. <c>4.21</c>.</summary>
+    public static string Percent(double value) => Number(value, "0.00");
+
+    /// <summary>A limit as the rules state it, e.g. <c>5</c> or <c>2.5</c>.</summary>
+    public static string Limit(double? value) => value is { } v ? Number(v, "0.##") : "–";
+
+    /// <summary>A current in amperes, one decimal.</summary>
+    public static string Amperes(double? value) => value is { } v ? Number(v, "0.0") : "–";
+
+    /// <summary>A length in metres, one decimal.</summary>
+    public static string Metres(double? value) => value is { } v ? Number(v, "0.0") : "–";
+
+    /// <summary>A length given in metres, shown in feet (whole feet).</summary>
+    public static string Feet(double? metres) => metres is { } v ? Number(v / MetresPerFoot, "0") : "–";
+
+    /// <summary>Volt-amperes, whole, with thousands separated by a thin space.</summary>
+    public static string VoltAmperes(double value) => Number(value, "#,0").Replace(",", "\u2009", StringComparison.Ordinal);
+
+    /// <summary>A layout coordinate for SVG, at most one decimal.</summary>
+    public static string Coordinate(double value) => Number(Math.Round(value, 1), "0.#");
+
+    /// <summary>An integer.</summary>
+    public static string Count(int value) => value.ToString(CultureInfo.InvariantCulture);
+
+    private static string Number(double value, string format)
+    {
+        var text = value.ToString(format, CultureInfo.InvariantCulture);
+        return text is "-0" or "-0.0" or "-0.00" ? text[1..] : text;
+    }
+}
