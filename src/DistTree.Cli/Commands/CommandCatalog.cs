@@ -10,6 +10,7 @@ internal static class CommandCatalog
         yield return ValidateCommand.Create(context);
         yield return AnalyzeCommand.Create(context);
         yield return CheckCommand.Create(context);
+        yield return CompareCommand.Create(context);
         yield return ConductorsCommand.Create(context);
     }
 }
