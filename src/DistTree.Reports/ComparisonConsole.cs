@@ -25,9 +25,14 @@ public static class ComparisonConsole
 
         o.WriteLine($"Summary: {ComparisonText.Summary(c.Summary)}");
         var s = c.Summary;
-        if (s.LargestRiseEndPoint is not null || s.LargestFallEndPoint is not null)
+        if (s.LargestRiseEndPoint is { } rise)
         {
-            o.WriteLine(F($"Largest rise {s.LargestRisePoints:0.000} points at {s.LargestRiseEndPoint ?? "-"}; largest fall {s.LargestFallPoints:0.000} points at {s.LargestFallEndPoint ?? "-"}"));
+            o.WriteLine(F($"Largest rise: {s.LargestRisePoints:0.000} percentage points at {rise}"));
+        }
+
+        if (s.LargestFallEndPoint is { } fall)
+        {
+            o.WriteLine(F($"Largest fall: {s.LargestFallPoints:0.000} percentage points at {fall}"));
         }
 
         if (c.ProjectChanges.Count > 0)

@@ -25,7 +25,7 @@ public static class ComparisonMarkdown
         }
         else
         {
-            var gate = c.HasNewFindings ? F($"**{c.Summary.NewFindings} new finding(s)**") : "no new findings";
+            var gate = c.HasNewFindings ? F($"**{c.Summary.NewFindings} new finding(s)**") : "No new findings";
             Line(o, $"{gate}. {Escape(ComparisonText.Summary(c.Summary))}.");
             WriteElements(o, c, rows);
             WriteEndPoints(o, c, rows);
@@ -53,7 +53,7 @@ public static class ComparisonMarkdown
         }
 
         Line(o, "");
-        Line(o, "| Changed | | Fields |");
+        Line(o, "| Element | Change | Fields |");
         Line(o, "| --- | --- | --- |");
         foreach (var (id, change, fields) in changes.Take(rows))
         {

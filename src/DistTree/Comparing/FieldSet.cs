@@ -1,6 +1,7 @@
 using System.Globalization;
 using DistTree.Conductors;
 using DistTree.Model;
+using DistTree.ProjectFiles;
 
 namespace DistTree.Comparing;
 
@@ -10,7 +11,7 @@ namespace DistTree.Comparing;
 /// </summary>
 internal sealed class FieldSet
 {
-    private readonly List<(string Name, string? Text, double? Number)> _fields = [];
+    private readonly List<Field> _fields = [];
 
     public static FieldSet ForProject(Project p)
     {
@@ -44,7 +45,7 @@ internal sealed class FieldSet
         return set;
     }
 
-    public static FieldSet ForEquipment(Equipment e)
+    public static FieldSet ForEquipment(Equipment e, UnitSystem units)
     {
         var set = new FieldSet()
             .Text("kind", e.Kind.ToString().ToLowerInvariant())
@@ -53,7 +54,7 @@ internal sealed class FieldSet
             .Text("feeder", e.Feeder is null ? "none" : "yes");
         if (e.Feeder is { } feeder)
         {
-            set.AddRun("feeder", feeder);
+            set.AddRun("feeder", feeder, units);
         }
 
         set.Number("demand_factor", e.DemandFactor);
@@ -69,7 +70,7 @@ internal sealed class FieldSet
         return set.Number("circuits", e.Circuits.Count);
     }
 
-    public static FieldSet ForCircuit(Circuit c)
+    public static FieldSet ForCircuit(Circuit c, UnitSystem units)
     {
         var set = new FieldSet()
             .Text("name", c.Name)
@@ -79,39 +80,82 @@ internal sealed class FieldSet
             .Number("load.value", c.Load.Value)
             .Number("load.pf", c.Load.PowerFactor)
             .Text("continuous", c.Continuous ? "true" : "false");
-        set.AddRun("run", c.Run);
+        set.AddRun("run", c.Run, units);
         return set;
     }
+
+    /// <summary>
+    /// True when two pieces of equipment hold exactly the same design (locations aside): the fast path that spares
+    /// building field sets for the many elements a change does not touch.
+    /// </summary>
+    public static bool SameDesign(Equipment a, Equipment b) =>
+        a.Kind == b.Kind && string.Equals(a.From, b.From, StringComparison.Ordinal) && a.System == b.System &&
+        SameRun(a.Feeder, b.Feeder) && a.DemandFactor.Equals(b.DemandFactor) && a.Transformer == b.Transformer &&
+        a.Circuits.Count == b.Circuits.Count;
+
+    /// <summary>True when two circuits hold exactly the same design (locations aside).</summary>
+    public static bool SameDesign(Circuit a, Circuit b) =>
+        string.Equals(a.Name, b.Name, StringComparison.Ordinal) && a.Poles == b.Poles && a.Supply == b.Supply &&
+        a.Load == b.Load && a.Continuous == b.Continuous && SameRun(a.Run, b.Run);
+
+    private static bool SameRun(Run? a, Run? b) =>
+        a is null || b is null
+            ? a is null && b is null
+            : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
+              a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
+              Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed;
 
     /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
     public static List<FieldChange> Differences(FieldSet before, FieldSet after)
     {
         var changes = new List<FieldChange>();
-        var old = new Dictionary<string, (string? Text, double? Number)>(StringComparer.Ordinal);
-        foreach (var (name, text, number) in before._fields)
+        var b = before._fields;
+        var a = after._fields;
+        var aligned = a.Count == b.Count;
+        for (var i = 0; aligned && i < a.Count; i++)
         {
-            old[name] = (text, number);
+            aligned = ReferenceEquals(a[i].Name, b[i].Name) || string.Equals(a[i].Name, b[i].Name, StringComparison.Ordinal);
+        }
+
+        if (aligned)
+        {
+            // The usual case: the same fields in the same order; compare pairwise without allocating.
+            for (var i = 0; i < a.Count; i++)
+            {
+                if (Differs(b[i], a[i]))
+                {
+                    changes.Add(new FieldChange(a[i].Name, b[i].Display, a[i].Display));
+                }
+            }
+
+            return changes;
+        }
+
+        var old = new Dictionary<string, Field>(StringComparer.Ordinal);
+        foreach (var f in b)
+        {
+            old[f.Name] = f;
         }
 
         var seen = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var (name, text, number) in after._fields)
+        foreach (var f in a)
         {
-            seen.Add(name);
-            if (!old.TryGetValue(name, out var was))
+            seen.Add(f.Name);
+            if (!old.TryGetValue(f.Name, out var was))
             {
-                changes.Add(new FieldChange(name, null, text));
+                changes.Add(new FieldChange(f.Name, null, f.Display));
             }
-            else if (Differs(was.Text, was.Number, text, number))
+            else if (Differs(was, f))
             {
-                changes.Add(new FieldChange(name, was.Text, text));
+                changes.Add(new FieldChange(f.Name, was.Display, f.Display));
             }
         }
 
-        foreach (var (name, text, _) in before._fields)
+        foreach (var f in b)
         {
-            if (!seen.Contains(name))
+            if (!seen.Contains(f.Name))
             {
-                changes.Add(new FieldChange(name, text, null));
+                changes.Add(new FieldChange(f.Name, f.Display, null));
             }
         }
 
@@ -120,16 +164,18 @@ internal sealed class FieldSet
 
     /// <summary>Every field as added (before null) or as removed (after null).</summary>
     public List<FieldChange> All(bool added) =>
-        _fields.Select(f => added ? new FieldChange(f.Name, null, f.Text) : new FieldChange(f.Name, f.Text, null)).ToList();
+        _fields.Select(f => added ? new FieldChange(f.Name, null, f.Display) : new FieldChange(f.Name, f.Display, null)).ToList();
 
-    private static bool Differs(string? textBefore, double? numberBefore, string? textAfter, double? numberAfter) =>
-        numberBefore is { } b && numberAfter is { } a
+    private static bool Differs(Field before, Field after) =>
+        before.Number is { } b && after.Number is { } a
             ? ComparisonTolerance.Moved(b, a)
-            : !string.Equals(textBefore, textAfter, StringComparison.Ordinal);
+            : before.Number.HasValue != after.Number.HasValue || !string.Equals(before.Text, after.Text, StringComparison.Ordinal);
 
-    private void AddRun(string prefix, Run run)
+    // Lengths are compared in metres; for a project in feet the text adds the length in feet.
+    private void AddRun(string prefix, Run run, UnitSystem units)
     {
-        Number($"{prefix}.length_m", run.LengthM)
+        _fields.Add(new Field($"{prefix}.length_m", null, run.LengthM, units == UnitSystem.Imperial));
+        this
             .Text($"{prefix}.size", run.Size.Text)
             .Number($"{prefix}.sets", run.Sets)
             .Text($"{prefix}.material", MaterialText(run.Material))
@@ -142,17 +188,25 @@ internal sealed class FieldSet
 
     private FieldSet Text(string name, string text)
     {
-        _fields.Add((name, text, null));
+        _fields.Add(new Field(name, text, null, false));
         return this;
     }
 
     private FieldSet Number(string name, double? value)
     {
-        _fields.Add((name, value is { } v ? Format(v) : "none", value));
+        _fields.Add(new Field(name, value is null ? "none" : null, value, false));
         return this;
     }
 
     private static string Format(double value) => value.ToString("G10", CultureInfo.InvariantCulture);
+
+    /// <summary>A field: text, or a number formatted only when shown (with feet beside metres for a project in feet).</summary>
+    private readonly record struct Field(string Name, string? Text, double? Number, bool Feet)
+    {
+        public string Display => Number is { } v
+            ? Format(v) + (Feet ? $" ({(v / ValueReader.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
+            : Text ?? "none";
+    }
 
     private static string MaterialText(Material m) => m == Material.Copper ? "cu" : "al";
 

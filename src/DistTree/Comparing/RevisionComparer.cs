@@ -18,9 +18,10 @@ public static class RevisionComparer
 
         var projectChanges = FieldSet.Differences(FieldSet.ForProject(before.Project), FieldSet.ForProject(after.Project));
         var equipment = CompareElements(
-            before.Project.Equipment, after.Project.Equipment, e => e.Id, FieldSet.ForEquipment);
+            before.Project.Equipment, after.Project.Equipment, e => e.Id, FieldSet.SameDesign, e => FieldSet.ForEquipment(e, before.Project.Units), e => FieldSet.ForEquipment(e, after.Project.Units));
         var circuits = CompareElements(
-            before.Project.Equipment.SelectMany(e => e.Circuits), after.Project.Equipment.SelectMany(e => e.Circuits), c => c.FullId, FieldSet.ForCircuit);
+            before.Project.Equipment.SelectMany(e => e.Circuits), after.Project.Equipment.SelectMany(e => e.Circuits), c => c.FullId, FieldSet.SameDesign,
+            c => FieldSet.ForCircuit(c, before.Project.Units), c => FieldSet.ForCircuit(c, after.Project.Units));
 
         var beforeRuns = RunsByKey(before.Runs);
         var afterRuns = RunsByKey(after.Runs);
@@ -29,7 +30,7 @@ public static class RevisionComparer
         var upstream = runs
             .Where(r => r.Kind != RunResultKind.Branch && r.LoadingMoved)
             .OrderBy(r => Group(r.Status))
-            .ThenByDescending(r => Math.Abs(r.MarginA?.Change ?? 0))
+            .ThenByDescending(r => SortKey(r.MarginA?.Change ?? 0))
             .ThenBy(r => r.Id, StringComparer.Ordinal)
             .ThenBy(r => r.Kind)
             .ToArray();
@@ -71,7 +72,7 @@ public static class RevisionComparer
                 RunsAffected = runs.Count,
                 LargestRisePoints = rise?.TotalDropPercent.Change ?? 0,
                 LargestRiseEndPoint = rise?.Id,
-                LargestFallPoints = -(fall?.TotalDropPercent.Change ?? 0),
+                LargestFallPoints = fall is null ? 0 : -fall.TotalDropPercent.Change,
                 LargestFallEndPoint = fall?.Id,
                 NewFindings = newFindings.Length,
                 ResolvedFindings = resolvedFindings.Length,
@@ -81,7 +82,8 @@ public static class RevisionComparer
 
     private static RevisionInfo Info(Solution s) => new(s.Project.Name, s.Project.File, s.Project.Sha256, s.Summary);
 
-    private static List<ElementChange> CompareElements<T>(IEnumerable<T> before, IEnumerable<T> after, Func<T, string> id, Func<T, FieldSet> fields)
+    private static List<ElementChange> CompareElements<T>(
+        IEnumerable<T> before, IEnumerable<T> after, Func<T, string> id, Func<T, T, bool> same, Func<T, FieldSet> fieldsBefore, Func<T, FieldSet> fieldsAfter)
     {
         var old = new Dictionary<string, T>(StringComparer.Ordinal);
         foreach (var item in before)
@@ -97,7 +99,12 @@ public static class RevisionComparer
             if (old.TryGetValue(key, out var was))
             {
                 matched.Add(key);
-                var differences = FieldSet.Differences(fields(was), fields(item));
+                if (same(was, item))
+                {
+                    continue;
+                }
+
+                var differences = FieldSet.Differences(fieldsBefore(was), fieldsAfter(item));
                 if (differences.Count > 0)
                 {
                     changes.Add(new ElementChange(key, ChangeKind.Changed, differences));
@@ -105,7 +112,7 @@ public static class RevisionComparer
             }
             else
             {
-                changes.Add(new ElementChange(key, ChangeKind.Added, fields(item).All(added: true)));
+                changes.Add(new ElementChange(key, ChangeKind.Added, fieldsAfter(item).All(added: true)));
             }
         }
 
@@ -113,7 +120,7 @@ public static class RevisionComparer
         {
             if (!matched.Contains(key))
             {
-                changes.Add(new ElementChange(key, ChangeKind.Removed, fields(was).All(added: false)));
+                changes.Add(new ElementChange(key, ChangeKind.Removed, fieldsBefore(was).All(added: false)));
             }
         }
 
@@ -148,7 +155,20 @@ public static class RevisionComparer
             compared++;
             var findingsBefore = Codes(b.Findings);
             var findingsAfter = Codes(a.Findings);
-            var delta = new RunDelta
+            var status = Status(findingsBefore, findingsAfter);
+            double? marginBefore = b.AmpacityA - b.DesignCurrentA;
+            double? marginAfter = a.AmpacityA - a.DesignCurrentA;
+            if (status == StatusChange.None &&
+                !ComparisonTolerance.PercentMoved(b.DropPercent, a.DropPercent) &&
+                !ComparisonTolerance.Moved(b.CurrentA, a.CurrentA) &&
+                !ComparisonTolerance.Moved(b.DesignCurrentA, a.DesignCurrentA) &&
+                !ComparisonTolerance.Moved(b.AmpacityA, a.AmpacityA) &&
+                !ComparisonTolerance.Moved(marginBefore, marginAfter))
+            {
+                continue;
+            }
+
+            deltas.Add(new RunDelta
             {
                 Id = a.Id,
                 Kind = a.Kind,
@@ -158,20 +178,16 @@ public static class RevisionComparer
                 CurrentA = new Delta(b.CurrentA, a.CurrentA),
                 DesignCurrentA = new Delta(b.DesignCurrentA, a.DesignCurrentA),
                 AmpacityA = b.AmpacityA is { } ab && a.AmpacityA is { } aa ? new Delta(ab, aa) : null,
-                MarginA = b.AmpacityA is { } mb && a.AmpacityA is { } ma ? new Delta(mb - b.DesignCurrentA, ma - a.DesignCurrentA) : null,
+                MarginA = marginBefore is { } mb && marginAfter is { } ma ? new Delta(mb, ma) : null,
                 FindingsBefore = findingsBefore,
                 FindingsAfter = findingsAfter,
-                Status = Status(findingsBefore, findingsAfter),
-            };
-            if (delta.DropMoved || delta.LoadingMoved || delta.Status != StatusChange.None)
-            {
-                deltas.Add(delta);
-            }
+                Status = status,
+            });
         }
 
         return (deltas
             .OrderBy(d => Group(d.Status))
-            .ThenByDescending(d => Math.Abs(d.DropPercent.Change))
+            .ThenByDescending(d => SortKey(d.DropPercent.Change))
             .ThenBy(d => d.Id, StringComparer.Ordinal)
             .ThenBy(d => d.Kind)
             .ToArray(), compared);
@@ -223,19 +239,23 @@ public static class RevisionComparer
 
         return (deltas
             .OrderBy(d => Group(d.Status))
-            .ThenByDescending(d => Math.Abs(d.TotalDropPercent.Change))
+            .ThenByDescending(d => SortKey(d.TotalDropPercent.Change))
             .ThenBy(d => d.Id, StringComparer.Ordinal)
             .ToArray(), compared);
     }
 
     // An end point's status: its own findings (the total) and its branch circuit's (same id).
-    private static string[] EndPointCodes(EndPointResult e, Dictionary<string, RunResult> runs) =>
-        runs.TryGetValue(e.Id, out var branch) && branch.Kind == RunResultKind.Branch
-            ? Codes(e.Findings.Concat(branch.Findings))
-            : Codes(e.Findings);
+    private static string[] EndPointCodes(EndPointResult e, Dictionary<string, RunResult> runs)
+    {
+        var branch = runs.TryGetValue(e.Id, out var run) && run.Kind == RunResultKind.Branch ? run.Findings : [];
+        return e.Findings.Count + branch.Count == 0 ? [] : Codes(e.Findings.Concat(branch));
+    }
 
     private static string[] Codes(IEnumerable<Finding> findings) =>
         findings.Select(f => f.Code).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).ToArray();
+
+    private static string[] Codes(IReadOnlyList<Finding> findings) =>
+        findings.Count == 0 ? [] : Codes(findings.AsEnumerable());
 
     private static StatusChange Status(string[] before, string[] after) => (before.Length, after.Length) switch
     {
@@ -244,6 +264,10 @@ public static class RevisionComparer
         (_, 0) => StatusChange.NewlyPassing,
         _ => before.SequenceEqual(after, StringComparer.Ordinal) ? StatusChange.None : StatusChange.FindingsChanged,
     };
+
+    // Sorting by size of change: changes equal within the tolerance (the last bits of differently ordered sums)
+    // tie, so that their order is by id rather than by rounding noise.
+    private static long SortKey(double change) => (long)Math.Round(Math.Abs(change) / ComparisonTolerance.PercentPoints);
 
     private static int Group(StatusChange status) => status switch
     {

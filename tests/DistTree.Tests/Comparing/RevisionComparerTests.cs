@@ -67,6 +67,17 @@ public sealed class RevisionComparerTests
         Assert.False(c.HasNewFindings);
     }
 
+    // 120 ft is 36.576 m exactly (1 ft = 0.3048 m, the international foot); the figures in metres differ in
+    // their last bits at most, which is within the tolerance.
+    [Fact]
+    public void Compare_SameLengthWrittenInMetres_IsUnchanged()
+    {
+        var metres = ComparisonProjects.Ordered.Replace("length: 120,", "length: 36.576 m,", StringComparison.Ordinal);
+        Assert.NotEqual(ComparisonProjects.Ordered, metres);
+
+        Assert.True(Compare(ComparisonProjects.Ordered, metres).IsUnchanged);
+    }
+
     [Fact]
     public void Compare_SameFile_IsUnchanged()
     {
