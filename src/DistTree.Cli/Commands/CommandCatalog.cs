@@ -11,6 +11,7 @@ internal static class CommandCatalog
         yield return AnalyzeCommand.Create(context);
         yield return CheckCommand.Create(context);
         yield return UpsizeCommand.Create(context);
+        yield return CompareCommand.Create(context);
         yield return ConductorsCommand.Create(context);
     }
 }

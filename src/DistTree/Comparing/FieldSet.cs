@@ -1,0 +1,214 @@
+using System.Globalization;
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.ProjectFiles;
+
+namespace DistTree.Comparing;
+
+/// <summary>
+/// The comparable fields of a model element, in a fixed order: a name, its text for people and, for numbers,
+/// the value compared within <see cref="ComparisonTolerance.Relative"/>.
+/// </summary>
+internal sealed class FieldSet
+{
+    private readonly List<Field> _fields = [];
+
+    public static FieldSet ForProject(Project p)
+    {
+        var r = p.Rules;
+        var set = new FieldSet()
+            .Text("name", p.Name)
+            .Number("rules.feeder_limit_percent", r.FeederLimitPercent)
+            .Number("rules.branch_limit_percent", r.BranchLimitPercent)
+            .Number("rules.total_limit_percent", r.TotalLimitPercent)
+            .Text("rules.branch_current", r.BranchCurrent switch
+            {
+                BranchCurrentBasis.Ocpd80 => "ocpd_80",
+                BranchCurrentBasis.Lesser => "lesser",
+                _ => "connected",
+            })
+            .Text("rules.conductor_temperature", r.Temperature switch
+            {
+                TemperatureMode.Rated => "rated",
+                TemperatureMode.Fixed => Format(r.FixedTemperatureC ?? 0),
+                _ => "estimated",
+            })
+            .Text("rules.transformer_drop", r.TransformerDrop == TransformerDropMode.NewOrigin ? "new_origin" : "count")
+            .Number("rules.ambient_c", r.AmbientC)
+            .Number("rules.terminal_c", r.TerminalC)
+            .Text("service.id", p.Service.Id)
+            .Text("service.system", p.Service.System.Name)
+            .Number("service.frequency_hz", p.Service.FrequencyHz)
+            .Text("defaults.material", MaterialText(p.Defaults.Material))
+            .Number("defaults.insulation_c", p.Defaults.InsulationC)
+            .Text("defaults.raceway", RacewayText(p.Defaults.Raceway));
+        return set;
+    }
+
+    public static FieldSet ForEquipment(Equipment e, UnitSystem units)
+    {
+        var set = new FieldSet()
+            .Text("kind", e.Kind.ToString().ToLowerInvariant())
+            .Text("from", e.From)
+            .Text("system", e.System.Name)
+            .Text("feeder", e.Feeder is null ? "none" : "yes");
+        if (e.Feeder is { } feeder)
+        {
+            set.AddRun("feeder", feeder, units);
+        }
+
+        set.Number("demand_factor", e.DemandFactor);
+        if (e.Transformer is { } t)
+        {
+            set.Number("transformer.kva", t.Kva)
+                .Text("transformer.secondary", t.Secondary.Name)
+                .Number("transformer.impedance_percent", t.ImpedancePercent)
+                .Number("transformer.x_r", t.XOverR)
+                .Number("transformer.tap_percent", t.TapPercent);
+        }
+
+        return set.Number("circuits", e.Circuits.Count);
+    }
+
+    public static FieldSet ForCircuit(Circuit c, UnitSystem units)
+    {
+        var set = new FieldSet()
+            .Text("name", c.Name)
+            .Number("poles", c.Poles)
+            .Number("voltage_v", c.Supply.VoltageV)
+            .Text("load.kind", c.Load.Kind.ToString().ToLowerInvariant())
+            .Number("load.value", c.Load.Value)
+            .Number("load.pf", c.Load.PowerFactor)
+            .Text("continuous", c.Continuous ? "true" : "false");
+        set.AddRun("run", c.Run, units);
+        return set;
+    }
+
+    /// <summary>
+    /// True when two pieces of equipment hold exactly the same design (locations aside): the fast path that spares
+    /// building field sets for the many elements a change does not touch.
+    /// </summary>
+    public static bool SameDesign(Equipment a, Equipment b) =>
+        a.Kind == b.Kind && string.Equals(a.From, b.From, StringComparison.Ordinal) && a.System == b.System &&
+        SameRun(a.Feeder, b.Feeder) && a.DemandFactor.Equals(b.DemandFactor) && a.Transformer == b.Transformer &&
+        a.Circuits.Count == b.Circuits.Count;
+
+    /// <summary>True when two circuits hold exactly the same design (locations aside).</summary>
+    public static bool SameDesign(Circuit a, Circuit b) =>
+        string.Equals(a.Name, b.Name, StringComparison.Ordinal) && a.Poles == b.Poles && a.Supply == b.Supply &&
+        a.Load == b.Load && a.Continuous == b.Continuous && SameRun(a.Run, b.Run);
+
+    private static bool SameRun(Run? a, Run? b) =>
+        a is null || b is null
+            ? a is null && b is null
+            : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
+              a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
+              Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed;
+
+    /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
+    public static List<FieldChange> Differences(FieldSet before, FieldSet after)
+    {
+        var changes = new List<FieldChange>();
+        var b = before._fields;
+        var a = after._fields;
+        var aligned = a.Count == b.Count;
+        for (var i = 0; aligned && i < a.Count; i++)
+        {
+            aligned = ReferenceEquals(a[i].Name, b[i].Name) || string.Equals(a[i].Name, b[i].Name, StringComparison.Ordinal);
+        }
+
+        if (aligned)
+        {
+            // The usual case: the same fields in the same order; compare pairwise without allocating.
+            for (var i = 0; i < a.Count; i++)
+            {
+                if (Differs(b[i], a[i]))
+                {
+                    changes.Add(new FieldChange(a[i].Name, b[i].Display, a[i].Display));
+                }
+            }
+
+            return changes;
+        }
+
+        var old = new Dictionary<string, Field>(StringComparer.Ordinal);
+        foreach (var f in b)
+        {
+            old[f.Name] = f;
+        }
+
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var f in a)
+        {
+            seen.Add(f.Name);
+            if (!old.TryGetValue(f.Name, out var was))
+            {
+                changes.Add(new FieldChange(f.Name, null, f.Display));
+            }
+            else if (Differs(was, f))
+            {
+                changes.Add(new FieldChange(f.Name, was.Display, f.Display));
+            }
+        }
+
+        foreach (var f in b)
+        {
+            if (!seen.Contains(f.Name))
+            {
+                changes.Add(new FieldChange(f.Name, f.Display, null));
+            }
+        }
+
+        return changes;
+    }
+
+    /// <summary>Every field as added (before null) or as removed (after null).</summary>
+    public List<FieldChange> All(bool added) =>
+        _fields.Select(f => added ? new FieldChange(f.Name, null, f.Display) : new FieldChange(f.Name, f.Display, null)).ToList();
+
+    private static bool Differs(Field before, Field after) =>
+        before.Number is { } b && after.Number is { } a
+            ? ComparisonTolerance.Moved(b, a)
+            : before.Number.HasValue != after.Number.HasValue || !string.Equals(before.Text, after.Text, StringComparison.Ordinal);
+
+    // Lengths are compared in metres; for a project in feet the text adds the length in feet.
+    private void AddRun(string prefix, Run run, UnitSystem units)
+    {
+        _fields.Add(new Field($"{prefix}.length_m", null, run.LengthM, units == UnitSystem.Imperial));
+        this
+            .Text($"{prefix}.size", run.Size.Text)
+            .Number($"{prefix}.sets", run.Sets)
+            .Text($"{prefix}.material", MaterialText(run.Material))
+            .Number($"{prefix}.insulation_c", run.InsulationC)
+            .Text($"{prefix}.raceway", RacewayText(run.Raceway))
+            .Number($"{prefix}.ocpd_a", run.OcpdA)
+            .Number($"{prefix}.limit_percent", run.LimitPercent)
+            .Text($"{prefix}.fixed", run.Fixed ? "true" : "false");
+    }
+
+    private FieldSet Text(string name, string text)
+    {
+        _fields.Add(new Field(name, text, null, false));
+        return this;
+    }
+
+    private FieldSet Number(string name, double? value)
+    {
+        _fields.Add(new Field(name, value is null ? "none" : null, value, false));
+        return this;
+    }
+
+    private static string Format(double value) => value.ToString("G10", CultureInfo.InvariantCulture);
+
+    /// <summary>A field: text, or a number formatted only when shown (with feet beside metres for a project in feet).</summary>
+    private readonly record struct Field(string Name, string? Text, double? Number, bool Feet)
+    {
+        public string Display => Number is { } v
+            ? Format(v) + (Feet ? $" ({(v / ValueReader.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
+            : Text ?? "none";
+    }
+
+    private static string MaterialText(Material m) => m == Material.Copper ? "cu" : "al";
+
+    private static string RacewayText(Raceway r) => r.ToString().ToLowerInvariant();
+}
