@@ -11,5 +11,6 @@ internal static class CommandCatalog
         yield return AnalyzeCommand.Create(context);
         yield return CheckCommand.Create(context);
         yield return ConductorsCommand.Create(context);
+        yield return GenerateCommand.Create(context);
     }
 }
