@@ -40,6 +40,9 @@ public sealed record Project
     /// <summary>Conductor defaults.</summary>
     public ConductorDefaults Defaults { get; init; } = ConductorDefaults.Standard;
 
+    /// <summary>Choices for the upsizer.</summary>
+    public SizingOptions Sizing { get; init; } = SizingOptions.Default;
+
     /// <summary>The service.</summary>
     public required Service Service { get; init; }
 

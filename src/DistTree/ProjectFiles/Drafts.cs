@@ -14,6 +14,8 @@ internal sealed class ProjectDraft
 
     public ConductorDefaults Defaults { get; set; } = ConductorDefaults.Standard;
 
+    public SizingOptions Sizing { get; set; } = SizingOptions.Default;
+
     public Service? Service { get; set; }
 
     public List<EquipmentDraft> Equipment { get; } = [];

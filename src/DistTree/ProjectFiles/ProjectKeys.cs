@@ -6,7 +6,7 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal static class ProjectKeys
 {
-    public static readonly string[] Top = ["disttree", "project", "rules", "defaults", "service", "equipment"];
+    public static readonly string[] Top = ["disttree", "project", "rules", "defaults", "sizing", "service", "equipment"];
 
     public static readonly string[] Project = ["name", "units", "description"];
 
@@ -17,6 +17,8 @@ internal static class ProjectKeys
     ];
 
     public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];
+
+    public static readonly string[] Sizing = ["max_sets", "prices", "currency", "resolution_percent"];
 
     public static readonly string[] Service = ["id", "system", "frequency_hz"];
 

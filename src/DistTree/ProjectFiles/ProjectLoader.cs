@@ -112,6 +112,7 @@ public static class ProjectLoader
             Units = draft.Units,
             Rules = draft.Rules,
             Defaults = draft.Defaults,
+            Sizing = draft.Sizing,
             Service = draft.Service!,
             Equipment = equipment,
             Warnings = warnings,

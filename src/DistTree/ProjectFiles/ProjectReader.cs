@@ -59,6 +59,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         ReadProject(Map(top.Required("project"), "'project'", "the project section", ProjectKeys.Project));
         ReadRules(Map(top.Optional("rules"), "'rules'", "the rules", ProjectKeys.Rules));
         ReadDefaults(Map(top.Optional("defaults"), "'defaults'", "the defaults", ProjectKeys.Defaults));
+        ReadSizing(Map(top.Optional("sizing"), "'sizing'", "the sizing section", ProjectKeys.Sizing));
         ReadService(top.Required("service"));
         ReadEquipment(top.Required("equipment"));
         return _draft;
@@ -216,6 +217,80 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         _draft.Defaults = defaults;
+    }
+
+    private void ReadSizing(MappingReader? m)
+    {
+        if (m is null)
+        {
+            return;
+        }
+
+        var sizing = SizingOptions.Default;
+        if (m.Optional("max_sets") is { } setsNode && _values.Integer(setsNode, "'max_sets'") is { } sets)
+        {
+            if (sets < 1)
+            {
+                bag.Error(setsNode.Location, $"'max_sets' must be 1 or more; found {sets}");
+            }
+            else
+            {
+                sizing = sizing with { MaxSets = sets };
+            }
+        }
+
+        if (m.Optional("currency") is { } currencyNode && _values.Text(currencyNode, "'currency'") is { } currency)
+        {
+            sizing = sizing with { Currency = currency };
+        }
+
+        if (Positive(m, "resolution_percent") is { } resolution)
+        {
+            sizing = sizing with { ResolutionPercent = resolution };
+        }
+
+        if (m.Optional("prices") is { } pricesNode)
+        {
+            sizing = sizing with { Prices = ReadPrices(pricesNode) };
+        }
+
+        _draft.Sizing = sizing;
+    }
+
+    private Dictionary<ConductorSize, double> ReadPrices(SourceNode node)
+    {
+        var prices = new Dictionary<ConductorSize, double>();
+        if (node is not SourceMapping mapping)
+        {
+            if (!node.IsInvalid)
+            {
+                bag.Error(node.Location, $"'prices' must be a mapping of size to price per metre; found {node.Describe()}");
+            }
+
+            return prices;
+        }
+
+        foreach (var (key, value) in mapping.Entries)
+        {
+            if (!ConductorSize.TryParse(key.Value, out var size, out var error))
+            {
+                bag.Error(key.Location, error);
+                continue;
+            }
+
+            if (prices.ContainsKey(size))
+            {
+                bag.Error(key.Location, $"the price of {size} is given twice");
+                continue;
+            }
+
+            if (_values.Positive(value, $"the price of {size}") is { } price)
+            {
+                prices[size] = price;
+            }
+        }
+
+        return prices;
     }
 
     private void ReadService(SourceNode? node)

@@ -71,6 +71,7 @@ public sealed class ProjectSchemaTests
         AssertKeys(ProjectKeys.Project, schema["properties"]!["project"]!["properties"]);
         AssertKeys(ProjectKeys.Rules, schema["properties"]!["rules"]!["properties"]);
         AssertKeys(ProjectKeys.Defaults, schema["properties"]!["defaults"]!["properties"]);
+        AssertKeys(ProjectKeys.Sizing, schema["properties"]!["sizing"]!["properties"]);
         AssertKeys(ProjectKeys.Service, schema["properties"]!["service"]!["properties"]);
         AssertKeys(ProjectKeys.Equipment, defs["equipment"]!["properties"]);
         AssertKeys(ProjectKeys.Circuit, defs["circuit"]!["properties"]);
@@ -82,7 +83,7 @@ public sealed class ProjectSchemaTests
     public void Docs_EveryKey_IsDescribed()
     {
         var doc = File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "docs", "project-file.md"));
-        string[][] all = [ProjectKeys.Top, ProjectKeys.Project, ProjectKeys.Rules, ProjectKeys.Defaults, ProjectKeys.Service, ProjectKeys.Equipment, ProjectKeys.Circuit, ProjectKeys.Run, ProjectKeys.Load];
+        string[][] all = [ProjectKeys.Top, ProjectKeys.Project, ProjectKeys.Rules, ProjectKeys.Defaults, ProjectKeys.Sizing, ProjectKeys.Service, ProjectKeys.Equipment, ProjectKeys.Circuit, ProjectKeys.Run, ProjectKeys.Load];
         var missing = all.SelectMany(k => k).Distinct().Where(k => !doc.Contains($"`{k}`", StringComparison.Ordinal)).ToArray();
         Assert.Empty(missing);
     }

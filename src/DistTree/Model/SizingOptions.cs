@@ -1,0 +1,22 @@
+using DistTree.Conductors;
+
+namespace DistTree.Model;
+
+/// <summary>Choices for the upsizer, from the project's <c>sizing</c> section.</summary>
+public sealed record SizingOptions
+{
+    /// <summary>The most parallel sets a feeder may be given, or null to keep each feeder's own sets.</summary>
+    public int? MaxSets { get; init; }
+
+    /// <summary>Price per metre of one conductor by size; empty to minimise material (mm²·m) instead.</summary>
+    public IReadOnlyDictionary<ConductorSize, double> Prices { get; init; } = new Dictionary<ConductorSize, double>();
+
+    /// <summary>The prices' unit (e.g. <c>USD</c>), or empty.</summary>
+    public string Currency { get; init; } = "";
+
+    /// <summary>The grid in percentage points on which the optimiser rounds drop budgets up (the safe side).</summary>
+    public double ResolutionPercent { get; init; } = 0.001;
+
+    /// <summary>The defaults: keep sets, minimise material, 0.001 percentage points.</summary>
+    public static SizingOptions Default { get; } = new();
+}
