@@ -139,7 +139,7 @@ public sealed class DropSolver
             ApparentPowerVa = carried.VoltAmperes,
             Size = conductors.Size.Text,
             Material = conductors.Material == Material.Copper ? "cu" : "al",
-            Raceway = conductors.Raceway.ToString().ToLowerInvariant(),
+            Raceway = RacewayWord(conductors.Raceway),
             Sets = conductors.Sets,
             LengthM = conductors.LengthM,
             TemperatureC = figures.TemperatureC,
@@ -154,6 +154,14 @@ public sealed class DropSolver
         };
         return result with { Findings = RunFindings(result, conductors) };
     }
+
+    private static string RacewayWord(Raceway raceway) => raceway switch
+    {
+        Conductors.Raceway.Pvc => "pvc",
+        Conductors.Raceway.Aluminum => "aluminum",
+        Conductors.Raceway.Steel => "steel",
+        _ => raceway.ToString().ToLowerInvariant(),
+    };
 
     private static double BranchCurrent(double connectedA, double? ocpdA, BranchCurrentBasis basis) => (basis, ocpdA) switch
     {
