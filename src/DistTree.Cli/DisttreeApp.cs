@@ -11,9 +11,15 @@ namespace DistTree.Cli;
 public static class DisttreeApp
 {
     /// <summary>Runs <paramref name="args"/> writing to the given writers; returns the exit code.</summary>
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, showProgress: false);
+
+    /// <summary>
+    /// Runs <paramref name="args"/>; with <paramref name="showProgress"/> (standard error is a terminal) long work
+    /// shows a status line on <paramref name="stderr"/>.
+    /// </summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool showProgress)
     {
-        var context = new CliContext(stdout, stderr);
+        var context = new CliContext(stdout, stderr) { ShowProgress = showProgress };
         var root = new RootCommand(
             "DistTree: voltage drop, ampacity and upsizing for the distribution tree of a building. " +
             "A design aid: the code in force and the authority having jurisdiction decide; a qualified person reviews the design.");

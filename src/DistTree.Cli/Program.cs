@@ -4,5 +4,5 @@ namespace DistTree.Cli;
 public static class Program
 {
     /// <summary>Runs the command line and returns its exit code (0 ok, 1 a limit exceeded, 2 bad input or usage).</summary>
-    public static int Main(string[] args) => DisttreeApp.Run(args, Console.Out, Console.Error);
+    public static int Main(string[] args) => DisttreeApp.Run(args, Console.Out, Console.Error, showProgress: !Console.IsErrorRedirected);
 }

@@ -53,7 +53,8 @@ public static class JsonResults
             w.WriteEndObject();
         }
 
-        return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+        buffer.WriteByte((byte)'\n');
+        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
     }
 
     /// <summary>Writes a finding object (kind, subject, value, limit, message, line, column).</summary>

@@ -36,11 +36,16 @@ internal static class AnalyzeCommand
                 throw new UsageException("--worst takes a whole number of 1 or more");
             }
 
-            var solution = Pipeline.Solve(context, path);
             var jsonPath = parsed.GetValue(json);
-            if (jsonPath is not null)
+            Solving.Solution solution;
+            using (var status = context.Status())
             {
-                OutputFile.Write(context, jsonPath, JsonResults.Write(solution), path);
+                solution = Pipeline.Solve(context, path, status);
+                if (jsonPath is not null)
+                {
+                    status.Report($"writing the results of {solution.Runs.Count:N0} runs");
+                    OutputFile.Write(context, jsonPath, JsonResults.Write(solution), path);
+                }
             }
 
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);

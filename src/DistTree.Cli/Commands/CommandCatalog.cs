@@ -13,5 +13,6 @@ internal static class CommandCatalog
         yield return UpsizeCommand.Create(context);
         yield return CompareCommand.Create(context);
         yield return ConductorsCommand.Create(context);
+        yield return GenerateCommand.Create(context);
     }
 }

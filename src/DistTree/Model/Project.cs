@@ -28,7 +28,10 @@ public sealed record Project
     /// <summary>The project file's path as given.</summary>
     public required string File { get; init; }
 
-    /// <summary>Lower-case hex SHA-256 of the project file's bytes.</summary>
+    /// <summary>
+    /// Lower-case hex SHA-256 of the project file's bytes; with included files, the SHA-256 of every file's
+    /// 32-byte digest concatenated in the order read (main file first, then depth first in list order).
+    /// </summary>
     public required string Sha256 { get; init; }
 
     /// <summary>The unit of bare lengths in the file (figures are always in metres in the model).</summary>

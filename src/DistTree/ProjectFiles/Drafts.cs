@@ -19,7 +19,13 @@ internal sealed class ProjectDraft
     public Service? Service { get; set; }
 
     public List<EquipmentDraft> Equipment { get; } = [];
+
+    /// <summary>The main file's <c>include</c> entries, in file order.</summary>
+    public List<IncludeEntry> Includes { get; } = [];
 }
+
+/// <summary>One entry of an <c>include</c> list: the path as written and where it is written.</summary>
+internal sealed record IncludeEntry(string Path, SourceLocation Location);
 
 /// <summary>One equipment entry as read.</summary>
 internal sealed class EquipmentDraft(SourceLocation location)

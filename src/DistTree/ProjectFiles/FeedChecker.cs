@@ -1,3 +1,4 @@
+using DistTree.Diagnostics;
 using DistTree.Model;
 
 namespace DistTree.ProjectFiles;
@@ -41,11 +42,11 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             if (project.Service is { } service && service.Id == id)
             {
-                bag.Error(draft.IdLocation, $"duplicate id '{id}': it is the service's id (line {service.Location.Line})");
+                bag.Error(draft.IdLocation, $"duplicate id '{id}': it is the service's id ({Where(service.Location, draft.IdLocation)})");
             }
             else if (byId.TryGetValue(id, out var first))
             {
-                bag.Error(draft.IdLocation, $"duplicate equipment id '{id}' (first given at line {first.IdLocation.Line})");
+                bag.Error(draft.IdLocation, $"duplicate equipment id '{id}' (first given at {Where(first.IdLocation, draft.IdLocation)})");
             }
             else
             {
@@ -55,6 +56,10 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
         return byId;
     }
+
+    // "line 12" in the same file; "projects/campus/north.yaml:12" in another.
+    private static string Where(SourceLocation first, SourceLocation here) =>
+        first.File == here.File ? $"line {first.Line}" : $"{first.File}:{first.Line}";
 
     private void CheckSources(ProjectDraft project, Dictionary<string, EquipmentDraft> byId, string? serviceId)
     {
@@ -78,7 +83,8 @@ internal sealed class FeedChecker(DiagnosticBag bag)
     private HashSet<EquipmentDraft> AssignSystems(Dictionary<string, EquipmentDraft> byId, Service service)
     {
         var children = new Dictionary<string, List<EquipmentDraft>>(StringComparer.Ordinal);
-        foreach (var draft in byId.Values.OrderBy(d => d.Location.Line))
+        // In the order read (a dictionary enumerates in insertion order while nothing is removed): file order.
+        foreach (var draft in byId.Values)
         {
             if (draft.From is { } from)
             {

@@ -6,7 +6,10 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal static class ProjectKeys
 {
-    public static readonly string[] Top = ["disttree", "project", "rules", "defaults", "sizing", "service", "equipment"];
+    public static readonly string[] Top = ["disttree", "project", "rules", "defaults", "sizing", "service", "include", "equipment"];
+
+    /// <summary>What an included file may hold (docs/project-file.md, Including other files).</summary>
+    public static readonly string[] Included = ["include", "equipment"];
 
     public static readonly string[] Project = ["name", "units", "description"];
 

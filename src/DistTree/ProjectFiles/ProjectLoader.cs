@@ -37,19 +37,21 @@ public static class ProjectLoader
             text = text[1..];
         }
 
-        return Parse(text, path, Hash(bytes));
+        return Parse(text, path, bytes);
     }
 
     /// <summary>
     /// Validates project text as if read from <paramref name="file"/> (the name used in diagnostics);
-    /// <see cref="Project.Sha256"/> is the hash of the text's UTF-8 bytes.
+    /// <see cref="Project.Sha256"/> is the hash of the text's UTF-8 bytes. Files it includes are read from
+    /// disk, relative to <paramref name="file"/>.
     /// </summary>
     /// <exception cref="ProjectException">The text is not a valid project; carries every error and warning.</exception>
-    public static Project Parse(string text, string file) => Parse(text, file, Hash(Encoding.UTF8.GetBytes(text)));
+    public static Project Parse(string text, string file) => Parse(text, file, Encoding.UTF8.GetBytes(text));
 
-    private static Project Parse(string text, string file, string sha256)
+    private static Project Parse(string text, string file, byte[] bytes)
     {
         var bag = new DiagnosticBag();
+        bag.AddFile(file);
         var root = SourceTreeReader.Read(text, file, bag);
         if (root is null || root is SourceScalar { IsNull: true })
         {
@@ -61,14 +63,23 @@ public static class ProjectLoader
             throw ProjectException.FromDiagnostics(bag.Sorted());
         }
 
-        var draft = new ProjectReader(bag).Read(root);
+        var reader = new ProjectReader(bag);
+        var draft = reader.Read(root);
+        var includes = new IncludeReader(bag, reader);
+        includes.Hashes.Add(IncludeReader.Hash(bytes));
+        includes.ReadAll(file, draft.Includes);
+        if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
+        {
+            bag.Error(root.Location, "the project and the files it includes list no equipment; a project needs at least one piece of equipment");
+        }
+
         new FeedChecker(bag).Check(draft);
         if (bag.HasErrors)
         {
             throw ProjectException.FromDiagnostics(bag.Sorted());
         }
 
-        return Build(draft, file, sha256, bag.Warnings());
+        return Build(draft, file, Sha256Of(includes.Hashes), bag.Warnings());
     }
 
     private static Project Build(ProjectDraft draft, string file, string sha256, IReadOnlyList<Diagnostic> warnings)
@@ -142,5 +153,9 @@ public static class ProjectLoader
         return new Load(LoadKind.Va, s, s > 0 ? p / s : 1.0);
     }
 
-    private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));
+
+    // One file: the SHA-256 of its bytes. With includes: the SHA-256 of the files' 32-byte digests concatenated
+    // in the order read (the main file, then depth first in list order), so a change to any file changes it.
+    private static string Sha256Of(List<byte[]> hashes) =>
+        Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
 }

@@ -74,8 +74,56 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         ReadDefaults(Map(top.Optional("defaults"), "'defaults'", "the defaults", ProjectKeys.Defaults));
         ReadSizing(Map(top.Optional("sizing"), "'sizing'", "the sizing section", ProjectKeys.Sizing));
         ReadService(top.Required("service"));
-        ReadEquipment(top.Required("equipment"));
+        _draft.Includes.AddRange(ReadIncludes(top.Optional("include")));
+        ReadEquipment(top.Has("include") ? top.Optional("equipment") : top.Required("equipment"));
         return _draft;
+    }
+
+    /// <summary>
+    /// Reads an included file (<c>include</c> and <c>equipment</c> only) into the same draft: its equipment is
+    /// added after what was read before. Returns the files it includes in turn.
+    /// </summary>
+    public IReadOnlyList<IncludeEntry> ReadIncluded(SourceNode root)
+    {
+        if (root is not SourceMapping mapping)
+        {
+            bag.Error(root.Location, $"an included file is a mapping holding 'equipment:' (and 'include:'); found {root.Describe()}");
+            return [];
+        }
+
+        var top = new MappingReader(mapping, "the included file", ProjectKeys.Included, bag);
+        var includes = ReadIncludes(top.Optional("include"));
+        ReadEquipment(top.Has("include") ? top.Optional("equipment") : top.Required("equipment", " (an included file lists equipment)"));
+        return includes;
+    }
+
+    private List<IncludeEntry> ReadIncludes(SourceNode? node)
+    {
+        var entries = new List<IncludeEntry>();
+        if (node is null)
+        {
+            return entries;
+        }
+
+        if (node is not SourceSequence sequence)
+        {
+            if (!node.IsInvalid)
+            {
+                bag.Error(node.Location, $"'include' must be a sequence of relative paths ('- buildings/north.yaml'); found {node.Describe()}");
+            }
+
+            return entries;
+        }
+
+        foreach (var item in sequence.Items)
+        {
+            if (_values.Text(item, "an 'include' path") is { } path)
+            {
+                entries.Add(new IncludeEntry(path.Trim(), item.Location));
+            }
+        }
+
+        return entries;
     }
 
     private MappingReader? Map(SourceNode? node, string what, string context, IReadOnlyList<string> keys)

@@ -20,13 +20,13 @@ internal static partial class SourceTreeReader
         var stack = new Stack<Frame>();
         SourceNode? root = null;
         var documents = 0;
-        var last = new SourceLocation(file, 1, 1);
+        Mark? last = null;
         try
         {
             while (parser.MoveNext())
             {
                 var current = parser.Current!;
-                last = At(file, current.Start);
+                last = current.Start;
                 SourceNode completed;
                 switch (current)
                 {
@@ -78,7 +78,7 @@ internal static partial class SourceTreeReader
         catch (InvalidOperationException)
         {
             // YamlDotNet's scanner throws this (without a mark) for some unclosed flow collections.
-            bag.Error(last, "invalid YAML after this point: an unclosed '[', '{' or quote?");
+            bag.Error(last is null ? new SourceLocation(file, 1, 1) : At(file, last.Value), "invalid YAML after this point: an unclosed '[', '{' or quote?");
             return null;
         }
 

@@ -1,0 +1,148 @@
+using System.Security.Cryptography;
+using System.Text;
+using DistTree.Diagnostics;
+
+namespace DistTree.ProjectFiles;
+
+/// <summary>
+/// Reads the files a project includes, depth first in list order, iteratively (an explicit stack). A path is
+/// relative to the including file and must stay inside the main file's folder; a file that includes itself,
+/// directly or through others, is an include cycle; a file included twice is an error. Each file read adds
+/// its SHA-256 to <see cref="Hashes"/>, in the order read, after the main file's.
+/// </summary>
+internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
+{
+    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+
+    /// <summary>SHA-256 of every file read, the main file's first.</summary>
+    public List<byte[]> Hashes { get; } = [];
+
+    /// <summary>Reads every file that <paramref name="mainFile"/> includes (its entries are <paramref name="includes"/>).</summary>
+    public void ReadAll(string mainFile, IReadOnlyList<IncludeEntry> includes)
+    {
+        if (includes.Count == 0)
+        {
+            return;
+        }
+
+        var folder = Path.GetFullPath(Path.GetDirectoryName(mainFile) is { Length: > 0 } d ? d : ".");
+        var mainFull = Path.GetFullPath(mainFile);
+        var chain = new List<Frame> { new(mainFile, mainFull, includes) };
+        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal) { [mainFull] = new SourceLocation(mainFile, 1, 1) };
+        while (chain.Count > 0)
+        {
+            var frame = chain[^1];
+            if (frame.Next == frame.Includes.Count)
+            {
+                chain.RemoveAt(chain.Count - 1);
+                continue;
+            }
+
+            var entry = frame.Includes[frame.Next++];
+            if (Resolve(entry, frame, folder) is not { } resolved)
+            {
+                continue;
+            }
+
+            var (shown, full) = resolved;
+            if (chain.FindIndex(f => f.Full == full) is var open and >= 0)
+            {
+                var names = chain.Skip(open).Select(f => $"'{f.Shown}'").Append($"'{shown}'");
+                bag.Error(entry.Location, $"include cycle: {string.Join(" includes ", names)}");
+                continue;
+            }
+
+            if (seen.TryGetValue(full, out var first))
+            {
+                bag.Error(entry.Location, $"'{shown}' is included twice (first at {first}); include each file once");
+                continue;
+            }
+
+            seen.Add(full, entry.Location);
+            if (ReadFile(entry, shown, full) is { } next)
+            {
+                chain.Add(new Frame(shown, full, next));
+            }
+        }
+    }
+
+    /// <summary>The SHA-256 of one file's bytes.</summary>
+    public static byte[] Hash(byte[] bytes) => SHA256.HashData(bytes);
+
+    private (string Shown, string Full)? Resolve(IncludeEntry entry, Frame from, string folder)
+    {
+        if (entry.Path.Length == 0 || Path.IsPathRooted(entry.Path))
+        {
+            bag.Error(entry.Location, $"an include path is relative to the including file ('buildings/north.yaml'); found '{entry.Path}'");
+            return null;
+        }
+
+        var full = Path.GetFullPath(Path.Combine(Path.GetDirectoryName(from.Full)!, entry.Path));
+        if (!full.StartsWith(folder + Path.DirectorySeparatorChar, StringComparison.Ordinal))
+        {
+            bag.Error(entry.Location, $"'{entry.Path}' is outside the project's folder; an included file must be in the main file's folder or below it");
+            return null;
+        }
+
+        var shownFolder = Path.GetDirectoryName(from.Shown);
+        var shown = Path.GetRelativePath(".", Path.Combine(string.IsNullOrEmpty(shownFolder) ? "." : shownFolder, entry.Path));
+        if (Path.IsPathRooted(from.Shown))
+        {
+            shown = full;
+        }
+
+        return (shown.Replace('\\', '/'), full);
+    }
+
+    private IReadOnlyList<IncludeEntry>? ReadFile(IncludeEntry entry, string shown, string full)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(full);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            var why = e is FileNotFoundException or DirectoryNotFoundException ? "no such file" : e.Message;
+            bag.Error(entry.Location, $"cannot read the included file '{shown}': {why}");
+            return null;
+        }
+
+        bag.AddFile(shown);
+        string text;
+        try
+        {
+            text = StrictUtf8.GetString(bytes);
+        }
+        catch (DecoderFallbackException)
+        {
+            bag.Error(new SourceLocation(shown, 1, 1), "the file is not UTF-8 text");
+            return null;
+        }
+
+        Hashes.Add(Hash(bytes));
+        var root = SourceTreeReader.Read(text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text, shown, bag);
+        if (root is null || root is SourceScalar { IsNull: true })
+        {
+            if (root is not null)
+            {
+                bag.Error(new SourceLocation(shown, 1, 1), "the included file holds nothing; it lists 'equipment:' (see docs/project-file.md)");
+            }
+
+            return null;
+        }
+
+        return reader.ReadIncluded(root);
+    }
+
+    private sealed class Frame(string shown, string full, IReadOnlyList<IncludeEntry> includes)
+    {
+        public string Shown { get; } = shown;
+
+        public string Full { get; } = full;
+
+        public IReadOnlyList<IncludeEntry> Includes { get; } = includes;
+
+        public int Next { get; set; }
+    }
+}

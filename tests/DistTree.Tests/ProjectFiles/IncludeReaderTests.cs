@@ -1,0 +1,163 @@
+using System.Security.Cryptography;
+using DistTree.Diagnostics;
+using DistTree.ProjectFiles;
+
+namespace DistTree.Tests.ProjectFiles;
+
+/// <summary>Multi-file projects: 'include' read through ProjectLoader.Load, on files in a temporary folder.</summary>
+public sealed class IncludeReaderTests : IDisposable
+{
+    private const string Main = """
+        disttree: 1
+        project: { name: Include test, units: imperial }
+        service: { id: SVC, system: 208Y/120 }
+        include:
+          - b/one.yaml
+        equipment:
+          - id: MSB
+            kind: switchboard
+            from: SVC
+        """;
+
+    private const string One = """
+        equipment:
+          - id: LP1
+            kind: panelboard
+            from: MSB
+            feeder: { length: 50, size: 2 AWG, ocpd: 100 }
+            circuits:
+              - id: "1"
+                poles: 1
+                ocpd: 20
+                load: { va: 1000 }
+                run: { length: 40, size: 12 AWG }
+        """;
+
+    private readonly DirectoryInfo _folder = Directory.CreateTempSubdirectory("disttree-include-");
+
+    public void Dispose() => _folder.Delete(recursive: true);
+
+    [Fact]
+    public void Load_Campus_ReadsEveryBuildingFile()
+    {
+        var project = ProjectLoader.Load(Path.Combine(TestPaths.RepoRoot, "projects", "campus", "campus.yaml"));
+
+        Assert.Contains(project.Equipment, e => e.Id == "NH-L1");
+        Assert.Contains(project.Equipment, e => e.Id == "SL-H1");
+        Assert.Equal(["MSB", "CP", "NH-DS", "NH-H1", "NH-T1", "NH-L1", "SL-H1"], project.Equipment.Select(e => e.Id));
+    }
+
+    [Fact]
+    public void Load_WithIncludes_Sha256CoversEveryFileInOrder()
+    {
+        var main = Write("main.yaml", Main);
+        var one = Write("b/one.yaml", One);
+        var expected = Convert.ToHexStringLower(SHA256.HashData(
+            SHA256.HashData(File.ReadAllBytes(main)).Concat(SHA256.HashData(File.ReadAllBytes(one))).ToArray()));
+
+        var project = ProjectLoader.Load(main);
+
+        Assert.Equal(expected, project.Sha256);
+        Assert.Equal(["MSB", "LP1"], project.Equipment.Select(e => e.Id));
+    }
+
+    [Fact]
+    public void Load_IncludedFileChanged_Sha256Changes()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", One);
+        var before = ProjectLoader.Load(main).Sha256;
+        Write("b/one.yaml", One.Replace("length: 40", "length: 41", StringComparison.Ordinal));
+
+        Assert.NotEqual(before, ProjectLoader.Load(main).Sha256);
+    }
+
+    [Fact]
+    public void Load_ErrorInIncludedFile_NamesThatFileAndLine()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", One.Replace("size: 12 AWG", "size: 13 AWG", StringComparison.Ordinal));
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal((Path.Combine(_folder.FullName, "b", "one.yaml"), 11), (error.Location.File, error.Location.Line));
+    }
+
+    [Fact]
+    public void Load_IncludeCycle_IsAnErrorAtTheInclude()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", "include:\n  - two.yaml\n" + One);
+        Write("b/two.yaml", "include:\n  - one.yaml\nequipment:\n  - { id: S2, kind: splitter, from: MSB }\n");
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Contains("include cycle:", error.Message, StringComparison.Ordinal);
+        Assert.EndsWith("b/two.yaml", error.Location.File, StringComparison.Ordinal);
+        Assert.Equal(2, error.Location.Line);
+    }
+
+    [Fact]
+    public void Load_IncludedTwice_IsAnError()
+    {
+        var main = Write("main.yaml", Main.Replace("  - b/one.yaml", "  - b/one.yaml\n  - b/../b/one.yaml", StringComparison.Ordinal));
+        Write("b/one.yaml", One);
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Contains("is included twice", error.Message, StringComparison.Ordinal);
+        Assert.Equal((main, 6), (error.Location.File, error.Location.Line));
+    }
+
+    [Theory]
+    [InlineData("../outside.yaml", "outside the project's folder")]
+    [InlineData("/etc/hostname", "relative to the including file")]
+    [InlineData("b/missing.yaml", "no such file")]
+    public void Load_BadIncludePath_IsAnErrorAtTheEntry(string path, string expected)
+    {
+        var main = Write("sub/main.yaml", Main.Replace("b/one.yaml", path, StringComparison.Ordinal));
+        Write("outside.yaml", One);
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Contains(expected, error.Message, StringComparison.Ordinal);
+        Assert.Equal((main, 5, 5), (error.Location.File, error.Location.Line, error.Location.Column));
+    }
+
+    [Fact]
+    public void Load_IncludedFileWithAService_IsAnUnknownKey()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", "service: { id: X, system: 120 }\n" + One);
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Contains("unknown key 'service' in the included file", error.Message, StringComparison.Ordinal);
+        Assert.Equal(1, error.Location.Line);
+    }
+
+    [Fact]
+    public void Load_DuplicateIdAcrossFiles_NamesTheOtherFile()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", One.Replace("id: LP1", "id: MSB", StringComparison.Ordinal));
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Contains($"first given at {main}:7", error.Message, StringComparison.Ordinal);
+    }
+
+    private string Write(string relative, string text)
+    {
+        var path = Path.Combine(_folder.FullName, relative);
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    private static Diagnostic[] Errors(string main)
+    {
+        var e = Assert.Throws<ProjectException>(() => ProjectLoader.Load(main));
+        return e.Diagnostics.Where(d => d.Severity == Severity.Error).ToArray();
+    }
+}
