@@ -34,10 +34,10 @@ internal static class OutputFile
         }
 
         var directory = Path.GetDirectoryName(full)!;
-        Directory.CreateDirectory(directory);
         var temporary = Path.Combine(directory, $".{Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
         try
         {
+            Directory.CreateDirectory(directory);
             File.WriteAllText(temporary, content, new System.Text.UTF8Encoding(false));
             if (!replace && (File.Exists(full) || Directory.Exists(full)))
             {
@@ -49,8 +49,20 @@ internal static class OutputFile
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            File.Delete(temporary);
+            DeleteQuietly(temporary);
             throw new UsageException($"cannot write '{path}': {e.Message}");
+        }
+    }
+
+    private static void DeleteQuietly(string path)
+    {
+        try
+        {
+            File.Delete(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Nothing was written there, or it cannot be removed: the error already reported is the one that matters.
         }
     }
 }
