@@ -56,6 +56,18 @@ public sealed class DisttreeAppCultureTests
         Assert.Equal(12.5, project.Equipment[0].Feeder!.LengthM);
     }
 
+    [Fact]
+    public void Parse_GermanCulture_LimitMessagesUseInvariantNumbers()
+    {
+        var text = DistTree.Tests.ProjectFiles.ProjectText.Minimal().Replace("name: Test", "name: " + new string('x', 70_000), StringComparison.Ordinal);
+
+        var error = InCulture(
+            new CultureInfo("de-DE", useUserOverride: false),
+            () => Assert.Throws<DistTree.Diagnostics.ProjectException>(() => DistTree.ProjectFiles.ProjectLoader.Parse(text, "t.yaml")));
+
+        Assert.Equal("a value of 70,000 characters; a value may have at most 65,536 (see docs/limits.md)", Assert.Single(error.Diagnostics).Message);
+    }
+
     private static CliResult RunInRepo(string[] args)
     {
         CliResult? result = null;
