@@ -28,6 +28,11 @@ public static class DisttreeApp
             root.Subcommands.Add(command);
         }
 
+        foreach (var version in root.Options.OfType<VersionOption>())
+        {
+            version.Action = new PrintVersion();
+        }
+
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {

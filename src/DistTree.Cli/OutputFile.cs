@@ -11,7 +11,15 @@ internal static class OutputFile
     /// <param name="path">The output path, or <c>-</c>.</param>
     /// <param name="content">The text.</param>
     /// <param name="inputs">Files the command read: the output may not be one of them.</param>
-    public static void Write(CliContext context, string path, string content, params string[] inputs)
+    public static void Write(CliContext context, string path, string content, params string[] inputs) =>
+        Write(context, path, content, replace: true, inputs);
+
+    /// <summary>
+    /// Writes <paramref name="content"/> like <see cref="Write(CliContext, string, string, string[])"/>, but
+    /// only when nothing is at <paramref name="path"/> yet, unless <paramref name="replace"/>.
+    /// </summary>
+    /// <exception cref="UsageException">A file is already there and <paramref name="replace"/> is false.</exception>
+    public static void Write(CliContext context, string path, string content, bool replace, params string[] inputs)
     {
         if (path == "-")
         {
@@ -26,17 +34,35 @@ internal static class OutputFile
         }
 
         var directory = Path.GetDirectoryName(full)!;
-        Directory.CreateDirectory(directory);
         var temporary = Path.Combine(directory, $".{Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
         try
         {
+            Directory.CreateDirectory(directory);
             File.WriteAllText(temporary, content, new System.Text.UTF8Encoding(false));
-            File.Move(temporary, full, overwrite: true);
+            if (!replace && (File.Exists(full) || Directory.Exists(full)))
+            {
+                File.Delete(temporary);
+                throw new UsageException($"'{path}' already exists; DistTree replaces it only when asked");
+            }
+
+            File.Move(temporary, full, overwrite: replace);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            File.Delete(temporary);
+            DeleteQuietly(temporary);
             throw new UsageException($"cannot write '{path}': {e.Message}");
+        }
+    }
+
+    private static void DeleteQuietly(string path)
+    {
+        try
+        {
+            File.Delete(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Nothing was written there, or it cannot be removed: the error already reported is the one that matters.
         }
     }
 }

@@ -4,9 +4,9 @@ using DistTree.Reports;
 namespace DistTree.Cli.Commands;
 
 /// <summary>
-/// <c>disttree analyze FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--worst N]</c>: the summary, the worst
-/// paths with each run's share of the drop, and every finding; optionally the results document and the HTML
-/// review report; exit 0 within limits, 1 a limit exceeded, 2 bad input.
+/// <c>disttree analyze FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--sarif PATH|-] [--worst N]</c>: the
+/// summary, the worst paths with each run's share of the drop, and every finding; optionally the results
+/// document, the HTML review report and a SARIF log; exit 0 within limits, 1 a limit exceeded, 2 bad input.
 /// </summary>
 internal static class AnalyzeCommand
 {
@@ -21,11 +21,12 @@ internal static class AnalyzeCommand
             Arity = ArgumentArity.ZeroOrOne,
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
+        var sarif = new Option<string?>("--sarif") { Description = FindingsOutput.SarifDescription, HelpName = "PATH" };
         var worst = new Option<int>("--worst") { Description = "How many worst paths to show (console and HTML).", DefaultValueFactory = _ => 10 };
         var command = new Command("analyze", "Solve the voltage drop of every run and end point; print the worst paths and every finding.\n" +
             "Example: disttree analyze projects/quillfeather-medical.yaml --json reports/results.json --html")
         {
-            file, json, html, date, worst,
+            file, json, html, date, sarif, worst,
         };
         command.SetAction(parsed =>
         {
@@ -37,6 +38,13 @@ internal static class AnalyzeCommand
             }
 
             var jsonPath = parsed.GetValue(json);
+            var sarifPath = parsed.GetValue(sarif);
+            var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
+            if (new[] { jsonPath, sarifPath, htmlPath }.Count(p => p == "-") > 1)
+            {
+                throw new UsageException("only one of --json, --html and --sarif can write to standard output");
+            }
+
             Solving.Solution solution;
             using (var status = context.Status())
             {
@@ -48,14 +56,14 @@ internal static class AnalyzeCommand
                 }
             }
 
-            var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
             if (htmlPath is not null)
             {
                 var options = new HtmlReportOptions { Worst = count, Date = parsed.GetValue(date) };
                 OutputFile.Write(context, htmlPath, HtmlReport.Render(solution, options), path);
             }
 
-            if (jsonPath != "-" && htmlPath != "-")
+            FindingsOutput.WriteSarif(context, sarifPath, solution, path);
+            if (jsonPath != "-" && htmlPath != "-" && sarifPath != "-")
             {
                 ConsoleReport.WriteAnalysis(context.Out, solution, count);
             }

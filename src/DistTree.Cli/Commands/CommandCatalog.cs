@@ -7,6 +7,7 @@ internal static class CommandCatalog
 {
     public static IEnumerable<Command> Create(CliContext context)
     {
+        yield return InitCommand.Create(context);
         yield return ValidateCommand.Create(context);
         yield return AnalyzeCommand.Create(context);
         yield return CheckCommand.Create(context);

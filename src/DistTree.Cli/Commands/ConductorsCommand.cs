@@ -14,11 +14,11 @@ internal static class ConductorsCommand
     {
         var material = new Option<string>("--material") { Description = "cu or al", DefaultValueFactory = _ => "cu" };
         material.AcceptOnlyFromAmong("cu", "al");
-        var temperature = new Option<double>("--temperature") { Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
+        var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
         var raceway = new Option<string>("--raceway") { Description = "pvc, aluminum or steel", DefaultValueFactory = _ => "pvc" };
         raceway.AcceptOnlyFromAmong("pvc", "aluminum", "steel");
-        var frequency = new Option<double>("--frequency") { Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
-        var ambient = new Option<double>("--ambient") { Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };
+        var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
+        var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };
         var json = new Option<bool>("--json") { Description = "write the catalogue as JSON to standard output" };
         var command = new Command("conductors", "Print the conductor catalogue: size, area, R, X, ampacities, and the source of each column.\n" +
             "Example: disttree conductors --material al --temperature 90 --raceway steel")

@@ -13,7 +13,8 @@ internal static class ValidateCommand
     public static Command Create(CliContext context)
     {
         var file = new Argument<string>("FILE") { Description = "The project file (YAML, format 1)." };
-        var command = new Command("validate", "Check a project file and report every error with its line and column.");
+        var command = new Command("validate", "Check a project file and report every error with its line and column.\n" +
+            "Example: disttree validate projects/small-office.yaml");
         command.Arguments.Add(file);
         command.SetAction(parsed =>
         {

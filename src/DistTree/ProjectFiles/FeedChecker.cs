@@ -71,6 +71,12 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         var known = byId.Keys.Append(serviceId).ToArray();
         foreach (var draft in project.Equipment)
         {
+            if (bag.IsFull)
+            {
+                // No more errors are reported: spare the hints, each of which looks at every id.
+                break;
+            }
+
             if (draft.From is { } from && draft.Id is { } id && from != serviceId && !byId.ContainsKey(from))
             {
                 var near = Suggestions.Closest(from, known);

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
@@ -21,7 +22,18 @@ public static class ProjectLoader
     /// <exception cref="IOException">The file cannot be read.</exception>
     public static Project Load(string path)
     {
+        var size = new FileInfo(path).Length;
+        if (size > ProjectLimits.MaxFileBytes)
+        {
+            throw TooLarge(path, size, "bytes");
+        }
+
         var bytes = File.ReadAllBytes(path);
+        if (bytes.Length > ProjectLimits.MaxFileBytes)
+        {
+            throw TooLarge(path, bytes.Length, "bytes");
+        }
+
         string text;
         try
         {
@@ -29,7 +41,7 @@ public static class ProjectLoader
         }
         catch (DecoderFallbackException)
         {
-            throw ProjectException.At(new SourceLocation(path, 1, 1), "the file is not UTF-8 text");
+            throw NotUtf8(path, bytes);
         }
 
         if (text.Length > 0 && text[0] == '\uFEFF')
@@ -46,7 +58,15 @@ public static class ProjectLoader
     /// disk, relative to <paramref name="file"/>.
     /// </summary>
     /// <exception cref="ProjectException">The text is not a valid project; carries every error and warning.</exception>
-    public static Project Parse(string text, string file) => Parse(text, file, Encoding.UTF8.GetBytes(text));
+    public static Project Parse(string text, string file)
+    {
+        if (text.Length > ProjectLimits.MaxFileBytes)
+        {
+            throw TooLarge(file, text.Length, "characters");
+        }
+
+        return Parse(text, file, Encoding.UTF8.GetBytes(text));
+    }
 
     private static Project Parse(string text, string file, byte[] bytes)
     {
@@ -158,4 +178,28 @@ public static class ProjectLoader
     // in the order read (the main file, then depth first in list order), so a change to any file changes it.
     private static string Sha256Of(List<byte[]> hashes) =>
         Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
+
+    private static ProjectException TooLarge(string file, long size, string unit) => ProjectException.At(
+        new SourceLocation(file, 1, 1),
+        string.Create(
+            CultureInfo.InvariantCulture,
+            $"the file has {size:N0} {unit}; a project file may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)"));
+
+    /// <summary>The error for bytes that are not UTF-8, located at the first bad byte: its line, and its column counted in characters.</summary>
+    private static ProjectException NotUtf8(string file, byte[] bytes)
+    {
+        var chars = new char[bytes.Length];
+        System.Text.Unicode.Utf8.ToUtf16(bytes, chars, out var offset, out _, replaceInvalidSequences: false);
+        var lineStart = Array.LastIndexOf(bytes, (byte)'\n', Math.Max(offset - 1, 0)) + 1;
+        var line = 1 + bytes.AsSpan(0, lineStart).Count((byte)'\n');
+        var column = 1 + StrictUtf8.GetCharCount(bytes, lineStart, offset - lineStart);
+        var hint = bytes is [0xFF, 0xFE, ..] or [0xFE, 0xFF, ..] ? " (it looks like UTF-16)" : "";
+        return ProjectException.At(
+            new SourceLocation(file, line, column),
+            string.Create(
+                CultureInfo.InvariantCulture,
+                $"the file is not UTF-8 text{hint}: the byte 0x{bytes[offset]:X2} at offset {offset:N0} does not decode; save the file as UTF-8"));
+    }
+
+    private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));
 }

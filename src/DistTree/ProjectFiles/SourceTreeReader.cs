@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Diagnostics;
 using YamlDotNet.Core;
@@ -7,7 +8,9 @@ namespace DistTree.ProjectFiles;
 
 /// <summary>
 /// Reads YAML text into a <see cref="SourceNode"/> tree with YamlDotNet's event parser, keeping every
-/// node's start mark. Iterative (an explicit stack), so deep nesting cannot overflow the call stack.
+/// node's start mark. Iterative (an explicit stack), so deep nesting cannot overflow the call stack; and
+/// nesting deeper than <see cref="ProjectLimits.MaxDepth"/> stops the read, since YamlDotNet's scanner
+/// spends time in proportion to the depth on every token (100,000 nested '[' take it about a minute).
 /// </summary>
 internal static partial class SourceTreeReader
 {
@@ -42,6 +45,9 @@ internal static partial class SourceTreeReader
                     case Scalar scalar:
                         completed = MakeScalar(scalar, file, bag);
                         break;
+                    case SequenceStart or MappingStart when stack.Count >= ProjectLimits.MaxDepth:
+                        bag.Error(At(file, current.Start), $"the YAML nests deeper than {ProjectLimits.MaxDepth} levels here; a project needs at most 6 (see docs/limits.md)");
+                        return null;
                     case SequenceStart sequence:
                         CheckTag(sequence, file, bag);
                         stack.Push(new Frame(new SourceSequence(At(file, sequence.Start))));
@@ -70,6 +76,12 @@ internal static partial class SourceTreeReader
                 stack.Peek().Add(completed, bag);
             }
         }
+        catch (YamlException e) when (e.Message.Contains("tab", StringComparison.Ordinal) && TabIndent(text, file, e.Start) is { } tab)
+        {
+            // YamlDotNet marks where the block began, which may be lines earlier; name the tab itself.
+            bag.Error(tab, "a tab in the indentation; YAML indents with spaces only");
+            return null;
+        }
         catch (YamlException e)
         {
             bag.Error(At(file, e.Start), CleanMessage(e.Message));
@@ -89,10 +101,49 @@ internal static partial class SourceTreeReader
     public static SourceLocation At(string file, Mark mark) =>
         new(file, (int)Math.Min(mark.Line, int.MaxValue), (int)Math.Min(mark.Column, int.MaxValue));
 
+    /// <summary>The first tab in the leading white space of a line, from the line of <paramref name="from"/> on.</summary>
+    private static SourceLocation? TabIndent(string text, string file, Mark from)
+    {
+        var line = 1;
+        var start = 0;
+        while (start <= text.Length)
+        {
+            var end = text.IndexOf('\n', start);
+            if (end < 0)
+            {
+                end = text.Length;
+            }
+
+            if (line >= from.Line)
+            {
+                for (var i = start; i < end && text[i] is ' ' or '\t'; i++)
+                {
+                    if (text[i] == '\t')
+                    {
+                        return new SourceLocation(file, line, i - start + 1);
+                    }
+                }
+            }
+
+            line++;
+            start = end + 1;
+        }
+
+        return null;
+    }
+
     private static SourceScalar MakeScalar(Scalar scalar, string file, DiagnosticBag bag)
     {
         var location = At(file, scalar.Start);
         var plain = scalar.Style == ScalarStyle.Plain;
+        if (scalar.Value.Length > ProjectLimits.MaxScalarLength)
+        {
+            bag.Error(location, string.Create(
+                CultureInfo.InvariantCulture,
+                $"a value of {scalar.Value.Length:N0} characters; a value may have at most {ProjectLimits.MaxScalarLength:N0} (see docs/limits.md)"));
+            return new SourceScalar(location, scalar.Value[..16] + "...", plain) { IsInvalid = true };
+        }
+
         if (!scalar.Tag.IsEmpty)
         {
             if (scalar.Tag.Value == StringTag || scalar.Tag.IsNonSpecific)

@@ -11,6 +11,13 @@ internal static class Suggestions
         var bestDistance = int.MaxValue;
         foreach (var candidate in candidates)
         {
+            // The distance is at least the difference in length: a candidate more than two letters longer
+            // or shorter cannot be near enough, so its (quadratic) distance is never computed.
+            if (Math.Abs(candidate.Length - lower.Length) > 2)
+            {
+                continue;
+            }
+
             var distance = Distance(lower, candidate.ToLowerInvariant());
             if (distance < bestDistance)
             {
@@ -19,20 +26,14 @@ internal static class Suggestions
             }
         }
 
-        if (best is null)
-        {
-            return null;
-        }
-
         // A typo is at most two edits, and fewer than half the word (so 'cu' does not suggest 'al').
-        var nearEnough = bestDistance <= 2 && bestDistance * 2 < Math.Max(best.Length, lower.Length);
-        if (nearEnough)
+        if (best is not null && bestDistance <= 2 && bestDistance * 2 < Math.Max(best.Length, lower.Length))
         {
             return best;
         }
 
         // A shortened word ('panel' for 'panelboard') when only one candidate starts with it.
-        var prefixed = candidates.Where(c => lower.Length >= 3 && c.StartsWith(lower, StringComparison.OrdinalIgnoreCase)).ToArray();
+        var prefixed = candidates.Where(c => lower.Length >= 3 && c.StartsWith(lower, StringComparison.OrdinalIgnoreCase)).Take(2).ToArray();
         return prefixed.Length == 1 ? prefixed[0] : null;
     }
 

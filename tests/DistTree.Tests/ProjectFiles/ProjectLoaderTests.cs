@@ -243,14 +243,16 @@ public sealed class ProjectLoaderTests
     }
 
     [Fact]
-    public void Load_NotUtf8_ReportsAtLineOne()
+    public void Load_NotUtf8_ReportsAtTheFirstBadByte()
     {
         var path = Path.Combine(Path.GetTempPath(), $"disttree-{Guid.NewGuid():N}.yaml");
         File.WriteAllBytes(path, [0x64, 0xff, 0xfe, 0x0a]);
         try
         {
             var error = Assert.Throws<ProjectException>(() => ProjectLoader.Load(path));
-            Assert.Equal($"{path}:1:1: error: the file is not UTF-8 text", Assert.Single(error.Diagnostics).ToString());
+            Assert.Equal(
+                $"{path}:1:2: error: the file is not UTF-8 text: the byte 0xFF at offset 1 does not decode; save the file as UTF-8",
+                Assert.Single(error.Diagnostics).ToString());
         }
         finally
         {

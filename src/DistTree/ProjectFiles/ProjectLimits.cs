@@ -1,0 +1,26 @@
+namespace DistTree.ProjectFiles;
+
+/// <summary>
+/// The bounds within which the loader reads any input, however hostile, in bounded time and memory
+/// (docs/limits.md). Input beyond a bound is a located error, never a hang or a crash.
+/// </summary>
+public static class ProjectLimits
+{
+    /// <summary>The largest project file read, in bytes (64 MiB); a larger file is refused before it is read.</summary>
+    public const long MaxFileBytes = 64L * 1024 * 1024;
+
+    /// <summary>
+    /// The deepest nesting of YAML mappings and sequences (64 levels). A project needs six
+    /// (file, equipment, item, circuits, circuit, run); deeper input stops the read with an error.
+    /// </summary>
+    public const int MaxDepth = 64;
+
+    /// <summary>The longest scalar (a name, an id, a number), in characters (65,536).</summary>
+    public const int MaxScalarLength = 65_536;
+
+    /// <summary>
+    /// How many errors, and separately how many warnings, are reported (200 each); the rest are counted
+    /// in one closing diagnostic.
+    /// </summary>
+    public const int MaxDiagnostics = 200;
+}
