@@ -17,6 +17,12 @@ public sealed record Circuit
     /// <summary>1 (line-neutral), 2 (line-line) or 3 (three-phase).</summary>
     public required int Poles { get; init; }
 
+    /// <summary>The lines the circuit is on, or null to let the solver assign them to balance its panel.</summary>
+    public Phases? Phases { get; init; }
+
+    /// <summary>Where <see cref="Phases"/> comes from (stated or numbered; balanced when the solver assigns them).</summary>
+    public PhaseSource PhaseSource { get; init; } = PhaseSource.Balanced;
+
     /// <summary>The supply the panel's system gives a circuit of this many poles.</summary>
     public required CircuitSupply Supply { get; init; }
 

@@ -78,6 +78,10 @@ internal sealed class CircuitDraft(SourceLocation location)
 
     public SourceLocation PolesLocation { get; set; } = location;
 
+    public Phases? StatedPhases { get; set; }
+
+    public SourceLocation PhaseLocation { get; set; } = location;
+
     public Load? Load { get; set; }
 
     /// <summary>Loads along the run, when given instead of a load at the end.</summary>

@@ -148,6 +148,12 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
         foreach (var circuit in draft.Circuits)
         {
+            if (circuit.Poles is { } p && panelSystem.CircuitFor(p) is not null && circuit.StatedPhases is { } phases && !PhaseRules.Fits(phases, p, PhaseRules.Lines(panelSystem)))
+            {
+                var lines = PhaseRules.Lines(panelSystem) switch { 3 => "A, B and C", 2 => "A and B", _ => "one line, A" };
+                bag.Error(circuit.PhaseLocation, $"circuit '{draft.Id}/{circuit.Id}' has {p} pole{(p == 1 ? "" : "s")} and cannot be on {PhaseRules.Text(phases)}; '{draft.Id}' is on {panelSystem.Name}, with {lines}");
+            }
+
             if (circuit.Poles is not { } poles || panelSystem.CircuitFor(poles) is not null)
             {
                 continue;

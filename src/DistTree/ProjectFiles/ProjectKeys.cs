@@ -33,7 +33,7 @@ internal static class ProjectKeys
     public static readonly string[] Run =
         ["length", "size", "sets", "material", "insulation_c", "raceway", "ocpd", "limit_percent", "fixed"];
 
-    public static readonly string[] Circuit = ["id", "name", "poles", "ocpd", "load", "points", "continuous", "run"];
+    public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "load", "points", "continuous", "run"];
 
     public static readonly string[] Point = ["at", "load"];
 

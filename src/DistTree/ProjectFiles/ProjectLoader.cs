@@ -118,6 +118,9 @@ public static class ProjectLoader
                 Supply = output.CircuitFor(c.Poles.Value)!.Value,
                 Load = c.Load ?? Combined(c.Points, output.CircuitFor(c.Poles.Value)!.Value),
                 Points = c.Points,
+                Phases = c.StatedPhases ?? PhaseRules.FromNumber(c.Id!, c.Poles.Value, PhaseRules.Lines(output)),
+                PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated
+                    : PhaseRules.FromNumber(c.Id!, c.Poles.Value, PhaseRules.Lines(output)) is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
                 Continuous = c.Continuous,
                 Run = c.Run!,
                 Location = c.Location,

@@ -584,6 +584,16 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             draft.PolesLocation = polesNode.Location;
         }
 
+        if (m.Optional("phase") is { } phaseNode && _values.Text(phaseNode, $"'phase' of {full}") is { } phaseText)
+        {
+            draft.StatedPhases = PhaseRules.Parse(phaseText);
+            draft.PhaseLocation = phaseNode.Location;
+            if (draft.StatedPhases is null)
+            {
+                bag.Error(phaseNode.Location, $"'{phaseText}' is not a phase; expected A, B, C, AB, BC, CA or ABC");
+            }
+        }
+
         var ocpd = m.Optional("ocpd") is { } ocpdNode ? _values.Positive(ocpdNode, $"'ocpd' of {full}") : null;
         if (m.Optional("continuous") is { } continuousNode)
         {

@@ -17,6 +17,15 @@ internal static class FrontierSolver
         var b = problem.BudgetSteps;
         var bus = new double[]?[n];
         var choices = new short[]?[n];
+
+        // A subtree with no end point left in the budget puts no limit on the drops above it.
+        var constrained = new bool[n];
+        for (var i = n - 1; i > 0; i--)
+        {
+            constrained[i] |= nodes[i].Circuit is not null && !problem.Excluded[i];
+            constrained[nodes[i].ParentIndex] |= constrained[i];
+        }
+
         for (var i = n - 1; i >= 0; i--)
         {
             var node = nodes[i];
@@ -34,8 +43,10 @@ internal static class FrontierSolver
                 return (ReadBack(problem, choices), own[b]);
             }
 
-            var atInput = Transform(problem, i, own);
-            var h = problem.Options[i] is { } options ? BestChoice(atInput, options, out choices[i]) : atInput;
+            var atInput = constrained[i] ? Transform(problem, i, own) : own;
+            var h = problem.Options[i] is { } options
+                ? (constrained[i] ? BestChoice(atInput, options, out choices[i]) : Cheapest(atInput, options, out choices[i]))
+                : atInput;
             var target = ParentBus(bus, parent, b);
             for (var k = 0; k <= b; k++)
             {
@@ -95,6 +106,26 @@ internal static class FrontierSolver
         }
 
         return shifted;
+    }
+
+    // No budget below: the cheapest choice, whatever its drop, at every budget.
+    private static double[] Cheapest(double[] below, RunOption[] options, out short[] choice)
+    {
+        short pick = 0;
+        for (short j = 1; j < options.Length; j++)
+        {
+            if (options[j].Cost < options[pick].Cost)
+            {
+                pick = j;
+            }
+        }
+
+        var h = new double[below.Length];
+        var rest = below[^1];
+        Array.Fill(h, options[pick].Cost + rest);
+        choice = new short[below.Length];
+        Array.Fill(choice, pick);
+        return h;
     }
 
     private static double[] BestChoice(double[] below, RunOption[] options, out short[] choice)

@@ -159,9 +159,13 @@ internal sealed class SizingProblem
                     continue;
                 }
 
+                // The drop is linear in R and X (per phase too): the run's unit responses price any size. A branch
+                // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, run.Supply, project.Service.FrequencyHz, row.CurrentA, cos, sin);
-                var meets = figures.DropPercent <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
-                yield return new RunOption(s, sets, figures.DropPercent, Steps(figures.DropPercent, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
+                var ratio = (double)conductors.Sets / sets;
+                var drop = DropSolver.OwnDrop(row.UnitDropsR, row.UnitDropsX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines);
+                var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
+                yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }
         }
     }

@@ -34,9 +34,11 @@ public sealed class DropSolver
         var power = new ComplexPower[n];
         var continuous = new ComplexPower[n];
         AccumulatePower(nodes, power, continuous);
+        var phases = new PhaseFlow(network, power);
 
         // Runs in network order, each transformer's row after its primary feeder's.
         var runs = new List<RunResult>(n + 8);
+        var lineDrops = new List<double[]>(n + 8);
         var incomingRow = new int[n];
         var transformerRow = new int[n];
         Array.Fill(incomingRow, -1);
@@ -47,13 +49,17 @@ public sealed class DropSolver
             if (node.Incoming is { } run)
             {
                 incomingRow[i] = runs.Count;
-                runs.Add(SolveRun(run, power, continuous[i], rules, frequency));
+                var (row, drops) = SolveRun(run, power, continuous[i], rules, frequency, phases);
+                runs.Add(row);
+                lineDrops.Add(drops);
             }
 
             if (node.Equipment?.Transformer is { } transformer)
             {
                 transformerRow[i] = runs.Count;
-                runs.Add(SolveTransformer(node, transformer, power[i], rules));
+                var (row, drops) = SolveTransformer(node, transformer, power[i], rules, phases);
+                runs.Add(row);
+                lineDrops.Add(drops);
             }
         }
 
@@ -67,7 +73,7 @@ public sealed class DropSolver
             }
         }
 
-        var endPoints = SolveEndPoints(network, runs, incomingRow, transformerRow, power, flow, rules);
+        var endPoints = SolveEndPoints(network, runs, lineDrops, incomingRow, transformerRow, power, flow, phases, rules);
         AddReach(network, runs, incomingRow, endPoints, rules);
         var findings = runs.Sum(r => r.Findings.Count) + endPoints.Sum(e => e.Findings.Count);
         var worst = endPoints.Count == 0 ? null : endPoints.OrderByDescending(e => e.TotalDropPercent).ThenBy(e => e.Id, StringComparer.Ordinal).First();
@@ -117,26 +123,44 @@ public sealed class DropSolver
         }
     }
 
-    private RunResult SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz)
+    // A run's figures, and the drop in percent that each kind of circuit below sees on it (see LineDrops).
+    private (RunResult Row, double[] LineDrops) SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
-        var carried = power[run.Target.Index];
-        var connectedA = LoadPower.CurrentA(carried.VoltAmperes, supply);
+        var index = run.Target.Index;
+        var carried = power[index];
+        var lineA = phases.MaxLineCurrentA(index);
         var points = run.Target.Circuit?.Points ?? [];
-        var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(connectedA, conductors.OcpdA, rules.BranchCurrent) : connectedA;
+        var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(lineA, conductors.OcpdA, rules.BranchCurrent) : lineA;
 
         // Design current: 125 % of the continuous part plus the rest, as a phasor sum: S + 0.25·S_continuous.
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
+        var system = run.Source.System;
+        double[] unitR, unitX;
         if (points.Count > 0)
         {
-            figures = figures with { DropV = SpanDropV(points, supply, conductors, figures), };
-            figures = figures with { DropPercent = figures.DropV / supply.VoltageV * 100.0 };
+            unitR = Uniform(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
+            unitX = Uniform(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
+        }
+        else
+        {
+            var km = conductors.LengthM / 1000.0 / conductors.Sets;
+            var scale = lineA > 0 ? currentA / lineA : 1.0;
+            Span<Complex> deltaV = stackalloc Complex[3];
+            phases.RunDeltaV(index, new Complex(km, 0), system.HasNeutral, scale, deltaV);
+            unitR = LineDrops(deltaV, system);
+            phases.RunDeltaV(index, new Complex(0, km), system.HasNeutral, scale, deltaV);
+            unitX = LineDrops(deltaV, system);
         }
 
-        return new RunResult
+        var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
+        var ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
+        figures = figures with { DropPercent = ownDrop, DropV = ownDrop / 100.0 * supply.VoltageV };
+
+        var row = new RunResult
         {
             Id = run.Id,
             Kind = run.Kind == RunKind.Branch ? RunResultKind.Branch : RunResultKind.Feeder,
@@ -164,13 +188,55 @@ public sealed class DropSolver
             DropPercent = figures.DropPercent,
             PercentSumDropPercent = figures.DropPercent,
             LimitPercent = run.LimitPercent,
+            NeutralCurrentA = system.HasNeutral ? phases.NeutralCurrentA(index) : null,
+            Lines = run.Kind == RunKind.Branch ? PhaseRules.Text(phases.Assigned[index]) : null,
+            UnitDropsR = unitR,
+            UnitDropsX = unitX,
+            OwnLines = ownLines,
             Location = conductors.Location,
         };
+        return (row, Enumerable.Range(0, 8).Select(set => (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set])).ToArray());
+    }
+
+    /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
+    internal static double OwnDrop(double[] unitR, double[] unitX, double r, double x, int ownLines)
+    {
+        if (ownLines > 0)
+        {
+            return (r * unitR[ownLines]) + (x * unitX[ownLines]);
+        }
+
+        var worst = double.NegativeInfinity;
+        for (var set = 1; set < 8; set++)
+        {
+            worst = Math.Max(worst, (r * unitR[set]) + (x * unitX[set]));
+        }
+
+        return worst;
+    }
+
+    // The drop a circuit below sees on this run, by the lines it is on: index (int)Phases (1 = A … 7 = ABC).
+    private static double[] LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system)
+    {
+        var drops = new double[8];
+        for (var set = 1; set < 8; set++)
+        {
+            drops[set] = PhaseFlow.DropPercent(deltaV, (Phases)set, system);
+        }
+
+        return drops;
+    }
+
+    private static double[] Uniform(double dropPercent)
+    {
+        var drops = new double[8];
+        Array.Fill(drops, dropPercent);
+        return drops;
     }
 
     // Loads along a run: span by span, each span carrying the phasor sum of the loads beyond it, at the
     // resistance and reactance of the whole run (temperature from the head current, the safe side).
-    private static double SpanDropV(IReadOnlyList<LoadPoint> points, CircuitSupply supply, Run conductors, RunFigures figures)
+    private static double SpanDropV(IReadOnlyList<LoadPoint> points, CircuitSupply supply, Run conductors, double resistanceOhmPerKm, double reactanceOhmPerKm)
     {
         var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
         var beyond = new ComplexPower[points.Count];
@@ -187,7 +253,7 @@ public sealed class DropSolver
         {
             var spanKm = (points[j].AtM - from) / 1000.0;
             var currentA = LoadPower.CurrentA(beyond[j].VoltAmperes, supply);
-            dropV += k * currentA * spanKm * ((figures.ResistanceOhmPerKm * beyond[j].PowerFactor) + (figures.ReactanceOhmPerKm * beyond[j].SinTheta)) / conductors.Sets;
+            dropV += k * currentA * spanKm * ((resistanceOhmPerKm * beyond[j].PowerFactor) + (reactanceOhmPerKm * beyond[j].SinTheta)) / conductors.Sets;
             from = points[j].AtM;
         }
 
@@ -318,12 +384,22 @@ public sealed class DropSolver
     }
 
     // Regulation ≈ (%R·cos θ + %X·sin θ)·(S/S_rated) − tap, %R = %Z/√(1 + (X/R)²), %X = %R·X/R (common practice).
-    private static RunResult SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules)
+    // Per secondary line: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap; balanced, the same as the three-phase formula.
+    private static (RunResult Row, double[] LineDrops) SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases)
     {
         var supply = data.Secondary.FeederSupply;
         var (percentR, percentX) = PercentRx(data);
         var loading = carried.VoltAmperes / (data.Kva * 1000.0);
-        var dropPercent = (((percentR * carried.PowerFactor) + (percentX * carried.SinTheta)) * loading) - data.TapPercent;
+        var perLine = new double[3];
+        phases.TransformerRegulation(node.Index, data, percentR, percentX, perLine);
+        var drops = new double[8];
+        for (var set = 1; set < 8; set++)
+        {
+            var on = PhaseFlow.LinesOf((Phases)set, PhaseRules.Lines(data.Secondary));
+            drops[set] = on.Count == 0 ? perLine[0] : (on.Count == 2 ? (perLine[on[0]] + perLine[on[1]]) / 2 : on.Max(x => perLine[x]));
+        }
+
+        var dropPercent = drops[(int)Phases.ABC];
         var ratedA = LoadPower.CurrentA(data.Kva * 1000.0, supply);
         var currentA = LoadPower.CurrentA(carried.VoltAmperes, supply);
         var findings = new List<Finding>();
@@ -338,7 +414,7 @@ public sealed class DropSolver
                 node.Equipment!.Location));
         }
 
-        return new RunResult
+        var row = new RunResult
         {
             Id = node.Id,
             Kind = RunResultKind.Transformer,
@@ -360,6 +436,7 @@ public sealed class DropSolver
             Findings = findings,
             Location = node.Equipment!.Location,
         };
+        return (row, drops);
     }
 
     private static (double PercentR, double PercentX) PercentRx(TransformerData data)
@@ -369,7 +446,8 @@ public sealed class DropSolver
     }
 
     private static List<EndPointResult> SolveEndPoints(
-        DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, ComplexPower[] power, LoadFlowResult flow, Rules rules)
+        DistributionNetwork network, List<RunResult> runs, List<double[]> lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
+        LoadFlowResult flow, PhaseFlow phases, Rules rules)
     {
         var nodes = network.Nodes;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
@@ -406,14 +484,27 @@ public sealed class DropSolver
             }
 
             path.Reverse();
-            counted.Reverse();
-            double total = 0, percentSum = 0, loadFlow = 0;
-            foreach (var r in counted)
+            double percentSum = 0, loadFlow = 0;
+
+            // Walking up from the end point: its own lines, until a transformer between systems of different
+            // line counts, above which the worst line counts (the safe side).
+            var set = (int)phases.Assigned[node.Index];
+            var shares = new double[counted.Count];
+            for (var k = 0; k < counted.Count; k++)
             {
-                total += runs[r].DropPercent;
-                percentSum += runs[r].PercentSumDropPercent;
+                var r = counted[k];
+                shares[counted.Count - 1 - k] = rules.Method == SolutionMethod.LoadFlow && flow.Converged ? runs[r].LoadFlowDropPercent!.Value : lineDrops[r][set];
+                percentSum += lineDrops[r][set];
                 loadFlow += runs[r].LoadFlowDropPercent ?? 0;
+                if (runs[r].Kind == RunResultKind.Transformer && nodes[runs[r].NodeIndex].Equipment is { Transformer: { } t } e
+                    && PhaseRules.Lines(t.Secondary) != PhaseRules.Lines(e.System))
+                {
+                    set = (int)Phases.ABC;
+                }
             }
+
+            counted.Reverse();
+            var total = rules.Method == SolutionMethod.LoadFlow && flow.Converged ? loadFlow : percentSum;
 
             var limit = rules.TotalLimitPercent;
             var findings = new List<Finding>(1);
@@ -448,6 +539,7 @@ public sealed class DropSolver
                 NodeIndex = node.Index,
                 Path = path.ToArray(),
                 RunIndices = counted.ToArray(),
+                RunSharesPercent = shares,
                 VoltageV = circuit.Supply.VoltageV,
                 TotalDropPercent = total,
                 PercentSumTotalDropPercent = percentSum,

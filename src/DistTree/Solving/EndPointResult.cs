@@ -21,6 +21,9 @@ public sealed record EndPointResult
     /// <summary>Indices into <see cref="Solution.Runs"/> of the runs along the path that count in the total, service side first.</summary>
     public required IReadOnlyList<int> RunIndices { get; init; }
 
+    /// <summary>Each counted run's share of <see cref="TotalDropPercent"/>, percent, aligned with <see cref="RunIndices"/>: the drop on the end point's own lines.</summary>
+    public required IReadOnlyList<double> RunSharesPercent { get; init; }
+
     /// <summary>The circuit's nominal voltage in volts.</summary>
     public required double VoltageV { get; init; }
 

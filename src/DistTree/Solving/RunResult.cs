@@ -48,6 +48,12 @@ public sealed record RunResult
     /// <summary>Design current in amperes for the ampacity check (125 % of continuous load plus the rest).</summary>
     public required double DesignCurrentA { get; init; }
 
+    /// <summary>Neutral current in amperes (Ia + Ib + Ic), or null on a system without a neutral or for a transformer.</summary>
+    public double? NeutralCurrentA { get; init; }
+
+    /// <summary>A branch circuit's lines (<c>A</c>, <c>BC</c>, <c>ABC</c> …), or null for feeders and transformers.</summary>
+    public string? Lines { get; init; }
+
     /// <summary>Power factor of the power carried.</summary>
     public required double PowerFactor { get; init; }
 
@@ -110,6 +116,22 @@ public sealed record RunResult
 
     /// <summary>The limits this run exceeds.</summary>
     public IReadOnlyList<Finding> Findings { get; init; } = [];
+
+    /// <summary>
+    /// Per set of lines ((int)Phases, 1 = A … 7 = ABC), the drop in percent that a circuit on those lines sees
+    /// on this run per ohm/km of resistance and per ohm/km of reactance, at the run's present length and sets:
+    /// the drop is linear in R and X, so the sizer can price any size without solving the tree again.
+    /// </summary>
+    internal double[] UnitDropsR { get; init; } = new double[8];
+
+    /// <summary>See <see cref="UnitDropsR"/>, per ohm/km of reactance.</summary>
+    internal double[] UnitDropsX { get; init; } = new double[8];
+
+    /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
+    internal int OwnLines { get; init; }
+
+    /// <summary>The drop on each set of lines at the run's size: R·UnitDropsR + X·UnitDropsX.</summary>
+    internal double LineDrop(int set) => (ResistanceOhmPerKm!.Value * UnitDropsR[set]) + (ReactanceOhmPerKm!.Value * UnitDropsX[set]);
 
     /// <summary>Where the run is in the project file.</summary>
     public SourceLocation Location { get; init; } = SourceLocation.None;

