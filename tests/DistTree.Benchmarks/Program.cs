@@ -142,11 +142,12 @@ try
     }
 
     Summarise(results, solveRunsPerSecond, savings, htmlBytes);
-    Console.WriteLine($"Load average at end (1, 5, 15 min): {LoadAverage()}");
     if (Wanted("analyze") && sizes.Contains(100_000))
     {
         AnalyzeInFreshProcess(Path.Combine(folder.FullName, "campus-100000.yaml"));
     }
+
+    Console.WriteLine($"Load average at end (1, 5, 15 min): {LoadAverage()}");
 }
 finally
 {
@@ -290,13 +291,16 @@ static void AnalyzeInFreshProcess(string path)
         };
         var clock = Stopwatch.StartNew();
         using var process = Process.Start(start)!;
-        process.StandardOutput.ReadToEnd();
-        process.StandardError.ReadToEnd();
+        // Read the output without blocking, so that the peak is sampled while the process runs.
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        var stderr = process.StandardError.ReadToEndAsync();
         long processPeak = 0;
         while (!process.WaitForExit(20))
         {
             processPeak = Math.Max(processPeak, PeakOf(process));
         }
+
+        Task.WaitAll(stdout, stderr);
 
         times.Add(clock.Elapsed.TotalSeconds);
         peak = Math.Max(peak, processPeak);
@@ -304,7 +308,7 @@ static void AnalyzeInFreshProcess(string path)
 
     times.Sort();
     Console.WriteLine($"  analyze 100,000 end points, file to JSON, fresh process: median {times[1]:0.00} s (spread {times[0]:0.00} .. {times[2]:0.00})  target < 3 s  {Verdict(times[1] < 3)}");
-    Console.WriteLine($"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {Verdict(peak < 1L << 30)}");
+    Console.WriteLine($"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {(peak == 0 ? "not measured" : Verdict(peak < 1L << 30))}");
 }
 
 // The high-water mark of a running process: VmHWM in /proc/PID/status on Linux, else PeakWorkingSet64.
