@@ -16,10 +16,14 @@ internal sealed record Measurement(string Name, int Size, IReadOnlyList<double> 
 
     private List<double> Sorted => [.. Seconds.Order()];
 
-    /// <summary>Runs <paramref name="work"/> once to warm up, then <paramref name="repeats"/> times, timing each.</summary>
-    public static Measurement Of(string name, int size, int repeats, Action work)
+    /// <summary>Runs <paramref name="work"/> once to warm up (unless <paramref name="warmUp"/> is false), then <paramref name="repeats"/> times, timing each.</summary>
+    public static Measurement Of(string name, int size, int repeats, Action work, bool warmUp = true)
     {
-        work();
+        if (warmUp)
+        {
+            work();
+        }
+
         var times = new List<double>(repeats);
         var cpu = new List<double>(repeats);
         using var self = Process.GetCurrentProcess();

@@ -2,20 +2,24 @@ using System.Diagnostics;
 using System.Runtime;
 using DistTree.Benchmarks;
 using DistTree.Cli;
+using DistTree.Comparing;
+using DistTree.Conductors;
 using DistTree.Generating;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Reports;
+using DistTree.Sizing;
 using DistTree.Solving;
 
 // DistTree benchmarks: a plain harness (not BenchmarkDotNet) that prints the median and spread of repeated runs.
 // Run: dotnet run -c Release --project tests/DistTree.Benchmarks -- [filters]
-// Filters select stages (generate parse validate build solve json analyze) and sizes (1000 10000 100000);
+// Filters select stages (generate yaml parse validate build solve json analyze upsize compare html) and sizes
+// (1000 10000 100000);
 // none selects everything.
 var filters = args.Select(a => a.ToLowerInvariant()).ToHashSet();
 int[] allSizes = [1_000, 10_000, 100_000];
-string[] allStages = ["generate", "yaml", "parse", "validate", "build", "solve", "json", "analyze"];
+string[] allStages = ["generate", "yaml", "parse", "validate", "build", "solve", "json", "analyze", "upsize", "compare", "html"];
 var sizes = allSizes.Where(s => filters.Contains(s.ToString(System.Globalization.CultureInfo.InvariantCulture))).DefaultIfEmpty().ToArray();
 sizes = sizes is [0] ? allSizes : sizes;
 var stages = allStages.Where(filters.Contains).ToArray();
@@ -24,12 +28,14 @@ bool Wanted(string stage) => stages.Contains(stage);
 
 Console.WriteLine($"DistTree benchmarks: .NET {Environment.Version}, {Environment.ProcessorCount} cores, {(GCSettings.IsServerGC ? "server" : "workstation")} GC");
 Console.WriteLine("Generated campus projects (disttree generate, seed 7, depth 3); figures are wall-clock seconds.");
-Console.WriteLine("Stages not on this branch yet (HTML report, compare, upsize) are left out.");
+Console.WriteLine($"Load average at start (1, 5, 15 min): {LoadAverage()}");
 Console.WriteLine();
 
 var folder = Directory.CreateTempSubdirectory("disttree-bench-");
 var results = new List<Measurement>();
 var solveRunsPerSecond = new Dictionary<int, double>();
+var savings = new List<Saving>();
+var htmlBytes = new Dictionary<string, long>();
 try
 {
     foreach (var size in sizes)
@@ -66,8 +72,9 @@ try
 
         network ??= NetworkBuilder.Build(project);
         Solution solution = null!;
-        if (Wanted("solve"))
+        if (Wanted("solve") || Wanted("upsize"))
         {
+            // Upsize is read beside solve (same run, same load), so solve is timed whenever upsize is.
             var m = Measurement.Of("solve", size, repeats, () => solution = DropSolver.Standard.Solve(network));
             results.Add(m);
             solveRunsPerSecond[size] = solution.Runs.Count / m.Median;
@@ -85,6 +92,40 @@ try
             results.Add(Measurement.Of("analyze", size, repeats, () => Cli(["analyze", path, "--json", output])));
         }
 
+        if (Wanted("upsize"))
+        {
+            // 100k: measured once, without a warm-up run (the smaller sizes have warmed the code up when run).
+            UpsizePlan plan = null!;
+            var big = size >= 100_000;
+            results.Add(Measurement.Of("upsize", size, big ? 1 : repeats, () => plan = Upsizer.Standard.Plan(solution), warmUp: !big));
+            savings.Add(SavingOf($"generated {size:N0} end points", solution, plan));
+            if (!big)
+            {
+                // Not timed: the same building with every feeder three times as long, where feeders and branch circuits compete.
+                var stressed = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(RevisionEdit.Stress(text), path)));
+                savings.Add(SavingOf($"  same, feeders 3 × as long", stressed, Upsizer.Standard.Plan(stressed)));
+            }
+        }
+
+        if (Wanted("compare"))
+        {
+            var (revised, lengthened) = RevisionEdit.Revise(text);
+            var pathB = Path.Combine(folder.FullName, $"campus-{size}-rev-b.yaml");
+            var solutionB = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(revised, pathB)));
+            Comparison comparison = null!;
+            results.Add(Measurement.Of("compare", size, repeats, () => comparison = RevisionComparer.Compare(solution, solutionB)));
+            var c = comparison.Summary;
+            Console.WriteLine($"compare revision B: {lengthened:N0} feeders 10 % longer, sub-panel {RevisionEdit.SubPanelId} with {RevisionEdit.SubPanelCircuits} circuits added; " +
+                $"found {c.EquipmentAdded} equipment and {c.CircuitsAdded} circuits added, {c.EquipmentChanged} equipment changed, {c.EndPointsAffected:N0} of {c.EndPointsCompared:N0} end points affected, {c.EndPointsNewlyFailing} newly failing");
+        }
+
+        if (Wanted("html"))
+        {
+            var html = "";
+            results.Add(Measurement.Of("html", size, repeats, () => html = HtmlReport.Render(solution, new HtmlReportOptions())));
+            htmlBytes[$"{size:N0} end points"] = System.Text.Encoding.UTF8.GetByteCount(html);
+        }
+
         foreach (var m in results.Where(r => r.Size == size))
         {
             Console.WriteLine(m);
@@ -95,11 +136,18 @@ try
         Console.WriteLine();
     }
 
-    Summarise(results, solveRunsPerSecond);
+    if (Wanted("html") || Wanted("upsize"))
+    {
+        Demo(results, savings, htmlBytes);
+    }
+
+    Summarise(results, solveRunsPerSecond, savings, htmlBytes);
     if (Wanted("analyze") && sizes.Contains(100_000))
     {
         AnalyzeInFreshProcess(Path.Combine(folder.FullName, "campus-100000.yaml"));
     }
+
+    Console.WriteLine($"Load average at end (1, 5, 15 min): {LoadAverage()}");
 }
 finally
 {
@@ -115,7 +163,52 @@ static void Cli(string[] args)
     }
 }
 
-static void Summarise(List<Measurement> results, Dictionary<int, double> runsPerSecond)
+// The demo project: its HTML report and its upsize plan against the greedy fix.
+void Demo(List<Measurement> results, List<Saving> savings, Dictionary<string, long> htmlBytes)
+{
+    var demo = Path.Combine(RepositoryRoot(), "projects", "quillfeather-medical.yaml");
+    var solution = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Load(demo)));
+    var endPoints = solution.EndPoints.Count;
+    if (Wanted("html"))
+    {
+        var html = "";
+        var m = Measurement.Of("html-demo", endPoints, 11, () => html = HtmlReport.Render(solution, new HtmlReportOptions()));
+        results.Add(m);
+        htmlBytes["demo quillfeather-medical.yaml"] = System.Text.Encoding.UTF8.GetByteCount(html);
+        Console.WriteLine(m);
+    }
+
+    if (Wanted("upsize"))
+    {
+        UpsizePlan plan = null!;
+        var m = Measurement.Of("upsize-demo", endPoints, 11, () => plan = Upsizer.Standard.Plan(solution));
+        results.Add(m);
+        Console.WriteLine(m);
+        savings.Insert(0, SavingOf("demo quillfeather-medical.yaml", solution, plan));
+    }
+
+    Console.WriteLine();
+}
+
+static Saving SavingOf(string label, Solution solution, UpsizePlan plan) =>
+    new(label, GreedyBaseline.CostAdded(solution, ConductorCatalog.Standard), plan.TotalCostAdded, plan.CostUnit, plan.Changes.Count, plan.Unresolvable.Count);
+
+static string RepositoryRoot()
+{
+    for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+    {
+        if (File.Exists(Path.Combine(dir.FullName, "DistTree.sln")))
+        {
+            return dir.FullName;
+        }
+    }
+
+    throw new InvalidOperationException("DistTree.sln not found above the harness");
+}
+
+static string LoadAverage() => File.Exists("/proc/loadavg") ? File.ReadAllText("/proc/loadavg").Trim() : "not available";
+
+static void Summarise(List<Measurement> results, Dictionary<int, double> runsPerSecond, List<Saving> savings, Dictionary<string, long> htmlBytes)
 {
     Measurement? Find(string name, int size) => results.FirstOrDefault(r => r.Name == name && r.Size == size);
     Console.WriteLine("Targets (issue 9):");
@@ -137,6 +230,49 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
             Console.WriteLine($"  solve time / parse time at {size,7:N0} {solve.Median / parse.Median,8:0.000}");
         }
     }
+
+    Console.WriteLine();
+    Console.WriteLine("Targets (issues 5, 6, 7):");
+    foreach (var size in results.Select(r => r.Size).Distinct().Order())
+    {
+        if (Find("upsize", size) is { } upsize && Find("solve", size) is { } solve)
+        {
+            var target = size == 10_000 ? $"  target < 1 s  {Verdict(upsize.Median < 1)}" : "";
+            var once = upsize.Seconds.Count == 1 ? " (measured once)" : "";
+            Console.WriteLine($"  upsize {size,7:N0}: {Measurement.Format(upsize.Median),9}{once}, solve {Measurement.Format(solve.Median),9}, upsize / solve {upsize.Median / solve.Median,7:0.0}{target}");
+        }
+    }
+
+    if (Find("compare", 100_000) is { } compare)
+    {
+        Console.WriteLine($"  compare two 100,000-end-point revisions {Measurement.Format(compare.Median),9}  target < 3 s  {Verdict(compare.Median < 3)}");
+    }
+
+    if (Find("html", 100_000) is { } html)
+    {
+        Console.WriteLine($"  HTML of 100,000 end points              {Measurement.Format(html.Median),9}  {htmlBytes["100,000 end points"],12:N0} bytes  target < 10 s  {Verdict(html.Median < 10)}");
+    }
+
+    if (results.FirstOrDefault(r => r.Name == "html-demo") is { } demo)
+    {
+        Console.WriteLine($"  HTML of the demo (quillfeather-medical)  {Measurement.Format(demo.Median),9}  {htmlBytes["demo quillfeather-medical.yaml"],12:N0} bytes  target < 1 s  {Verdict(demo.Median < 1)}");
+    }
+
+    foreach (var (label, bytes) in htmlBytes.Where(p => p.Key.EndsWith("end points", StringComparison.Ordinal)))
+    {
+        Console.WriteLine($"  HTML size, {label,-30} {bytes,12:N0} bytes");
+    }
+
+    if (savings.Count > 0)
+    {
+        Console.WriteLine();
+        Console.WriteLine("Material the optimum saves against the greedy fix (issue 5):");
+        foreach (var s in savings)
+        {
+            var saved = s.Greedy > 0 ? $"{100 * (s.Greedy - s.Optimum) / s.Greedy,6:0.0} %" : "   n/a";
+            Console.WriteLine($"  {s.Label,-32} greedy {s.Greedy,14:N0}  optimum {s.Optimum,14:N0} {s.Unit}  saving {saved}  ({s.Changes:N0} runs changed, {s.Unresolvable:N0} unresolvable)");
+        }
+    }
 }
 
 // The figure a user sees: a fresh 'disttree analyze' process, file to JSON, its wall time and peak memory.
@@ -155,13 +291,16 @@ static void AnalyzeInFreshProcess(string path)
         };
         var clock = Stopwatch.StartNew();
         using var process = Process.Start(start)!;
-        process.StandardOutput.ReadToEnd();
-        process.StandardError.ReadToEnd();
+        // Read the output without blocking, so that the peak is sampled while the process runs.
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        var stderr = process.StandardError.ReadToEndAsync();
         long processPeak = 0;
         while (!process.WaitForExit(20))
         {
             processPeak = Math.Max(processPeak, PeakOf(process));
         }
+
+        Task.WaitAll(stdout, stderr);
 
         times.Add(clock.Elapsed.TotalSeconds);
         peak = Math.Max(peak, processPeak);
@@ -169,7 +308,7 @@ static void AnalyzeInFreshProcess(string path)
 
     times.Sort();
     Console.WriteLine($"  analyze 100,000 end points, file to JSON, fresh process: median {times[1]:0.00} s (spread {times[0]:0.00} .. {times[2]:0.00})  target < 3 s  {Verdict(times[1] < 3)}");
-    Console.WriteLine($"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {Verdict(peak < 1L << 30)}");
+    Console.WriteLine($"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {(peak == 0 ? "not measured" : Verdict(peak < 1L << 30))}");
 }
 
 // The high-water mark of a running process: VmHWM in /proc/PID/status on Linux, else PeakWorkingSet64.
@@ -197,3 +336,6 @@ static long PeakOf(Process process)
 }
 
 static string Verdict(bool met) => met ? "met" : "MISSED";
+
+/// <summary>What the greedy fix and the optimum add on one project, in the plan's cost unit.</summary>
+internal sealed record Saving(string Label, double Greedy, double Optimum, string Unit, int Changes, int Unresolvable);
