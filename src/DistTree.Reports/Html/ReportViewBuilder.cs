@@ -743,7 +743,7 @@ internal sealed class ReportViewBuilder
             Percent(m.PanelDipPercent),
             Limit(m.LimitPercent),
             fails ? "fail" : "pass",
-            fails ? "over the limit" : "within the limit");
+            fails ? "fail" : "pass");
     }
 
     private static PlanView BuildPlan(Sizing.UpsizePlan plan) => new(
