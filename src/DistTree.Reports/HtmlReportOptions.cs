@@ -1,3 +1,4 @@
+using DistTree.Comparing;
 using DistTree.Sizing;
 
 namespace DistTree.Reports;
@@ -13,6 +14,12 @@ public sealed record HtmlReportOptions
 
     /// <summary>An upsize plan to show in its own section, or null.</summary>
     public UpsizePlan? Plan { get; init; }
+
+    /// <summary>
+    /// A comparison whose new revision is the solution rendered, shown in its own section near the top, or null.
+    /// End points it lists link to their panel tables in the page.
+    /// </summary>
+    public Comparison? Comparison { get; init; }
 
     /// <summary>The page title; null gives "<c>project name</c> · voltage-drop review".</summary>
     public string? Title { get; init; }

@@ -56,6 +56,9 @@ internal static class HtmlText
     /// <summary>Volt-amperes, whole, with thousands separated by a thin space.</summary>
     public static string VoltAmperes(double value) => Number(value, "#,0").Replace(",", "\u2009", StringComparison.Ordinal);
 
+    /// <summary>Volt-amperes shown in kilovolt-amperes, one decimal.</summary>
+    public static string Kva(double va) => Number(va / 1000, "0.0");
+
     /// <summary>A layout coordinate for SVG, at most one decimal.</summary>
     public static string Coordinate(double value) => Number(Math.Round(value, 1), "0.#");
 

@@ -25,5 +25,8 @@ internal sealed record CircuitRow(
     string RunDrop,
     bool RunOver,
     string Total,
+    string OtherTotal,
+    string Points,
+    string PointsTitle,
     string Band,
     string Findings);

@@ -7,7 +7,11 @@ internal sealed record PlanView(
     string CostUnit,
     string WorstBefore,
     string WorstAfter,
+    string FindingsBefore,
     string FindingsAfter,
+    string WorstAfterId,
+    string VerdictAfterClass,
+    string VerdictAfterText,
     IReadOnlyList<LabelValue> Unresolvable);
 
 /// <summary>One run's change.</summary>

@@ -33,10 +33,27 @@ internal sealed record ReportView
     public required IReadOnlyList<FindingGroup> Findings { get; init; }
     public string? FindingsRule { get; init; }
     public PlanView? Plan { get; init; }
+    public ComparisonView? Comparison { get; init; }
+    public required SectionNumbers Num { get; init; }
+    public required string MethodText { get; init; }
+    public required string OtherMethodText { get; init; }
+    public required string LoadFlowText { get; init; }
+    public required string LoadFlowClass { get; init; }
+    public required string Tolerance { get; init; }
+    public required IReadOnlyList<MotorRow> Motors { get; init; }
+    public required string MotorLimit { get; init; }
+    public string? MotorsMore { get; init; }
+    public required bool AnyPoints { get; init; }
     public required IReadOnlyList<string> CatalogHeader { get; init; }
     public required IReadOnlyList<RuleMeaning> RuleMeanings { get; init; }
     public required string NearPercent { get; init; }
 }
+
+/// <summary>The number of each section shown; null for a section the page leaves out.</summary>
+internal sealed record SectionNumbers(string Summary, string? Comparison, string Tree, string Worst, string Panels, string? Motors, string Findings, string? Plan, string Method);
+
+/// <summary>One motor's starting check.</summary>
+internal sealed record MotorRow(string Circuit, string Name, string Anchor, string LockedRotorKva, string TerminalDip, string PanelDip, string Limit, string Status, string StatusText);
 
 internal sealed record LabelValue(string Label, string Value);
 

@@ -28,6 +28,9 @@ internal sealed class ReportViewBuilder
     /// <summary>Trees this deep or less are scaled to the page width; deeper ones scroll sideways (and scale when printed).</summary>
     public const int FitDepth = 8;
 
+    /// <summary>Motors listed in the starting table at most (worst dip first).</summary>
+    public const int MotorRowsCap = 200;
+
     /// <summary>The share of the total limit from which an end point counts as near its limit.</summary>
     public const double NearFraction = 0.8;
 
@@ -171,6 +174,9 @@ internal sealed class ReportViewBuilder
         var worst = worstIndex >= 0 ? _s.EndPoints[worstIndex] : null;
         var equipmentCount = _nodes.Count(node => node.Kind is not NodeKind.EndPoint and not NodeKind.Service);
         var panelCount = _nodes.Count(node => node.Kind == NodeKind.Panelboard);
+        var motors = MotorIndices();
+        var numbers = Numbers(motors.Count > 0);
+        var loadFlow = _s.LoadFlow;
         return new ReportView
         {
             Title = Escape(_options.Title ?? $"{p.Name} · voltage-drop review"),
@@ -213,6 +219,19 @@ internal sealed class ReportViewBuilder
                 ? $"In a project this large each kind lists its first {LargeProjectFindingsPerKind} findings in network order; the console output and the JSON results list all."
                 : null,
             Plan = _options.Plan is { } plan ? BuildPlan(plan) : null,
+            Comparison = _options.Comparison is { } comparison ? ComparisonViewBuilder.Build(comparison, PanelAnchors()) : null,
+            Num = numbers,
+            MethodText = MethodName(rules.Method),
+            OtherMethodText = MethodName(Other(rules.Method)),
+            LoadFlowText = loadFlow.Converged
+                ? $"converged in {Count(loadFlow.Iterations)} sweep{(loadFlow.Iterations == 1 ? "" : "s")} (tolerance {Tolerance} pu)"
+                : $"did not converge in {Count(loadFlow.Iterations)} sweeps (tolerance {Tolerance} pu); its figures are left out",
+            LoadFlowClass = loadFlow.Converged ? "pass" : "fail",
+            Tolerance = Tolerance,
+            Motors = motors.Take(MotorRowsCap).Select(MotorRowOf).ToArray(),
+            MotorsMore = motors.Count > MotorRowsCap ? $"{Count(motors.Count - MotorRowsCap)} more motors with smaller dips, listed in the JSON results." : null,
+            MotorLimit = Limit(rules.MotorStartLimitPercent),
+            AnyPoints = _nodes.Any(node => node.Circuit is { Points.Count: > 0 }),
             CatalogHeader = string.Equals(_s.CatalogName, ConductorCatalog.Standard.SourceName, StringComparison.Ordinal)
                 ? ConductorCatalog.Standard.Header.Select(Escape).ToArray()
                 : [],
@@ -267,6 +286,17 @@ internal sealed class ReportViewBuilder
             return new LimitRow(name, limit, Count(checkedCount), Count(over), worst, status, text);
         }
 
+        var motors = 0;
+        var worstDip = double.NegativeInfinity;
+        foreach (var e in _s.EndPoints)
+        {
+            if (e.MotorStart is { } m)
+            {
+                motors++;
+                worstDip = Math.Max(worstDip, m.TerminalDipPercent);
+            }
+        }
+
         static string Worst(double v) => double.IsNegativeInfinity(v) ? "–" : Percent(v) + " %";
         return
         [
@@ -276,6 +306,7 @@ internal sealed class ReportViewBuilder
             Row("Ampacity (design current)", "allowable ampacity", withAmpacity, FindingKind.Ampacity, "–"),
             Row("Overcurrent device", "conductor ampacity", withOcpd, FindingKind.OcpdAboveAmpacity, "–"),
             Row("Transformer loading", "nameplate kVA", transformers, FindingKind.TransformerOverload, "–"),
+            Row("Motor starting dip at the terminals", Limit(rules.MotorStartLimitPercent) + " %", motors, FindingKind.MotorStart, Worst(worstDip)),
         ];
     }
 
@@ -287,6 +318,7 @@ internal sealed class ReportViewBuilder
         FindingKind.Ampacity => "Design current above the allowable ampacity",
         FindingKind.OcpdAboveAmpacity => "Overcurrent device above what the conductors permit",
         FindingKind.TransformerOverload => "Transformer loaded above its rating",
+        FindingKind.MotorStart => "Motor terminals dip over the limit while starting",
         _ => "Other",
     };
 
@@ -626,8 +658,92 @@ internal sealed class ReportViewBuilder
             r is null ? "–" : Percent(r.DropPercent),
             r is not null && r.Findings.Count > 0,
             Percent(e.TotalDropPercent),
+            OtherTotal(e),
+            node.Circuit is { Points.Count: > 0 } c ? $"{Count(c.Points.Count)} points" : "",
+            node.Circuit is { Points.Count: > 0 } d
+                ? $"{Count(d.Points.Count)} loads along the run, the farthest at {Metres(d.Points[^1].AtM)} m; the drop is computed span by span"
+                : "",
             BandClass(_endPointBand[k]),
             Codes(findings));
+    }
+
+    // The end point's total by the method not in force (the one in force is TotalDropPercent).
+    private string OtherTotal(EndPointResult e) => _s.Project.Rules.Method == SolutionMethod.LoadFlow
+        ? Percent(e.PercentSumTotalDropPercent)
+        : e.LoadFlowTotalDropPercent is { } flow ? Percent(flow) : "–";
+
+    private static string Tolerance => LoadFlow.TolerancePu.ToString("0e0", System.Globalization.CultureInfo.InvariantCulture);
+
+    private static string MethodName(SolutionMethod method) => method == SolutionMethod.LoadFlow ? "load flow" : "percent sum";
+
+    private static SolutionMethod Other(SolutionMethod method) =>
+        method == SolutionMethod.LoadFlow ? SolutionMethod.PercentSum : SolutionMethod.LoadFlow;
+
+    private SectionNumbers Numbers(bool motors)
+    {
+        var n = 0;
+        string Next() => Count(++n);
+        string? NextIf(bool shown) => shown ? Next() : null;
+        return new SectionNumbers(
+            Summary: Next(),
+            Comparison: NextIf(_options.Comparison is not null),
+            Tree: Next(),
+            Worst: Next(),
+            Panels: Next(),
+            Motors: NextIf(motors),
+            Findings: Next(),
+            Plan: NextIf(_options.Plan is not null),
+            Method: Next());
+    }
+
+    private Dictionary<string, string> PanelAnchors()
+    {
+        var anchors = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var e in _s.EndPoints)
+        {
+            anchors.TryAdd(e.Id, $"#panel-{Count(_nodes[e.NodeIndex].ParentIndex)}");
+        }
+
+        return anchors;
+    }
+
+    // Motors, worst terminal dip first (ties by id), as indices into the end points.
+    private List<int> MotorIndices()
+    {
+        var list = new List<int>();
+        for (var k = 0; k < _s.EndPoints.Count; k++)
+        {
+            if (_s.EndPoints[k].MotorStart is not null)
+            {
+                list.Add(k);
+            }
+        }
+
+        list.Sort((a, b) =>
+        {
+            var ea = _s.EndPoints[a];
+            var eb = _s.EndPoints[b];
+            var byDip = eb.MotorStart!.TerminalDipPercent.CompareTo(ea.MotorStart!.TerminalDipPercent);
+            return byDip != 0 ? byDip : string.CompareOrdinal(ea.Id, eb.Id);
+        });
+        return list;
+    }
+
+    private MotorRow MotorRowOf(int k)
+    {
+        var e = _s.EndPoints[k];
+        var m = e.MotorStart!;
+        var fails = e.Findings.Any(f => f.Kind == FindingKind.MotorStart);
+        return new MotorRow(
+            Escape(e.Id),
+            Escape(e.Name),
+            $"#panel-{Count(_nodes[e.NodeIndex].ParentIndex)}",
+            Kva(m.LockedRotorVa),
+            Percent(m.TerminalDipPercent),
+            Percent(m.PanelDipPercent),
+            Limit(m.LimitPercent),
+            fails ? "fail" : "pass",
+            fails ? "fail" : "pass");
     }
 
     private static PlanView BuildPlan(Sizing.UpsizePlan plan) => new(
@@ -647,7 +763,13 @@ internal sealed class ReportViewBuilder
         Escape(plan.CostUnit),
         Percent(plan.Before.Summary.WorstTotalDropPercent),
         Percent(plan.After.Summary.WorstTotalDropPercent),
+        Count(plan.Before.Summary.Findings),
         Count(plan.After.Summary.Findings),
+        plan.After.Summary.WorstEndPoint is { } worstAfter ? Escape(worstAfter) : "–",
+        plan.After.HasFindings ? "fail" : "pass",
+        plan.After.HasFindings
+            ? $"After the plan {Count(plan.After.Summary.Findings)} finding{(plan.After.Summary.Findings == 1 ? " remains" : "s remain")}"
+            : "After the plan every run and end point is within its limits",
         plan.Unresolvable.Select(u => new LabelValue(Escape(u.Subject), Escape(u.Message))).ToArray());
 
     private static RuleMeaning[] Meanings(Rules r) =>
@@ -660,5 +782,7 @@ internal sealed class ReportViewBuilder
         new("transformer_drop", Escape(RuleText.TransformerDrop(r)), "count = a transformer's regulation adds to the totals below it; new_origin = its secondary starts a new total budget."),
         new("ambient_c", Limit(r.AmbientC) + " °C", "Ambient temperature for ampacity correction and for the temperature estimate."),
         new("terminal_c", Count(r.TerminalC) + " °C", "Terminal rating: the ampacity column used is at most this temperature."),
+        new("method", r.Method == SolutionMethod.LoadFlow ? "load_flow" : "percent_sum", "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
+        new("motor_start_limit_percent", Limit(r.MotorStartLimitPercent) + " %", "The largest dip allowed at a motor's terminals while it starts."),
     ];
 }
