@@ -28,6 +28,19 @@ public static class ConsoleReport
         }
 
         o.WriteLine();
+        if (s.Panels.Count > 0)
+        {
+            o.WriteLine("Panels (kVA per line after demand, neutral, imbalance):");
+            foreach (var panel in s.Panels)
+            {
+                var lines = string.Join(" / ", panel.LineVa.Select(va => F($"{va / 1000:0.0}")));
+                var neutral = panel.NeutralCurrentA is { } n ? F($"N {n:0.0} A") : "no neutral";
+                o.WriteLine(F($"  {panel.Id,-10} {panel.System,-9} {lines,-22} {neutral,-12} imbalance {panel.ImbalancePercent:0.0} %"));
+            }
+
+            o.WriteLine();
+        }
+
         WriteFindings(o, s);
         o.WriteLine();
         o.WriteLine($"Caution: {Caution.Text}");

@@ -42,6 +42,25 @@ public static class JsonResults
             }
 
             w.WriteEndArray();
+            w.WriteStartArray("panels");
+            foreach (var p in solution.Panels)
+            {
+                w.WriteStartObject();
+                w.WriteString("id", p.Id);
+                w.WriteString("system", p.System);
+                w.WriteStartArray("line_va");
+                foreach (var va in p.LineVa)
+                {
+                    w.WriteNumberValue(Math.Round(va, 1, MidpointRounding.AwayFromZero) + 0.0);
+                }
+
+                w.WriteEndArray();
+                Number(w, "neutral_current_a", p.NeutralCurrentA, 3);
+                Number(w, "imbalance_percent", p.ImbalancePercent, 2);
+                w.WriteEndObject();
+            }
+
+            w.WriteEndArray();
             w.WriteStartArray("end_points");
             foreach (var e in solution.EndPoints)
             {
@@ -157,6 +176,8 @@ public static class JsonResults
         Number(w, "drop_percent", r.DropPercent, 4);
         Number(w, "drop_percent_percent_sum", r.PercentSumDropPercent, 4);
         Number(w, "drop_percent_load_flow", r.LoadFlowDropPercent, 4);
+        NullableString(w, "lines", r.Lines);
+        Number(w, "neutral_current_a", r.NeutralCurrentA, 3);
         Number(w, "limit_percent", r.LimitPercent, 4);
         Number(w, "max_length_m", r.MaxLengthM, 2);
         Number(w, "max_length_total_m", r.MaxLengthTotalM, 2);

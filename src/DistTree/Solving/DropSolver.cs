@@ -85,6 +85,7 @@ public sealed class DropSolver
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, runs.Count, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
+            Panels = nodes.Where(x => x.Equipment is { Circuits.Count: > 0 }).Select(phases.Panel).ToArray(),
             CatalogName = _catalog.SourceName,
         };
     }

@@ -52,6 +52,23 @@ internal sealed class PhaseFlow
         }
     }
 
+    /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
+    public PanelResult Panel(NetworkNode node)
+    {
+        var lines = PhaseRules.Lines(node.System);
+        var v = LineToNeutralV(node.System);
+        var i = Currents.AsSpan(node.Index * 3, 3);
+        var va = new double[lines];
+        for (var x = 0; x < lines; x++)
+        {
+            va[x] = v * i[x].Magnitude;
+        }
+
+        var average = va.Average();
+        var imbalance = lines < 2 || average <= 0 ? 0.0 : va.Max(s => Math.Abs(s - average)) / average * 100.0;
+        return new PanelResult(node.Id, node.System.Name, va, node.System.HasNeutral ? (i[0] + i[1] + i[2]).Magnitude : null, imbalance);
+    }
+
     /// <summary>The largest line current magnitude of the run into <paramref name="node"/>, amperes.</summary>
     public double MaxLineCurrentA(int node)
     {

@@ -26,6 +26,9 @@ public sealed record Solution
     /// <summary>End points in network order.</summary>
     public required IReadOnlyList<EndPointResult> EndPoints { get; init; }
 
+    /// <summary>Phase loads and imbalance of every panel or switchboard with circuits, in network order.</summary>
+    public IReadOnlyList<PanelResult> Panels { get; init; } = [];
+
     /// <summary>Counts and the worst figure.</summary>
     public required SolutionSummary Summary { get; init; }
 
