@@ -27,6 +27,38 @@ internal static class OutputFile
             return;
         }
 
+        WriteFile(path, stream =>
+        {
+            using var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false));
+            writer.Write(content);
+        }, replace, inputs);
+    }
+
+    /// <summary>
+    /// Writes the UTF-8 bytes that <paramref name="write"/> puts on a stream to <paramref name="path"/> (through a
+    /// temporary file, as for text), or to standard output for <c>-</c>; the whole text is never held at once
+    /// when writing a file.
+    /// </summary>
+    /// <param name="context">Where standard output goes.</param>
+    /// <param name="path">The output path, or <c>-</c>.</param>
+    /// <param name="write">Writes the content as UTF-8 bytes, without a byte-order mark.</param>
+    /// <param name="inputs">Files the command read: the output may not be one of them.</param>
+    public static void Write(CliContext context, string path, Action<Stream> write, params string[] inputs)
+    {
+        if (path == "-")
+        {
+            using var buffer = new MemoryStream();
+            write(buffer);
+            context.Out.Write(System.Text.Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length));
+            return;
+        }
+
+        WriteFile(path, write, replace: true, inputs);
+    }
+
+    private static void WriteFile(string path, Action<Stream> write, bool replace, string[] inputs)
+    {
+
         var full = Path.GetFullPath(path);
         if (inputs.Any(i => string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
         {
@@ -38,7 +70,11 @@ internal static class OutputFile
         try
         {
             Directory.CreateDirectory(directory);
-            File.WriteAllText(temporary, content, new System.Text.UTF8Encoding(false));
+            using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16))
+            {
+                write(stream);
+            }
+
             if (!replace && (File.Exists(full) || Directory.Exists(full)))
             {
                 File.Delete(temporary);

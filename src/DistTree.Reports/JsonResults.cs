@@ -21,7 +21,19 @@ public static class JsonResults
     public static string Write(Solution solution, Action<Utf8JsonWriter>? extra = null)
     {
         using var buffer = new MemoryStream();
-        using (var w = new Utf8JsonWriter(buffer, Options))
+        Write(solution, buffer, extra);
+        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+    }
+
+    /// <summary>
+    /// Writes the document to <paramref name="stream"/> as UTF-8 bytes ending in a newline: the same bytes
+    /// as <see cref="Write(Solution, Action{Utf8JsonWriter}?)"/>, without holding the whole text in memory.
+    /// </summary>
+    public static void Write(Solution solution, Stream stream, Action<Utf8JsonWriter>? extra = null)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        ArgumentNullException.ThrowIfNull(stream);
+        using (var w = new Utf8JsonWriter(stream, Options))
         {
             w.WriteStartObject();
             w.WriteString("format", Format);
@@ -72,8 +84,7 @@ public static class JsonResults
             w.WriteEndObject();
         }
 
-        buffer.WriteByte((byte)'\n');
-        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+        stream.WriteByte((byte)'\n');
     }
 
     /// <summary>Writes a finding object (kind, subject, value, limit, message, line, column).</summary>

@@ -52,7 +52,7 @@ internal static class AnalyzeCommand
                 if (jsonPath is not null)
                 {
                     status.Report($"writing the results of {solution.Runs.Count:N0} runs");
-                    OutputFile.Write(context, jsonPath, JsonResults.Write(solution), path);
+                    OutputFile.Write(context, jsonPath, stream => JsonResults.Write(solution, stream), path);
                 }
             }
 

@@ -16,8 +16,15 @@ internal static partial class SourceTreeReader
 {
     private const string StringTag = "tag:yaml.org,2002:str";
 
-    /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
-    public static SourceNode? Read(string text, string file, DiagnosticBag bag)
+    /// <summary>
+    /// The document's root node, or null when the text holds none or cannot be parsed (reported). The
+    /// common subset is read by <see cref="FastYamlReader"/>; the rest, and every error, by YamlDotNet.
+    /// </summary>
+    public static SourceNode? Read(string text, string file, DiagnosticBag bag) =>
+        FastYamlReader.TryRead(text, file) ?? ReadWithParser(text, file, bag);
+
+    /// <summary>Reads with YamlDotNet alone (the reference the fast path must match, and the path for errors).</summary>
+    internal static SourceNode? ReadWithParser(string text, string file, DiagnosticBag bag)
     {
         var parser = new Parser(new StringReader(text));
         var stack = new Stack<Frame>();

@@ -30,6 +30,21 @@ public sealed class OutputFileTests
     }
 
     [Fact]
+    public void Write_JsonStreamedToAFile_SameTextAsStandardOutput()
+    {
+        using var folder = new TempFolder();
+        var input = folder.CopyProject("quillfeather-medical.yaml");
+        var output = Path.Combine(folder.Path, "results.json");
+
+        var toFile = CliRunner.Run("analyze", input, "--json", output);
+        var toOut = CliRunner.Run("analyze", input, "--json", "-");
+
+        Assert.Equal(toOut.ExitCode, toFile.ExitCode);
+        Assert.Equal(toOut.Out, File.ReadAllText(output));
+        Assert.Equal(2, Directory.GetFileSystemEntries(folder.Path).Length); // no temporary file left
+    }
+
+    [Fact]
     public void Write_OntoTheInputThroughAnotherSpelling_Refused()
     {
         using var folder = new TempFolder();

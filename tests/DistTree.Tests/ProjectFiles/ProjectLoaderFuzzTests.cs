@@ -37,7 +37,8 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
         "\U0001F600", "---", "...", "<<: ", "x: ", "id: ", "1", "-", ".", "e9",
     ];
 
-    private static readonly string[][] Seeds = LoadSeeds();
+    /// <summary>The seed texts, split into lines (also mutated by FastYamlReaderTests).</summary>
+    internal static readonly string[][] Seeds = LoadSeeds();
 
     [Fact]
     public void Parse_MutatedProjects_LoadOrFailWithLocatedErrorsOnly()
@@ -99,7 +100,8 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
         from fragments in Gen.Choose(1, 3).SelectMany(n => Gen.ListOf(Gen.Elements(Fragments), n))
         select new Mutation((MutationKind)kind, a, b, kind == (int)MutationKind.OddNumber ? odd : string.Concat(fragments));
 
-    private static Gen<FuzzCase> CaseGen =>
+    /// <summary>A seed and one to four mutations of it (also used by FastYamlReaderTests).</summary>
+    internal static Gen<FuzzCase> CaseGen =>
         from seed in Gen.Choose(0, 1000)
         from count in Gen.Elements(1, 1, 1, 2, 2, 3, 4)
         from mutations in Gen.ListOf(MutationGen, count)
@@ -121,7 +123,7 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
         Broken,
     }
 
-    private enum MutationKind
+    internal enum MutationKind
     {
         DeleteLine,
         DuplicateLine,
@@ -131,7 +133,7 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
         Truncate,
     }
 
-    private sealed record Mutation(MutationKind Kind, int A, int B, string Payload)
+    internal sealed record Mutation(MutationKind Kind, int A, int B, string Payload)
     {
         public void ApplyTo(List<string> lines)
         {
@@ -182,7 +184,7 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
         }
     }
 
-    private sealed record FuzzCase(int Seed, Mutation[] Mutations)
+    internal sealed record FuzzCase(int Seed, Mutation[] Mutations)
     {
         public string Apply(string[] seed)
         {

@@ -37,6 +37,17 @@ public sealed class JsonResultsTests
     }
 
     [Fact]
+    public void Write_ToStream_SameBytesAsTheText()
+    {
+        var solution = SolveProject("quillfeather-medical.yaml");
+        using var stream = new MemoryStream();
+
+        JsonResults.Write(solution, stream);
+
+        Assert.Equal(System.Text.Encoding.UTF8.GetBytes(JsonResults.Write(solution)), stream.ToArray());
+    }
+
+    [Fact]
     public void Write_TwoRuns_AreByteIdentical()
     {
         var first = JsonResults.Write(SolveProject("quillfeather-medical.yaml"));
