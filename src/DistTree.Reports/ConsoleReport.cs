@@ -23,7 +23,7 @@ public static class ConsoleReport
             rank++;
             var mark = e.Findings.Count > 0 ? "over" : "ok";
             o.WriteLine(F($"  {rank,3}. {e.Id,-14} {e.TotalDropPercent,6:0.00} %  {mark,-4}  {Truncate(e.Name, 40)}"));
-            var shares = e.RunIndices.Select(i => s.Runs[i]).Select(r => F($"{Label(r)} {r.DropPercent:0.00}"));
+            var shares = e.RunIndices.Zip(e.RunSharesPercent).Select(p => F($"{Label(s.Runs[p.First])} {p.Second:0.00}"));
             o.WriteLine($"        {string.Join("  +  ", shares)}");
         }
 

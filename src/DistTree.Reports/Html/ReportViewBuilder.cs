@@ -398,7 +398,7 @@ internal sealed class ReportViewBuilder
         var top = limit * 1.2;
         foreach (var e in shown)
         {
-            var stacked = e.RunIndices.Sum(i => Math.Max(0, _s.Runs[i].DropPercent));
+            var stacked = e.RunSharesPercent.Sum(d => Math.Max(0, d));
             top = Math.Max(top, Math.Max(e.TotalDropPercent, stacked) * 1.04);
         }
 
@@ -420,11 +420,12 @@ internal sealed class ReportViewBuilder
             var rows = new List<PathRunRow>();
             var x = 0.0;
             var number = 0;
-            foreach (var i in e.RunIndices)
+            // Each run's share is the drop on this end point's own lines (a feeder's worst line may be another).
+            foreach (var (i, share) in e.RunIndices.Zip(e.RunSharesPercent))
             {
                 number++;
                 var r = _s.Runs[i];
-                var w = X(Math.Max(0, r.DropPercent));
+                var w = X(Math.Max(0, share));
                 segments.Add(new BarSegment(
                     Coordinate(x),
                     Coordinate(w),
@@ -432,7 +433,7 @@ internal sealed class ReportViewBuilder
                     Count(number),
                     w >= 16,
                     Coordinate(x + (w / 2)),
-                    Escape($"{number}. {r.Id} ({KindText(r.Kind)}): {Percent(r.DropPercent)} %")));
+                    Escape($"{number}. {r.Id} ({KindText(r.Kind)}): {Percent(share)} %")));
                 x += w;
                 rows.Add(new PathRunRow(
                     Count(number),
@@ -443,7 +444,7 @@ internal sealed class ReportViewBuilder
                     r.Kind == RunResultKind.Transformer ? "–" : Metres(r.LengthM),
                     r.Kind == RunResultKind.Transformer ? "–" : Feet(r.LengthM),
                     Amperes(r.CurrentA),
-                    Percent(r.DropPercent),
+                    Percent(share),
                     r.LimitPercent is null ? "–" : Limit(r.LimitPercent),
                     Codes(r.Findings),
                     r.Findings.Count > 0));
