@@ -63,7 +63,14 @@ public static class JsonResults
                 w.WriteStartArray("line_va");
                 foreach (var va in p.LineVa)
                 {
-                    w.WriteNumberValue(Math.Round(va, 1, MidpointRounding.AwayFromZero) + 0.0);
+                    if (double.IsFinite(va))
+                    {
+                        w.WriteNumberValue(Math.Round(va, 1, MidpointRounding.AwayFromZero) + 0.0);
+                    }
+                    else
+                    {
+                        w.WriteNullValue();
+                    }
                 }
 
                 w.WriteEndArray();

@@ -66,4 +66,14 @@ public sealed class JsonResultsTests
         Assert.Equal(solution.EndPoints.Count, doc.RootElement.GetProperty("end_points").GetArrayLength());
         Assert.Equal("disttree-results/1", doc.RootElement.GetProperty("format").GetString());
     }
+
+    // Found by the fuzz test: a load so large that figures overflow must still give a document (nulls), not a crash.
+    [Fact]
+    public void Write_OverflowingLoad_WritesNullsNotAnException()
+    {
+        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+            "{ id: \"1\", poles: 1, load: { va: 1.7976931348623157e308 }, run: { length: 10, size: 12 AWG } }");
+        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
+        Assert.Equal(JsonValueKind.Null, doc.RootElement.GetProperty("panels")[0].GetProperty("line_va")[0].ValueKind);
+    }
 }
