@@ -195,6 +195,20 @@ public static class JsonResults
         Number(w, "drop_percent_percent_sum", r.PercentSumDropPercent, 4);
         Number(w, "drop_percent_load_flow", r.LoadFlowDropPercent, 4);
         NullableString(w, "lines", r.Lines);
+        w.WriteStartArray("line_currents_a");
+        foreach (var a in r.LineCurrentsA)
+        {
+            if (double.IsFinite(a))
+            {
+                w.WriteNumberValue(Math.Round(a, 3, MidpointRounding.AwayFromZero) + 0.0);
+            }
+            else
+            {
+                w.WriteNullValue();
+            }
+        }
+
+        w.WriteEndArray();
         Number(w, "neutral_current_a", r.NeutralCurrentA, 3);
         Number(w, "limit_percent", r.LimitPercent, 4);
         Number(w, "max_length_m", r.MaxLengthM, 2);

@@ -190,6 +190,7 @@ public sealed class DropSolver
             PercentSumDropPercent = figures.DropPercent,
             LimitPercent = run.LimitPercent,
             NeutralCurrentA = system.HasNeutral ? phases.NeutralCurrentA(index) : null,
+            LineCurrentsA = phases.LineCurrentsA(index, PhaseRules.Lines(system)),
             Lines = run.Kind == RunKind.Branch ? PhaseRules.Text(phases.Assigned[index]) : null,
             UnitDropsR = unitR,
             UnitDropsX = unitX,

@@ -76,6 +76,18 @@ internal sealed class PhaseFlow
         return Math.Max(i[0].Magnitude, Math.Max(i[1].Magnitude, i[2].Magnitude));
     }
 
+    /// <summary>The line current magnitudes of the run into <paramref name="node"/> on a system of <paramref name="lines"/> lines, amperes.</summary>
+    public double[] LineCurrentsA(int node, int lines)
+    {
+        var result = new double[lines];
+        for (var x = 0; x < lines; x++)
+        {
+            result[x] = Currents[(node * 3) + x].Magnitude;
+        }
+
+        return result;
+    }
+
     /// <summary>The neutral current of the run into <paramref name="node"/>, amperes.</summary>
     public double NeutralCurrentA(int node)
     {

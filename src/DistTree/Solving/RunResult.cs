@@ -48,6 +48,9 @@ public sealed record RunResult
     /// <summary>Design current in amperes for the ampacity check (125 % of continuous load plus the rest).</summary>
     public required double DesignCurrentA { get; init; }
 
+    /// <summary>The current in each line (A, B, C; as many as the run's system has), amperes; empty for a transformer.</summary>
+    public IReadOnlyList<double> LineCurrentsA { get; init; } = [];
+
     /// <summary>Neutral current in amperes (Ia + Ib + Ic), or null on a system without a neutral or for a transformer.</summary>
     public double? NeutralCurrentA { get; init; }
 
