@@ -60,20 +60,7 @@ public static class JsonResults
                 w.WriteStartObject();
                 w.WriteString("id", p.Id);
                 w.WriteString("system", p.System);
-                w.WriteStartArray("line_va");
-                foreach (var va in p.LineVa)
-                {
-                    if (double.IsFinite(va))
-                    {
-                        w.WriteNumberValue(Math.Round(va, 1, MidpointRounding.AwayFromZero) + 0.0);
-                    }
-                    else
-                    {
-                        w.WriteNullValue();
-                    }
-                }
-
-                w.WriteEndArray();
+                Numbers(w, "line_va", p.LineVa, 1);
                 Number(w, "neutral_current_a", p.NeutralCurrentA, 3);
                 Number(w, "imbalance_percent", p.ImbalancePercent, 2);
                 w.WriteEndObject();
@@ -119,6 +106,25 @@ public static class JsonResults
         {
             w.WriteNull(name);
         }
+    }
+
+    // An array of rounded numbers; a non-finite one is written as null.
+    private static void Numbers(Utf8JsonWriter w, string name, IEnumerable<double> values, int decimals)
+    {
+        w.WriteStartArray(name);
+        foreach (var v in values)
+        {
+            if (double.IsFinite(v))
+            {
+                w.WriteNumberValue(Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
+            }
+            else
+            {
+                w.WriteNullValue();
+            }
+        }
+
+        w.WriteEndArray();
     }
 
     private static void WriteProject(Utf8JsonWriter w, Solution s)
@@ -195,20 +201,7 @@ public static class JsonResults
         Number(w, "drop_percent_percent_sum", r.PercentSumDropPercent, 4);
         Number(w, "drop_percent_load_flow", r.LoadFlowDropPercent, 4);
         NullableString(w, "lines", r.Lines);
-        w.WriteStartArray("line_currents_a");
-        foreach (var a in r.LineCurrentsA)
-        {
-            if (double.IsFinite(a))
-            {
-                w.WriteNumberValue(Math.Round(a, 3, MidpointRounding.AwayFromZero) + 0.0);
-            }
-            else
-            {
-                w.WriteNullValue();
-            }
-        }
-
-        w.WriteEndArray();
+        Numbers(w, "line_currents_a", r.LineCurrentsA, 3);
         Number(w, "neutral_current_a", r.NeutralCurrentA, 3);
         Number(w, "limit_percent", r.LimitPercent, 4);
         Number(w, "max_length_m", r.MaxLengthM, 2);

@@ -309,24 +309,24 @@ public sealed class DropSolver
         }
 
         var nodes = network.Nodes;
+        void Record(int row, double drop)
+        {
+            var r = runs[row];
+            runs[row] = rules.Method == SolutionMethod.LoadFlow
+                ? r with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * r.VoltageV }
+                : r with { LoadFlowDropPercent = drop };
+        }
+
         for (var i = 1; i < nodes.Count; i++)
         {
             if (incomingRow[i] >= 0)
             {
-                var row = runs[incomingRow[i]];
-                var drop = (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0;
-                runs[incomingRow[i]] = rules.Method == SolutionMethod.LoadFlow
-                    ? row with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * row.VoltageV }
-                    : row with { LoadFlowDropPercent = drop };
+                Record(incomingRow[i], (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0);
             }
 
             if (transformerRow[i] >= 0)
             {
-                var row = runs[transformerRow[i]];
-                var drop = (flow.InputPu[i] - flow.BusPu[i]) * 100.0;
-                runs[transformerRow[i]] = rules.Method == SolutionMethod.LoadFlow
-                    ? row with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * row.VoltageV }
-                    : row with { LoadFlowDropPercent = drop };
+                Record(transformerRow[i], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
             }
         }
     }
@@ -595,7 +595,6 @@ public sealed class DropSolver
             }
         }
 
-        // A transformer's own row sits on its node; the loop above adds it when walking past that node.
         return new MotorStartResult(lockedRotor.VoltAmperes, terminal, panel, rules.MotorStartLimitPercent);
     }
 
