@@ -15,6 +15,8 @@ public static class JsonResults
     /// <summary>The format identifier.</summary>
     public const string Format = "disttree-results/1";
 
+    private const int FlushBytes = 1 << 16;
+
     private static readonly JsonWriterOptions Options = new() { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
     /// <summary>The document as UTF-8 text, ending in a newline.</summary>
@@ -47,30 +49,32 @@ public static class JsonResults
             w.WriteNumber("tolerance_pu", LoadFlow.TolerancePu);
             w.WriteNumber("base_kva", LoadFlow.BaseVa / 1000.0);
             w.WriteEndObject();
-            w.WriteStartArray("runs");
+            w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
                 WriteRun(w, run);
+                FlushEvery(w);
             }
 
             w.WriteEndArray();
-            w.WriteStartArray("panels");
+            w.WriteStartArray("panels"u8);
             foreach (var p in solution.Panels)
             {
                 w.WriteStartObject();
-                w.WriteString("id", p.Id);
-                w.WriteString("system", p.System);
-                Numbers(w, "line_va", p.LineVa, 1);
-                Number(w, "neutral_current_a", p.NeutralCurrentA, 3);
-                Number(w, "imbalance_percent", p.ImbalancePercent, 2);
+                w.WriteString("id"u8, p.Id);
+                w.WriteString("system"u8, p.System);
+                Numbers(w, "line_va"u8, p.LineVa, 1);
+                Number(w, "neutral_current_a"u8, p.NeutralCurrentA, 3);
+                Number(w, "imbalance_percent"u8, p.ImbalancePercent, 2);
                 w.WriteEndObject();
             }
 
             w.WriteEndArray();
-            w.WriteStartArray("end_points");
+            w.WriteStartArray("end_points"u8);
             foreach (var e in solution.EndPoints)
             {
                 WriteEndPoint(w, e);
+                FlushEvery(w);
             }
 
             w.WriteEndArray();
@@ -81,17 +85,27 @@ public static class JsonResults
         stream.WriteByte((byte)'\n');
     }
 
+    // The writer keeps what it has written until flushed: hand it to the stream in blocks, so that a large
+    // document is never held whole in memory.
+    private static void FlushEvery(Utf8JsonWriter w)
+    {
+        if (w.BytesPending > FlushBytes)
+        {
+            w.Flush();
+        }
+    }
+
     /// <summary>Writes a finding object (kind, subject, value, limit, message, line, column).</summary>
     public static void WriteFinding(Utf8JsonWriter w, Finding f)
     {
         w.WriteStartObject();
-        w.WriteString("kind", f.Code);
-        w.WriteString("subject", f.Subject);
-        Number(w, "value", f.Value, 4);
-        Number(w, "limit", f.Limit, 4);
-        w.WriteString("message", f.Message);
-        w.WriteNumber("line", f.Location.Line);
-        w.WriteNumber("column", f.Location.Column);
+        w.WriteString("kind"u8, f.Code);
+        w.WriteString("subject"u8, f.Subject);
+        Number(w, "value"u8, f.Value, 4);
+        Number(w, "limit"u8, f.Limit, 4);
+        w.WriteString("message"u8, f.Message);
+        w.WriteNumber("line"u8, f.Location.Line);
+        w.WriteNumber("column"u8, f.Location.Column);
         w.WriteEndObject();
     }
 
@@ -108,12 +122,26 @@ public static class JsonResults
         }
     }
 
+    // As Number, with the property name as UTF-8 bytes (the results' own names: no transcoding per value).
+    private static void Number(Utf8JsonWriter w, ReadOnlySpan<byte> name, double? value, int decimals)
+    {
+        if (value is { } v && double.IsFinite(v))
+        {
+            w.WriteNumber(name, Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
+        }
+        else
+        {
+            w.WriteNull(name);
+        }
+    }
+
     // An array of rounded numbers; a non-finite one is written as null.
-    private static void Numbers(Utf8JsonWriter w, string name, IEnumerable<double> values, int decimals)
+    private static void Numbers(Utf8JsonWriter w, ReadOnlySpan<byte> name, IReadOnlyList<double> values, int decimals)
     {
         w.WriteStartArray(name);
-        foreach (var v in values)
+        for (var i = 0; i < values.Count; i++)
         {
+            var v = values[i];
             if (double.IsFinite(v))
             {
                 w.WriteNumberValue(Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
@@ -177,37 +205,37 @@ public static class JsonResults
     private static void WriteRun(Utf8JsonWriter w, RunResult r)
     {
         w.WriteStartObject();
-        w.WriteString("id", r.Id);
-        w.WriteString("kind", r.Kind switch { RunResultKind.Branch => "branch", RunResultKind.Transformer => "transformer", _ => "feeder" });
-        w.WriteString("from", r.From);
-        w.WriteString("to", r.To);
-        w.WriteString("system", r.System);
-        Number(w, "voltage_v", r.VoltageV, 3);
-        Number(w, "current_a", r.CurrentA, 3);
-        Number(w, "design_current_a", r.DesignCurrentA, 3);
-        Number(w, "power_factor", r.PowerFactor, 4);
-        NullableString(w, "size", r.Size);
-        NullableString(w, "material", r.Material);
-        NullableString(w, "raceway", r.Raceway);
-        w.WriteNumber("sets", r.Sets);
-        Number(w, "length_m", r.LengthM, 3);
-        Number(w, "temperature_c", r.TemperatureC, 2);
-        Number(w, "resistance_ohm_per_km", r.ResistanceOhmPerKm, 5);
-        Number(w, "reactance_ohm_per_km", r.ReactanceOhmPerKm, 5);
-        Number(w, "ampacity_a", r.AmpacityA, 2);
-        Number(w, "ocpd_a", r.OcpdA, 1);
-        Number(w, "drop_v", r.DropV, 3);
-        Number(w, "drop_percent", r.DropPercent, 4);
-        Number(w, "drop_percent_percent_sum", r.PercentSumDropPercent, 4);
-        Number(w, "drop_percent_load_flow", r.LoadFlowDropPercent, 4);
-        NullableString(w, "lines", r.Lines);
-        Numbers(w, "line_currents_a", r.LineCurrentsA, 3);
-        Number(w, "neutral_current_a", r.NeutralCurrentA, 3);
-        Number(w, "limit_percent", r.LimitPercent, 4);
-        Number(w, "max_length_m", r.MaxLengthM, 2);
-        Number(w, "max_length_total_m", r.MaxLengthTotalM, 2);
-        w.WriteBoolean("counts_in_total", r.CountsInTotal);
-        w.WriteStartArray("findings");
+        w.WriteString("id"u8, r.Id);
+        w.WriteString("kind"u8, r.Kind switch { RunResultKind.Branch => "branch", RunResultKind.Transformer => "transformer", _ => "feeder" });
+        w.WriteString("from"u8, r.From);
+        w.WriteString("to"u8, r.To);
+        w.WriteString("system"u8, r.System);
+        Number(w, "voltage_v"u8, r.VoltageV, 3);
+        Number(w, "current_a"u8, r.CurrentA, 3);
+        Number(w, "design_current_a"u8, r.DesignCurrentA, 3);
+        Number(w, "power_factor"u8, r.PowerFactor, 4);
+        NullableString(w, "size"u8, r.Size);
+        NullableString(w, "material"u8, r.Material);
+        NullableString(w, "raceway"u8, r.Raceway);
+        w.WriteNumber("sets"u8, r.Sets);
+        Number(w, "length_m"u8, r.LengthM, 3);
+        Number(w, "temperature_c"u8, r.TemperatureC, 2);
+        Number(w, "resistance_ohm_per_km"u8, r.ResistanceOhmPerKm, 5);
+        Number(w, "reactance_ohm_per_km"u8, r.ReactanceOhmPerKm, 5);
+        Number(w, "ampacity_a"u8, r.AmpacityA, 2);
+        Number(w, "ocpd_a"u8, r.OcpdA, 1);
+        Number(w, "drop_v"u8, r.DropV, 3);
+        Number(w, "drop_percent"u8, r.DropPercent, 4);
+        Number(w, "drop_percent_percent_sum"u8, r.PercentSumDropPercent, 4);
+        Number(w, "drop_percent_load_flow"u8, r.LoadFlowDropPercent, 4);
+        NullableString(w, "lines"u8, r.Lines);
+        Numbers(w, "line_currents_a"u8, r.LineCurrentsA, 3);
+        Number(w, "neutral_current_a"u8, r.NeutralCurrentA, 3);
+        Number(w, "limit_percent"u8, r.LimitPercent, 4);
+        Number(w, "max_length_m"u8, r.MaxLengthM, 2);
+        Number(w, "max_length_total_m"u8, r.MaxLengthTotalM, 2);
+        w.WriteBoolean("counts_in_total"u8, r.CountsInTotal);
+        w.WriteStartArray("findings"u8);
         foreach (var f in r.Findings)
         {
             WriteFinding(w, f);
@@ -220,36 +248,36 @@ public static class JsonResults
     private static void WriteEndPoint(Utf8JsonWriter w, EndPointResult e)
     {
         w.WriteStartObject();
-        w.WriteString("id", e.Id);
-        w.WriteString("name", e.Name);
-        w.WriteStartArray("path");
+        w.WriteString("id"u8, e.Id);
+        w.WriteString("name"u8, e.Name);
+        w.WriteStartArray("path"u8);
         foreach (var id in e.Path)
         {
             w.WriteStringValue(id);
         }
 
         w.WriteEndArray();
-        Number(w, "voltage_v", e.VoltageV, 3);
-        Number(w, "total_drop_percent", e.TotalDropPercent, 4);
-        Number(w, "limit_percent", e.LimitPercent, 4);
-        Number(w, "end_voltage_v", e.EndVoltageV, 3);
-        Number(w, "total_drop_percent_percent_sum", e.PercentSumTotalDropPercent, 4);
-        Number(w, "total_drop_percent_load_flow", e.LoadFlowTotalDropPercent, 4);
-        Number(w, "end_voltage_v_load_flow", e.LoadFlowEndVoltageV, 3);
+        Number(w, "voltage_v"u8, e.VoltageV, 3);
+        Number(w, "total_drop_percent"u8, e.TotalDropPercent, 4);
+        Number(w, "limit_percent"u8, e.LimitPercent, 4);
+        Number(w, "end_voltage_v"u8, e.EndVoltageV, 3);
+        Number(w, "total_drop_percent_percent_sum"u8, e.PercentSumTotalDropPercent, 4);
+        Number(w, "total_drop_percent_load_flow"u8, e.LoadFlowTotalDropPercent, 4);
+        Number(w, "end_voltage_v_load_flow"u8, e.LoadFlowEndVoltageV, 3);
         if (e.MotorStart is { } m)
         {
-            w.WriteStartObject("motor_start");
-            Number(w, "locked_rotor_kva", m.LockedRotorVa / 1000.0, 3);
-            Number(w, "terminal_dip_percent", m.TerminalDipPercent, 4);
-            Number(w, "panel_dip_percent", m.PanelDipPercent, 4);
-            Number(w, "limit_percent", m.LimitPercent, 4);
+            w.WriteStartObject("motor_start"u8);
+            Number(w, "locked_rotor_kva"u8, m.LockedRotorVa / 1000.0, 3);
+            Number(w, "terminal_dip_percent"u8, m.TerminalDipPercent, 4);
+            Number(w, "panel_dip_percent"u8, m.PanelDipPercent, 4);
+            Number(w, "limit_percent"u8, m.LimitPercent, 4);
             w.WriteEndObject();
         }
         else
         {
-            w.WriteNull("motor_start");
+            w.WriteNull("motor_start"u8);
         }
-        w.WriteStartArray("findings");
+        w.WriteStartArray("findings"u8);
         foreach (var f in e.Findings)
         {
             WriteFinding(w, f);
@@ -259,7 +287,7 @@ public static class JsonResults
         w.WriteEndObject();
     }
 
-    private static void NullableString(Utf8JsonWriter w, string name, string? value)
+    private static void NullableString(Utf8JsonWriter w, ReadOnlySpan<byte> name, string? value)
     {
         if (value is null)
         {

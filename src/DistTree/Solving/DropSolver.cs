@@ -14,6 +14,14 @@ namespace DistTree.Solving;
 /// </summary>
 public sealed class DropSolver
 {
+    // The text of each set of lines, by (int)Phases.
+    private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
+
+    // A transformer row's unit drops: its drop is not a conductor's, so none (shared, never written).
+    private static readonly double[] NoUnitDrops = new double[8];
+
+    private static readonly Finding[] NoFindings = [];
+
     private readonly ConductorCatalog _catalog;
 
     /// <summary>Creates a solver that takes conductor data from <paramref name="catalog"/>.</summary>
@@ -36,56 +44,83 @@ public sealed class DropSolver
         AccumulatePower(nodes, power, continuous);
         var phases = new PhaseFlow(network, power);
 
-        // Runs in network order, each transformer's row after its primary feeder's.
-        var runs = new List<RunResult>(n + 8);
-        var lineDrops = new List<double[]>(n + 8);
+        // Rows in network order, each transformer's row after its primary feeder's. Every figure is worked
+        // out in the drafts first; each result record is then made once.
         var incomingRow = new int[n];
         var transformerRow = new int[n];
-        Array.Fill(incomingRow, -1);
-        Array.Fill(transformerRow, -1);
+        var count = 0;
+        for (var i = 0; i < n; i++)
+        {
+            incomingRow[i] = nodes[i].Incoming is null ? -1 : count++;
+            transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
+        }
+
+        var rows = new RowDraft[count];
+        var lineDrops = new double[count * 8];
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
             if (node.Incoming is { } run)
             {
-                incomingRow[i] = runs.Count;
-                var (row, drops) = SolveRun(run, power, continuous[i], rules, frequency, phases);
-                runs.Add(row);
-                lineDrops.Add(drops);
+                rows[incomingRow[i]] = SolveRun(run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
             }
 
             if (node.Equipment?.Transformer is { } transformer)
             {
-                transformerRow[i] = runs.Count;
-                var (row, drops) = SolveTransformer(node, transformer, power[i], rules, phases);
-                runs.Add(row);
-                lineDrops.Add(drops);
+                rows[transformerRow[i]] = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
             }
         }
 
-        var flow = SolveLoadFlow(network, power, runs, incomingRow);
-        ChooseMethod(network, runs, incomingRow, transformerRow, flow, rules);
-        for (var r = 0; r < runs.Count; r++)
+        var flow = SolveLoadFlow(network, power, rows, incomingRow);
+        ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
+        foreach (ref var row in rows.AsSpan())
         {
-            if (runs[r].Kind != RunResultKind.Transformer)
+            if (row.Run is not null)
             {
-                runs[r] = runs[r] with { Findings = RunFindings(runs[r], nodes[runs[r].NodeIndex].Incoming!.Conductors) };
+                row.Findings = RunFindings(ref row);
             }
         }
 
-        var endPoints = SolveEndPoints(network, runs, lineDrops, incomingRow, transformerRow, power, flow, phases, rules);
-        AddReach(network, runs, incomingRow, endPoints, rules);
-        var findings = runs.Sum(r => r.Findings.Count) + endPoints.Sum(e => e.Findings.Count);
-        var worst = endPoints.Count == 0 ? null : endPoints.OrderByDescending(e => e.TotalDropPercent).ThenBy(e => e.Id, StringComparer.Ordinal).First();
+        var endPoints = SolveEndPoints(network, rows, lineDrops, incomingRow, transformerRow, power, flow, phases, rules);
+        AddReach(network, rows, incomingRow, endPoints, rules);
+        var runs = new RunResult[count];
+        var findings = 0;
+        for (var r = 0; r < count; r++)
+        {
+            runs[r] = Finish(ref rows[r], phases, rules);
+            findings += runs[r].Findings.Count;
+        }
+
+        EndPointResult? worst = null;
+        foreach (var e in endPoints)
+        {
+            findings += e.Findings.Count;
+            // The largest total, ties to the first id in ordinal order (Comparer<double> order: NaN lowest).
+            var order = worst is null ? 1 : e.TotalDropPercent.CompareTo(worst.TotalDropPercent);
+            if (order > 0 || (order == 0 && string.CompareOrdinal(e.Id, worst!.Id) < 0))
+            {
+                worst = e;
+            }
+        }
+
+        var panels = new List<PanelResult>();
+        foreach (var node in nodes)
+        {
+            if (node.Equipment is { Circuits.Count: > 0 })
+            {
+                panels.Add(phases.Panel(node));
+            }
+        }
+
         return new Solution
         {
             Project = project,
             Network = network,
             Runs = runs,
             EndPoints = endPoints,
-            Summary = new SolutionSummary(endPoints.Count, runs.Count, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
+            Summary = new SolutionSummary(endPoints.Length, runs.Length, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
-            Panels = nodes.Where(x => x.Equipment is { Circuits.Count: > 0 }).Select(phases.Panel).ToArray(),
+            Panels = panels.ToArray(),
             CatalogName = _catalog.SourceName,
         };
     }
@@ -124,8 +159,8 @@ public sealed class DropSolver
         }
     }
 
-    // A run's figures, and the drop in percent that each kind of circuit below sees on it (see LineDrops).
-    private (RunResult Row, double[] LineDrops) SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases)
+    // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
+    private RowDraft SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases, Span<double> lineDrops)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -140,11 +175,12 @@ public sealed class DropSolver
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
         var system = run.Source.System;
-        double[] unitR, unitX;
+        var unitR = new double[8];
+        var unitX = new double[8];
         if (points.Count > 0)
         {
-            unitR = Uniform(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
-            unitX = Uniform(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
+            Array.Fill(unitR, SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
+            Array.Fill(unitX, SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
         }
         else
         {
@@ -152,52 +188,35 @@ public sealed class DropSolver
             var scale = lineA > 0 ? currentA / lineA : 1.0;
             Span<Complex> deltaV = stackalloc Complex[3];
             phases.RunDeltaV(index, new Complex(km, 0), system.HasNeutral, scale, deltaV);
-            unitR = LineDrops(deltaV, system);
+            PhaseFlow.LineDrops(deltaV, system, unitR);
             phases.RunDeltaV(index, new Complex(0, km), system.HasNeutral, scale, deltaV);
-            unitX = LineDrops(deltaV, system);
+            PhaseFlow.LineDrops(deltaV, system, unitX);
         }
 
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
         var ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
-        figures = figures with { DropPercent = ownDrop, DropV = ownDrop / 100.0 * supply.VoltageV };
-
-        var row = new RunResult
+        for (var set = 0; set < 8; set++)
         {
-            Id = run.Id,
-            Kind = run.Kind == RunKind.Branch ? RunResultKind.Branch : RunResultKind.Feeder,
-            From = run.Source.Id,
-            To = run.Target.Id,
-            NodeIndex = run.Target.Index,
-            System = run.Source.System.Name,
-            VoltageV = supply.VoltageV,
-            Phases = supply.Phases,
+            lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
+        }
+
+        return new RowDraft
+        {
+            Node = run.Target,
+            Run = run,
             CurrentA = currentA,
             DesignCurrentA = designA,
-            PowerFactor = carried.PowerFactor,
-            ApparentPowerVa = carried.VoltAmperes,
-            Size = conductors.Size.Text,
-            Material = conductors.Material == Material.Copper ? "cu" : "al",
-            Raceway = RacewayWord(conductors.Raceway),
-            Sets = conductors.Sets,
-            LengthM = conductors.LengthM,
-            TemperatureC = figures.TemperatureC,
-            ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
-            ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
-            AmpacityA = figures.AmpacityA,
-            OcpdA = conductors.OcpdA,
-            DropV = figures.DropV,
-            DropPercent = figures.DropPercent,
-            PercentSumDropPercent = figures.DropPercent,
-            LimitPercent = run.LimitPercent,
-            NeutralCurrentA = system.HasNeutral ? phases.NeutralCurrentA(index) : null,
-            LineCurrentsA = phases.LineCurrentsA(index, PhaseRules.Lines(system)),
-            Lines = run.Kind == RunKind.Branch ? PhaseRules.Text(phases.Assigned[index]) : null,
+            Carried = carried,
+            Figures = figures,
             UnitDropsR = unitR,
             UnitDropsX = unitX,
             OwnLines = ownLines,
-            Location = conductors.Location,
+            DropPercent = ownDrop,
+            DropV = ownDrop / 100.0 * supply.VoltageV,
+            PercentSumDropPercent = ownDrop,
+            VoltageV = supply.VoltageV,
+            Findings = NoFindings,
         };
-        return (row, Enumerable.Range(0, 8).Select(set => (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set])).ToArray());
     }
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
@@ -215,25 +234,6 @@ public sealed class DropSolver
         }
 
         return worst;
-    }
-
-    // The drop a circuit below sees on this run, by the lines it is on: index (int)Phases (1 = A … 7 = ABC).
-    private static double[] LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system)
-    {
-        var drops = new double[8];
-        for (var set = 1; set < 8; set++)
-        {
-            drops[set] = PhaseFlow.DropPercent(deltaV, (Phases)set, system);
-        }
-
-        return drops;
-    }
-
-    private static double[] Uniform(double dropPercent)
-    {
-        var drops = new double[8];
-        Array.Fill(drops, dropPercent);
-        return drops;
     }
 
     // Loads along a run: span by span, each span carrying the phasor sum of the loads beyond it, at the
@@ -277,7 +277,7 @@ public sealed class DropSolver
     };
 
     // The load flow on the same impedances the percent sum used.
-    private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, List<RunResult> runs, int[] incomingRow)
+    private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, RowDraft[] rows, int[] incomingRow)
     {
         var n = network.Nodes.Count;
         var z = new Complex[n];
@@ -285,9 +285,9 @@ public sealed class DropSolver
         {
             if (incomingRow[i] >= 0)
             {
-                var r = runs[incomingRow[i]];
-                var km = r.LengthM / 1000.0 / r.Sets;
-                z[i] = new Complex(r.ResistanceOhmPerKm!.Value * km, r.ReactanceOhmPerKm!.Value * km);
+                ref var r = ref rows[incomingRow[i]];
+                var km = r.Run!.Conductors.LengthM / 1000.0 / r.Run.Conductors.Sets;
+                z[i] = new Complex(r.Figures.ResistanceOhmPerKm * km, r.Figures.ReactanceOhmPerKm * km);
             }
         }
 
@@ -295,7 +295,7 @@ public sealed class DropSolver
     }
 
     // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
-    private static void ChooseMethod(DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
+    private static void ChooseMethod(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
     {
         if (!flow.Converged)
         {
@@ -309,136 +309,158 @@ public sealed class DropSolver
         }
 
         var nodes = network.Nodes;
-        void Record(int row, double drop)
+        void Record(ref RowDraft r, double drop)
         {
-            var r = runs[row];
-            runs[row] = rules.Method == SolutionMethod.LoadFlow
-                ? r with { LoadFlowDropPercent = drop, DropPercent = drop, DropV = drop / 100.0 * r.VoltageV }
-                : r with { LoadFlowDropPercent = drop };
+            r.LoadFlowDropPercent = drop;
+            if (rules.Method == SolutionMethod.LoadFlow)
+            {
+                r.DropPercent = drop;
+                r.DropV = drop / 100.0 * r.VoltageV;
+            }
         }
 
         for (var i = 1; i < nodes.Count; i++)
         {
             if (incomingRow[i] >= 0)
             {
-                Record(incomingRow[i], (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0);
+                Record(ref rows[incomingRow[i]], (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0);
             }
 
             if (transformerRow[i] >= 0)
             {
-                Record(transformerRow[i], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
+                Record(ref rows[transformerRow[i]], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
             }
         }
     }
 
-    private List<Finding> RunFindings(RunResult r, Run conductors)
+    private IReadOnlyList<Finding> RunFindings(ref RowDraft r)
     {
-        var findings = new List<Finding>();
-        var what = r.Kind == RunResultKind.Branch ? "branch circuit" : "feeder";
-        if (r.LimitPercent is { } limit && r.DropPercent > limit + 1e-9)
+        List<Finding>? findings = null;
+        var run = r.Run!;
+        var conductors = run.Conductors;
+        var id = run.Id;
+        var branch = run.Kind == RunKind.Branch;
+        var what = branch ? "branch circuit" : "feeder";
+        var size = conductors.Size.Text;
+        var sets = conductors.Sets;
+        var limit = run.LimitPercent;
+        if (r.DropPercent > limit + 1e-9)
         {
-            findings.Add(new Finding(
-                r.Kind == RunResultKind.Branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
-                r.Id,
+            (findings ??= []).Add(new Finding(
+                branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
+                id,
                 r.DropPercent,
                 limit,
-                Invariant($"{what} {r.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {r.LengthM:0.0} m of {r.Size}) exceeds its {limit:0.##} % limit"),
-                r.Location));
+                Invariant($"{what} {id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
+                conductors.Location));
         }
 
-        if (r.AmpacityA is { } ampacity)
+        if (r.Figures.AmpacityA is { } ampacity)
         {
             if (r.DesignCurrentA > ampacity + 1e-9)
             {
-                findings.Add(new Finding(
+                (findings ??= []).Add(new Finding(
                     FindingKind.Ampacity,
-                    r.Id,
+                    id,
                     r.DesignCurrentA,
                     ampacity,
-                    Invariant($"{what} {r.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {r.Sets}×{r.Size} ampacity of {ampacity:0.#} A"),
-                    r.Location));
+                    Invariant($"{what} {id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
+                    conductors.Location));
             }
 
-            if (r.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity))
+            if (conductors.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity))
             {
-                findings.Add(new Finding(
+                (findings ??= []).Add(new Finding(
                     FindingKind.OcpdAboveAmpacity,
-                    r.Id,
+                    id,
                     ocpd,
                     ampacity,
-                    Invariant($"{what} {r.Id}: the {ocpd:0} A overcurrent device is above the {r.Sets}×{r.Size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
-                    r.Location));
+                    Invariant($"{what} {id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
+                    conductors.Location));
             }
         }
 
-        if (r.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > (smallMax * conductors.Sets) + 1e-9)
+        if (conductors.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > (smallMax * sets) + 1e-9)
         {
-            findings.Add(new Finding(
+            (findings ??= []).Add(new Finding(
                 FindingKind.OcpdAboveAmpacity,
-                r.Id,
+                id,
                 device,
                 smallMax,
-                Invariant($"{what} {r.Id}: a {r.Size} {r.Material} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
-                r.Location));
+                Invariant($"{what} {id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                conductors.Location));
         }
 
-        return findings;
+        return findings is null ? NoFindings : findings;
     }
 
     // Regulation ≈ (%R·cos θ + %X·sin θ)·(S/S_rated) − tap, %R = %Z/√(1 + (X/R)²), %X = %R·X/R (common practice).
     // Per secondary line: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap; balanced, the same as the three-phase formula.
-    private static (RunResult Row, double[] LineDrops) SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases)
+    private static RowDraft SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases, Span<double> drops)
     {
         var supply = data.Secondary.FeederSupply;
         var (percentR, percentX) = PercentRx(data);
         var loading = carried.VoltAmperes / (data.Kva * 1000.0);
-        var perLine = new double[3];
+        Span<double> perLine = stackalloc double[3];
         phases.TransformerRegulation(node.Index, data, percentR, percentX, perLine);
-        var drops = new double[8];
+        var lines = PhaseRules.Lines(data.Secondary);
         for (var set = 1; set < 8; set++)
         {
-            var on = PhaseFlow.LinesOf((Phases)set, PhaseRules.Lines(data.Secondary));
-            drops[set] = on.Count == 0 ? perLine[0] : (on.Count == 2 ? (perLine[on[0]] + perLine[on[1]]) / 2 : on.Max(x => perLine[x]));
+            var mask = set & ((1 << lines) - 1);
+            drops[set] = BitOperations.PopCount((uint)mask) switch
+            {
+                0 => perLine[0],
+                2 => (perLine[BitOperations.TrailingZeroCount(mask)] + perLine[31 - BitOperations.LeadingZeroCount((uint)mask)]) / 2,
+                _ => WorstOf(perLine, mask),
+            };
         }
 
         var dropPercent = drops[(int)Phases.ABC];
-        var ratedA = LoadPower.CurrentA(data.Kva * 1000.0, supply);
         var currentA = LoadPower.CurrentA(carried.VoltAmperes, supply);
-        var findings = new List<Finding>();
+        IReadOnlyList<Finding> findings = NoFindings;
         if (loading > 1 + 1e-9)
         {
-            findings.Add(new Finding(
+            findings = [new Finding(
                 FindingKind.TransformerOverload,
                 node.Id,
                 carried.VoltAmperes / 1000.0,
                 data.Kva,
                 Invariant($"transformer {node.Id}: load {carried.VoltAmperes / 1000.0:0.0} kVA exceeds its {data.Kva:0.#} kVA rating ({loading * 100:0} %)"),
-                node.Equipment!.Location));
+                node.Equipment!.Location)];
         }
 
-        var row = new RunResult
+        return new RowDraft
         {
-            Id = node.Id,
-            Kind = RunResultKind.Transformer,
-            From = node.Id,
-            To = node.Id,
-            NodeIndex = node.Index,
-            System = data.Secondary.Name,
-            VoltageV = supply.VoltageV,
-            Phases = supply.Phases,
+            Node = node,
+            Transformer = data,
             CurrentA = currentA,
             DesignCurrentA = currentA,
-            PowerFactor = carried.PowerFactor,
-            ApparentPowerVa = carried.VoltAmperes,
-            AmpacityA = ratedA,
-            DropV = dropPercent / 100.0 * supply.VoltageV,
+            Carried = carried,
+            RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
+            UnitDropsR = NoUnitDrops,
+            UnitDropsX = NoUnitDrops,
             DropPercent = dropPercent,
+            DropV = dropPercent / 100.0 * supply.VoltageV,
             PercentSumDropPercent = dropPercent,
-            CountsInTotal = rules.TransformerDrop == TransformerDropMode.Count,
+            VoltageV = supply.VoltageV,
             Findings = findings,
-            Location = node.Equipment!.Location,
+            WidensToAllLines = PhaseRules.Lines(data.Secondary) != PhaseRules.Lines(node.Equipment!.System),
         };
-        return (row, drops);
+    }
+
+    // The largest of the per-line figures on the lines of a set (bits 0..2 = A..C).
+    private static double WorstOf(ReadOnlySpan<double> perLine, int mask)
+    {
+        var worst = double.NegativeInfinity;
+        for (var x = 0; x < 3; x++)
+        {
+            if ((mask & (1 << x)) != 0)
+            {
+                worst = Math.Max(worst, perLine[x]);
+            }
+        }
+
+        return worst;
     }
 
     private static (double PercentR, double PercentX) PercentRx(TransformerData data)
@@ -447,15 +469,26 @@ public sealed class DropSolver
         return (percentR, percentR * data.XOverR);
     }
 
-    private static List<EndPointResult> SolveEndPoints(
-        DistributionNetwork network, List<RunResult> runs, List<double[]> lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
+    private static EndPointResult[] SolveEndPoints(
+        DistributionNetwork network, RowDraft[] rows, double[] lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
         LoadFlowResult flow, PhaseFlow phases, Rules rules)
     {
         var nodes = network.Nodes;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
-        var endPoints = new List<EndPointResult>();
-        var counted = new List<int>();
-        var path = new List<string>();
+        var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
+
+        // Depth of every node (the service is 1), top-down, so that each path is filled in place.
+        var depth = new int[nodes.Count];
+        var endPointCount = 0;
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            depth[i] = i == 0 ? 1 : depth[nodes[i].ParentIndex] + 1;
+            endPointCount += nodes[i].Circuit is null ? 0 : 1;
+        }
+
+        var endPoints = new EndPointResult[endPointCount];
+        var e = 0;
+        var countedBuffer = new int[16];
         foreach (var node in nodes)
         {
             if (node.Circuit is not { } circuit)
@@ -463,17 +496,23 @@ public sealed class DropSolver
                 continue;
             }
 
-            counted.Clear();
-            path.Clear();
+            var path = new string[depth[node.Index]];
+            var count = 0;
             var counting = true;
+            var at = path.Length;
             for (var i = node.Index; i >= 0; i = nodes[i].ParentIndex)
             {
-                path.Add(nodes[i].Id);
+                path[--at] = nodes[i].Id;
+                if (count + 2 > countedBuffer.Length)
+                {
+                    Array.Resize(ref countedBuffer, countedBuffer.Length * 2);
+                }
+
                 if (transformerRow[i] >= 0 && i != node.Index)
                 {
                     if (counting && !newOrigin)
                     {
-                        counted.Add(transformerRow[i]);
+                        countedBuffer[count++] = transformerRow[i];
                     }
 
                     counting &= !newOrigin;
@@ -481,50 +520,49 @@ public sealed class DropSolver
 
                 if (counting && incomingRow[i] >= 0)
                 {
-                    counted.Add(incomingRow[i]);
+                    countedBuffer[count++] = incomingRow[i];
                 }
             }
 
-            path.Reverse();
             double percentSum = 0, loadFlow = 0;
 
             // Walking up from the end point: its own lines, until a transformer between systems of different
             // line counts, above which the worst line counts (the safe side).
             var set = (int)phases.Assigned[node.Index];
-            var shares = new double[counted.Count];
-            for (var k = 0; k < counted.Count; k++)
+            var shares = new double[count];
+            var runIndices = new int[count];
+            for (var k = 0; k < count; k++)
             {
-                var r = counted[k];
-                shares[counted.Count - 1 - k] = rules.Method == SolutionMethod.LoadFlow && flow.Converged ? runs[r].LoadFlowDropPercent!.Value : lineDrops[r][set];
-                percentSum += lineDrops[r][set];
-                loadFlow += runs[r].LoadFlowDropPercent ?? 0;
-                if (runs[r].Kind == RunResultKind.Transformer && nodes[runs[r].NodeIndex].Equipment is { Transformer: { } t } e
-                    && PhaseRules.Lines(t.Secondary) != PhaseRules.Lines(e.System))
+                var r = countedBuffer[k];
+                ref var row = ref rows[r];
+                runIndices[count - 1 - k] = r;
+                shares[count - 1 - k] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
+                percentSum += lineDrops[(r * 8) + set];
+                loadFlow += row.LoadFlowDropPercent ?? 0;
+                if (row.WidensToAllLines)
                 {
                     set = (int)Phases.ABC;
                 }
             }
 
-            counted.Reverse();
-            var total = rules.Method == SolutionMethod.LoadFlow && flow.Converged ? loadFlow : percentSum;
-
+            var total = onLoadFlow ? loadFlow : percentSum;
             var limit = rules.TotalLimitPercent;
-            var findings = new List<Finding>(1);
+            List<Finding>? findings = null;
             if (total > limit + 1e-9)
             {
-                findings.Add(new Finding(
+                (findings ??= []).Add(new Finding(
                     FindingKind.TotalDrop,
                     circuit.FullId,
                     total,
                     limit,
-                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && counted.Count < path.Count - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && count < path.Length - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, runs, incomingRow, transformerRow, node, power[node.Index], rules) : null;
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[node.Index], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
-                findings.Add(new Finding(
+                (findings ??= []).Add(new Finding(
                     FindingKind.MotorStart,
                     circuit.FullId,
                     start.TerminalDipPercent,
@@ -533,14 +571,14 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            endPoints.Add(new EndPointResult
+            endPoints[e++] = new EndPointResult
             {
                 Id = circuit.FullId,
                 Name = circuit.Name,
                 Panel = nodes[node.ParentIndex].Id,
                 NodeIndex = node.Index,
-                Path = path.ToArray(),
-                RunIndices = counted.ToArray(),
+                Path = path,
+                RunIndices = runIndices,
                 RunSharesPercent = shares,
                 VoltageV = circuit.Supply.VoltageV,
                 TotalDropPercent = total,
@@ -550,8 +588,8 @@ public sealed class DropSolver
                 LimitPercent = limit,
                 EndVoltageV = circuit.Supply.VoltageV * (1 - (total / 100.0)),
                 MotorStart = start,
-                Findings = findings,
-            });
+                Findings = findings is null ? NoFindings : findings,
+            };
         }
 
         return endPoints;
@@ -561,7 +599,7 @@ public sealed class DropSolver
     // X_loop the run's impedance (both conductors for single-phase); on a transformer (%R·ΔP + %X·ΔQ)/S_rated.
     // Superposed on the steady drops of the whole path (a new origin does not stop a physical dip).
     private static MotorStartResult MotorStartCheck(
-        DistributionNetwork network, List<RunResult> runs, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
+        DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
     {
         var nodes = network.Nodes;
         var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
@@ -573,10 +611,11 @@ public sealed class DropSolver
             var steadyHere = 0.0;
             if (incomingRow[i] >= 0)
             {
-                var r = runs[incomingRow[i]];
-                var loop = r.Phases == 3 ? 1.0 : 2.0;
-                var km = r.LengthM / 1000.0 / r.Sets * loop;
-                extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm!.Value * km) + (delta.Vars * r.ReactanceOhmPerKm!.Value * km)) / (r.VoltageV * r.VoltageV);
+                ref var r = ref rows[incomingRow[i]];
+                var conductors = r.Run!.Conductors;
+                var loop = r.Run.Supply.Phases == 3 ? 1.0 : 2.0;
+                var km = conductors.LengthM / 1000.0 / conductors.Sets * loop;
+                extraHere += 100.0 * ((delta.Watts * r.Figures.ResistanceOhmPerKm * km) + (delta.Vars * r.Figures.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
             }
 
@@ -585,7 +624,7 @@ public sealed class DropSolver
                 var t = nodes[i].Equipment!.Transformer!;
                 var (percentR, percentX) = PercentRx(t);
                 extraHere += ((percentR * delta.Watts) + (percentX * delta.Vars)) / (t.Kva * 1000.0);
-                steadyHere += runs[transformerRow[i]].DropPercent;
+                steadyHere += rows[transformerRow[i]].DropPercent;
             }
 
             terminal += extraHere + steadyHere;
@@ -601,7 +640,7 @@ public sealed class DropSolver
     // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it; points
     // scale with the run), so L_max = L·limit/drop. Total: the least slack (limit − total) of the end points
     // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
-    private static void AddReach(DistributionNetwork network, List<RunResult> runs, int[] incomingRow, List<EndPointResult> endPoints, Rules rules)
+    private static void AddReach(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, EndPointResult[] endPoints, Rules rules)
     {
         var nodes = network.Nodes;
         var slack = new double[nodes.Count];
@@ -618,12 +657,10 @@ public sealed class DropSolver
             var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
             if (incomingRow[i] >= 0)
             {
-                var row = runs[incomingRow[i]];
-                runs[incomingRow[i]] = row with
-                {
-                    MaxLengthM = Reach(row.LengthM, row.DropPercent, row.LimitPercent!.Value),
-                    MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(row.LengthM, row.DropPercent, row.DropPercent + visible),
-                };
+                ref var row = ref rows[incomingRow[i]];
+                var lengthM = row.Run!.Conductors.LengthM;
+                row.MaxLengthM = Reach(lengthM, row.DropPercent, row.Run.LimitPercent);
+                row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
             }
 
             var parent = node.ParentIndex;
@@ -634,5 +671,114 @@ public sealed class DropSolver
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
 
+    // The result record of a finished draft.
+    private static RunResult Finish(ref RowDraft d, PhaseFlow phases, Rules rules)
+    {
+        var node = d.Node;
+        if (d.Run is not { } run)
+        {
+            var t = d.Transformer!;
+            return new RunResult
+            {
+                Id = node.Id,
+                Kind = RunResultKind.Transformer,
+                From = node.Id,
+                To = node.Id,
+                NodeIndex = node.Index,
+                System = t.Secondary.Name,
+                VoltageV = d.VoltageV,
+                Phases = t.Secondary.FeederSupply.Phases,
+                CurrentA = d.CurrentA,
+                DesignCurrentA = d.DesignCurrentA,
+                PowerFactor = d.Carried.PowerFactor,
+                ApparentPowerVa = d.Carried.VoltAmperes,
+                AmpacityA = d.RatedA,
+                DropV = d.DropV,
+                DropPercent = d.DropPercent,
+                PercentSumDropPercent = d.PercentSumDropPercent,
+                LoadFlowDropPercent = d.LoadFlowDropPercent,
+                CountsInTotal = rules.TransformerDrop == TransformerDropMode.Count,
+                Findings = d.Findings,
+                UnitDropsR = d.UnitDropsR,
+                UnitDropsX = d.UnitDropsX,
+                Location = node.Equipment!.Location,
+            };
+        }
+
+        var conductors = run.Conductors;
+        var system = run.Source.System;
+        var branch = run.Kind == RunKind.Branch;
+        return new RunResult
+        {
+            Id = run.Id,
+            Kind = branch ? RunResultKind.Branch : RunResultKind.Feeder,
+            From = run.Source.Id,
+            To = node.Id,
+            NodeIndex = node.Index,
+            System = system.Name,
+            VoltageV = d.VoltageV,
+            Phases = run.Supply.Phases,
+            CurrentA = d.CurrentA,
+            DesignCurrentA = d.DesignCurrentA,
+            PowerFactor = d.Carried.PowerFactor,
+            ApparentPowerVa = d.Carried.VoltAmperes,
+            Size = conductors.Size.Text,
+            Material = MaterialWord(conductors.Material),
+            Raceway = RacewayWord(conductors.Raceway),
+            Sets = conductors.Sets,
+            LengthM = conductors.LengthM,
+            TemperatureC = d.Figures.TemperatureC,
+            ResistanceOhmPerKm = d.Figures.ResistanceOhmPerKm,
+            ReactanceOhmPerKm = d.Figures.ReactanceOhmPerKm,
+            AmpacityA = d.Figures.AmpacityA,
+            OcpdA = conductors.OcpdA,
+            DropV = d.DropV,
+            DropPercent = d.DropPercent,
+            PercentSumDropPercent = d.PercentSumDropPercent,
+            LoadFlowDropPercent = d.LoadFlowDropPercent,
+            LimitPercent = run.LimitPercent,
+            MaxLengthM = d.MaxLengthM,
+            MaxLengthTotalM = d.MaxLengthTotalM,
+            NeutralCurrentA = system.HasNeutral ? phases.NeutralCurrentA(node.Index) : null,
+            LineCurrentsA = phases.LineCurrentsA(node.Index, PhaseRules.Lines(system)),
+            Lines = branch ? LinesText[(int)phases.Assigned[node.Index]] : null,
+            Findings = d.Findings,
+            UnitDropsR = d.UnitDropsR,
+            UnitDropsX = d.UnitDropsX,
+            OwnLines = d.OwnLines,
+            Location = conductors.Location,
+        };
+    }
+
+    private static string MaterialWord(Material material) => material == Material.Copper ? "cu" : "al";
+
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// A row's figures while the solve is under way: every figure of a run or transformer, filled in stage by
+    /// stage (the run, the load flow, the findings, the reach) before its <see cref="RunResult"/> is made.
+    /// </summary>
+    private struct RowDraft
+    {
+        public NetworkNode Node;
+        public NetworkRun? Run;
+        public TransformerData? Transformer;
+        public double CurrentA;
+        public double DesignCurrentA;
+        public ComplexPower Carried;
+        public RunFigures Figures;
+        public double RatedA;
+        public double[] UnitDropsR;
+        public double[] UnitDropsX;
+        public int OwnLines;
+        public double VoltageV;
+        public double DropPercent;
+        public double DropV;
+        public double PercentSumDropPercent;
+        public double? LoadFlowDropPercent;
+        public double? MaxLengthM;
+        public double? MaxLengthTotalM;
+        public IReadOnlyList<Finding> Findings;
+        public bool WidensToAllLines;
+    }
 }

@@ -20,6 +20,14 @@ internal sealed class PhaseFlow
     private static readonly Complex[] ThreeLines = [Complex.FromPolarCoordinates(1, 0), Complex.FromPolarCoordinates(1, -2 * Math.PI / 3), Complex.FromPolarCoordinates(1, 2 * Math.PI / 3)];
     private static readonly Complex[] TwoLines = [Complex.One, -Complex.One];
 
+    // The sets of lines a balanced circuit may take, by poles and the panel's lines (see Candidates).
+    private static readonly Phases[] OneOfThree = [Phases.A, Phases.B, Phases.C];
+    private static readonly Phases[] OneOfTwo = [Phases.A, Phases.B];
+    private static readonly Phases[] PairOfThree = [Phases.AB, Phases.BC, Phases.CA];
+    private static readonly Phases[] AllThree = [Phases.ABC];
+    private static readonly Phases[] BothOfTwo = [Phases.AB];
+    private static readonly Phases[] TheOne = [Phases.A];
+
     private readonly DistributionNetwork _network;
 
     public PhaseFlow(DistributionNetwork network, ComplexPower[] power)
@@ -96,41 +104,52 @@ internal sealed class PhaseFlow
     }
 
     /// <summary>
-    /// The drop in percent that a circuit on <paramref name="phases"/> sees from per-line ΔV on a run of
-    /// <paramref name="system"/>: one line, its line-to-neutral drop; two, their line-to-line drop; three, the worst line.
+    /// Fills <paramref name="into"/>[set] for each set of lines (set = (int)<see cref="Phases"/>, 1 = A … 7 = ABC)
+    /// with the drop in percent that a circuit on those lines sees from per-line ΔV on a run of
+    /// <paramref name="system"/>: one line, its line-to-neutral drop; two, their line-to-line drop; three, the
+    /// worst line; a set with none of the system's lines, line A's. <paramref name="into"/>[0] is left as it is.
     /// </summary>
-    public static double DropPercent(ReadOnlySpan<Complex> deltaV, Phases phases, ElectricalSystem system)
+    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into)
     {
         var lines = PhaseRules.Lines(system);
-        var on = LinesOf(phases, lines);
-        var v = SetV(on.Count, system);
-        if (on.Count == 2)
-        {
-            var u = Unit(on[0], lines) - Unit(on[1], lines);
-            return ((deltaV[on[0]] - deltaV[on[1]]) * Complex.Conjugate(u)).Real / u.Magnitude / v * 100.0;
-        }
+        var single = SetV(1, system);
+        var pair = SetV(2, system);
+        var perLine = LineToNeutralV(system);
 
-        var worst = double.NegativeInfinity;
-        foreach (var x in on.Count == 0 ? LinesOf(Phases.ABC, 1) : on)
-        {
-            worst = Math.Max(worst, (deltaV[x] * Complex.Conjugate(Unit(x, lines))).Real / v * 100.0);
-        }
-
-        return worst;
-    }
-
-    /// <summary>The worst line-to-neutral drop in percent (a feeder's own figure).</summary>
-    public static double WorstLinePercent(ReadOnlySpan<Complex> deltaV, ElectricalSystem system)
-    {
-        var lines = PhaseRules.Lines(system);
-        var vln = LineToNeutralV(system);
-        var worst = double.NegativeInfinity;
+        // The part of each line's ΔV in phase with the line's voltage.
+        Span<double> inPhase = stackalloc double[3];
         for (var x = 0; x < lines; x++)
         {
-            worst = Math.Max(worst, (deltaV[x] * Complex.Conjugate(Unit(x, lines))).Real / vln * 100.0);
+            inPhase[x] = (deltaV[x] * Complex.Conjugate(Unit(x, lines))).Real;
         }
 
-        return worst;
+        for (var set = 1; set < 8; set++)
+        {
+            var on = set & ((1 << lines) - 1);
+            switch (BitOperations.PopCount((uint)on))
+            {
+                case 0:
+                    into[set] = inPhase[0] / perLine * 100.0;
+                    break;
+                case 1:
+                    into[set] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
+                    break;
+                case 2:
+                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                    var u = Unit(a, lines) - Unit(b, lines);
+                    into[set] = ((deltaV[a] - deltaV[b]) * Complex.Conjugate(u)).Real / u.Magnitude / pair * 100.0;
+                    break;
+                default:
+                    var worst = double.NegativeInfinity;
+                    for (var x = 0; x < 3; x++)
+                    {
+                        worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
+                    }
+
+                    into[set] = worst;
+                    break;
+            }
+        }
     }
 
     /// <summary>A transformer's regulation per secondary line, percent: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap.</summary>
@@ -171,15 +190,17 @@ internal sealed class PhaseFlow
     {
         var lines = PhaseRules.Lines(system);
         var power = new Complex(s.Watts, s.Vars);
-        var on = LinesOf(phases, lines);
-        var v = SetV(on.Count, system);
-        if (on.Count == 1)
+        var on = (int)phases & ((1 << lines) - 1);
+        var count = BitOperations.PopCount((uint)on);
+        var v = SetV(count, system);
+        if (count == 1)
         {
-            into[on[0]] += Complex.Conjugate(power / (v * Unit(on[0], lines)));
+            var x = BitOperations.TrailingZeroCount(on);
+            into[x] += Complex.Conjugate(power / (v * Unit(x, lines)));
         }
-        else if (on.Count == 2)
+        else if (count == 2)
         {
-            var (x, y) = (on[0], on[1]);
+            var (x, y) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
             var u = Unit(x, lines) - Unit(y, lines);
             var i = Complex.Conjugate(power / (v * u / u.Magnitude));
             into[x] += i;
@@ -187,26 +208,14 @@ internal sealed class PhaseFlow
         }
         else
         {
-            foreach (var x in on)
+            for (var x = 0; x < lines; x++)
             {
-                into[x] += Complex.Conjugate(power / on.Count / (v * Unit(x, lines)));
+                if ((on & (1 << x)) != 0)
+                {
+                    into[x] += Complex.Conjugate(power / count / (v * Unit(x, lines)));
+                }
             }
         }
-    }
-
-    /// <summary>The indices (0 = A) of the lines in a set, limited to the system's lines.</summary>
-    public static List<int> LinesOf(Phases phases, int lines)
-    {
-        var list = new List<int>(3);
-        for (var x = 0; x < lines; x++)
-        {
-            if (((int)phases & (1 << x)) != 0)
-            {
-                list.Add(x);
-            }
-        }
-
-        return list;
     }
 
     // Circuits without stated or numbered phases, largest first, each onto the least-loaded line (1 pole) or
@@ -214,6 +223,8 @@ internal sealed class PhaseFlow
     private void Assign(ComplexPower[] power)
     {
         var nodes = _network.Nodes;
+        Span<double> load = stackalloc double[3];
+        var automatic = new List<int>();
         foreach (var panel in nodes)
         {
             if (panel.Circuit is not null || panel.Children.Count == 0)
@@ -222,8 +233,8 @@ internal sealed class PhaseFlow
             }
 
             var lines = PhaseRules.Lines(panel.System);
-            var load = new double[3];
-            var automatic = new List<int>();
+            load.Clear();
+            automatic.Clear();
             foreach (var child in panel.Children)
             {
                 if (nodes[child].Circuit is not { } circuit)
@@ -234,11 +245,7 @@ internal sealed class PhaseFlow
                 if (circuit.Phases is { } phases)
                 {
                     Assigned[child] = phases;
-                    var on = LinesOf(phases, lines);
-                    foreach (var x in on)
-                    {
-                        load[x] += power[child].VoltAmperes / on.Count;
-                    }
+                    AddLoad(load, phases, lines, power[child].VoltAmperes);
                 }
                 else
                 {
@@ -246,15 +253,28 @@ internal sealed class PhaseFlow
                 }
             }
 
-            foreach (var child in automatic.OrderByDescending(c => power[c].VoltAmperes).ThenBy(c => nodes[c].Id, StringComparer.Ordinal))
+            // Largest first; ids are unique in a panel, so the order is total.
+            automatic.Sort((a, b) =>
+            {
+                var order = power[b].VoltAmperes.CompareTo(power[a].VoltAmperes);
+                return order != 0 ? order : string.CompareOrdinal(nodes[a].Id, nodes[b].Id);
+            });
+            foreach (var child in automatic)
             {
                 var poles = Math.Min(nodes[child].Circuit!.Poles, lines);
                 var best = Phases.None;
                 var bestLoad = double.PositiveInfinity;
                 foreach (var candidate in Candidates(poles, lines))
                 {
-                    var on = LinesOf(candidate, lines);
-                    var sum = on.Sum(x => load[x]);
+                    var sum = 0.0;
+                    for (var x = 0; x < lines; x++)
+                    {
+                        if (((int)candidate & (1 << x)) != 0)
+                        {
+                            sum += load[x];
+                        }
+                    }
+
                     if (sum < bestLoad - 1e-9)
                     {
                         best = candidate;
@@ -263,23 +283,33 @@ internal sealed class PhaseFlow
                 }
 
                 Assigned[child] = best;
-                var chosen = LinesOf(best, lines);
-                foreach (var x in chosen)
-                {
-                    load[x] += power[child].VoltAmperes / chosen.Count;
-                }
+                AddLoad(load, best, lines, power[child].VoltAmperes);
+            }
+        }
+    }
+
+    // Spreads apparent power evenly over the lines of a set (limited to the system's lines).
+    private static void AddLoad(Span<double> load, Phases phases, int lines, double voltAmperes)
+    {
+        var on = (int)phases & ((1 << lines) - 1);
+        var count = BitOperations.PopCount((uint)on);
+        for (var x = 0; x < lines; x++)
+        {
+            if ((on & (1 << x)) != 0)
+            {
+                load[x] += voltAmperes / count;
             }
         }
     }
 
     private static Phases[] Candidates(int poles, int lines) => (poles, lines) switch
     {
-        (1, 3) => [Phases.A, Phases.B, Phases.C],
-        (1, 2) => [Phases.A, Phases.B],
-        (2, 3) => [Phases.AB, Phases.BC, Phases.CA],
-        (_, 3) => [Phases.ABC],
-        (_, 2) => [Phases.AB],
-        _ => [Phases.A],
+        (1, 3) => OneOfThree,
+        (1, 2) => OneOfTwo,
+        (2, 3) => PairOfThree,
+        (_, 3) => AllThree,
+        (_, 2) => BothOfTwo,
+        _ => TheOne,
     };
 
     private void Accumulate(ComplexPower[] power)
