@@ -3,6 +3,9 @@ using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Reports;
 using DistTree.Solving;
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
 using Json.Schema;
 
 namespace DistTree.Tests.Reports;
@@ -75,5 +78,61 @@ public sealed class JsonResultsTests
             "{ id: \"1\", poles: 1, load: { va: 1.7976931348623157e308 }, run: { length: 10, size: 12 AWG } }");
         using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
         Assert.Equal(JsonValueKind.Null, doc.RootElement.GetProperty("panels")[0].GetProperty("line_va")[0].ValueKind);
+    }
+
+    // The fast number text against System.Text.Json's own: the writer's text for the rounded double is the reference.
+    [Property(MaxTest = 20_000)]
+    public Property TryFormatRounded_MatchesTheWritersText(NormalFloat value, PositiveInt exponent, byte decimals)
+    {
+        var d = decimals % 7;
+        var v = value.Get * Math.Pow(10, (exponent.Get % 24) - 12);
+        return (Reference(v, d) == Fast(v, d) || Fast(v, d) is null).ToProperty();
+    }
+
+    // Figures of the size the results hold (up to about 3·10^8, with every fraction): the fast text is used and equal.
+    [Property(MaxTest = 20_000)]
+    public Property TryFormatRounded_TypicalFigures_UseTheFastTextAndMatch(int whole, int fraction, byte decimals)
+    {
+        var d = decimals % 7;
+        var v = (whole / 7.0) + (fraction * 1e-9);
+        var fast = Fast(v, d);
+        return (fast == Reference(v, d) || (fast is null && Math.Abs(Math.Round(v, d, MidpointRounding.AwayFromZero)) is > 0 and < 1e-4)).ToProperty();
+    }
+
+    [Theory]
+    [InlineData(0.0, 3, "0")]
+    [InlineData(-0.0001, 4, "-0.0001")]
+    [InlineData(-0.00004, 4, "0")]
+    [InlineData(2968.0044999, 3, "2968.004")]
+    [InlineData(0.12345, 4, "0.1235")] // half away from zero, as Math.Round with MidpointRounding.AwayFromZero
+    [InlineData(480.0, 3, "480")]
+    [InlineData(123456789.125, 2, "123456789.13")]
+    public void TryFormatRounded_Examples_MatchTheWriter(double value, int decimals, string expected)
+    {
+        Assert.Equal(expected, Reference(value, decimals));
+        Assert.Equal(expected, Fast(value, decimals));
+    }
+
+    [Theory]
+    [InlineData(0.00003, 5)] // 3E-05: the writer's exponent form
+    [InlineData(1e16, 0)]
+    public void TryFormatRounded_OutsideItsRange_LeavesItToTheWriter(double value, int decimals) =>
+        Assert.Null(Fast(value, decimals));
+
+    private static string Reference(double value, int decimals)
+    {
+        using var buffer = new MemoryStream();
+        using (var w = new Utf8JsonWriter(buffer))
+        {
+            w.WriteNumberValue(Math.Round(value, decimals, MidpointRounding.AwayFromZero) + 0.0);
+        }
+
+        return System.Text.Encoding.UTF8.GetString(buffer.ToArray());
+    }
+
+    private static string? Fast(double value, int decimals)
+    {
+        Span<byte> text = stackalloc byte[24];
+        return JsonResults.TryFormatRounded(value, decimals, text, out var length) ? System.Text.Encoding.UTF8.GetString(text[..length]) : null;
     }
 }
