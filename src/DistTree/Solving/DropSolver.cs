@@ -17,9 +17,6 @@ public sealed class DropSolver
     // The text of each set of lines, by (int)Phases.
     private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
 
-    // A transformer row's unit drops: its drop is not a conductor's, so none (shared, never written).
-    private static readonly double[] NoUnitDrops = new double[8];
-
     private static readonly Finding[] NoFindings = [];
 
     private readonly ConductorCatalog _catalog;
@@ -57,12 +54,14 @@ public sealed class DropSolver
 
         var rows = new RowDraft[count];
         var lineDrops = new double[count * 8];
+        var unitDrops = new double[count * 16];
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
             if (node.Incoming is { } run)
             {
-                rows[incomingRow[i]] = SolveRun(run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
+                var row = incomingRow[i];
+                rows[row] = SolveRun(run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsMemory(row * 16, 8), unitDrops.AsMemory((row * 16) + 8, 8));
             }
 
             if (node.Equipment?.Transformer is { } transformer)
@@ -160,7 +159,10 @@ public sealed class DropSolver
     }
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
-    private RowDraft SolveRun(NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases, Span<double> lineDrops)
+    // unitDropsR and unitDropsX: where its unit drops go (see RunResult.UnitDropsR).
+    private RowDraft SolveRun(
+        NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
+        Span<double> lineDrops, Memory<double> unitDropsR, Memory<double> unitDropsX)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -175,12 +177,12 @@ public sealed class DropSolver
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
         var system = run.Source.System;
-        var unitR = new double[8];
-        var unitX = new double[8];
+        var unitR = unitDropsR.Span;
+        var unitX = unitDropsX.Span;
         if (points.Count > 0)
         {
-            Array.Fill(unitR, SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
-            Array.Fill(unitX, SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
+            unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
+            unitX.Fill(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
         }
         else
         {
@@ -208,8 +210,8 @@ public sealed class DropSolver
             DesignCurrentA = designA,
             Carried = carried,
             Figures = figures,
-            UnitDropsR = unitR,
-            UnitDropsX = unitX,
+            UnitDropsR = unitDropsR,
+            UnitDropsX = unitDropsX,
             OwnLines = ownLines,
             DropPercent = ownDrop,
             DropV = ownDrop / 100.0 * supply.VoltageV,
@@ -220,7 +222,7 @@ public sealed class DropSolver
     }
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
-    internal static double OwnDrop(double[] unitR, double[] unitX, double r, double x, int ownLines)
+    internal static double OwnDrop(ReadOnlySpan<double> unitR, ReadOnlySpan<double> unitX, double r, double x, int ownLines)
     {
         if (ownLines > 0)
         {
@@ -437,8 +439,6 @@ public sealed class DropSolver
             DesignCurrentA = currentA,
             Carried = carried,
             RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
-            UnitDropsR = NoUnitDrops,
-            UnitDropsX = NoUnitDrops,
             DropPercent = dropPercent,
             DropV = dropPercent / 100.0 * supply.VoltageV,
             PercentSumDropPercent = dropPercent,
@@ -699,8 +699,6 @@ public sealed class DropSolver
                 LoadFlowDropPercent = d.LoadFlowDropPercent,
                 CountsInTotal = rules.TransformerDrop == TransformerDropMode.Count,
                 Findings = d.Findings,
-                UnitDropsR = d.UnitDropsR,
-                UnitDropsX = d.UnitDropsX,
                 Location = node.Equipment!.Location,
             };
         }
@@ -768,8 +766,8 @@ public sealed class DropSolver
         public ComplexPower Carried;
         public RunFigures Figures;
         public double RatedA;
-        public double[] UnitDropsR;
-        public double[] UnitDropsX;
+        public ReadOnlyMemory<double> UnitDropsR;
+        public ReadOnlyMemory<double> UnitDropsX;
         public int OwnLines;
         public double VoltageV;
         public double DropPercent;

@@ -41,9 +41,15 @@ public static class LoadFlow
         var model = new LoadModel[n];
         var demand = new double[n];
         var s0 = new Complex[n];
+        var parent = new int[n];
+        var isLoad = new bool[n];
+        var isTransformer = new bool[n];
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
+            parent[i] = node.ParentIndex;
+            isLoad[i] = node.Circuit is not null;
+            isTransformer[i] = node.Kind == NodeKind.Transformer;
             ratio[i] = 1.0;
             demand[i] = node.Equipment?.DemandFactor ?? 1.0;
             if (node.Incoming is { } run)
@@ -79,9 +85,8 @@ public static class LoadFlow
             Array.Clear(busCurrent);
             for (var i = n - 1; i > 0; i--)
             {
-                var node = nodes[i];
                 Complex drawn;
-                if (node.Circuit is not null)
+                if (isLoad[i])
                 {
                     var v = input[i];
                     var s = model[i] switch
@@ -98,20 +103,29 @@ public static class LoadFlow
                 }
 
                 current[i] = drawn;
-                busCurrent[nodes[i].ParentIndex] += drawn;
+                busCurrent[parent[i]] += drawn;
             }
 
-            // Forward sweep: voltages from the service down.
-            var moved = 0.0;
+            // Forward sweep: voltages from the service down. The largest change is compared by its square.
+            var movedSquared = 0.0;
+            var finite = true;
             for (var i = 1; i < n; i++)
             {
-                var after = bus[nodes[i].ParentIndex] - (current[i] * zPu[i]);
-                var onBus = nodes[i].Kind == NodeKind.Transformer ? ratio[i] * (after - (current[i] * zTransformer[i])) : after;
-                moved = Math.Max(moved, Math.Max((after - input[i]).Magnitude, (onBus - bus[i]).Magnitude));
+                var after = bus[parent[i]] - (current[i] * zPu[i]);
+                var onBus = isTransformer[i] ? ratio[i] * (after - (current[i] * zTransformer[i])) : after;
+                var changeIn = after - input[i];
+                var changeBus = onBus - bus[i];
+                var squared = Math.Max(
+                    (changeIn.Real * changeIn.Real) + (changeIn.Imaginary * changeIn.Imaginary),
+                    (changeBus.Real * changeBus.Real) + (changeBus.Imaginary * changeBus.Imaginary));
+                movedSquared = squared > movedSquared ? squared : movedSquared;
+                finite &= double.IsFinite(after.Real) && double.IsFinite(after.Imaginary) && double.IsFinite(onBus.Real) && double.IsFinite(onBus.Imaginary);
                 input[i] = after;
                 bus[i] = onBus;
             }
 
+            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
+            var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
             if (moved < TolerancePu)
             {
                 return new LoadFlowResult(true, iteration, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());

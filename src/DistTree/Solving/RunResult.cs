@@ -125,16 +125,19 @@ public sealed record RunResult
     /// on this run per ohm/km of resistance and per ohm/km of reactance, at the run's present length and sets:
     /// the drop is linear in R and X, so the sizer can price any size without solving the tree again.
     /// </summary>
-    internal double[] UnitDropsR { get; init; } = new double[8];
+    internal ReadOnlyMemory<double> UnitDropsR { get; init; } = NoUnitDrops;
 
     /// <summary>See <see cref="UnitDropsR"/>, per ohm/km of reactance.</summary>
-    internal double[] UnitDropsX { get; init; } = new double[8];
+    internal ReadOnlyMemory<double> UnitDropsX { get; init; } = NoUnitDrops;
 
     /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
     internal int OwnLines { get; init; }
 
     /// <summary>The drop on each set of lines at the run's size: R·UnitDropsR + X·UnitDropsX.</summary>
-    internal double LineDrop(int set) => (ResistanceOhmPerKm!.Value * UnitDropsR[set]) + (ReactanceOhmPerKm!.Value * UnitDropsX[set]);
+    internal double LineDrop(int set) => (ResistanceOhmPerKm!.Value * UnitDropsR.Span[set]) + (ReactanceOhmPerKm!.Value * UnitDropsX.Span[set]);
+
+    // No unit drops (a transformer's drop is not a conductor's): shared, never written.
+    private static readonly double[] NoUnitDrops = new double[8];
 
     /// <summary>Where the run is in the project file.</summary>
     public SourceLocation Location { get; init; } = SourceLocation.None;
