@@ -8,15 +8,21 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed class MappingReader
 {
-    private readonly Dictionary<string, KeyValuePair<SourceScalar, SourceNode>> _entries = new(StringComparer.Ordinal);
-    private readonly DiagnosticBag _bag;
-    private readonly HashSet<string> _suggested = new(StringComparer.Ordinal);
+    private readonly string[] _allowed;
 
-    public MappingReader(SourceMapping mapping, string context, IReadOnlyList<string> allowed, DiagnosticBag bag)
+    // The entry given for each allowed key, by the key's index in _allowed; a null key when absent.
+    private readonly KeyValuePair<SourceScalar, SourceNode>[] _entries;
+    private readonly DiagnosticBag _bag;
+    private readonly Subject _context;
+    private readonly List<string>? _suggested;
+
+    public MappingReader(SourceMapping mapping, Subject context, string[] allowed, DiagnosticBag bag)
     {
         Node = mapping;
-        Context = context;
+        _context = context;
         _bag = bag;
+        _allowed = allowed;
+        _entries = new KeyValuePair<SourceScalar, SourceNode>[allowed.Length];
         foreach (var entry in mapping.Entries)
         {
             var key = entry.Key;
@@ -25,21 +31,22 @@ internal sealed class MappingReader
                 continue;
             }
 
-            if (!allowed.Contains(key.Value, StringComparer.Ordinal))
+            var index = IndexOf(key.Value);
+            if (index < 0)
             {
                 bag.Error(key.Location, $"unknown key '{key.Value}' in {context}{Suggestions.Hint(key.Value, allowed)}");
                 if (Suggestions.Closest(key.Value, allowed) is { } suggested)
                 {
-                    _suggested.Add(suggested);
+                    (_suggested ??= []).Add(suggested);
                 }
             }
-            else if (_entries.TryGetValue(key.Value, out var first))
+            else if (_entries[index].Key is { } first)
             {
-                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {first.Key.Location.Line})");
+                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {first.Location.Line})");
             }
             else
             {
-                _entries.Add(key.Value, entry);
+                _entries[index] = entry;
             }
         }
     }
@@ -48,40 +55,44 @@ internal sealed class MappingReader
     public SourceMapping Node { get; }
 
     /// <summary>How the mapping is named in messages ("circuit 'LP1/3'").</summary>
-    public string Context { get; }
+    public string Context => _context.ToString();
 
     /// <summary>True when the key is given (even with no value).</summary>
-    public bool Has(string key) => _entries.ContainsKey(key);
+    public bool Has(string key) => Find(key) >= 0;
 
     /// <summary>The key's own position, or the mapping's when absent.</summary>
     public SourceLocation KeyLocation(string key) =>
-        _entries.TryGetValue(key, out var entry) ? entry.Key.Location : Node.Location;
+        Find(key) is var index and >= 0 ? _entries[index].Key.Location : Node.Location;
 
     /// <summary>The value of an optional key; null when absent or written with no value.</summary>
     public SourceNode? Optional(string key)
     {
-        if (!_entries.TryGetValue(key, out var entry))
+        var index = Find(key);
+        if (index < 0)
         {
             return null;
         }
 
-        return entry.Value is SourceScalar { IsNull: true } || entry.Value.IsInvalid ? null : entry.Value;
+        var value = _entries[index].Value;
+        return value is SourceScalar { IsNull: true } || value.IsInvalid ? null : value;
     }
 
     /// <summary>The value of a required key; reports it missing (at the mapping) or empty (at the key).</summary>
     public SourceNode? Required(string key, string hint = "")
     {
-        if (!_entries.TryGetValue(key, out var entry))
+        var index = Find(key);
+        if (index < 0)
         {
             // A misspelt key already reported with "did you mean '{key}'?" is not also reported missing.
-            if (!_suggested.Contains(key))
+            if (_suggested is null || !_suggested.Contains(key, StringComparer.Ordinal))
             {
-                _bag.Error(Node.Location, $"missing key '{key}' in {Context}{hint}");
+                _bag.Error(Node.Location, $"missing key '{key}' in {_context}{hint}");
             }
 
             return null;
         }
 
+        var entry = _entries[index];
         if (entry.Value.IsInvalid)
         {
             return null;
@@ -89,10 +100,27 @@ internal sealed class MappingReader
 
         if (entry.Value is SourceScalar { IsNull: true })
         {
-            _bag.Error(entry.Key.Location, $"'{key}' in {Context} has no value{hint}");
+            _bag.Error(entry.Key.Location, $"'{key}' in {_context} has no value{hint}");
             return null;
         }
 
         return entry.Value;
     }
+
+    /// <summary>The index of <paramref name="key"/> in the allowed keys, or -1.</summary>
+    private int IndexOf(string key)
+    {
+        for (var i = 0; i < _allowed.Length; i++)
+        {
+            if (string.Equals(_allowed[i], key, StringComparison.Ordinal))
+            {
+                return i;
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>The index of <paramref name="key"/> when it is allowed and given, or -1.</summary>
+    private int Find(string key) => IndexOf(key) is var index and >= 0 && _entries[index].Key is not null ? index : -1;
 }
