@@ -70,6 +70,8 @@ public static class ProjectLoader
 
     private static Project Parse(string text, string file, byte[] bytes)
     {
+        // Hashed first, so that the bytes are not kept while the tree is read.
+        var hash = IncludeReader.Hash(bytes);
         var bag = new DiagnosticBag();
         bag.AddFile(file);
         var root = SourceTreeReader.Read(text, file, bag);
@@ -86,7 +88,7 @@ public static class ProjectLoader
         var reader = new ProjectReader(bag);
         var draft = reader.Read(root);
         var includes = new IncludeReader(bag, reader);
-        includes.Hashes.Add(IncludeReader.Hash(bytes));
+        includes.Hashes.Add(hash);
         includes.ReadAll(file, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
