@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using DistTree.Diagnostics;
 
 namespace DistTree.ProjectFiles;
@@ -8,24 +9,33 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed class MappingReader
 {
-    private readonly string[] _allowed;
+    /// <summary>The most keys a mapping may be allowed (ProjectKeys.Equipment has 12).</summary>
+    private const int MaxAllowed = 16;
 
-    // The entry given for each allowed key, by the key's index in _allowed; a null key when absent.
-    private readonly KeyValuePair<SourceScalar, SourceNode>[] _entries;
+    private readonly string[] _allowed;
     private readonly DiagnosticBag _bag;
     private readonly Subject _context;
     private readonly List<string>? _suggested;
 
+    // For each allowed key (by its index in _allowed), 1 + the index in the mapping's entries of the entry
+    // that gives it; 0 when not given. Held in the object itself: one allocation per mapping read.
+    private EntryIndexes _given;
+
     public MappingReader(SourceMapping mapping, Subject context, string[] allowed, DiagnosticBag bag)
     {
+        if (allowed.Length > MaxAllowed)
+        {
+            throw new ArgumentException($"A mapping may be allowed at most {MaxAllowed} keys.", nameof(allowed));
+        }
+
         Node = mapping;
         _context = context;
         _bag = bag;
         _allowed = allowed;
-        _entries = new KeyValuePair<SourceScalar, SourceNode>[allowed.Length];
-        foreach (var entry in mapping.Entries)
+        var entries = mapping.Entries;
+        for (var i = 0; i < entries.Count; i++)
         {
-            var key = entry.Key;
+            var key = entries[i].Key;
             if (key.IsInvalid)
             {
                 continue;
@@ -40,13 +50,13 @@ internal sealed class MappingReader
                     (_suggested ??= []).Add(suggested);
                 }
             }
-            else if (_entries[index].Key is { } first)
+            else if (_given[index] > 0)
             {
-                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {first.Location.Line})");
+                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {entries[_given[index] - 1].Key.Line})");
             }
             else
             {
-                _entries[index] = entry;
+                _given[index] = i + 1;
             }
         }
     }
@@ -62,7 +72,7 @@ internal sealed class MappingReader
 
     /// <summary>The key's own position, or the mapping's when absent.</summary>
     public SourceLocation KeyLocation(string key) =>
-        Find(key) is var index and >= 0 ? _entries[index].Key.Location : Node.Location;
+        Find(key) is var index and >= 0 ? Node.Entries[index].Key.Location : Node.Location;
 
     /// <summary>The value of an optional key; null when absent or written with no value.</summary>
     public SourceNode? Optional(string key)
@@ -73,7 +83,7 @@ internal sealed class MappingReader
             return null;
         }
 
-        var value = _entries[index].Value;
+        var value = Node.Entries[index].Value;
         return value is SourceScalar { IsNull: true } || value.IsInvalid ? null : value;
     }
 
@@ -92,7 +102,7 @@ internal sealed class MappingReader
             return null;
         }
 
-        var entry = _entries[index];
+        var entry = Node.Entries[index];
         if (entry.Value.IsInvalid)
         {
             return null;
@@ -121,6 +131,12 @@ internal sealed class MappingReader
         return -1;
     }
 
-    /// <summary>The index of <paramref name="key"/> when it is allowed and given, or -1.</summary>
-    private int Find(string key) => IndexOf(key) is var index and >= 0 && _entries[index].Key is not null ? index : -1;
+    /// <summary>The index in the mapping's entries of the entry that gives <paramref name="key"/>, or -1.</summary>
+    private int Find(string key) => IndexOf(key) is var index and >= 0 ? _given[index] - 1 : -1;
+
+    [InlineArray(MaxAllowed)]
+    private struct EntryIndexes
+    {
+        private int _element;
+    }
 }

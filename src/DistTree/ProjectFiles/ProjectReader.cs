@@ -58,6 +58,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
     private readonly ValueReader _values = new(bag);
 
+    // Each size text parsed, with its result: a file names a few sizes many times.
+    private readonly Dictionary<string, (bool Ok, ConductorSize Size, string Error)> _sizes = new(StringComparer.Ordinal);
+
     private ProjectDraft _draft = new();
 
     /// <summary>Reads the whole document; the draft holds what could be read.</summary>
@@ -630,14 +633,14 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (m.Required("run", " (its length and size)") is { } runNode)
         {
-            var run = ReadRun(runNode, full.Of("the run of "), true, out var runOcpdLocation);
-            if (run is not null && ocpd is not null && run.OcpdA is not null)
+            var run = ReadRun(runNode, full.Of("the run of "), true, out var runOcpdLocation, ocpd);
+            if (run is not null && ocpd is not null && runOcpdLocation is not null)
             {
-                bag.Error(runOcpdLocation!, $"'ocpd' is given both on {full} and on its run; give it once");
+                bag.Error(runOcpdLocation, $"'ocpd' is given both on {full} and on its run; give it once");
                 run = null;
             }
 
-            draft.Run = run is not null && ocpd is not null ? run with { OcpdA = ocpd } : run;
+            draft.Run = run;
         }
 
         if (draft.Points.Count > 0 && draft.Run is { } withPoints && draft.Points[^1].AtM > withPoints.LengthM + 1e-9)
@@ -846,7 +849,11 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return new MotorStart(letter, multiple, startingPf);
     }
 
-    private Run? ReadRun(SourceNode node, Subject context, bool branch, out SourceLocation? ocpdLocation)
+    /// <summary>
+    /// Reads a feeder or branch run. <paramref name="circuitOcpdA"/> (the circuit's own 'ocpd') becomes the run's
+    /// device when the run states none; <paramref name="ocpdLocation"/> is set when the run states one.
+    /// </summary>
+    private Run? ReadRun(SourceNode node, Subject context, bool branch, out SourceLocation? ocpdLocation, double? circuitOcpdA = null)
     {
         ocpdLocation = null;
         var m = Map(node, context, context, ProjectKeys.Run);
@@ -866,13 +873,19 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         var sizeNode = m.Required("size", " (e.g. 12 AWG, 250 kcmil or 95 mm2)");
         if (sizeNode is not null && _values.Text(sizeNode, context.Of("'size' of ")) is { } sizeText)
         {
-            if (ConductorSize.TryParse(sizeText, out var parsed, out var error))
+            if (!_sizes.TryGetValue(sizeText, out var parsed))
             {
-                size = parsed;
+                parsed.Ok = ConductorSize.TryParse(sizeText, out parsed.Size, out parsed.Error);
+                _sizes.Add(sizeText, parsed);
+            }
+
+            if (parsed.Ok)
+            {
+                size = parsed.Size;
             }
             else
             {
-                bag.Error(sizeNode.Location, error);
+                bag.Error(sizeNode.Location, parsed.Error);
             }
         }
 
@@ -914,7 +927,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             Material = material.Value,
             InsulationC = insulation.Value,
             Raceway = raceway.Value,
-            OcpdA = ocpd,
+            OcpdA = ocpd ?? circuitOcpdA,
             LimitPercent = limit,
             Fixed = isFixed,
             Location = m.Node.Location,
