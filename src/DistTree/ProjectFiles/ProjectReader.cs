@@ -545,7 +545,8 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             return;
         }
 
-        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        var seen = new Dictionary<string, SourceLocation>(sequence.Items.Count, StringComparer.Ordinal);
+        draft.Circuits.EnsureCapacity(sequence.Items.Count);
         foreach (var item in sequence.Items)
         {
             if (item is not SourceMapping mapping)
