@@ -16,10 +16,17 @@ internal sealed class FastYamlReader
 {
     private const int MaxKeyLength = 1000; // YamlDotNet refuses a simple key longer than 1024 characters
 
+    // Values up to this many characters are shared (sizes, numbers, words); longer ones rarely repeat.
+    private const int MaxSharedLength = 64;
+
     private readonly string _text;
     private readonly string _file;
     private readonly List<Frame> _blocks = [];
-    private readonly Dictionary<string, string> _keys = new(StringComparer.Ordinal);
+    private readonly List<Frame> _flows = [];
+
+    // Frames of closed collections, used again for the next ones: a file opens a few per line.
+    private readonly Stack<Frame> _spareFrames = new();
+    private readonly Dictionary<string, string> _strings = new(StringComparer.Ordinal);
     private readonly StringBuilder _buffer = new();
     private int _pos;
     private int _line = 1;
@@ -233,7 +240,7 @@ internal sealed class FastYamlReader
                 }
 
                 var indentless = ownLine && parent is { Node: SourceMapping } && parent.Indent == column;
-                var sequence = Open(new SourceSequence(At(_pos)), column, indentless);
+                var sequence = Open(new SourceSequence(_file, _line, column + 1), column, indentless);
                 if (SequenceItemOpensNode(sequence))
                 {
                     parent = sequence;
@@ -293,7 +300,7 @@ internal sealed class FastYamlReader
                 Fail(); // "a: b: c"
             }
 
-            var mapping = Open(new SourceMapping(scalar.Location), column, indentless: false);
+            var mapping = Open(new SourceMapping(_file, scalar.Line, scalar.Column), column, indentless: false);
             if (MappingValueOpensNode(mapping, scalar))
             {
                 parent = mapping;
@@ -327,11 +334,11 @@ internal sealed class FastYamlReader
     private bool SequenceItemOpensNode(Frame sequence)
     {
         _pos++;
-        var emptyAt = At(_pos);
+        var emptyAt = _pos;
         SkipSpaces();
         if (IsEol(_pos) || IsComment())
         {
-            sequence.EmptyAt = emptyAt;
+            sequence.EmptyAt = At(emptyAt);
             EndLine();
             return false;
         }
@@ -344,11 +351,11 @@ internal sealed class FastYamlReader
     {
         mapping.Key = key;
         _pos++;
-        var emptyAt = At(_pos);
+        var emptyAt = _pos;
         SkipSpaces();
         if (IsEol(_pos) || IsComment())
         {
-            mapping.EmptyAt = emptyAt;
+            mapping.EmptyAt = At(emptyAt);
             EndLine();
             return false;
         }
@@ -363,7 +370,7 @@ internal sealed class FastYamlReader
             Fail();
         }
 
-        var frame = new Frame(node, indent, indentless);
+        var frame = NewFrame(node, indent, indentless);
         _blocks.Add(frame);
         return frame;
     }
@@ -373,13 +380,22 @@ internal sealed class FastYamlReader
     {
         var frame = _blocks[^1];
         _blocks.RemoveAt(_blocks.Count - 1);
+        var node = frame.Node;
+        _spareFrames.Push(frame);
         if (_blocks.Count == 0)
         {
-            return frame.Node;
+            return node;
         }
 
-        _blocks[^1].Add(frame.Node);
+        _blocks[^1].Add(node);
         return null;
+    }
+
+    private Frame NewFrame(SourceNode node, int indent, bool indentless)
+    {
+        var frame = _spareFrames.Count > 0 ? _spareFrames.Pop() : new Frame();
+        frame.Open(node, indent, indentless);
+        return frame;
     }
 
     private SourceScalar Empty(SourceLocation at) => new(at, "", true);
@@ -388,7 +404,8 @@ internal sealed class FastYamlReader
     private SourceNode Flow()
     {
         var minIndent = _blocks[^1].Indent + 1;
-        var stack = new List<Frame>();
+        var stack = _flows;
+        stack.Clear();
         OpenFlow(stack);
         while (true)
         {
@@ -399,12 +416,14 @@ internal sealed class FastYamlReader
             {
                 _pos++;
                 stack.RemoveAt(stack.Count - 1);
+                var closed = top.Node;
+                _spareFrames.Push(top);
                 if (stack.Count == 0)
                 {
-                    return top.Node;
+                    return closed;
                 }
 
-                stack[^1].Add(top.Node);
+                stack[^1].Add(closed);
                 stack[^1].State = FlowState.AfterValue;
                 continue;
             }
@@ -471,8 +490,9 @@ internal sealed class FastYamlReader
             Fail();
         }
 
-        SourceNode node = Cur == '{' ? new SourceMapping(At(_pos)) : new SourceSequence(At(_pos));
-        stack.Add(new Frame(node, 0, indentless: false));
+        var column = _pos - _lineStart + 1;
+        SourceNode node = Cur == '{' ? new SourceMapping(_file, _line, column) : new SourceSequence(_file, _line, column);
+        stack.Add(NewFrame(node, 0, indentless: false));
         _pos++;
     }
 
@@ -620,28 +640,28 @@ internal sealed class FastYamlReader
             Fail();
         }
 
-        var location = At(start);
+        var column = start - _lineStart + 1;
         _pos = end;
-        return new SourceScalar(location, isKey ? Key(span) : span.ToString(), true);
+        return new SourceScalar(_file, _line, column, isKey || span.Length <= MaxSharedLength ? Shared(span) : span.ToString(), true);
     }
 
-    /// <summary>Keys repeat on every item, so one string serves each.</summary>
-    private string Key(ReadOnlySpan<char> span)
+    /// <summary>Keys and short values repeat on every item ("run", "20", "12 AWG"), so one string serves each.</summary>
+    private string Shared(ReadOnlySpan<char> span)
     {
-        var lookup = _keys.GetAlternateLookup<ReadOnlySpan<char>>();
-        if (!lookup.TryGetValue(span, out var key))
+        var lookup = _strings.GetAlternateLookup<ReadOnlySpan<char>>();
+        if (!lookup.TryGetValue(span, out var text))
         {
-            key = span.ToString();
-            _keys.Add(key, key);
+            text = span.ToString();
+            _strings.Add(text, text);
         }
 
-        return key;
+        return text;
     }
 
     /// <summary>A single- or double-quoted scalar closed on its own line.</summary>
     private SourceScalar Quoted()
     {
-        var location = At(_pos);
+        var column = _pos - _lineStart + 1;
         var quote = Cur;
         _pos++;
         var start = _pos;
@@ -680,14 +700,16 @@ internal sealed class FastYamlReader
             _pos++;
         }
 
-        var value = escaped ? _buffer.ToString() : _text[start.._pos];
+        var value = escaped ? _buffer.ToString()
+            : _pos - start <= MaxSharedLength ? Shared(_text.AsSpan(start, _pos - start))
+            : _text[start.._pos];
         _pos++;
         if (value.Length > ProjectLimits.MaxScalarLength)
         {
             Fail();
         }
 
-        return new SourceScalar(location, value, false);
+        return new SourceScalar(_file, _line, column, value, false);
     }
 
     /// <summary>Appends an escape's text; the first escape copies what came before it into the buffer.</summary>
@@ -822,13 +844,13 @@ internal sealed class FastYamlReader
     }
 
     /// <summary>An open collection: block (with its indentation) or flow (with what it expects next).</summary>
-    private sealed class Frame(SourceNode node, int indent, bool indentless)
+    private sealed class Frame
     {
-        public SourceNode Node { get; } = node;
+        public SourceNode Node { get; private set; } = null!;
 
-        public int Indent { get; } = indent;
+        public int Indent { get; private set; }
 
-        public bool Indentless { get; } = indentless;
+        public bool Indentless { get; private set; }
 
         /// <summary>A mapping's key whose value is still to come.</summary>
         public SourceScalar? Key { get; set; }
@@ -837,6 +859,17 @@ internal sealed class FastYamlReader
         public SourceLocation? EmptyAt { get; set; }
 
         public FlowState State { get; set; }
+
+        /// <summary>Makes the frame stand for a newly opened collection.</summary>
+        public void Open(SourceNode node, int indent, bool indentless)
+        {
+            Node = node;
+            Indent = indent;
+            Indentless = indentless;
+            Key = null;
+            EmptyAt = null;
+            State = FlowState.Entry;
+        }
 
         public void Add(SourceNode value)
         {

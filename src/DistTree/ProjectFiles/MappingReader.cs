@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using DistTree.Diagnostics;
 
 namespace DistTree.ProjectFiles;
@@ -8,38 +9,54 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed class MappingReader
 {
-    private readonly Dictionary<string, KeyValuePair<SourceScalar, SourceNode>> _entries = new(StringComparer.Ordinal);
-    private readonly DiagnosticBag _bag;
-    private readonly HashSet<string> _suggested = new(StringComparer.Ordinal);
+    /// <summary>The most keys a mapping may be allowed (ProjectKeys.Equipment has 12).</summary>
+    private const int MaxAllowed = 16;
 
-    public MappingReader(SourceMapping mapping, string context, IReadOnlyList<string> allowed, DiagnosticBag bag)
+    private readonly string[] _allowed;
+    private readonly DiagnosticBag _bag;
+    private readonly Subject _context;
+    private readonly List<string>? _suggested;
+
+    // For each allowed key (by its index in _allowed), 1 + the index in the mapping's entries of the entry
+    // that gives it; 0 when not given. Held in the object itself: one allocation per mapping read.
+    private EntryIndexes _given;
+
+    public MappingReader(SourceMapping mapping, Subject context, string[] allowed, DiagnosticBag bag)
     {
-        Node = mapping;
-        Context = context;
-        _bag = bag;
-        foreach (var entry in mapping.Entries)
+        if (allowed.Length > MaxAllowed)
         {
-            var key = entry.Key;
+            throw new ArgumentException($"A mapping may be allowed at most {MaxAllowed} keys.", nameof(allowed));
+        }
+
+        Node = mapping;
+        _context = context;
+        _bag = bag;
+        _allowed = allowed;
+        var entries = mapping.Entries;
+        for (var i = 0; i < entries.Count; i++)
+        {
+            var key = entries[i].Key;
             if (key.IsInvalid)
             {
                 continue;
             }
 
-            if (!allowed.Contains(key.Value, StringComparer.Ordinal))
+            var index = IndexOf(key.Value);
+            if (index < 0)
             {
                 bag.Error(key.Location, $"unknown key '{key.Value}' in {context}{Suggestions.Hint(key.Value, allowed)}");
                 if (Suggestions.Closest(key.Value, allowed) is { } suggested)
                 {
-                    _suggested.Add(suggested);
+                    (_suggested ??= []).Add(suggested);
                 }
             }
-            else if (_entries.TryGetValue(key.Value, out var first))
+            else if (_given[index] > 0)
             {
-                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {first.Key.Location.Line})");
+                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {entries[_given[index] - 1].Key.Line})");
             }
             else
             {
-                _entries.Add(key.Value, entry);
+                _given[index] = i + 1;
             }
         }
     }
@@ -48,40 +65,44 @@ internal sealed class MappingReader
     public SourceMapping Node { get; }
 
     /// <summary>How the mapping is named in messages ("circuit 'LP1/3'").</summary>
-    public string Context { get; }
+    public string Context => _context.ToString();
 
     /// <summary>True when the key is given (even with no value).</summary>
-    public bool Has(string key) => _entries.ContainsKey(key);
+    public bool Has(string key) => Find(key) >= 0;
 
     /// <summary>The key's own position, or the mapping's when absent.</summary>
     public SourceLocation KeyLocation(string key) =>
-        _entries.TryGetValue(key, out var entry) ? entry.Key.Location : Node.Location;
+        Find(key) is var index and >= 0 ? Node.Entries[index].Key.Location : Node.Location;
 
     /// <summary>The value of an optional key; null when absent or written with no value.</summary>
     public SourceNode? Optional(string key)
     {
-        if (!_entries.TryGetValue(key, out var entry))
+        var index = Find(key);
+        if (index < 0)
         {
             return null;
         }
 
-        return entry.Value is SourceScalar { IsNull: true } || entry.Value.IsInvalid ? null : entry.Value;
+        var value = Node.Entries[index].Value;
+        return value is SourceScalar { IsNull: true } || value.IsInvalid ? null : value;
     }
 
     /// <summary>The value of a required key; reports it missing (at the mapping) or empty (at the key).</summary>
     public SourceNode? Required(string key, string hint = "")
     {
-        if (!_entries.TryGetValue(key, out var entry))
+        var index = Find(key);
+        if (index < 0)
         {
             // A misspelt key already reported with "did you mean '{key}'?" is not also reported missing.
-            if (!_suggested.Contains(key))
+            if (_suggested is null || !_suggested.Contains(key, StringComparer.Ordinal))
             {
-                _bag.Error(Node.Location, $"missing key '{key}' in {Context}{hint}");
+                _bag.Error(Node.Location, $"missing key '{key}' in {_context}{hint}");
             }
 
             return null;
         }
 
+        var entry = Node.Entries[index];
         if (entry.Value.IsInvalid)
         {
             return null;
@@ -89,10 +110,33 @@ internal sealed class MappingReader
 
         if (entry.Value is SourceScalar { IsNull: true })
         {
-            _bag.Error(entry.Key.Location, $"'{key}' in {Context} has no value{hint}");
+            _bag.Error(entry.Key.Location, $"'{key}' in {_context} has no value{hint}");
             return null;
         }
 
         return entry.Value;
+    }
+
+    /// <summary>The index of <paramref name="key"/> in the allowed keys, or -1.</summary>
+    private int IndexOf(string key)
+    {
+        for (var i = 0; i < _allowed.Length; i++)
+        {
+            if (string.Equals(_allowed[i], key, StringComparison.Ordinal))
+            {
+                return i;
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>The index in the mapping's entries of the entry that gives <paramref name="key"/>, or -1.</summary>
+    private int Find(string key) => IndexOf(key) is var index and >= 0 ? _given[index] - 1 : -1;
+
+    [InlineArray(MaxAllowed)]
+    private struct EntryIndexes
+    {
+        private int _element;
     }
 }

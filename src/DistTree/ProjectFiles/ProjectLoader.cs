@@ -70,6 +70,8 @@ public static class ProjectLoader
 
     private static Project Parse(string text, string file, byte[] bytes)
     {
+        // Hashed first, so that the bytes are not kept while the tree is read.
+        var hash = IncludeReader.Hash(bytes);
         var bag = new DiagnosticBag();
         bag.AddFile(file);
         var root = SourceTreeReader.Read(text, file, bag);
@@ -86,7 +88,7 @@ public static class ProjectLoader
         var reader = new ProjectReader(bag);
         var draft = reader.Read(root);
         var includes = new IncludeReader(bag, reader);
-        includes.Hashes.Add(IncludeReader.Hash(bytes));
+        includes.Hashes.Add(hash);
         includes.ReadAll(file, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
@@ -109,22 +111,31 @@ public static class ProjectLoader
         {
             var system = d.System!;
             var output = d.OutputSystem!;
-            var circuits = d.Circuits.Select(c => new Circuit
+            var lines = d.Circuits.Count > 0 ? PhaseRules.Lines(output) : 0;
+            var circuits = new Circuit[d.Circuits.Count];
+            for (var i = 0; i < circuits.Length; i++)
             {
-                Id = c.Id!,
-                FullId = $"{d.Id}/{c.Id}",
-                Name = c.Name,
-                Poles = c.Poles!.Value,
-                Supply = output.CircuitFor(c.Poles.Value)!.Value,
-                Load = c.Load ?? Combined(c.Points, output.CircuitFor(c.Poles.Value)!.Value),
-                Points = c.Points,
-                Phases = c.StatedPhases ?? PhaseRules.FromNumber(c.Id!, c.Poles.Value, PhaseRules.Lines(output)),
-                PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated
-                    : PhaseRules.FromNumber(c.Id!, c.Poles.Value, PhaseRules.Lines(output)) is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
-                Continuous = c.Continuous,
-                Run = c.Run!,
-                Location = c.Location,
-            }).ToArray();
+                var c = d.Circuits[i];
+                var poles = c.Poles!.Value;
+                var supply = output.CircuitFor(poles)!.Value;
+                var numbered = c.StatedPhases is null ? PhaseRules.FromNumber(c.Id!, poles, lines) : null;
+                circuits[i] = new Circuit
+                {
+                    Id = c.Id!,
+                    FullId = string.Concat(d.Id, "/", c.Id),
+                    Name = c.Name,
+                    Poles = poles,
+                    Supply = supply,
+                    Load = c.Load ?? Combined(c.Points, supply),
+                    Points = c.Points,
+                    Phases = c.StatedPhases ?? numbered,
+                    PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated : numbered is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
+                    Continuous = c.Continuous,
+                    Run = c.Run!,
+                    Location = c.Location,
+                };
+            }
+
             equipment.Add(new Equipment
             {
                 Id = d.Id!,

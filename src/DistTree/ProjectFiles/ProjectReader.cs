@@ -36,6 +36,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
     private static readonly (string, LoadKind)[] LoadWords =
         [("va", LoadKind.Va), ("kva", LoadKind.Kva), ("kw", LoadKind.Kw), ("amps", LoadKind.Amps), ("hp", LoadKind.Hp), ("fla", LoadKind.Fla)];
 
+    // "'va' of ", "'kva' of " ...: the start of a message about a load's quantity, in the order of ProjectKeys.LoadQuantities.
+    private static readonly string[] QuantityPrefixes = [.. ProjectKeys.LoadQuantities.Select(q => $"'{q}' of ")];
+
     private static readonly (string, LoadModel)[] LoadModelWords =
         [("power", LoadModel.ConstantPower), ("current", LoadModel.ConstantCurrent), ("impedance", LoadModel.ConstantImpedance)];
 
@@ -54,6 +57,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
     private static readonly int[] PoleCounts = [1, 2, 3];
 
     private readonly ValueReader _values = new(bag);
+
+    // Each size text parsed, with its result: a file names a few sizes many times.
+    private readonly Dictionary<string, (bool Ok, ConductorSize Size, string Error)> _sizes = new(StringComparer.Ordinal);
 
     private ProjectDraft _draft = new();
 
@@ -126,7 +132,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return entries;
     }
 
-    private MappingReader? Map(SourceNode? node, string what, string context, IReadOnlyList<string> keys)
+    private MappingReader? Map(SourceNode? node, Subject what, Subject context, string[] keys)
     {
         if (node is null)
         {
@@ -435,6 +441,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         var draft = new EquipmentDraft(mapping.Location);
         var peeked = PeekId(mapping);
         var name = peeked ?? $"at line {mapping.Location.Line}";
+        Subject quoted = $"'{name}'";
         var m = new MappingReader(mapping, peeked is null ? $"the equipment entry at line {mapping.Location.Line}" : $"equipment '{peeked}'", ProjectKeys.Equipment, bag);
         if (m.Required("id") is { } idNode)
         {
@@ -444,22 +451,22 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (m.Required("kind", " (switchboard, panelboard, transformer or splitter)") is { } kindNode)
         {
-            draft.Kind = _values.Choice(kindNode, $"'kind' of '{name}'", "kind", KindWords);
+            draft.Kind = _values.Choice(kindNode, quoted.Of("'kind' of "), "kind", KindWords);
         }
 
         if (m.Required("from", " (the id of the service or equipment that feeds it)") is { } fromNode)
         {
-            draft.From = _values.Text(fromNode, $"'from' of '{name}'");
+            draft.From = _values.Text(fromNode, quoted.Of("'from' of "));
             draft.FromLocation = fromNode.Location;
         }
 
         if (m.Optional("feeder") is { } feederNode)
         {
-            draft.Feeder = ReadRun(feederNode, $"the feeder of '{name}'", false, out _);
+            draft.Feeder = ReadRun(feederNode, quoted.Of("the feeder of "), false, out _);
             draft.FeederOk = draft.Feeder is not null;
         }
 
-        if (m.Optional("demand_factor") is { } demandNode && _values.Positive(demandNode, $"'demand_factor' of '{name}'") is { } demand)
+        if (m.Optional("demand_factor") is { } demandNode && _values.Positive(demandNode, quoted.Of("'demand_factor' of ")) is { } demand)
         {
             draft.DemandFactor = demand;
             if (demand > 1)
@@ -482,8 +489,13 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (draft.Kind != EquipmentKind.Transformer)
         {
-            foreach (var key in ProjectKeys.TransformerOnly.Where(m.Has))
+            foreach (var key in ProjectKeys.TransformerOnly)
             {
+                if (!m.Has(key))
+                {
+                    continue;
+                }
+
                 bag.Error(m.KeyLocation(key), $"'{key}' applies to transformers only; '{name}' is a {KindWord(draft.Kind.Value)}");
             }
 
@@ -533,7 +545,8 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             return;
         }
 
-        var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        var seen = new Dictionary<string, SourceLocation>(sequence.Items.Count, StringComparer.Ordinal);
+        draft.Circuits.EnsureCapacity(sequence.Items.Count);
         foreach (var item in sequence.Items)
         {
             if (item is not SourceMapping mapping)
@@ -566,7 +579,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
     {
         var draft = new CircuitDraft(mapping.Location);
         var peeked = PeekId(mapping);
-        var full = peeked is null ? $"the circuit at line {mapping.Location.Line} of '{panel}'" : $"circuit '{panel}/{peeked}'";
+        var full = peeked is null ? $"the circuit at line {mapping.Location.Line} of '{panel}'" : Subject.Circuit(panel, peeked);
         var m = new MappingReader(mapping, full, ProjectKeys.Circuit, bag);
         if (m.Required("id") is { } idNode)
         {
@@ -575,16 +588,16 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (m.Optional("name") is { } nameNode)
         {
-            draft.Name = _values.Text(nameNode, $"'name' of {full}") ?? "";
+            draft.Name = _values.Text(nameNode, full.Of("'name' of ")) ?? "";
         }
 
         if (m.Required("poles", " (1, 2 or 3)") is { } polesNode)
         {
-            draft.Poles = _values.IntegerOf(polesNode, $"'poles' of {full}", PoleCounts);
+            draft.Poles = _values.IntegerOf(polesNode, full.Of("'poles' of "), PoleCounts);
             draft.PolesLocation = polesNode.Location;
         }
 
-        if (m.Optional("phase") is { } phaseNode && _values.Text(phaseNode, $"'phase' of {full}") is { } phaseText)
+        if (m.Optional("phase") is { } phaseNode && _values.Text(phaseNode, full.Of("'phase' of ")) is { } phaseText)
         {
             draft.StatedPhases = PhaseRules.Parse(phaseText);
             draft.PhaseLocation = phaseNode.Location;
@@ -594,10 +607,10 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             }
         }
 
-        var ocpd = m.Optional("ocpd") is { } ocpdNode ? _values.Positive(ocpdNode, $"'ocpd' of {full}") : null;
+        var ocpd = m.Optional("ocpd") is { } ocpdNode ? _values.Positive(ocpdNode, full.Of("'ocpd' of ")) : null;
         if (m.Optional("continuous") is { } continuousNode)
         {
-            draft.Continuous = _values.Bool(continuousNode, $"'continuous' of {full}") ?? false;
+            draft.Continuous = _values.Bool(continuousNode, full.Of("'continuous' of ")) ?? false;
         }
 
         var loadNode = m.Optional("load");
@@ -608,7 +621,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
         else if (loadNode is not null)
         {
-            draft.Load = ReadLoad(loadNode, $"the load of {full}");
+            draft.Load = ReadLoad(loadNode, full.Of("the load of "));
         }
         else if (pointsNode is not null)
         {
@@ -621,14 +634,14 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (m.Required("run", " (its length and size)") is { } runNode)
         {
-            var run = ReadRun(runNode, $"the run of {full}", true, out var runOcpdLocation);
-            if (run is not null && ocpd is not null && run.OcpdA is not null)
+            var run = ReadRun(runNode, full.Of("the run of "), true, out var runOcpdLocation, ocpd);
+            if (run is not null && ocpd is not null && runOcpdLocation is not null)
             {
-                bag.Error(runOcpdLocation!, $"'ocpd' is given both on {full} and on its run; give it once");
+                bag.Error(runOcpdLocation, $"'ocpd' is given both on {full} and on its run; give it once");
                 run = null;
             }
 
-            draft.Run = run is not null && ocpd is not null ? run with { OcpdA = ocpd } : run;
+            draft.Run = run;
         }
 
         if (draft.Points.Count > 0 && draft.Run is { } withPoints && draft.Points[^1].AtM > withPoints.LengthM + 1e-9)
@@ -639,7 +652,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return draft;
     }
 
-    private void ReadPoints(SourceNode node, CircuitDraft draft, string full)
+    private void ReadPoints(SourceNode node, CircuitDraft draft, Subject full)
     {
         if (node is not SourceSequence sequence || sequence.Items.Count == 0)
         {
@@ -655,15 +668,16 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         var ok = true;
         foreach (var item in sequence.Items)
         {
-            var m = Map(item, $"a point of {full}", $"a point of {full}", ProjectKeys.Point);
+            var point = full.Of("a point of ");
+            var m = Map(item, point, point, ProjectKeys.Point);
             if (m is null)
             {
                 ok = false;
                 continue;
             }
 
-            var at = m.Required("at", " (its distance along the run)") is { } atNode ? _values.LengthM(atNode, $"'at' of a point of {full}", _draft.Units) : null;
-            var load = m.Required("load") is { } loadNode ? ReadLoad(loadNode, $"the load of a point of {full}") : null;
+            var at = m.Required("at", " (its distance along the run)") is { } atNode ? _values.LengthM(atNode, point.Of("'at' of "), _draft.Units) : null;
+            var load = m.Required("load") is { } loadNode ? ReadLoad(loadNode, point.Of("the load of ")) : null;
             if (load is { IsMotor: true })
             {
                 bag.Error(m.KeyLocation("load"), $"a point of {full} carries a motor; a motor is a circuit of its own");
@@ -692,37 +706,55 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
     }
 
-    private Load? ReadLoad(SourceNode node, string context)
+    private Load? ReadLoad(SourceNode node, Subject context)
     {
-        var m = Map(node, $"{context}", context, ProjectKeys.Load);
+        var m = Map(node, context, context, ProjectKeys.Load);
         if (m is null)
         {
             return null;
         }
 
-        var given = m.Node.Entries
-            .Where(e => ProjectKeys.LoadQuantities.Contains(e.Key.Value, StringComparer.Ordinal))
-            .Select(e => e.Key)
-            .DistinctBy(k => k.Value)
-            .ToArray();
-        if (given.Length == 0)
+        // The first two different quantities given, in file order.
+        SourceScalar? first = null;
+        SourceScalar? second = null;
+        foreach (var entry in m.Node.Entries)
+        {
+            var key = entry.Key;
+            if (Array.IndexOf(ProjectKeys.LoadQuantities, key.Value) < 0)
+            {
+                continue;
+            }
+
+            if (first is null)
+            {
+                first = key;
+            }
+            else if (!string.Equals(key.Value, first.Value, StringComparison.Ordinal))
+            {
+                second = key;
+                break;
+            }
+        }
+
+        if (first is null)
         {
             bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
             return null;
         }
 
-        if (given.Length > 1)
+        if (second is not null)
         {
-            bag.Error(given[1].Location, $"{context} gives both '{given[0].Value}' and '{given[1].Value}'; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
+            bag.Error(second.Location, $"{context} gives both '{first.Value}' and '{second.Value}'; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
             return null;
         }
 
-        var kind = LoadWords.First(w => w.Item1 == given[0].Value).Item2;
-        var value = m.Required(given[0].Value) is { } valueNode ? _values.NotNegative(valueNode, $"'{given[0].Value}' of {context}") : null;
+        var quantity = Array.IndexOf(ProjectKeys.LoadQuantities, first.Value);
+        var kind = LoadWords[quantity].Item2;
+        var value = m.Required(first.Value) is { } valueNode ? _values.NotNegative(valueNode, context.Of(QuantityPrefixes[quantity])) : null;
         double? pf = 1.0;
         if (m.Optional("pf") is { } pfNode)
         {
-            pf = _values.Number(pfNode, $"'pf' of {context}");
+            pf = _values.Number(pfNode, context.Of("'pf' of "));
             if (pf is <= 0 or > 1)
             {
                 bag.Error(pfNode.Location, $"a power factor must be greater than 0 and at most 1; found {ValueReader.Format(pf.Value)}");
@@ -745,28 +777,32 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return value is not null && pf is not null && startOk ? new Load(kind, value.Value, pf.Value) { Model = model, Start = start } : null;
     }
 
-    private MotorStart? ReadMotorStart(MappingReader m, string context, bool motor, out bool ok)
+    private MotorStart? ReadMotorStart(MappingReader m, Subject context, bool motor, out bool ok)
     {
         ok = true;
-        var given = ProjectKeys.MotorStart.Where(m.Has).ToArray();
-        if (!motor)
+        var given = false;
+        foreach (var key in ProjectKeys.MotorStart)
         {
-            foreach (var key in given)
+            if (!m.Has(key))
+            {
+                continue;
+            }
+
+            given = true;
+            if (!motor)
             {
                 bag.Error(m.KeyLocation(key), $"'{key}' in {context} applies to motors only (loads given as 'hp' or 'fla')");
                 ok = false;
             }
-
-            return null;
         }
 
-        if (given.Length == 0)
+        if (!motor || !given)
         {
             return null;
         }
 
         string? letter = null;
-        if (m.Optional("code_letter") is { } letterNode && _values.Text(letterNode, $"'code_letter' of {context}") is { } text)
+        if (m.Optional("code_letter") is { } letterNode && _values.Text(letterNode, context.Of("'code_letter' of ")) is { } text)
         {
             letter = text.ToUpperInvariant();
             if (!CodeLetters.Contains(letter, StringComparer.Ordinal))
@@ -785,7 +821,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         double? multiple = null;
         if (m.Optional("lrc_multiple") is { } multipleNode)
         {
-            multiple = _values.Positive(multipleNode, $"'lrc_multiple' of {context}");
+            multiple = _values.Positive(multipleNode, context.Of("'lrc_multiple' of "));
             if (multiple is < 1)
             {
                 bag.Error(multipleNode.Location, $"'lrc_multiple' of {context} is the locked-rotor current over the full-load current: at least 1");
@@ -800,7 +836,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var startingPf = MotorStart.DefaultPowerFactor;
-        if (m.Optional("starting_pf") is { } spfNode && _values.Number(spfNode, $"'starting_pf' of {context}") is { } spf)
+        if (m.Optional("starting_pf") is { } spfNode && _values.Number(spfNode, context.Of("'starting_pf' of ")) is { } spf)
         {
             if (spf is <= 0 or > 1)
             {
@@ -814,7 +850,11 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return new MotorStart(letter, multiple, startingPf);
     }
 
-    private Run? ReadRun(SourceNode node, string context, bool branch, out SourceLocation? ocpdLocation)
+    /// <summary>
+    /// Reads a feeder or branch run. <paramref name="circuitOcpdA"/> (the circuit's own 'ocpd') becomes the run's
+    /// device when the run states none; <paramref name="ocpdLocation"/> is set when the run states one.
+    /// </summary>
+    private Run? ReadRun(SourceNode node, Subject context, bool branch, out SourceLocation? ocpdLocation, double? circuitOcpdA = null)
     {
         ocpdLocation = null;
         var m = Map(node, context, context, ProjectKeys.Run);
@@ -824,7 +864,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var lengthNode = m.Required("length");
-        var length = lengthNode is null ? null : _values.LengthM(lengthNode, $"'length' of {context}", _draft.Units);
+        var length = lengthNode is null ? null : _values.LengthM(lengthNode, context.Of("'length' of "), _draft.Units);
         if (branch && length > LongBranchM)
         {
             bag.Warning(lengthNode!.Location, $"{context} is {length.Value.ToString("0.##", CultureInfo.InvariantCulture)} m long, more than 609.6 m (2000 ft); check the length");
@@ -832,20 +872,26 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         ConductorSize? size = null;
         var sizeNode = m.Required("size", " (e.g. 12 AWG, 250 kcmil or 95 mm2)");
-        if (sizeNode is not null && _values.Text(sizeNode, $"'size' of {context}") is { } sizeText)
+        if (sizeNode is not null && _values.Text(sizeNode, context.Of("'size' of ")) is { } sizeText)
         {
-            if (ConductorSize.TryParse(sizeText, out var parsed, out var error))
+            if (!_sizes.TryGetValue(sizeText, out var parsed))
             {
-                size = parsed;
+                parsed.Ok = ConductorSize.TryParse(sizeText, out parsed.Size, out parsed.Error);
+                _sizes.Add(sizeText, parsed);
+            }
+
+            if (parsed.Ok)
+            {
+                size = parsed.Size;
             }
             else
             {
-                bag.Error(sizeNode.Location, error);
+                bag.Error(sizeNode.Location, parsed.Error);
             }
         }
 
         var sets = 1;
-        if (m.Optional("sets") is { } setsNode && _values.Integer(setsNode, $"'sets' of {context}") is { } s)
+        if (m.Optional("sets") is { } setsNode && _values.Integer(setsNode, context.Of("'sets' of ")) is { } s)
         {
             if (s < 1)
             {
@@ -856,18 +902,18 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var defaults = _draft.Defaults;
-        var material = m.Optional("material") is { } materialNode ? _values.Choice(materialNode, $"'material' of {context}", "material", MaterialWords) : defaults.Material;
-        var insulation = m.Optional("insulation_c") is { } insulationNode ? _values.IntegerOf(insulationNode, $"'insulation_c' of {context}", TemperatureRatings) : defaults.InsulationC;
-        var raceway = m.Optional("raceway") is { } racewayNode ? _values.Choice(racewayNode, $"'raceway' of {context}", "raceway", RacewayWords) : defaults.Raceway;
+        var material = m.Optional("material") is { } materialNode ? _values.Choice(materialNode, context.Of("'material' of "), "material", MaterialWords) : defaults.Material;
+        var insulation = m.Optional("insulation_c") is { } insulationNode ? _values.IntegerOf(insulationNode, context.Of("'insulation_c' of "), TemperatureRatings) : defaults.InsulationC;
+        var raceway = m.Optional("raceway") is { } racewayNode ? _values.Choice(racewayNode, context.Of("'raceway' of "), "raceway", RacewayWords) : defaults.Raceway;
         double? ocpd = null;
         if (m.Optional("ocpd") is { } ocpdNode)
         {
-            ocpd = _values.Positive(ocpdNode, $"'ocpd' of {context}");
+            ocpd = _values.Positive(ocpdNode, context.Of("'ocpd' of "));
             ocpdLocation = m.KeyLocation("ocpd");
         }
 
-        var limit = m.Optional("limit_percent") is { } limitNode ? _values.Positive(limitNode, $"'limit_percent' of {context}") : null;
-        var isFixed = m.Optional("fixed") is { } fixedNode && (_values.Bool(fixedNode, $"'fixed' of {context}") ?? false);
+        var limit = m.Optional("limit_percent") is { } limitNode ? _values.Positive(limitNode, context.Of("'limit_percent' of ")) : null;
+        var isFixed = m.Optional("fixed") is { } fixedNode && (_values.Bool(fixedNode, context.Of("'fixed' of ")) ?? false);
         if (length is null || size is null || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
@@ -882,7 +928,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             Material = material.Value,
             InsulationC = insulation.Value,
             Raceway = raceway.Value,
-            OcpdA = ocpd,
+            OcpdA = ocpd ?? circuitOcpdA,
             LimitPercent = limit,
             Fixed = isFixed,
             Location = m.Node.Location,
@@ -905,10 +951,18 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return id;
     }
 
-    private static string? PeekId(SourceMapping mapping) =>
-        mapping.Entries.FirstOrDefault(e => e.Key.Value == "id").Value is SourceScalar { IsNull: false } scalar && scalar.Value.Trim().Length > 0
-            ? scalar.Value.Trim()
-            : null;
+    private static string? PeekId(SourceMapping mapping)
+    {
+        foreach (var entry in mapping.Entries)
+        {
+            if (entry.Key.Value == "id")
+            {
+                return entry.Value is SourceScalar { IsNull: false } scalar && scalar.Value.Trim() is { Length: > 0 } id ? id : null;
+            }
+        }
+
+        return null;
+    }
 
     private static string KindWord(EquipmentKind kind) => KindWords.First(w => w.Item2 == kind).Item1;
 }

@@ -9,10 +9,30 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal abstract class SourceNode
 {
-    protected SourceNode(SourceLocation location) => Location = location;
+    // The place is kept as its parts, not as a SourceLocation object: a file has millions of nodes,
+    // and few of their locations are ever needed.
+    private readonly string _file;
 
-    /// <summary>Where the node starts.</summary>
-    public SourceLocation Location { get; }
+    protected SourceNode(SourceLocation location)
+        : this(location.File, location.Line, location.Column)
+    {
+    }
+
+    protected SourceNode(string file, int line, int column)
+    {
+        _file = file;
+        Line = line;
+        Column = column;
+    }
+
+    /// <summary>Where the node starts (a new object on each call, equal to the others).</summary>
+    public SourceLocation Location => new(_file, Line, Column);
+
+    /// <summary>The 1-based line where the node starts.</summary>
+    public int Line { get; }
+
+    /// <summary>The 1-based column where the node starts.</summary>
+    public int Column { get; }
 
     /// <summary>True for a placeholder standing in for a node already reported as wrong (an alias, a bad key).</summary>
     public bool IsInvalid { get; init; }
@@ -22,13 +42,27 @@ internal abstract class SourceNode
 }
 
 /// <summary>A scalar: its text and whether it was written plain (unquoted, so a number or a boolean may be meant).</summary>
-internal sealed class SourceScalar(SourceLocation location, string value, bool isPlain) : SourceNode(location)
+internal sealed class SourceScalar : SourceNode
 {
+    public SourceScalar(SourceLocation location, string value, bool isPlain)
+        : base(location)
+    {
+        Value = value;
+        IsPlain = isPlain;
+    }
+
+    public SourceScalar(string file, int line, int column, string value, bool isPlain)
+        : base(file, line, column)
+    {
+        Value = value;
+        IsPlain = isPlain;
+    }
+
     /// <summary>The scalar's text.</summary>
-    public string Value { get; } = value;
+    public string Value { get; }
 
     /// <summary>True when written without quotes and without an explicit string tag.</summary>
-    public bool IsPlain { get; } = isPlain;
+    public bool IsPlain { get; }
 
     /// <summary>True for a plain empty, <c>~</c> or <c>null</c> scalar (YAML 1.2 core schema).</summary>
     public bool IsNull => IsPlain && Value is "" or "~" or "null" or "Null" or "NULL";
@@ -45,8 +79,18 @@ internal sealed class SourceScalar(SourceLocation location, string value, bool i
 }
 
 /// <summary>A mapping: its entries in file order, duplicates kept (the reader reports them).</summary>
-internal sealed class SourceMapping(SourceLocation location) : SourceNode(location)
+internal sealed class SourceMapping : SourceNode
 {
+    public SourceMapping(SourceLocation location)
+        : base(location)
+    {
+    }
+
+    public SourceMapping(string file, int line, int column)
+        : base(file, line, column)
+    {
+    }
+
     /// <summary>Key and value pairs in file order.</summary>
     public List<KeyValuePair<SourceScalar, SourceNode>> Entries { get; } = [];
 
@@ -54,8 +98,18 @@ internal sealed class SourceMapping(SourceLocation location) : SourceNode(locati
 }
 
 /// <summary>A sequence: its items in file order.</summary>
-internal sealed class SourceSequence(SourceLocation location) : SourceNode(location)
+internal sealed class SourceSequence : SourceNode
 {
+    public SourceSequence(SourceLocation location)
+        : base(location)
+    {
+    }
+
+    public SourceSequence(string file, int line, int column)
+        : base(file, line, column)
+    {
+    }
+
     /// <summary>The items in file order.</summary>
     public List<SourceNode> Items { get; } = [];
 

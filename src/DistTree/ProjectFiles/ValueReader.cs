@@ -14,7 +14,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     public const double MetresPerFoot = 0.3048;
 
     /// <summary>A finite number.</summary>
-    public double? Number(SourceNode node, string what)
+    public double? Number(SourceNode node, Subject what)
     {
         if (node is not SourceScalar scalar || !scalar.IsPlain || !IsNumberText(scalar.Value))
         {
@@ -33,7 +33,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>A number greater than zero.</summary>
-    public double? Positive(SourceNode node, string what)
+    public double? Positive(SourceNode node, Subject what)
     {
         var value = Number(node, what);
         if (value is <= 0)
@@ -46,7 +46,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>A number zero or greater.</summary>
-    public double? NotNegative(SourceNode node, string what)
+    public double? NotNegative(SourceNode node, Subject what)
     {
         var value = Number(node, what);
         if (value is < 0)
@@ -59,7 +59,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>A whole number.</summary>
-    public int? Integer(SourceNode node, string what)
+    public int? Integer(SourceNode node, Subject what)
     {
         var value = Number(node, what);
         if (value is null)
@@ -77,7 +77,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>One of a few whole numbers (60, 75, 90).</summary>
-    public int? IntegerOf(SourceNode node, string what, IReadOnlyList<int> allowed)
+    public int? IntegerOf(SourceNode node, Subject what, IReadOnlyList<int> allowed)
     {
         var value = Integer(node, what);
         if (value is { } v && !allowed.Contains(v))
@@ -91,7 +91,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary><c>true</c> or <c>false</c>.</summary>
-    public bool? Bool(SourceNode node, string what)
+    public bool? Bool(SourceNode node, Subject what)
     {
         if (node is SourceScalar { IsPlain: true } scalar)
         {
@@ -113,7 +113,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>Text: a string, or a plain number or word taken as its text (ids, names, sizes, systems).</summary>
-    public string? Text(SourceNode node, string what)
+    public string? Text(SourceNode node, Subject what)
     {
         if (node is SourceScalar { IsNull: false } scalar && (!scalar.IsPlain || !IsBoolText(scalar.Value)))
         {
@@ -135,7 +135,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>One word of a fixed list, with a "did you mean" hint.</summary>
-    public T? Choice<T>(SourceNode node, string what, string noun, IReadOnlyList<(string Word, T Value)> options)
+    public T? Choice<T>(SourceNode node, Subject what, string noun, IReadOnlyList<(string Word, T Value)> options)
         where T : struct
     {
         var text = Text(node, what);
@@ -157,7 +157,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>A system designation such as <c>208Y/120</c>.</summary>
-    public ElectricalSystem? SystemOf(SourceNode node, string what)
+    public ElectricalSystem? SystemOf(SourceNode node, Subject what)
     {
         var text = Text(node, what);
         if (text is null)
@@ -178,7 +178,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     /// A one-way length in metres, greater than zero: a bare number in the project's unit, or text with
     /// its unit (<c>28 m</c>, <c>92 ft</c>).
     /// </summary>
-    public double? LengthM(SourceNode node, string what, UnitSystem units)
+    public double? LengthM(SourceNode node, Subject what, UnitSystem units)
     {
         double? metres;
         if (node is SourceScalar { IsPlain: true } plain && IsNumberText(plain.Value))
@@ -218,7 +218,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     public static bool IsBoolText(string text) =>
         text is "true" or "True" or "TRUE" or "false" or "False" or "FALSE";
 
-    private double? LengthText(SourceScalar scalar, string what)
+    private double? LengthText(SourceScalar scalar, Subject what)
     {
         var match = LengthPattern().Match(scalar.Value);
         if (!match.Success)
@@ -247,7 +247,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         }
     }
 
-    private double? Finite(SourceScalar scalar, string what)
+    private double? Finite(SourceScalar scalar, Subject what)
     {
         var text = scalar.Value;
         double value;
