@@ -29,12 +29,18 @@ public static class NetworkBuilder
         }
 
         var rules = project.Rules;
-        var nodes = new List<NetworkNode>();
-        var graph = new BidirectionalGraph<NetworkNode, NetworkRun>(allowParallelEdges: false);
+        var expected = 1 + project.Equipment.Count;
+        foreach (var equipment in project.Equipment)
+        {
+            expected += equipment.Circuits.Count;
+        }
+
+        var nodes = new List<NetworkNode>(expected);
+        var graph = new BidirectionalGraph<NetworkNode, NetworkRun>(allowParallelEdges: false, capacity: expected);
         var root = new NetworkNode(0, project.Service.Id, NodeKind.Service, project.Service.System, -1);
         nodes.Add(root);
         graph.AddVertex(root);
-        var ids = new HashSet<string>(StringComparer.Ordinal) { root.Id };
+        var ids = new HashSet<string>(expected, StringComparer.Ordinal) { root.Id };
 
         for (var next = 0; next < nodes.Count; next++)
         {
@@ -67,7 +73,6 @@ public static class NetworkBuilder
             }
         }
 
-        var expected = 1 + project.Equipment.Count + project.Equipment.Sum(e => e.Circuits.Count);
         if (nodes.Count != expected)
         {
             var missing = project.Equipment.Where(e => !ids.Contains(e.Id)).Select(e => e.Id).FirstOrDefault();

@@ -50,4 +50,10 @@ public sealed class NetworkNode
 
     /// <inheritdoc />
     public override string ToString() => Id;
+
+    /// <summary>
+    /// The node's index: a node is equal only to itself, and its index is fixed, so the graph's dictionaries hash
+    /// it without the runtime's per-object hash code.
+    /// </summary>
+    public override int GetHashCode() => Index;
 }
