@@ -54,7 +54,7 @@ internal static class UpsizeCommand
             var plan = Upsizer.Standard.Plan(before);
             if (jsonPath is not null)
             {
-                OutputFile.Write(context, jsonPath, JsonResults.Write(before, w => PlanReport.WriteJson(w, plan)), path);
+                OutputFile.Write(context, jsonPath, stream => JsonResults.Write(before, stream, w => PlanReport.WriteJson(w, plan)), path);
             }
 
             if (parsed.GetValue(apply) is { } output)
