@@ -36,8 +36,17 @@ var results = new List<Measurement>();
 var solveRunsPerSecond = new Dictionary<int, double>();
 var savings = new List<Saving>();
 var htmlBytes = new Dictionary<string, long>();
+var freshAnalyze = new List<string>();
 try
 {
+    // The figure a user sees, measured first, while this harness holds nothing large of its own.
+    if (Wanted("analyze") && sizes.Contains(100_000))
+    {
+        var campus = Path.Combine(folder.FullName, "campus-100000.yaml");
+        File.WriteAllText(campus, ProjectGenerator.Generate(100_000, 3, 7));
+        freshAnalyze = AnalyzeInFreshProcess(campus);
+    }
+
     foreach (var size in sizes)
     {
         var repeats = size >= 100_000 ? 3 : size >= 10_000 ? 5 : 11;
@@ -45,6 +54,14 @@ try
         results.Add(Measurement.Of("generate", size, repeats, () => text = ProjectGenerator.Generate(size, 3, 7)));
         var path = Path.Combine(folder.FullName, $"campus-{size}.yaml");
         File.WriteAllText(path, text);
+
+        // The whole command first, while the harness holds nothing else of this size: every collection during a
+        // run would otherwise also walk the other stages' models and results.
+        if (Wanted("analyze"))
+        {
+            var output = Path.Combine(folder.FullName, $"campus-{size}.json");
+            results.Add(Measurement.Of("analyze", size, repeats, () => Cli(["analyze", path, "--json", output])));
+        }
 
         if (Wanted("yaml"))
         {
@@ -85,12 +102,6 @@ try
         {
             // As analyze writes it: streamed, here to nowhere, so that the figure is the formatting alone.
             results.Add(Measurement.Of("json", size, repeats, () => JsonResults.Write(solution, Stream.Null)));
-        }
-
-        if (Wanted("analyze"))
-        {
-            var output = Path.Combine(folder.FullName, $"campus-{size}.json");
-            results.Add(Measurement.Of("analyze", size, repeats, () => Cli(["analyze", path, "--json", output])));
         }
 
         if (Wanted("upsize"))
@@ -143,9 +154,9 @@ try
     }
 
     Summarise(results, solveRunsPerSecond, savings, htmlBytes);
-    if (Wanted("analyze") && sizes.Contains(100_000))
+    foreach (var line in freshAnalyze)
     {
-        AnalyzeInFreshProcess(Path.Combine(folder.FullName, "campus-100000.yaml"));
+        Console.WriteLine(line);
     }
 
     Console.WriteLine($"Load average at end (1, 5, 15 min): {LoadAverage()}");
@@ -277,13 +288,13 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
 }
 
 // The figure a user sees: a fresh 'disttree analyze' process, file to JSON, its wall time and peak memory.
-static void AnalyzeInFreshProcess(string path)
+static List<string> AnalyzeInFreshProcess(string path)
 {
     var cli = Path.Combine(AppContext.BaseDirectory, "DistTree.Cli.dll");
     var output = Path.ChangeExtension(path, ".fresh.json");
     var times = new List<double>();
     long peak = 0;
-    for (var i = 0; i < 3; i++)
+    for (var i = 0; i < 5; i++)
     {
         var start = new ProcessStartInfo("dotnet", ["exec", cli, "analyze", path, "--json", output])
         {
@@ -308,8 +319,12 @@ static void AnalyzeInFreshProcess(string path)
     }
 
     times.Sort();
-    Console.WriteLine($"  analyze 100,000 end points, file to JSON, fresh process: median {times[1]:0.00} s (spread {times[0]:0.00} .. {times[2]:0.00})  target < 3 s  {Verdict(times[1] < 3)}");
-    Console.WriteLine($"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {(peak == 0 ? "not measured" : Verdict(peak < 1L << 30))}");
+    var median = times[times.Count / 2];
+    return
+    [
+        $"  analyze 100,000 end points, file to JSON, fresh process: median {median:0.00} s of {times.Count} (spread {times[0]:0.00} .. {times[^1]:0.00})  target < 3 s  {Verdict(median < 3)}",
+        $"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {(peak == 0 ? "not measured" : Verdict(peak < 1L << 30))}",
+    ];
 }
 
 // The high-water mark of a running process: VmHWM in /proc/PID/status on Linux, else PeakWorkingSet64.
