@@ -14,12 +14,28 @@ public sealed class StatusLine : IProgress<string>, IDisposable
     private static readonly TimeSpan Interval = TimeSpan.FromMilliseconds(100);
 
     private readonly TextWriter? _writer;
-    private readonly Stopwatch _clock = Stopwatch.StartNew();
-    private TimeSpan _lastShown = TimeSpan.MinValue;
+    private readonly Func<TimeSpan> _elapsed;
+    private TimeSpan? _lastShown;
     private int _width;
 
     /// <summary>A status line written to <paramref name="writer"/>, or a silent one when it is null.</summary>
-    public StatusLine(TextWriter? writer) => _writer = writer;
+    public StatusLine(TextWriter? writer)
+        : this(writer, null)
+    {
+    }
+
+    /// <summary>As <see cref="StatusLine(TextWriter?)"/>, with the time since it was made read from <paramref name="elapsed"/> (tests).</summary>
+    internal StatusLine(TextWriter? writer, Func<TimeSpan>? elapsed)
+    {
+        _writer = writer;
+        if (elapsed is null)
+        {
+            var clock = Stopwatch.StartNew();
+            elapsed = () => clock.Elapsed;
+        }
+
+        _elapsed = elapsed;
+    }
 
     /// <summary>Shows <paramref name="value"/> (what is being done) once the first second has passed.</summary>
     public void Report(string value)
@@ -29,8 +45,8 @@ public sealed class StatusLine : IProgress<string>, IDisposable
             return;
         }
 
-        var now = _clock.Elapsed;
-        if (now < Delay || now - _lastShown < Interval)
+        var now = _elapsed();
+        if (now < Delay || (_lastShown is { } last && now - last < Interval))
         {
             return;
         }
