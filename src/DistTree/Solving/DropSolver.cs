@@ -32,8 +32,8 @@ public sealed class DropSolver
     {
         var project = network.Project;
         var rules = project.Rules;
-        var nodes = network.Nodes;
-        var n = nodes.Count;
+        var nodes = network.NodeArray;
+        var n = nodes.Length;
         var frequency = project.Service.FrequencyHz;
 
         var power = new ComplexPower[n];
@@ -61,7 +61,7 @@ public sealed class DropSolver
             if (node.Incoming is { } run)
             {
                 var row = incomingRow[i];
-                rows[row] = SolveRun(run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsMemory(row * 16, 8), unitDrops.AsMemory((row * 16) + 8, 8));
+                SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
             }
 
             if (node.Equipment?.Transformer is { } transformer)
@@ -86,7 +86,7 @@ public sealed class DropSolver
         var findings = 0;
         for (var r = 0; r < count; r++)
         {
-            runs[r] = Finish(ref rows[r], phases, rules);
+            runs[r] = Finish(ref rows[r], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
             findings += runs[r].Findings.Count;
         }
 
@@ -125,9 +125,9 @@ public sealed class DropSolver
     }
 
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
-    private static void AccumulatePower(IReadOnlyList<NetworkNode> nodes, ComplexPower[] power, ComplexPower[] continuous)
+    private static void AccumulatePower(NetworkNode[] nodes, ComplexPower[] power, ComplexPower[] continuous)
     {
-        for (var i = nodes.Count - 1; i >= 0; i--)
+        for (var i = nodes.Length - 1; i >= 0; i--)
         {
             var node = nodes[i];
             if (node.Circuit is { } circuit)
@@ -160,9 +160,9 @@ public sealed class DropSolver
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
     // unitDropsR and unitDropsX: where its unit drops go (see RunResult.UnitDropsR).
-    private RowDraft SolveRun(
-        NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
-        Span<double> lineDrops, Memory<double> unitDropsR, Memory<double> unitDropsX)
+    private void SolveRun(
+        ref RowDraft row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
+        Span<double> lineDrops, Span<double> unitR, Span<double> unitX)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -177,8 +177,6 @@ public sealed class DropSolver
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
         var system = run.Source.System;
-        var unitR = unitDropsR.Span;
-        var unitX = unitDropsX.Span;
         if (points.Count > 0)
         {
             unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
@@ -202,23 +200,17 @@ public sealed class DropSolver
             lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
         }
 
-        return new RowDraft
-        {
-            Node = run.Target,
-            Run = run,
-            CurrentA = currentA,
-            DesignCurrentA = designA,
-            Carried = carried,
-            Figures = figures,
-            UnitDropsR = unitDropsR,
-            UnitDropsX = unitDropsX,
-            OwnLines = ownLines,
-            DropPercent = ownDrop,
-            DropV = ownDrop / 100.0 * supply.VoltageV,
-            PercentSumDropPercent = ownDrop,
-            VoltageV = supply.VoltageV,
-            Findings = NoFindings,
-        };
+        row.Node = run.Target;
+        row.Run = run;
+        row.CurrentA = currentA;
+        row.DesignCurrentA = designA;
+        row.Carried = carried;
+        row.Figures = figures;
+        row.OwnLines = ownLines;
+        row.DropPercent = ownDrop;
+        row.PercentSumDropPercent = ownDrop;
+        row.VoltageV = supply.VoltageV;
+        row.Findings = NoFindings;
     }
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
@@ -281,7 +273,7 @@ public sealed class DropSolver
     // The load flow on the same impedances the percent sum used.
     private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, RowDraft[] rows, int[] incomingRow)
     {
-        var n = network.Nodes.Count;
+        var n = network.NodeArray.Length;
         var z = new Complex[n];
         for (var i = 0; i < n; i++)
         {
@@ -310,18 +302,17 @@ public sealed class DropSolver
             return;
         }
 
-        var nodes = network.Nodes;
+        var nodes = network.NodeArray;
         void Record(ref RowDraft r, double drop)
         {
             r.LoadFlowDropPercent = drop;
             if (rules.Method == SolutionMethod.LoadFlow)
             {
                 r.DropPercent = drop;
-                r.DropV = drop / 100.0 * r.VoltageV;
             }
         }
 
-        for (var i = 1; i < nodes.Count; i++)
+        for (var i = 1; i < nodes.Length; i++)
         {
             if (incomingRow[i] >= 0)
             {
@@ -440,7 +431,6 @@ public sealed class DropSolver
             Carried = carried,
             RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
             DropPercent = dropPercent,
-            DropV = dropPercent / 100.0 * supply.VoltageV,
             PercentSumDropPercent = dropPercent,
             VoltageV = supply.VoltageV,
             Findings = findings,
@@ -473,14 +463,14 @@ public sealed class DropSolver
         DistributionNetwork network, RowDraft[] rows, double[] lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
         LoadFlowResult flow, PhaseFlow phases, Rules rules)
     {
-        var nodes = network.Nodes;
+        var nodes = network.NodeArray;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
 
         // Depth of every node (the service is 1), top-down, so that each path is filled in place.
-        var depth = new int[nodes.Count];
+        var depth = new int[nodes.Length];
         var endPointCount = 0;
-        for (var i = 0; i < nodes.Count; i++)
+        for (var i = 0; i < nodes.Length; i++)
         {
             depth[i] = i == 0 ? 1 : depth[nodes[i].ParentIndex] + 1;
             endPointCount += nodes[i].Circuit is null ? 0 : 1;
@@ -601,7 +591,7 @@ public sealed class DropSolver
     private static MotorStartResult MotorStartCheck(
         DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
     {
-        var nodes = network.Nodes;
+        var nodes = network.NodeArray;
         var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
         var delta = lockedRotor + (running * -1.0);
         double terminal = 0, panel = 0;
@@ -642,8 +632,8 @@ public sealed class DropSolver
     // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
     private static void AddReach(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, EndPointResult[] endPoints, Rules rules)
     {
-        var nodes = network.Nodes;
-        var slack = new double[nodes.Count];
+        var nodes = network.NodeArray;
+        var slack = new double[nodes.Length];
         Array.Fill(slack, double.PositiveInfinity);
         foreach (var e in endPoints)
         {
@@ -651,7 +641,7 @@ public sealed class DropSolver
         }
 
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
-        for (var i = nodes.Count - 1; i > 0; i--)
+        for (var i = nodes.Length - 1; i > 0; i--)
         {
             var node = nodes[i];
             var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
@@ -672,7 +662,7 @@ public sealed class DropSolver
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
 
     // The result record of a finished draft.
-    private static RunResult Finish(ref RowDraft d, PhaseFlow phases, Rules rules)
+    private static RunResult Finish(ref RowDraft d, PhaseFlow phases, Rules rules, ReadOnlyMemory<double> unitDropsR, ReadOnlyMemory<double> unitDropsX)
     {
         var node = d.Node;
         if (d.Run is not { } run)
@@ -741,8 +731,8 @@ public sealed class DropSolver
             LineCurrentsA = phases.LineCurrentsA(node.Index, PhaseRules.Lines(system)),
             Lines = branch ? LinesText[(int)phases.Assigned[node.Index]] : null,
             Findings = d.Findings,
-            UnitDropsR = d.UnitDropsR,
-            UnitDropsX = d.UnitDropsX,
+            UnitDropsR = unitDropsR,
+            UnitDropsX = unitDropsX,
             OwnLines = d.OwnLines,
             Location = conductors.Location,
         };
@@ -766,17 +756,17 @@ public sealed class DropSolver
         public ComplexPower Carried;
         public RunFigures Figures;
         public double RatedA;
-        public ReadOnlyMemory<double> UnitDropsR;
-        public ReadOnlyMemory<double> UnitDropsX;
         public int OwnLines;
         public double VoltageV;
         public double DropPercent;
-        public double DropV;
         public double PercentSumDropPercent;
         public double? LoadFlowDropPercent;
         public double? MaxLengthM;
         public double? MaxLengthTotalM;
         public IReadOnlyList<Finding> Findings;
         public bool WidensToAllLines;
+
+        /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
+        public readonly double DropV => DropPercent / 100.0 * VoltageV;
     }
 }

@@ -33,8 +33,8 @@ public static class LoadFlow
     /// <summary>Solves the tree. <paramref name="loads"/> is per node (end points only) at nominal voltage; <paramref name="runImpedanceOhm"/> per node: its run's R + jX, whole length, sets in parallel.</summary>
     public static LoadFlowResult Solve(DistributionNetwork network, ComplexPower[] loads, Complex[] runImpedanceOhm)
     {
-        var nodes = network.Nodes;
-        var n = nodes.Count;
+        var nodes = network.NodeArray;
+        var n = nodes.Length;
         var zPu = new Complex[n];
         var zTransformer = new Complex[n];
         var ratio = new double[n];

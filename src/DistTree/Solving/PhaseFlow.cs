@@ -28,12 +28,33 @@ internal sealed class PhaseFlow
     private static readonly Phases[] BothOfTwo = [Phases.AB];
     private static readonly Phases[] TheOne = [Phases.A];
 
+    // Per (lines × 8 + set of two lines): conj(u) and |u| of u = Unit(a) − Unit(b), a and b the set's lines.
+    private static readonly Complex[] PairConjugate = new Complex[32];
+    private static readonly double[] PairMagnitude = new double[32];
+
     private readonly DistributionNetwork _network;
+
+    static PhaseFlow()
+    {
+        for (var lines = 2; lines <= 3; lines++)
+        {
+            for (var on = 0; on < 8; on++)
+            {
+                if (BitOperations.PopCount((uint)on) == 2 && on < (1 << lines))
+                {
+                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                    var u = Unit(a, lines) - Unit(b, lines);
+                    PairConjugate[(lines * 8) + on] = Complex.Conjugate(u);
+                    PairMagnitude[(lines * 8) + on] = u.Magnitude;
+                }
+            }
+        }
+    }
 
     public PhaseFlow(DistributionNetwork network, ComplexPower[] power)
     {
         _network = network;
-        var n = network.Nodes.Count;
+        var n = network.NodeArray.Length;
         Assigned = new Phases[n];
         Currents = new Complex[n * 3];
         Assign(power);
@@ -136,8 +157,7 @@ internal sealed class PhaseFlow
                     break;
                 case 2:
                     var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    var u = Unit(a, lines) - Unit(b, lines);
-                    into[set] = ((deltaV[a] - deltaV[b]) * Complex.Conjugate(u)).Real / u.Magnitude / pair * 100.0;
+                    into[set] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
                     break;
                 default:
                     var worst = double.NegativeInfinity;
@@ -222,7 +242,7 @@ internal sealed class PhaseFlow
     // pair of lines (2 poles); 3 poles take all lines. Ties go to the earlier line (A before B before C).
     private void Assign(ComplexPower[] power)
     {
-        var nodes = _network.Nodes;
+        var nodes = _network.NodeArray;
         Span<double> load = stackalloc double[3];
         var automatic = new List<int>();
         foreach (var panel in nodes)
@@ -314,9 +334,9 @@ internal sealed class PhaseFlow
 
     private void Accumulate(ComplexPower[] power)
     {
-        var nodes = _network.Nodes;
+        var nodes = _network.NodeArray;
         Span<Complex> bus = stackalloc Complex[3];
-        for (var i = nodes.Count - 1; i > 0; i--)
+        for (var i = nodes.Length - 1; i > 0; i--)
         {
             var node = nodes[i];
             var mine = Currents.AsSpan(i * 3, 3);
