@@ -86,7 +86,7 @@ public sealed class DropSolver
         var findings = 0;
         for (var r = 0; r < count; r++)
         {
-            runs[r] = Finish(ref rows[r], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
+            runs[r] = Finish(ref rows[r], power[rows[r].Node.Index], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
             findings += runs[r].Findings.Count;
         }
 
@@ -204,8 +204,10 @@ public sealed class DropSolver
         row.Run = run;
         row.CurrentA = currentA;
         row.DesignCurrentA = designA;
-        row.Carried = carried;
-        row.Figures = figures;
+        row.TemperatureC = figures.TemperatureC;
+        row.ResistanceOhmPerKm = figures.ResistanceOhmPerKm;
+        row.ReactanceOhmPerKm = figures.ReactanceOhmPerKm;
+        row.AmpacityA = figures.AmpacityA;
         row.OwnLines = ownLines;
         row.DropPercent = ownDrop;
         row.PercentSumDropPercent = ownDrop;
@@ -281,7 +283,7 @@ public sealed class DropSolver
             {
                 ref var r = ref rows[incomingRow[i]];
                 var km = r.Run!.Conductors.LengthM / 1000.0 / r.Run.Conductors.Sets;
-                z[i] = new Complex(r.Figures.ResistanceOhmPerKm * km, r.Figures.ReactanceOhmPerKm * km);
+                z[i] = new Complex(r.ResistanceOhmPerKm * km, r.ReactanceOhmPerKm * km);
             }
         }
 
@@ -348,7 +350,7 @@ public sealed class DropSolver
                 conductors.Location));
         }
 
-        if (r.Figures.AmpacityA is { } ampacity)
+        if (r.AmpacityA is { } ampacity)
         {
             if (r.DesignCurrentA > ampacity + 1e-9)
             {
@@ -428,7 +430,6 @@ public sealed class DropSolver
             Transformer = data,
             CurrentA = currentA,
             DesignCurrentA = currentA,
-            Carried = carried,
             RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
             DropPercent = dropPercent,
             PercentSumDropPercent = dropPercent,
@@ -605,7 +606,7 @@ public sealed class DropSolver
                 var conductors = r.Run!.Conductors;
                 var loop = r.Run.Supply.Phases == 3 ? 1.0 : 2.0;
                 var km = conductors.LengthM / 1000.0 / conductors.Sets * loop;
-                extraHere += 100.0 * ((delta.Watts * r.Figures.ResistanceOhmPerKm * km) + (delta.Vars * r.Figures.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
+                extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
             }
 
@@ -662,7 +663,7 @@ public sealed class DropSolver
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
 
     // The result record of a finished draft.
-    private static RunResult Finish(ref RowDraft d, PhaseFlow phases, Rules rules, ReadOnlyMemory<double> unitDropsR, ReadOnlyMemory<double> unitDropsX)
+    private static RunResult Finish(ref RowDraft d, ComplexPower carried, PhaseFlow phases, Rules rules, ReadOnlyMemory<double> unitDropsR, ReadOnlyMemory<double> unitDropsX)
     {
         var node = d.Node;
         if (d.Run is not { } run)
@@ -680,8 +681,8 @@ public sealed class DropSolver
                 Phases = t.Secondary.FeederSupply.Phases,
                 CurrentA = d.CurrentA,
                 DesignCurrentA = d.DesignCurrentA,
-                PowerFactor = d.Carried.PowerFactor,
-                ApparentPowerVa = d.Carried.VoltAmperes,
+                PowerFactor = carried.PowerFactor,
+                ApparentPowerVa = carried.VoltAmperes,
                 AmpacityA = d.RatedA,
                 DropV = d.DropV,
                 DropPercent = d.DropPercent,
@@ -708,17 +709,17 @@ public sealed class DropSolver
             Phases = run.Supply.Phases,
             CurrentA = d.CurrentA,
             DesignCurrentA = d.DesignCurrentA,
-            PowerFactor = d.Carried.PowerFactor,
-            ApparentPowerVa = d.Carried.VoltAmperes,
+            PowerFactor = carried.PowerFactor,
+            ApparentPowerVa = carried.VoltAmperes,
             Size = conductors.Size.Text,
             Material = MaterialWord(conductors.Material),
             Raceway = RacewayWord(conductors.Raceway),
             Sets = conductors.Sets,
             LengthM = conductors.LengthM,
-            TemperatureC = d.Figures.TemperatureC,
-            ResistanceOhmPerKm = d.Figures.ResistanceOhmPerKm,
-            ReactanceOhmPerKm = d.Figures.ReactanceOhmPerKm,
-            AmpacityA = d.Figures.AmpacityA,
+            TemperatureC = d.TemperatureC,
+            ResistanceOhmPerKm = d.ResistanceOhmPerKm,
+            ReactanceOhmPerKm = d.ReactanceOhmPerKm,
+            AmpacityA = d.AmpacityA,
             OcpdA = conductors.OcpdA,
             DropV = d.DropV,
             DropPercent = d.DropPercent,
@@ -753,8 +754,10 @@ public sealed class DropSolver
         public TransformerData? Transformer;
         public double CurrentA;
         public double DesignCurrentA;
-        public ComplexPower Carried;
-        public RunFigures Figures;
+        public double TemperatureC;
+        public double ResistanceOhmPerKm;
+        public double ReactanceOhmPerKm;
+        public double? AmpacityA;
         public double RatedA;
         public int OwnLines;
         public double VoltageV;

@@ -41,13 +41,12 @@ public static class LoadFlow
         var model = new LoadModel[n];
         var demand = new double[n];
         var s0 = new Complex[n];
-        var parent = new int[n];
+        var parent = network.ParentIndices;
         var isLoad = new bool[n];
         var isTransformer = new bool[n];
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
-            parent[i] = node.ParentIndex;
             isLoad[i] = node.Circuit is not null;
             isTransformer[i] = node.Kind == NodeKind.Transformer;
             ratio[i] = 1.0;
@@ -128,15 +127,26 @@ public static class LoadFlow
             var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
             if (moved < TolerancePu)
             {
-                return new LoadFlowResult(true, iteration, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+                return new LoadFlowResult(true, iteration, Magnitudes(input), Magnitudes(bus));
             }
 
             if (!double.IsFinite(moved))
             {
-                return new LoadFlowResult(false, iteration, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+                return new LoadFlowResult(false, iteration, Magnitudes(input), Magnitudes(bus));
             }
         }
 
-        return new LoadFlowResult(false, MaxIterations, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+        return new LoadFlowResult(false, MaxIterations, Magnitudes(input), Magnitudes(bus));
+    }
+
+    private static double[] Magnitudes(Complex[] values)
+    {
+        var magnitudes = new double[values.Length];
+        for (var i = 0; i < values.Length; i++)
+        {
+            magnitudes[i] = values[i].Magnitude;
+        }
+
+        return magnitudes;
     }
 }

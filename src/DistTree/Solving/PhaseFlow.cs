@@ -67,8 +67,8 @@ internal sealed class PhaseFlow
     /// <summary>Per node × 3, the line currents (A) it draws from its parent, at its incoming run's voltage.</summary>
     public Complex[] Currents { get; }
 
-    /// <summary>Per transformer node × 3, the secondary's line currents (A) on its bus.</summary>
-    public Complex[] SecondaryCurrents { get; private set; } = [];
+    // Per transformer node, the secondary's line currents (A) on its bus.
+    private readonly Dictionary<int, Complex[]> _secondaryCurrents = [];
 
     /// <summary>ΔV (volts, line to neutral) on each line of the run into <paramref name="node"/>: (I_line + I_neutral)·Z.</summary>
     public void RunDeltaV(int node, Complex impedanceOhm, bool hasNeutral, double scale, Span<Complex> into)
@@ -178,9 +178,10 @@ internal sealed class PhaseFlow
         var lines = PhaseRules.Lines(data.Secondary);
         var vln = LineToNeutralV(data.Secondary);
         var perLine = data.Kva * 1000.0 / lines;
+        var secondary = _secondaryCurrents[node];
         for (var x = 0; x < 3; x++)
         {
-            var s = x < lines ? vln * Unit(x, lines) * Complex.Conjugate(SecondaryCurrents[(node * 3) + x]) : Complex.Zero;
+            var s = x < lines ? vln * Unit(x, lines) * Complex.Conjugate(secondary[x]) : Complex.Zero;
             into[x] = x < lines ? (((percentR * s.Real) + (percentX * s.Imaginary)) / perLine) - data.TapPercent : double.NegativeInfinity;
         }
     }
@@ -354,12 +355,7 @@ internal sealed class PhaseFlow
 
                 if (node.Equipment?.Transformer is { } t)
                 {
-                    if (SecondaryCurrents.Length == 0)
-                    {
-                        SecondaryCurrents = new Complex[Currents.Length];
-                    }
-
-                    mine.CopyTo(SecondaryCurrents.AsSpan(i * 3, 3));
+                    _secondaryCurrents[i] = mine.ToArray();
                     mine.CopyTo(bus);
                     ToPrimary(bus, t.Secondary, node.Equipment.System, mine);
                 }
