@@ -36,15 +36,18 @@ public sealed class DropSolver
         var n = nodes.Length;
         var frequency = project.Service.FrequencyHz;
 
-        var power = new ComplexPower[n];
-        var continuous = new ComplexPower[n];
+        // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used.
+        var power = Scratch.Rent<ComplexPower>(n);
+        var continuous = Scratch.Rent<ComplexPower>(n);
         AccumulatePower(nodes, power, continuous);
-        var phases = new PhaseFlow(network, power);
+        var currents = Scratch.Rent<Complex>(n * 3);
+        var assigned = Scratch.Rent<Phases>(n);
+        var phases = new PhaseFlow(network, power, currents, assigned);
 
         // Rows in network order, each transformer's row after its primary feeder's. Every figure is worked
         // out in the drafts first; each result record is then made once.
-        var incomingRow = new int[n];
-        var transformerRow = new int[n];
+        var incomingRow = Scratch.Rent<int>(n);
+        var transformerRow = Scratch.Rent<int>(n);
         var count = 0;
         for (var i = 0; i < n; i++)
         {
@@ -52,8 +55,8 @@ public sealed class DropSolver
             transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
         }
 
-        var rows = new RowDraft[count];
-        var lineDrops = new double[count * 8];
+        var rows = Scratch.Rent<RowDraft>(count);
+        var lineDrops = Scratch.Rent<double>(count * 8);
         var unitDrops = new double[count * 16];
         for (var i = 0; i < n; i++)
         {
@@ -72,7 +75,7 @@ public sealed class DropSolver
 
         var flow = SolveLoadFlow(network, power, rows, incomingRow);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
-        foreach (ref var row in rows.AsSpan())
+        foreach (ref var row in rows.AsSpan(0, count))
         {
             if (row.Run is not null)
             {
@@ -89,6 +92,12 @@ public sealed class DropSolver
             runs[r] = Finish(ref rows[r], power[rows[r].Node.Index], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
             findings += runs[r].Findings.Count;
         }
+
+        Scratch.Return(rows, count);
+        Scratch.Return(lineDrops, count * 8);
+        Scratch.Return(incomingRow, n);
+        Scratch.Return(transformerRow, n);
+        Scratch.Return(continuous, n);
 
         EndPointResult? worst = null;
         foreach (var e in endPoints)
@@ -111,6 +120,9 @@ public sealed class DropSolver
             }
         }
 
+        Scratch.Return(power, n);
+        Scratch.Return(currents, n * 3);
+        Scratch.Return(assigned, n);
         return new Solution
         {
             Project = project,
@@ -276,7 +288,7 @@ public sealed class DropSolver
     private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, RowDraft[] rows, int[] incomingRow)
     {
         var n = network.NodeArray.Length;
-        var z = new Complex[n];
+        var z = Scratch.Rent<Complex>(n);
         for (var i = 0; i < n; i++)
         {
             if (incomingRow[i] >= 0)
@@ -287,7 +299,9 @@ public sealed class DropSolver
             }
         }
 
-        return LoadFlow.Solve(network, power, z);
+        var flow = LoadFlow.Solve(network, power, z);
+        Scratch.Return(z, n);
+        return flow;
     }
 
     // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
@@ -469,7 +483,7 @@ public sealed class DropSolver
         var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
 
         // Depth of every node (the service is 1), top-down, so that each path is filled in place.
-        var depth = new int[nodes.Length];
+        var depth = Scratch.Rent<int>(nodes.Length);
         var endPointCount = 0;
         for (var i = 0; i < nodes.Length; i++)
         {
@@ -583,6 +597,7 @@ public sealed class DropSolver
             };
         }
 
+        Scratch.Return(depth, nodes.Length);
         return endPoints;
     }
 
@@ -634,8 +649,8 @@ public sealed class DropSolver
     private static void AddReach(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, EndPointResult[] endPoints, Rules rules)
     {
         var nodes = network.NodeArray;
-        var slack = new double[nodes.Length];
-        Array.Fill(slack, double.PositiveInfinity);
+        var slack = Scratch.Rent<double>(nodes.Length);
+        slack.AsSpan(0, nodes.Length).Fill(double.PositiveInfinity);
         foreach (var e in endPoints)
         {
             slack[e.NodeIndex] = e.LimitPercent - e.TotalDropPercent;
@@ -657,6 +672,8 @@ public sealed class DropSolver
             var parent = node.ParentIndex;
             slack[parent] = Math.Min(slack[parent], visible);
         }
+
+        Scratch.Return(slack, nodes.Length);
     }
 
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>

@@ -35,15 +35,16 @@ public static class LoadFlow
     {
         var nodes = network.NodeArray;
         var n = nodes.Length;
-        var zPu = new Complex[n];
-        var zTransformer = new Complex[n];
-        var ratio = new double[n];
-        var model = new LoadModel[n];
-        var demand = new double[n];
-        var s0 = new Complex[n];
+        // Scratch arrays (see Scratch): only the first n elements are used.
+        var zPu = Scratch.Rent<Complex>(n);
+        var zTransformer = Scratch.Rent<Complex>(n);
+        var ratio = Scratch.Rent<double>(n);
+        var model = Scratch.Rent<LoadModel>(n);
+        var demand = Scratch.Rent<double>(n);
+        var s0 = Scratch.Rent<Complex>(n);
         var parent = network.ParentIndices;
-        var isLoad = new bool[n];
-        var isTransformer = new bool[n];
+        var isLoad = Scratch.Rent<bool>(n);
+        var isTransformer = Scratch.Rent<bool>(n);
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
@@ -72,16 +73,34 @@ public static class LoadFlow
             }
         }
 
-        var input = new Complex[n];
-        var bus = new Complex[n];
-        Array.Fill(input, Complex.One);
-        Array.Fill(bus, Complex.One);
-        var current = new Complex[n];
-        var busCurrent = new Complex[n];
+        var input = Scratch.Rent<Complex>(n);
+        var bus = Scratch.Rent<Complex>(n);
+        input.AsSpan(0, n).Fill(Complex.One);
+        bus.AsSpan(0, n).Fill(Complex.One);
+        var current = Scratch.Rent<Complex>(n);
+        var busCurrent = Scratch.Rent<Complex>(n);
+
+        // The result, with the scratch arrays given back.
+        LoadFlowResult Result(bool converged, int iterations)
+        {
+            var result = new LoadFlowResult(converged, iterations, Magnitudes(input, n), Magnitudes(bus, n));
+            foreach (var array in new[] { zPu, zTransformer, s0, input, bus, current, busCurrent })
+            {
+                Scratch.Return(array, n);
+            }
+
+            Scratch.Return(ratio, n);
+            Scratch.Return(demand, n);
+            Scratch.Return(model, n);
+            Scratch.Return(isLoad, n);
+            Scratch.Return(isTransformer, n);
+            return result;
+        }
+
         for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
             // Backward sweep: currents from the end points up.
-            Array.Clear(busCurrent);
+            busCurrent.AsSpan(0, n).Clear();
             for (var i = n - 1; i > 0; i--)
             {
                 Complex drawn;
@@ -127,22 +146,22 @@ public static class LoadFlow
             var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
             if (moved < TolerancePu)
             {
-                return new LoadFlowResult(true, iteration, Magnitudes(input), Magnitudes(bus));
+                return Result(true, iteration);
             }
 
             if (!double.IsFinite(moved))
             {
-                return new LoadFlowResult(false, iteration, Magnitudes(input), Magnitudes(bus));
+                return Result(false, iteration);
             }
         }
 
-        return new LoadFlowResult(false, MaxIterations, Magnitudes(input), Magnitudes(bus));
+        return Result(false, MaxIterations);
     }
 
-    private static double[] Magnitudes(Complex[] values)
+    private static double[] Magnitudes(Complex[] values, int n)
     {
-        var magnitudes = new double[values.Length];
-        for (var i = 0; i < values.Length; i++)
+        var magnitudes = new double[n];
+        for (var i = 0; i < n; i++)
         {
             magnitudes[i] = values[i].Magnitude;
         }

@@ -51,12 +51,12 @@ internal sealed class PhaseFlow
         }
     }
 
-    public PhaseFlow(DistributionNetwork network, ComplexPower[] power)
+    /// <summary>Works out the lines and currents of <paramref name="network"/> into <paramref name="currents"/> (3 per node) and <paramref name="assigned"/> (1 per node), both zero.</summary>
+    public PhaseFlow(DistributionNetwork network, ComplexPower[] power, Complex[] currents, Phases[] assigned)
     {
         _network = network;
-        var n = network.NodeArray.Length;
-        Assigned = new Phases[n];
-        Currents = new Complex[n * 3];
+        Assigned = assigned;
+        Currents = currents;
         Assign(power);
         Accumulate(power);
     }
