@@ -198,11 +198,7 @@ public sealed class DropSolver
         {
             var km = conductors.LengthM / 1000.0 / conductors.Sets;
             var scale = lineA > 0 ? currentA / lineA : 1.0;
-            Span<Complex> deltaV = stackalloc Complex[3];
-            phases.RunDeltaV(index, new Complex(km, 0), system.HasNeutral, scale, deltaV);
-            PhaseFlow.LineDrops(deltaV, system, unitR);
-            phases.RunDeltaV(index, new Complex(0, km), system.HasNeutral, scale, deltaV);
-            PhaseFlow.LineDrops(deltaV, system, unitX);
+            phases.UnitDrops(index, km, system, scale, unitR, unitX);
         }
 
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;

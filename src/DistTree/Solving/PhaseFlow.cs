@@ -70,15 +70,32 @@ internal sealed class PhaseFlow
     // Per transformer node, the secondary's line currents (A) on its bus.
     private readonly Dictionary<int, Complex[]> _secondaryCurrents = [];
 
-    /// <summary>ΔV (volts, line to neutral) on each line of the run into <paramref name="node"/>: (I_line + I_neutral)·Z.</summary>
-    public void RunDeltaV(int node, Complex impedanceOhm, bool hasNeutral, double scale, Span<Complex> into)
+    /// <summary>
+    /// The unit drops of the run into <paramref name="node"/> on <paramref name="system"/> (see <see cref="LineDrops"/>):
+    /// into <paramref name="unitR"/> from ΔV = (I_line + I_neutral)·(km + j0)·scale on each line, into
+    /// <paramref name="unitX"/> from ΔV = (I_line + I_neutral)·(0 + j·km)·scale.
+    /// </summary>
+    public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
         var i = Currents.AsSpan(node * 3, 3);
-        var neutral = hasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var neutral = system.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var resistive = new Complex(km, 0);
+        var reactive = new Complex(0, km);
+        Span<Complex> deltaR = stackalloc Complex[3];
+        Span<Complex> deltaX = stackalloc Complex[3];
         for (var x = 0; x < 3; x++)
         {
-            into[x] = (i[x] + neutral) * impedanceOhm * scale;
+            var flowing = i[x] + neutral;
+            deltaR[x] = flowing * resistive * scale;
+            deltaX[x] = flowing * reactive * scale;
         }
+
+        var lines = PhaseRules.Lines(system);
+        var single = SetV(1, system);
+        var pair = SetV(2, system);
+        var perLine = LineToNeutralV(system);
+        LineDropsOn(deltaR, lines, single, pair, perLine, unitR);
+        LineDropsOn(deltaX, lines, single, pair, perLine, unitX);
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
@@ -130,13 +147,12 @@ internal sealed class PhaseFlow
     /// <paramref name="system"/>: one line, its line-to-neutral drop; two, their line-to-line drop; three, the
     /// worst line; a set with none of the system's lines, line A's. <paramref name="into"/>[0] is left as it is.
     /// </summary>
-    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into)
-    {
-        var lines = PhaseRules.Lines(system);
-        var single = SetV(1, system);
-        var pair = SetV(2, system);
-        var perLine = LineToNeutralV(system);
+    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into) =>
+        LineDropsOn(deltaV, PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), into);
 
+    // LineDrops on a system of the given lines and voltages (see SetV and LineToNeutralV).
+    private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
+    {
         // The part of each line's ΔV in phase with the line's voltage.
         Span<double> inPhase = stackalloc double[3];
         for (var x = 0; x < lines; x++)
