@@ -58,6 +58,7 @@ public sealed class DropSolver
         var rows = Scratch.Rent<RowDraft>(count);
         var lineDrops = Scratch.Rent<double>(count * 8);
         var unitDrops = new double[count * 16];
+        var z = Scratch.Rent<Complex>(n);
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
@@ -65,6 +66,10 @@ public sealed class DropSolver
             {
                 var row = incomingRow[i];
                 SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
+
+                // The load flow's impedance of the run: its whole length, sets in parallel.
+                var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
+                z[i] = new Complex(rows[row].ResistanceOhmPerKm * km, rows[row].ReactanceOhmPerKm * km);
             }
 
             if (node.Equipment?.Transformer is { } transformer)
@@ -73,7 +78,9 @@ public sealed class DropSolver
             }
         }
 
-        var flow = SolveLoadFlow(network, power, rows, incomingRow);
+        // The load flow on the same impedances the percent sum used.
+        var flow = LoadFlow.Solve(network, power, z);
+        Scratch.Return(z, n);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
         foreach (ref var row in rows.AsSpan(0, count))
         {
@@ -280,26 +287,6 @@ public sealed class DropSolver
         _ => connectedA,
     };
 
-    // The load flow on the same impedances the percent sum used.
-    private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, RowDraft[] rows, int[] incomingRow)
-    {
-        var n = network.NodeArray.Length;
-        var z = Scratch.Rent<Complex>(n);
-        for (var i = 0; i < n; i++)
-        {
-            if (incomingRow[i] >= 0)
-            {
-                ref var r = ref rows[incomingRow[i]];
-                var km = r.Run!.Conductors.LengthM / 1000.0 / r.Run.Conductors.Sets;
-                z[i] = new Complex(r.ResistanceOhmPerKm * km, r.ReactanceOhmPerKm * km);
-            }
-        }
-
-        var flow = LoadFlow.Solve(network, power, z);
-        Scratch.Return(z, n);
-        return flow;
-    }
-
     // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
     private static void ChooseMethod(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
     {
@@ -314,7 +301,7 @@ public sealed class DropSolver
             return;
         }
 
-        var nodes = network.NodeArray;
+        var parents = network.ParentIndices;
         void Record(ref RowDraft r, double drop)
         {
             r.LoadFlowDropPercent = drop;
@@ -324,11 +311,11 @@ public sealed class DropSolver
             }
         }
 
-        for (var i = 1; i < nodes.Length; i++)
+        for (var i = 1; i < parents.Length; i++)
         {
             if (incomingRow[i] >= 0)
             {
-                Record(ref rows[incomingRow[i]], (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0);
+                Record(ref rows[incomingRow[i]], (flow.BusPu[parents[i]] - flow.InputPu[i]) * 100.0);
             }
 
             if (transformerRow[i] >= 0)
@@ -343,7 +330,6 @@ public sealed class DropSolver
         List<Finding>? findings = null;
         var run = r.Run!;
         var conductors = run.Conductors;
-        var id = run.Id;
         var branch = run.Kind == RunKind.Branch;
         var what = branch ? "branch circuit" : "feeder";
         var size = conductors.Size.Text;
@@ -353,10 +339,10 @@ public sealed class DropSolver
         {
             (findings ??= []).Add(new Finding(
                 branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
-                id,
+                run.Id,
                 r.DropPercent,
                 limit,
-                Invariant($"{what} {id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
+                Invariant($"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
                 conductors.Location));
         }
 
@@ -366,10 +352,10 @@ public sealed class DropSolver
             {
                 (findings ??= []).Add(new Finding(
                     FindingKind.Ampacity,
-                    id,
+                    run.Id,
                     r.DesignCurrentA,
                     ampacity,
-                    Invariant($"{what} {id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
+                    Invariant($"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
                     conductors.Location));
             }
 
@@ -377,10 +363,10 @@ public sealed class DropSolver
             {
                 (findings ??= []).Add(new Finding(
                     FindingKind.OcpdAboveAmpacity,
-                    id,
+                    run.Id,
                     ocpd,
                     ampacity,
-                    Invariant($"{what} {id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
+                    Invariant($"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
                     conductors.Location));
             }
         }
@@ -389,10 +375,10 @@ public sealed class DropSolver
         {
             (findings ??= []).Add(new Finding(
                 FindingKind.OcpdAboveAmpacity,
-                id,
+                run.Id,
                 device,
                 smallMax,
-                Invariant($"{what} {id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                Invariant($"{what} {run.Id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
                 conductors.Location));
         }
 
@@ -653,10 +639,10 @@ public sealed class DropSolver
         }
 
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
+        var parents = network.ParentIndices;
         for (var i = nodes.Length - 1; i > 0; i--)
         {
-            var node = nodes[i];
-            var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
+            var visible = newOrigin && nodes[i].Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
             if (incomingRow[i] >= 0)
             {
                 ref var row = ref rows[incomingRow[i]];
@@ -665,7 +651,7 @@ public sealed class DropSolver
                 row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
             }
 
-            var parent = node.ParentIndex;
+            var parent = parents[i];
             slack[parent] = Math.Min(slack[parent], visible);
         }
 
