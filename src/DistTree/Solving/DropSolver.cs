@@ -178,7 +178,7 @@ public sealed class DropSolver
     }
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
-    // unitDropsR and unitDropsX: where its unit drops go (see RunResult.UnitDropsR).
+    // unitR and unitX: where its unit drops go (see RunResult.UnitDropsR).
     private void SolveRun(
         ref RowDraft row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
         Span<double> lineDrops, Span<double> unitR, Span<double> unitX)
