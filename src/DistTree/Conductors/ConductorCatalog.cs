@@ -48,16 +48,15 @@ public sealed class ConductorCatalog
     public double DcResistance20OhmPerKm(ConductorSize size, Material material)
     {
         var row = Row(size);
-        var tabulated = material == Material.Copper ? row.R20CuOhmPerKm : row.R20AlOhmPerKm;
-        return tabulated ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, material);
+        return material == Material.Copper ? row.Rdc20CuOhmPerKm : row.Rdc20AlOhmPerKm;
     }
 
     /// <summary>Where the 20 °C resistance of <paramref name="size"/> comes from, in words.</summary>
     public string DcResistanceBasis(ConductorSize size, Material material)
     {
         var row = Row(size);
-        var tabulated = material == Material.Copper ? row.R20CuOhmPerKm : row.R20AlOhmPerKm;
-        return tabulated is null ? "area × resistivity × stranding" : "IEC 60228 maximum";
+        var tabulated = material == Material.Copper ? row.R20CuTabulated : row.R20AlTabulated;
+        return tabulated ? "IEC 60228 maximum" : "area × resistivity × stranding";
     }
 
     /// <summary>DC resistance at <paramref name="temperatureC"/>, ohm/km.</summary>
@@ -72,9 +71,9 @@ public sealed class ConductorCatalog
     public double AcResistanceOhmPerKm(ConductorSize size, Material material, Raceway raceway, double temperatureC, double frequencyHz)
     {
         var row = Row(size);
-        var rdc = DcResistanceOhmPerKm(size, material, temperatureC);
-        var dc = ConductorPhysics.StrandedDiameterMm(size.AreaMm2);
-        var acOverDc = ConductorPhysics.AcOverDc(rdc, frequencyHz, dc, dc + (2.0 * row.InsulationMm));
+        var rdc = ConductorPhysics.AtTemperature(material == Material.Copper ? row.Rdc20CuOhmPerKm : row.Rdc20AlOhmPerKm, material, temperatureC);
+        var dc = row.StrandedDiameterMm;
+        var acOverDc = ConductorPhysics.AcOverDc(rdc, frequencyHz, dc, row.AxialSpacingMm);
         var racewayFactor = raceway == Raceway.Pvc ? 1.0 : (material == Material.Copper ? row.SteelRatioCu : row.SteelRatioAl);
         return rdc * acOverDc * racewayFactor;
     }
@@ -83,8 +82,8 @@ public sealed class ConductorCatalog
     public double ReactanceOhmPerKm(ConductorSize size, Raceway raceway, double frequencyHz)
     {
         var row = Row(size);
-        var x = raceway == Raceway.Steel ? row.XSteel : row.XPvc;
-        return ToOhmPerKm(x, row.PerKft) * frequencyHz / (row.PerKft ? 60.0 : 50.0);
+        var x = raceway == Raceway.Steel ? row.XSteelOhmPerKm : row.XPvcOhmPerKm;
+        return x * frequencyHz / (row.PerKft ? 60.0 : 50.0);
     }
 
     /// <summary>
@@ -127,9 +126,12 @@ public sealed class ConductorCatalog
     /// (the lower of terminal and insulation ratings; NEC 110.14(C), read). Metric sizes have no terminal
     /// column: their thermal ampacity is the allowable one. Null where the table has no figure.
     /// </summary>
-    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarryingConductors = 3)
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarryingConductors = 3) =>
+        AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarryingConductors));
+
+    /// <summary>The allowable ampacity from the conductor's <paramref name="thermal"/> ampacity (see <see cref="ThermalAmpacityA"/>).</summary>
+    internal double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double? thermal)
     {
-        var thermal = ThermalAmpacityA(size, material, insulationC, ambientC, currentCarryingConductors);
         if (thermal is null || size.Kind == SizeKind.Metric)
         {
             return thermal;
@@ -178,17 +180,21 @@ public sealed class ConductorCatalog
             foreach (var size in present)
             {
                 var r = raw[size.Index]!;
+                var dc = ConductorPhysics.StrandedDiameterMm(size.AreaMm2);
                 rows[size.Index] = new CatalogRow(
                     r.PerKft,
-                    r.XPvc ?? LogInterpolate(xPvc, size.AreaMm2, belowFirst: null),
-                    r.XSteel ?? LogInterpolate(xSteel, size.AreaMm2, belowFirst: null),
+                    ToOhmPerKm(r.XPvc ?? LogInterpolate(xPvc, size.AreaMm2, belowFirst: null), r.PerKft),
+                    ToOhmPerKm(r.XSteel ?? LogInterpolate(xSteel, size.AreaMm2, belowFirst: null), r.PerKft),
                     LogInterpolate(cuPairs, size.AreaMm2, belowFirst: 1.0),
                     LogInterpolate(alPairs, size.AreaMm2, belowFirst: 1.0),
-                    r.R20Cu,
-                    r.R20Al,
+                    r.R20Cu ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, Material.Copper),
+                    r.R20Al ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, Material.Aluminum),
+                    r.R20Cu is not null,
+                    r.R20Al is not null,
                     [r.Cu60, r.Cu75, r.Cu90],
                     [r.Al60, r.Al75, r.Al90],
-                    r.InsulationMm,
+                    dc,
+                    dc + (2.0 * r.InsulationMm),
                     r.OcpdCu,
                     r.OcpdAl);
             }
@@ -235,9 +241,12 @@ public sealed class ConductorCatalog
         double? R20Cu, double? R20Al, double? Cu60, double? Cu75, double? Cu90, double? Al60, double? Al75, double? Al90,
         double InsulationMm, double? OcpdCu, double? OcpdAl);
 
+    // Per size, the figures that do not depend on a run: reactances in ohm/km at the data's frequency, 20 °C
+    // resistances (tabulated or from the area), the stranded diameter and the axial spacing of touching conductors.
     private sealed record CatalogRow(
-        bool PerKft, double XPvc, double XSteel, double SteelRatioCu, double SteelRatioAl, double? R20CuOhmPerKm, double? R20AlOhmPerKm,
-        double?[] AmpacityCu, double?[] AmpacityAl, double InsulationMm, double? MaxOcpdCuA, double? MaxOcpdAlA);
+        bool PerKft, double XPvcOhmPerKm, double XSteelOhmPerKm, double SteelRatioCu, double SteelRatioAl, double Rdc20CuOhmPerKm, double Rdc20AlOhmPerKm,
+        bool R20CuTabulated, bool R20AlTabulated, double?[] AmpacityCu, double?[] AmpacityAl, double StrandedDiameterMm, double AxialSpacingMm,
+        double? MaxOcpdCuA, double? MaxOcpdAlA);
 
     private static class CatalogFile
     {

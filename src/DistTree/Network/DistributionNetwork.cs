@@ -23,11 +23,20 @@ public sealed class DistributionNetwork
     /// <summary>Every node; a parent's index is always smaller than its children's. Index 0 is the service.</summary>
     public IReadOnlyList<NetworkNode> Nodes { get; }
 
+    /// <summary>The nodes as an array, for the solver's loops (indexing an array costs less than an interface call).</summary>
+    internal NetworkNode[] NodeArray => _nodeArray ??= [.. Nodes];
+
+    /// <summary>Every node's parent index (-1 for the service), in node order.</summary>
+    internal int[] ParentIndices => _parentIndices ??= NodeArray.Select(node => node.ParentIndex).ToArray();
+
     /// <summary>The tree as a QuikGraph graph: vertices are nodes, edges are runs.</summary>
     public BidirectionalGraph<NetworkNode, NetworkRun> Graph { get; }
 
     /// <summary>The service.</summary>
     public NetworkNode Root => Nodes[0];
+
+    private NetworkNode[]? _nodeArray;
+    private int[]? _parentIndices;
 
     /// <summary>The path of node indices from the service to <paramref name="node"/>, service first.</summary>
     public IReadOnlyList<int> PathTo(NetworkNode node)

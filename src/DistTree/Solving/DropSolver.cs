@@ -32,19 +32,22 @@ public sealed class DropSolver
     {
         var project = network.Project;
         var rules = project.Rules;
-        var nodes = network.Nodes;
-        var n = nodes.Count;
+        var nodes = network.NodeArray;
+        var n = nodes.Length;
         var frequency = project.Service.FrequencyHz;
 
-        var power = new ComplexPower[n];
-        var continuous = new ComplexPower[n];
+        // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used.
+        var power = Scratch.Rent<ComplexPower>(n);
+        var continuous = Scratch.Rent<ComplexPower>(n);
         AccumulatePower(nodes, power, continuous);
-        var phases = new PhaseFlow(network, power);
+        var currents = Scratch.Rent<Complex>(n * 3);
+        var assigned = Scratch.Rent<Phases>(n);
+        var phases = new PhaseFlow(network, power, currents, assigned);
 
         // Rows in network order, each transformer's row after its primary feeder's. Every figure is worked
         // out in the drafts first; each result record is then made once.
-        var incomingRow = new int[n];
-        var transformerRow = new int[n];
+        var incomingRow = Scratch.Rent<int>(n);
+        var transformerRow = Scratch.Rent<int>(n);
         var count = 0;
         for (var i = 0; i < n; i++)
         {
@@ -52,16 +55,21 @@ public sealed class DropSolver
             transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
         }
 
-        var rows = new RowDraft[count];
-        var lineDrops = new double[count * 8];
+        var rows = Scratch.Rent<RowDraft>(count);
+        var lineDrops = Scratch.Rent<double>(count * 8);
         var unitDrops = new double[count * 16];
+        var z = Scratch.Rent<Complex>(n);
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
             if (node.Incoming is { } run)
             {
                 var row = incomingRow[i];
-                rows[row] = SolveRun(run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsMemory(row * 16, 8), unitDrops.AsMemory((row * 16) + 8, 8));
+                SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
+
+                // The load flow's impedance of the run: its whole length, sets in parallel.
+                var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
+                z[i] = new Complex(rows[row].ResistanceOhmPerKm * km, rows[row].ReactanceOhmPerKm * km);
             }
 
             if (node.Equipment?.Transformer is { } transformer)
@@ -70,9 +78,11 @@ public sealed class DropSolver
             }
         }
 
-        var flow = SolveLoadFlow(network, power, rows, incomingRow);
+        // The load flow on the same impedances the percent sum used.
+        var flow = LoadFlow.Solve(network, power, z);
+        Scratch.Return(z, n);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
-        foreach (ref var row in rows.AsSpan())
+        foreach (ref var row in rows.AsSpan(0, count))
         {
             if (row.Run is not null)
             {
@@ -86,9 +96,15 @@ public sealed class DropSolver
         var findings = 0;
         for (var r = 0; r < count; r++)
         {
-            runs[r] = Finish(ref rows[r], phases, rules);
+            runs[r] = Finish(ref rows[r], power[rows[r].Node.Index], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
             findings += runs[r].Findings.Count;
         }
+
+        Scratch.Return(rows, count);
+        Scratch.Return(lineDrops, count * 8);
+        Scratch.Return(incomingRow, n);
+        Scratch.Return(transformerRow, n);
+        Scratch.Return(continuous, n);
 
         EndPointResult? worst = null;
         foreach (var e in endPoints)
@@ -111,6 +127,9 @@ public sealed class DropSolver
             }
         }
 
+        Scratch.Return(power, n);
+        Scratch.Return(currents, n * 3);
+        Scratch.Return(assigned, n);
         return new Solution
         {
             Project = project,
@@ -125,9 +144,9 @@ public sealed class DropSolver
     }
 
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
-    private static void AccumulatePower(IReadOnlyList<NetworkNode> nodes, ComplexPower[] power, ComplexPower[] continuous)
+    private static void AccumulatePower(NetworkNode[] nodes, ComplexPower[] power, ComplexPower[] continuous)
     {
-        for (var i = nodes.Count - 1; i >= 0; i--)
+        for (var i = nodes.Length - 1; i >= 0; i--)
         {
             var node = nodes[i];
             if (node.Circuit is { } circuit)
@@ -159,10 +178,10 @@ public sealed class DropSolver
     }
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
-    // unitDropsR and unitDropsX: where its unit drops go (see RunResult.UnitDropsR).
-    private RowDraft SolveRun(
-        NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
-        Span<double> lineDrops, Memory<double> unitDropsR, Memory<double> unitDropsX)
+    // unitR and unitX: where its unit drops go (see RunResult.UnitDropsR).
+    private void SolveRun(
+        ref RowDraft row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
+        Span<double> lineDrops, Span<double> unitR, Span<double> unitX)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -177,8 +196,6 @@ public sealed class DropSolver
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
         var system = run.Source.System;
-        var unitR = unitDropsR.Span;
-        var unitX = unitDropsX.Span;
         if (points.Count > 0)
         {
             unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
@@ -188,11 +205,7 @@ public sealed class DropSolver
         {
             var km = conductors.LengthM / 1000.0 / conductors.Sets;
             var scale = lineA > 0 ? currentA / lineA : 1.0;
-            Span<Complex> deltaV = stackalloc Complex[3];
-            phases.RunDeltaV(index, new Complex(km, 0), system.HasNeutral, scale, deltaV);
-            PhaseFlow.LineDrops(deltaV, system, unitR);
-            phases.RunDeltaV(index, new Complex(0, km), system.HasNeutral, scale, deltaV);
-            PhaseFlow.LineDrops(deltaV, system, unitX);
+            phases.UnitDrops(index, km, system, scale, unitR, unitX);
         }
 
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
@@ -202,23 +215,19 @@ public sealed class DropSolver
             lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
         }
 
-        return new RowDraft
-        {
-            Node = run.Target,
-            Run = run,
-            CurrentA = currentA,
-            DesignCurrentA = designA,
-            Carried = carried,
-            Figures = figures,
-            UnitDropsR = unitDropsR,
-            UnitDropsX = unitDropsX,
-            OwnLines = ownLines,
-            DropPercent = ownDrop,
-            DropV = ownDrop / 100.0 * supply.VoltageV,
-            PercentSumDropPercent = ownDrop,
-            VoltageV = supply.VoltageV,
-            Findings = NoFindings,
-        };
+        row.Node = run.Target;
+        row.Run = run;
+        row.CurrentA = currentA;
+        row.DesignCurrentA = designA;
+        row.TemperatureC = figures.TemperatureC;
+        row.ResistanceOhmPerKm = figures.ResistanceOhmPerKm;
+        row.ReactanceOhmPerKm = figures.ReactanceOhmPerKm;
+        row.AmpacityA = figures.AmpacityA;
+        row.OwnLines = ownLines;
+        row.DropPercent = ownDrop;
+        row.PercentSumDropPercent = ownDrop;
+        row.VoltageV = supply.VoltageV;
+        row.Findings = NoFindings;
     }
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
@@ -278,24 +287,6 @@ public sealed class DropSolver
         _ => connectedA,
     };
 
-    // The load flow on the same impedances the percent sum used.
-    private static LoadFlowResult SolveLoadFlow(DistributionNetwork network, ComplexPower[] power, RowDraft[] rows, int[] incomingRow)
-    {
-        var n = network.Nodes.Count;
-        var z = new Complex[n];
-        for (var i = 0; i < n; i++)
-        {
-            if (incomingRow[i] >= 0)
-            {
-                ref var r = ref rows[incomingRow[i]];
-                var km = r.Run!.Conductors.LengthM / 1000.0 / r.Run.Conductors.Sets;
-                z[i] = new Complex(r.Figures.ResistanceOhmPerKm * km, r.Figures.ReactanceOhmPerKm * km);
-            }
-        }
-
-        return LoadFlow.Solve(network, power, z);
-    }
-
     // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
     private static void ChooseMethod(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
     {
@@ -310,22 +301,21 @@ public sealed class DropSolver
             return;
         }
 
-        var nodes = network.Nodes;
+        var parents = network.ParentIndices;
         void Record(ref RowDraft r, double drop)
         {
             r.LoadFlowDropPercent = drop;
             if (rules.Method == SolutionMethod.LoadFlow)
             {
                 r.DropPercent = drop;
-                r.DropV = drop / 100.0 * r.VoltageV;
             }
         }
 
-        for (var i = 1; i < nodes.Count; i++)
+        for (var i = 1; i < parents.Length; i++)
         {
             if (incomingRow[i] >= 0)
             {
-                Record(ref rows[incomingRow[i]], (flow.BusPu[nodes[i].ParentIndex] - flow.InputPu[i]) * 100.0);
+                Record(ref rows[incomingRow[i]], (flow.BusPu[parents[i]] - flow.InputPu[i]) * 100.0);
             }
 
             if (transformerRow[i] >= 0)
@@ -340,7 +330,6 @@ public sealed class DropSolver
         List<Finding>? findings = null;
         var run = r.Run!;
         var conductors = run.Conductors;
-        var id = run.Id;
         var branch = run.Kind == RunKind.Branch;
         var what = branch ? "branch circuit" : "feeder";
         var size = conductors.Size.Text;
@@ -350,23 +339,23 @@ public sealed class DropSolver
         {
             (findings ??= []).Add(new Finding(
                 branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
-                id,
+                run.Id,
                 r.DropPercent,
                 limit,
-                Invariant($"{what} {id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
+                Invariant($"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
                 conductors.Location));
         }
 
-        if (r.Figures.AmpacityA is { } ampacity)
+        if (r.AmpacityA is { } ampacity)
         {
             if (r.DesignCurrentA > ampacity + 1e-9)
             {
                 (findings ??= []).Add(new Finding(
                     FindingKind.Ampacity,
-                    id,
+                    run.Id,
                     r.DesignCurrentA,
                     ampacity,
-                    Invariant($"{what} {id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
+                    Invariant($"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
                     conductors.Location));
             }
 
@@ -374,10 +363,10 @@ public sealed class DropSolver
             {
                 (findings ??= []).Add(new Finding(
                     FindingKind.OcpdAboveAmpacity,
-                    id,
+                    run.Id,
                     ocpd,
                     ampacity,
-                    Invariant($"{what} {id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
+                    Invariant($"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
                     conductors.Location));
             }
         }
@@ -386,10 +375,10 @@ public sealed class DropSolver
         {
             (findings ??= []).Add(new Finding(
                 FindingKind.OcpdAboveAmpacity,
-                id,
+                run.Id,
                 device,
                 smallMax,
-                Invariant($"{what} {id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                Invariant($"{what} {run.Id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
                 conductors.Location));
         }
 
@@ -437,10 +426,8 @@ public sealed class DropSolver
             Transformer = data,
             CurrentA = currentA,
             DesignCurrentA = currentA,
-            Carried = carried,
             RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
             DropPercent = dropPercent,
-            DropV = dropPercent / 100.0 * supply.VoltageV,
             PercentSumDropPercent = dropPercent,
             VoltageV = supply.VoltageV,
             Findings = findings,
@@ -473,14 +460,14 @@ public sealed class DropSolver
         DistributionNetwork network, RowDraft[] rows, double[] lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
         LoadFlowResult flow, PhaseFlow phases, Rules rules)
     {
-        var nodes = network.Nodes;
+        var nodes = network.NodeArray;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
 
         // Depth of every node (the service is 1), top-down, so that each path is filled in place.
-        var depth = new int[nodes.Count];
+        var depth = Scratch.Rent<int>(nodes.Length);
         var endPointCount = 0;
-        for (var i = 0; i < nodes.Count; i++)
+        for (var i = 0; i < nodes.Length; i++)
         {
             depth[i] = i == 0 ? 1 : depth[nodes[i].ParentIndex] + 1;
             endPointCount += nodes[i].Circuit is null ? 0 : 1;
@@ -592,6 +579,7 @@ public sealed class DropSolver
             };
         }
 
+        Scratch.Return(depth, nodes.Length);
         return endPoints;
     }
 
@@ -601,7 +589,7 @@ public sealed class DropSolver
     private static MotorStartResult MotorStartCheck(
         DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
     {
-        var nodes = network.Nodes;
+        var nodes = network.NodeArray;
         var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
         var delta = lockedRotor + (running * -1.0);
         double terminal = 0, panel = 0;
@@ -615,7 +603,7 @@ public sealed class DropSolver
                 var conductors = r.Run!.Conductors;
                 var loop = r.Run.Supply.Phases == 3 ? 1.0 : 2.0;
                 var km = conductors.LengthM / 1000.0 / conductors.Sets * loop;
-                extraHere += 100.0 * ((delta.Watts * r.Figures.ResistanceOhmPerKm * km) + (delta.Vars * r.Figures.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
+                extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
             }
 
@@ -642,19 +630,19 @@ public sealed class DropSolver
     // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
     private static void AddReach(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, EndPointResult[] endPoints, Rules rules)
     {
-        var nodes = network.Nodes;
-        var slack = new double[nodes.Count];
-        Array.Fill(slack, double.PositiveInfinity);
+        var nodes = network.NodeArray;
+        var slack = Scratch.Rent<double>(nodes.Length);
+        slack.AsSpan(0, nodes.Length).Fill(double.PositiveInfinity);
         foreach (var e in endPoints)
         {
             slack[e.NodeIndex] = e.LimitPercent - e.TotalDropPercent;
         }
 
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
-        for (var i = nodes.Count - 1; i > 0; i--)
+        var parents = network.ParentIndices;
+        for (var i = nodes.Length - 1; i > 0; i--)
         {
-            var node = nodes[i];
-            var visible = newOrigin && node.Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
+            var visible = newOrigin && nodes[i].Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
             if (incomingRow[i] >= 0)
             {
                 ref var row = ref rows[incomingRow[i]];
@@ -663,16 +651,18 @@ public sealed class DropSolver
                 row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
             }
 
-            var parent = node.ParentIndex;
+            var parent = parents[i];
             slack[parent] = Math.Min(slack[parent], visible);
         }
+
+        Scratch.Return(slack, nodes.Length);
     }
 
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
 
     // The result record of a finished draft.
-    private static RunResult Finish(ref RowDraft d, PhaseFlow phases, Rules rules)
+    private static RunResult Finish(ref RowDraft d, ComplexPower carried, PhaseFlow phases, Rules rules, ReadOnlyMemory<double> unitDropsR, ReadOnlyMemory<double> unitDropsX)
     {
         var node = d.Node;
         if (d.Run is not { } run)
@@ -690,8 +680,8 @@ public sealed class DropSolver
                 Phases = t.Secondary.FeederSupply.Phases,
                 CurrentA = d.CurrentA,
                 DesignCurrentA = d.DesignCurrentA,
-                PowerFactor = d.Carried.PowerFactor,
-                ApparentPowerVa = d.Carried.VoltAmperes,
+                PowerFactor = carried.PowerFactor,
+                ApparentPowerVa = carried.VoltAmperes,
                 AmpacityA = d.RatedA,
                 DropV = d.DropV,
                 DropPercent = d.DropPercent,
@@ -718,17 +708,17 @@ public sealed class DropSolver
             Phases = run.Supply.Phases,
             CurrentA = d.CurrentA,
             DesignCurrentA = d.DesignCurrentA,
-            PowerFactor = d.Carried.PowerFactor,
-            ApparentPowerVa = d.Carried.VoltAmperes,
+            PowerFactor = carried.PowerFactor,
+            ApparentPowerVa = carried.VoltAmperes,
             Size = conductors.Size.Text,
             Material = MaterialWord(conductors.Material),
             Raceway = RacewayWord(conductors.Raceway),
             Sets = conductors.Sets,
             LengthM = conductors.LengthM,
-            TemperatureC = d.Figures.TemperatureC,
-            ResistanceOhmPerKm = d.Figures.ResistanceOhmPerKm,
-            ReactanceOhmPerKm = d.Figures.ReactanceOhmPerKm,
-            AmpacityA = d.Figures.AmpacityA,
+            TemperatureC = d.TemperatureC,
+            ResistanceOhmPerKm = d.ResistanceOhmPerKm,
+            ReactanceOhmPerKm = d.ReactanceOhmPerKm,
+            AmpacityA = d.AmpacityA,
             OcpdA = conductors.OcpdA,
             DropV = d.DropV,
             DropPercent = d.DropPercent,
@@ -741,8 +731,8 @@ public sealed class DropSolver
             LineCurrentsA = phases.LineCurrentsA(node.Index, PhaseRules.Lines(system)),
             Lines = branch ? LinesText[(int)phases.Assigned[node.Index]] : null,
             Findings = d.Findings,
-            UnitDropsR = d.UnitDropsR,
-            UnitDropsX = d.UnitDropsX,
+            UnitDropsR = unitDropsR,
+            UnitDropsX = unitDropsX,
             OwnLines = d.OwnLines,
             Location = conductors.Location,
         };
@@ -763,20 +753,22 @@ public sealed class DropSolver
         public TransformerData? Transformer;
         public double CurrentA;
         public double DesignCurrentA;
-        public ComplexPower Carried;
-        public RunFigures Figures;
+        public double TemperatureC;
+        public double ResistanceOhmPerKm;
+        public double ReactanceOhmPerKm;
+        public double? AmpacityA;
         public double RatedA;
-        public ReadOnlyMemory<double> UnitDropsR;
-        public ReadOnlyMemory<double> UnitDropsX;
         public int OwnLines;
         public double VoltageV;
         public double DropPercent;
-        public double DropV;
         public double PercentSumDropPercent;
         public double? LoadFlowDropPercent;
         public double? MaxLengthM;
         public double? MaxLengthTotalM;
         public IReadOnlyList<Finding> Findings;
         public bool WidensToAllLines;
+
+        /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
+        public readonly double DropV => DropPercent / 100.0 * VoltageV;
     }
 }

@@ -33,21 +33,21 @@ public static class LoadFlow
     /// <summary>Solves the tree. <paramref name="loads"/> is per node (end points only) at nominal voltage; <paramref name="runImpedanceOhm"/> per node: its run's R + jX, whole length, sets in parallel.</summary>
     public static LoadFlowResult Solve(DistributionNetwork network, ComplexPower[] loads, Complex[] runImpedanceOhm)
     {
-        var nodes = network.Nodes;
-        var n = nodes.Count;
-        var zPu = new Complex[n];
-        var zTransformer = new Complex[n];
-        var ratio = new double[n];
-        var model = new LoadModel[n];
-        var demand = new double[n];
-        var s0 = new Complex[n];
-        var parent = new int[n];
-        var isLoad = new bool[n];
-        var isTransformer = new bool[n];
+        var nodes = network.NodeArray;
+        var n = nodes.Length;
+        // Scratch arrays (see Scratch): only the first n elements are used.
+        var zPu = Scratch.Rent<Complex>(n);
+        var zTransformer = Scratch.Rent<Complex>(n);
+        var ratio = Scratch.Rent<double>(n);
+        var model = Scratch.Rent<LoadModel>(n);
+        var demand = Scratch.Rent<double>(n);
+        var s0 = Scratch.Rent<Complex>(n);
+        var parent = network.ParentIndices;
+        var isLoad = Scratch.Rent<bool>(n);
+        var isTransformer = Scratch.Rent<bool>(n);
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
-            parent[i] = node.ParentIndex;
             isLoad[i] = node.Circuit is not null;
             isTransformer[i] = node.Kind == NodeKind.Transformer;
             ratio[i] = 1.0;
@@ -73,16 +73,34 @@ public static class LoadFlow
             }
         }
 
-        var input = new Complex[n];
-        var bus = new Complex[n];
-        Array.Fill(input, Complex.One);
-        Array.Fill(bus, Complex.One);
-        var current = new Complex[n];
-        var busCurrent = new Complex[n];
+        var input = Scratch.Rent<Complex>(n);
+        var bus = Scratch.Rent<Complex>(n);
+        input.AsSpan(0, n).Fill(Complex.One);
+        bus.AsSpan(0, n).Fill(Complex.One);
+        var current = Scratch.Rent<Complex>(n);
+        var busCurrent = Scratch.Rent<Complex>(n);
+
+        // The result, with the scratch arrays given back.
+        LoadFlowResult Result(bool converged, int iterations)
+        {
+            var result = new LoadFlowResult(converged, iterations, Magnitudes(input, n), Magnitudes(bus, n));
+            foreach (var array in new[] { zPu, zTransformer, s0, input, bus, current, busCurrent })
+            {
+                Scratch.Return(array, n);
+            }
+
+            Scratch.Return(ratio, n);
+            Scratch.Return(demand, n);
+            Scratch.Return(model, n);
+            Scratch.Return(isLoad, n);
+            Scratch.Return(isTransformer, n);
+            return result;
+        }
+
         for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
             // Backward sweep: currents from the end points up.
-            Array.Clear(busCurrent);
+            busCurrent.AsSpan(0, n).Clear();
             for (var i = n - 1; i > 0; i--)
             {
                 Complex drawn;
@@ -128,15 +146,26 @@ public static class LoadFlow
             var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
             if (moved < TolerancePu)
             {
-                return new LoadFlowResult(true, iteration, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+                return Result(true, iteration);
             }
 
             if (!double.IsFinite(moved))
             {
-                return new LoadFlowResult(false, iteration, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+                return Result(false, iteration);
             }
         }
 
-        return new LoadFlowResult(false, MaxIterations, input.Select(v => v.Magnitude).ToArray(), bus.Select(v => v.Magnitude).ToArray());
+        return Result(false, MaxIterations);
+    }
+
+    private static double[] Magnitudes(Complex[] values, int n)
+    {
+        var magnitudes = new double[n];
+        for (var i = 0; i < n; i++)
+        {
+            magnitudes[i] = values[i].Magnitude;
+        }
+
+        return magnitudes;
     }
 }

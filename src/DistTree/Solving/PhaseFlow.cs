@@ -28,14 +28,35 @@ internal sealed class PhaseFlow
     private static readonly Phases[] BothOfTwo = [Phases.AB];
     private static readonly Phases[] TheOne = [Phases.A];
 
+    // Per (lines × 8 + set of two lines): conj(u) and |u| of u = Unit(a) − Unit(b), a and b the set's lines.
+    private static readonly Complex[] PairConjugate = new Complex[32];
+    private static readonly double[] PairMagnitude = new double[32];
+
     private readonly DistributionNetwork _network;
 
-    public PhaseFlow(DistributionNetwork network, ComplexPower[] power)
+    static PhaseFlow()
+    {
+        for (var lines = 2; lines <= 3; lines++)
+        {
+            for (var on = 0; on < 8; on++)
+            {
+                if (BitOperations.PopCount((uint)on) == 2 && on < (1 << lines))
+                {
+                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                    var u = Unit(a, lines) - Unit(b, lines);
+                    PairConjugate[(lines * 8) + on] = Complex.Conjugate(u);
+                    PairMagnitude[(lines * 8) + on] = u.Magnitude;
+                }
+            }
+        }
+    }
+
+    /// <summary>Works out the lines and currents of <paramref name="network"/> into <paramref name="currents"/> (3 per node) and <paramref name="assigned"/> (1 per node), both zero.</summary>
+    public PhaseFlow(DistributionNetwork network, ComplexPower[] power, Complex[] currents, Phases[] assigned)
     {
         _network = network;
-        var n = network.Nodes.Count;
-        Assigned = new Phases[n];
-        Currents = new Complex[n * 3];
+        Assigned = assigned;
+        Currents = currents;
         Assign(power);
         Accumulate(power);
     }
@@ -46,18 +67,35 @@ internal sealed class PhaseFlow
     /// <summary>Per node × 3, the line currents (A) it draws from its parent, at its incoming run's voltage.</summary>
     public Complex[] Currents { get; }
 
-    /// <summary>Per transformer node × 3, the secondary's line currents (A) on its bus.</summary>
-    public Complex[] SecondaryCurrents { get; private set; } = [];
+    // Per transformer node, the secondary's line currents (A) on its bus.
+    private readonly Dictionary<int, Complex[]> _secondaryCurrents = [];
 
-    /// <summary>ΔV (volts, line to neutral) on each line of the run into <paramref name="node"/>: (I_line + I_neutral)·Z.</summary>
-    public void RunDeltaV(int node, Complex impedanceOhm, bool hasNeutral, double scale, Span<Complex> into)
+    /// <summary>
+    /// The unit drops of the run into <paramref name="node"/> on <paramref name="system"/> (see <see cref="LineDrops"/>):
+    /// into <paramref name="unitR"/> from ΔV = (I_line + I_neutral)·(km + j0)·scale on each line, into
+    /// <paramref name="unitX"/> from ΔV = (I_line + I_neutral)·(0 + j·km)·scale.
+    /// </summary>
+    public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
         var i = Currents.AsSpan(node * 3, 3);
-        var neutral = hasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var neutral = system.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var resistive = new Complex(km, 0);
+        var reactive = new Complex(0, km);
+        Span<Complex> deltaR = stackalloc Complex[3];
+        Span<Complex> deltaX = stackalloc Complex[3];
         for (var x = 0; x < 3; x++)
         {
-            into[x] = (i[x] + neutral) * impedanceOhm * scale;
+            var flowing = i[x] + neutral;
+            deltaR[x] = flowing * resistive * scale;
+            deltaX[x] = flowing * reactive * scale;
         }
+
+        var lines = PhaseRules.Lines(system);
+        var single = SetV(1, system);
+        var pair = SetV(2, system);
+        var perLine = LineToNeutralV(system);
+        LineDropsOn(deltaR, lines, single, pair, perLine, unitR);
+        LineDropsOn(deltaX, lines, single, pair, perLine, unitX);
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
@@ -109,13 +147,12 @@ internal sealed class PhaseFlow
     /// <paramref name="system"/>: one line, its line-to-neutral drop; two, their line-to-line drop; three, the
     /// worst line; a set with none of the system's lines, line A's. <paramref name="into"/>[0] is left as it is.
     /// </summary>
-    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into)
-    {
-        var lines = PhaseRules.Lines(system);
-        var single = SetV(1, system);
-        var pair = SetV(2, system);
-        var perLine = LineToNeutralV(system);
+    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into) =>
+        LineDropsOn(deltaV, PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), into);
 
+    // LineDrops on a system of the given lines and voltages (see SetV and LineToNeutralV).
+    private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
+    {
         // The part of each line's ΔV in phase with the line's voltage.
         Span<double> inPhase = stackalloc double[3];
         for (var x = 0; x < lines; x++)
@@ -136,8 +173,7 @@ internal sealed class PhaseFlow
                     break;
                 case 2:
                     var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    var u = Unit(a, lines) - Unit(b, lines);
-                    into[set] = ((deltaV[a] - deltaV[b]) * Complex.Conjugate(u)).Real / u.Magnitude / pair * 100.0;
+                    into[set] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
                     break;
                 default:
                     var worst = double.NegativeInfinity;
@@ -158,9 +194,10 @@ internal sealed class PhaseFlow
         var lines = PhaseRules.Lines(data.Secondary);
         var vln = LineToNeutralV(data.Secondary);
         var perLine = data.Kva * 1000.0 / lines;
+        var secondary = _secondaryCurrents[node];
         for (var x = 0; x < 3; x++)
         {
-            var s = x < lines ? vln * Unit(x, lines) * Complex.Conjugate(SecondaryCurrents[(node * 3) + x]) : Complex.Zero;
+            var s = x < lines ? vln * Unit(x, lines) * Complex.Conjugate(secondary[x]) : Complex.Zero;
             into[x] = x < lines ? (((percentR * s.Real) + (percentX * s.Imaginary)) / perLine) - data.TapPercent : double.NegativeInfinity;
         }
     }
@@ -222,7 +259,7 @@ internal sealed class PhaseFlow
     // pair of lines (2 poles); 3 poles take all lines. Ties go to the earlier line (A before B before C).
     private void Assign(ComplexPower[] power)
     {
-        var nodes = _network.Nodes;
+        var nodes = _network.NodeArray;
         Span<double> load = stackalloc double[3];
         var automatic = new List<int>();
         foreach (var panel in nodes)
@@ -314,9 +351,9 @@ internal sealed class PhaseFlow
 
     private void Accumulate(ComplexPower[] power)
     {
-        var nodes = _network.Nodes;
+        var nodes = _network.NodeArray;
         Span<Complex> bus = stackalloc Complex[3];
-        for (var i = nodes.Count - 1; i > 0; i--)
+        for (var i = nodes.Length - 1; i > 0; i--)
         {
             var node = nodes[i];
             var mine = Currents.AsSpan(i * 3, 3);
@@ -334,12 +371,7 @@ internal sealed class PhaseFlow
 
                 if (node.Equipment?.Transformer is { } t)
                 {
-                    if (SecondaryCurrents.Length == 0)
-                    {
-                        SecondaryCurrents = new Complex[Currents.Length];
-                    }
-
-                    mine.CopyTo(SecondaryCurrents.AsSpan(i * 3, 3));
+                    _secondaryCurrents[i] = mine.ToArray();
                     mine.CopyTo(bus);
                     ToPrimary(bus, t.Secondary, node.Equipment.System, mine);
                 }

@@ -45,7 +45,7 @@ public static class RunElectrics
         var x = catalog.ReactanceOhmPerKm(size, run.Raceway, frequencyHz);
         var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
         var dropV = k * currentA * run.LengthM / 1000.0 * ((r * cosTheta) + (x * sinTheta)) / sets;
-        var allowable = catalog.AllowableAmpacityA(size, run.Material, run.InsulationC, rules.TerminalC, rules.AmbientC);
+        var allowable = catalog.AllowableAmpacityA(size, run.Material, run.InsulationC, rules.TerminalC, thermal);
         return new RunFigures(temperature, r, x, allowable * sets, dropV, dropV / supply.VoltageV * 100.0);
     }
 }
