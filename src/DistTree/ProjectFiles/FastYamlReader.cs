@@ -380,7 +380,7 @@ internal sealed class FastYamlReader
     {
         var frame = _blocks[^1];
         _blocks.RemoveAt(_blocks.Count - 1);
-        var node = frame.Node;
+        var node = frame.Finish();
         _spareFrames.Push(frame);
         if (_blocks.Count == 0)
         {
@@ -416,7 +416,7 @@ internal sealed class FastYamlReader
             {
                 _pos++;
                 stack.RemoveAt(stack.Count - 1);
-                var closed = top.Node;
+                var closed = top.Finish();
                 _spareFrames.Push(top);
                 if (stack.Count == 0)
                 {
@@ -846,6 +846,10 @@ internal sealed class FastYamlReader
     /// <summary>An open collection: block (with its indentation) or flow (with what it expects next).</summary>
     private sealed class Frame
     {
+        // A mapping's entries while it is open: a frame is reused, so this list grows once, and each mapping
+        // gets a list of exactly its size when it closes.
+        private readonly List<KeyValuePair<SourceScalar, SourceNode>> _entries = [];
+
         public SourceNode Node { get; private set; } = null!;
 
         public int Indent { get; private set; }
@@ -863,6 +867,7 @@ internal sealed class FastYamlReader
         /// <summary>Makes the frame stand for a newly opened collection.</summary>
         public void Open(SourceNode node, int indent, bool indentless)
         {
+            _entries.Clear();
             Node = node;
             Indent = indent;
             Indentless = indentless;
@@ -879,8 +884,21 @@ internal sealed class FastYamlReader
                 return;
             }
 
-            ((SourceMapping)Node).Entries.Add(new KeyValuePair<SourceScalar, SourceNode>(Key!, value));
+            _entries.Add(new KeyValuePair<SourceScalar, SourceNode>(Key!, value));
             Key = null;
+        }
+
+        /// <summary>The closed collection, a mapping's entries moved in at their exact number.</summary>
+        public SourceNode Finish()
+        {
+            if (Node is SourceMapping mapping && _entries.Count > 0)
+            {
+                mapping.Entries.Capacity = _entries.Count;
+                mapping.Entries.AddRange(_entries);
+                _entries.Clear();
+            }
+
+            return Node;
         }
     }
 
