@@ -6,8 +6,9 @@ namespace DistTree.ProjectFiles;
 /// <summary>
 /// One mapping of the project file checked against the keys it may hold: unknown keys (with a
 /// "did you mean" hint) and duplicate keys are reported when it is made; missing keys when asked for.
+/// A value, not an object: three are made for every circuit, and none outlives the reading of its mapping.
 /// </summary>
-internal sealed class MappingReader
+internal readonly struct MappingReader
 {
     /// <summary>The most keys a mapping may be allowed (ProjectKeys.Equipment has 12).</summary>
     private const int MaxAllowed = 16;
@@ -19,7 +20,7 @@ internal sealed class MappingReader
 
     // For each allowed key (by its index in _allowed), 1 + the index in the mapping's entries of the entry
     // that gives it; 0 when not given. Held in the object itself: one allocation per mapping read.
-    private EntryIndexes _given;
+    private readonly EntryIndexes _given;
 
     public MappingReader(SourceMapping mapping, Subject context, string[] allowed, DiagnosticBag bag)
     {

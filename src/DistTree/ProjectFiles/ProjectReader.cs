@@ -160,9 +160,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
     }
 
-    private void ReadProject(MappingReader? m)
+    private void ReadProject(MappingReader? section)
     {
-        if (m is null)
+        if (section is not { } m)
         {
             return;
         }
@@ -183,9 +183,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
     }
 
-    private void ReadRules(MappingReader? m)
+    private void ReadRules(MappingReader? section)
     {
-        if (m is null)
+        if (section is not { } m)
         {
             return;
         }
@@ -270,9 +270,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
     }
 
-    private void ReadDefaults(MappingReader? m)
+    private void ReadDefaults(MappingReader? section)
     {
-        if (m is null)
+        if (section is not { } m)
         {
             return;
         }
@@ -296,9 +296,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         _draft.Defaults = defaults;
     }
 
-    private void ReadSizing(MappingReader? m)
+    private void ReadSizing(MappingReader? section)
     {
-        if (m is null)
+        if (section is not { } m)
         {
             return;
         }
@@ -386,8 +386,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             return;
         }
 
-        var m = Map(node, "'service'", "the service", ProjectKeys.Service);
-        if (m is null)
+        if (Map(node, "'service'", "the service", ProjectKeys.Service) is not { } m)
         {
             return;
         }
@@ -480,7 +479,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return draft;
     }
 
-    private void ReadTransformer(MappingReader m, EquipmentDraft draft, string name)
+    private void ReadTransformer(in MappingReader m, EquipmentDraft draft, string name)
     {
         if (draft.Kind is null)
         {
@@ -526,7 +525,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
     }
 
-    private void ReadCircuits(MappingReader m, EquipmentDraft draft, string panel)
+    private void ReadCircuits(in MappingReader m, EquipmentDraft draft, string panel)
     {
         if (m.Optional("circuits") is not { } node)
         {
@@ -669,8 +668,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         foreach (var item in sequence.Items)
         {
             var point = full.Of("a point of ");
-            var m = Map(item, point, point, ProjectKeys.Point);
-            if (m is null)
+            if (Map(item, point, point, ProjectKeys.Point) is not { } m)
             {
                 ok = false;
                 continue;
@@ -708,8 +706,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
     private Load? ReadLoad(SourceNode node, Subject context)
     {
-        var m = Map(node, context, context, ProjectKeys.Load);
-        if (m is null)
+        if (Map(node, context, context, ProjectKeys.Load) is not { } m)
         {
             return null;
         }
@@ -777,7 +774,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return value is not null && pf is not null && startOk ? new Load(kind, value.Value, pf.Value) { Model = model, Start = start } : null;
     }
 
-    private MotorStart? ReadMotorStart(MappingReader m, Subject context, bool motor, out bool ok)
+    private MotorStart? ReadMotorStart(in MappingReader m, Subject context, bool motor, out bool ok)
     {
         ok = true;
         var given = false;
@@ -857,8 +854,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
     private Run? ReadRun(SourceNode node, Subject context, bool branch, out SourceLocation? ocpdLocation, double? circuitOcpdA = null)
     {
         ocpdLocation = null;
-        var m = Map(node, context, context, ProjectKeys.Run);
-        if (m is null)
+        if (Map(node, context, context, ProjectKeys.Run) is not { } m)
         {
             return null;
         }
@@ -936,7 +932,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         };
     }
 
-    private double? Positive(MappingReader m, string key) =>
+    private double? Positive(in MappingReader m, string key) =>
         m.Optional(key) is { } node ? _values.Positive(node, $"'{key}'") : null;
 
     private string? Id(SourceNode node, string what)
