@@ -22,6 +22,12 @@ internal static class Pipeline
         {
             var status = shared ?? own!;
             project = ProjectInput.Load(path);
+
+            // The file's parse tree is garbage now (about 200 MB at 100,000 end points) and little else lives:
+            // a collection here is cheap, and spares the build, the solve and the writing one that would copy
+            // their results (analyze of 100,000 end points: about 0.3 s faster and 100 MB lower peak; README,
+            // Performance). Younger generations only, swept in place.
+            GC.Collect(1, GCCollectionMode.Forced, blocking: true, compacting: false);
             status.Report($"building the tree of {project.Equipment.Count:N0} equipment");
             var network = NetworkBuilder.Build(project);
             status.Report($"solving {network.Nodes.Count:N0} nodes");
