@@ -115,34 +115,35 @@ public static class JsonResults
     /// <summary>Writes a rounded number, or null.</summary>
     public static void Number(Utf8JsonWriter w, string name, double? value, int decimals)
     {
-        if (value is { } v && double.IsFinite(v))
-        {
-            w.WriteNumber(name, Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
-        }
-        else
-        {
-            w.WriteNull(name);
-        }
+        ArgumentNullException.ThrowIfNull(w);
+        w.WritePropertyName(name);
+        NumberValue(w, value, decimals);
     }
 
     // As Number, with the property name as UTF-8 bytes (the results' own names: no transcoding per value).
     private static void Number(Utf8JsonWriter w, ReadOnlySpan<byte> name, double? value, int decimals)
     {
+        w.WritePropertyName(name);
+        NumberValue(w, value, decimals);
+    }
+
+    // A property's rounded number, or null, after its name.
+    private static void NumberValue(Utf8JsonWriter w, double? value, int decimals)
+    {
         if (value is not { } v || !double.IsFinite(v))
         {
-            w.WriteNull(name);
+            w.WriteNullValue();
             return;
         }
 
         Span<byte> text = stackalloc byte[24];
         if (TryFormatRounded(v, decimals, text, out var length))
         {
-            w.WritePropertyName(name);
             w.WriteRawValue(text[..length], skipInputValidation: true);
         }
         else
         {
-            w.WriteNumber(name, Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
+            w.WriteNumberValue(Math.Round(v, decimals, MidpointRounding.AwayFromZero) + 0.0);
         }
     }
 

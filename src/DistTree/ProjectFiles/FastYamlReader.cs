@@ -241,7 +241,7 @@ internal sealed class FastYamlReader
 
                 var indentless = ownLine && parent is { Node: SourceMapping } && parent.Indent == column;
                 var sequence = Open(new SourceSequence(_file, _line, column + 1), column, indentless);
-                if (SequenceItemOpensNode(sequence))
+                if (IndicatorOpensNode(sequence))
                 {
                     parent = sequence;
                     ownLine = false;
@@ -315,7 +315,7 @@ internal sealed class FastYamlReader
     /// <summary>Reads "- item" at the cursor for <paramref name="sequence"/>.</summary>
     private void SequenceItem(Frame sequence)
     {
-        if (SequenceItemOpensNode(sequence))
+        if (IndicatorOpensNode(sequence))
         {
             Node(ownLine: false);
         }
@@ -330,32 +330,23 @@ internal sealed class FastYamlReader
         }
     }
 
-    /// <summary>Steps over the '-'; true when the item follows on the same line, else marks it empty so far.</summary>
-    private bool SequenceItemOpensNode(Frame sequence)
-    {
-        _pos++;
-        var emptyAt = _pos;
-        SkipSpaces();
-        if (IsEol(_pos) || IsComment())
-        {
-            sequence.EmptyAt = At(emptyAt);
-            EndLine();
-            return false;
-        }
-
-        return true;
-    }
-
     /// <summary>Steps over the ':' after a key; true when the value follows on the same line, else marks it empty so far.</summary>
     private bool MappingValueOpensNode(Frame mapping, SourceScalar key)
     {
         mapping.Key = key;
+        return IndicatorOpensNode(mapping);
+    }
+
+    // Steps over a '-' or ':' indicator; true when what it introduces follows on the same line, else records
+    // where that empty value or item stands and moves to the next line.
+    private bool IndicatorOpensNode(Frame frame)
+    {
         _pos++;
         var emptyAt = _pos;
         SkipSpaces();
         if (IsEol(_pos) || IsComment())
         {
-            mapping.EmptyAt = At(emptyAt);
+            frame.EmptyAt = At(emptyAt);
             EndLine();
             return false;
         }

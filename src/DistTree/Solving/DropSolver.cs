@@ -110,9 +110,7 @@ public sealed class DropSolver
         foreach (var e in endPoints)
         {
             findings += e.Findings.Count;
-            // The largest total, ties to the first id in ordinal order (Comparer<double> order: NaN lowest).
-            var order = worst is null ? 1 : e.TotalDropPercent.CompareTo(worst.TotalDropPercent);
-            if (order > 0 || (order == 0 && string.CompareOrdinal(e.Id, worst!.Id) < 0))
+            if (worst is null || Solution.WorstFirst(e, worst) < 0)
             {
                 worst = e;
             }
@@ -435,15 +433,16 @@ public sealed class DropSolver
         };
     }
 
-    // The largest of the per-line figures on the lines of a set (bits 0..2 = A..C).
+    // The largest of the per-line figures on the lines of a set (bits 0..2 = A..C). A line whose figure is not a
+    // number (an overflowing load) is passed over unless every line's is, as the maximum always has been taken.
     private static double WorstOf(ReadOnlySpan<double> perLine, int mask)
     {
-        var worst = double.NegativeInfinity;
+        var worst = double.NaN;
         for (var x = 0; x < 3; x++)
         {
-            if ((mask & (1 << x)) != 0)
+            if ((mask & (1 << x)) != 0 && (double.IsNaN(worst) || perLine[x] > worst))
             {
-                worst = Math.Max(worst, perLine[x]);
+                worst = perLine[x];
             }
         }
 

@@ -46,5 +46,12 @@ public sealed record Solution
 
     /// <summary>End points, worst total first (ties by id, ordinal), at most <paramref name="count"/>.</summary>
     public IReadOnlyList<EndPointResult> WorstEndPoints(int count) =>
-        EndPoints.OrderByDescending(e => e.TotalDropPercent).ThenBy(e => e.Id, StringComparer.Ordinal).Take(count).ToArray();
+        EndPoints.Order(Comparer<EndPointResult>.Create(WorstFirst)).Take(count).ToArray();
+
+    /// <summary>The order of end points, worst first: the larger total first (a total that is not a number last), then by id, ordinal.</summary>
+    internal static int WorstFirst(EndPointResult a, EndPointResult b)
+    {
+        var order = b.TotalDropPercent.CompareTo(a.TotalDropPercent);
+        return order != 0 ? order : string.CompareOrdinal(a.Id, b.Id);
+    }
 }
