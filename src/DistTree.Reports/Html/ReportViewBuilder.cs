@@ -171,7 +171,7 @@ internal sealed class ReportViewBuilder
             }
         }
 
-        var worst = worstIndex >= 0 ? _s.EndPoints[worstIndex] : null;
+        EndPointResult? worst = worstIndex >= 0 ? _s.EndPoints[worstIndex] : null;
         var equipmentCount = _nodes.Count(node => node.Kind is not NodeKind.EndPoint and not NodeKind.Service);
         var panelCount = _nodes.Count(node => node.Kind == NodeKind.Panelboard);
         var motors = MotorIndices();
@@ -200,8 +200,8 @@ internal sealed class ReportViewBuilder
                 new("panelboards", Count(panelCount)),
                 new("findings", Count(summary.Findings)),
             ],
-            WorstId = worst is null ? null : Escape(worst.Id),
-            WorstName = worst is null ? null : Escape(worst.Name),
+            WorstId = worst is { } w ? Escape(w.Id) : null,
+            WorstName = worst is { } v ? Escape(v.Name) : null,
             WorstTotal = Percent(summary.WorstTotalDropPercent),
             WorstBand = worst is null ? "none" : BandClass(_endPointBand[worstIndex]),
             TotalLimit = Limit(rules.TotalLimitPercent),
@@ -647,17 +647,17 @@ internal sealed class ReportViewBuilder
         var e = _s.EndPoints[k];
         var node = _nodes[e.NodeIndex];
         var row = _incomingRow[e.NodeIndex];
-        var r = row >= 0 ? _s.Runs[row] : null;
-        var findings = (r?.Findings ?? []).Concat(e.Findings);
+        RunResult? run = row >= 0 ? _s.Runs[row] : null;
+        var findings = (run?.Findings ?? []).Concat(e.Findings);
         return new CircuitRow(
             Escape(node.Circuit?.Id ?? e.Id),
             Escape(e.Name),
-            r is null ? "–" : VoltAmperes(r.ApparentPowerVa),
-            r is null ? "–" : Conductor(r),
-            r is null ? "–" : Metres(r.LengthM),
-            r is null ? "–" : Feet(r.LengthM),
-            r is null ? "–" : Percent(r.DropPercent),
-            r is not null && r.Findings.Count > 0,
+            OfRun(r => VoltAmperes(r.ApparentPowerVa)),
+            OfRun(Conductor),
+            OfRun(r => Metres(r.LengthM)),
+            OfRun(r => Feet(r.LengthM)),
+            OfRun(r => Percent(r.DropPercent)),
+            run is { Findings.Count: > 0 },
             Percent(e.TotalDropPercent),
             OtherTotal(e),
             node.Circuit is { Points.Count: > 0 } c ? $"{Count(c.Points.Count)} points" : "",
@@ -666,6 +666,9 @@ internal sealed class ReportViewBuilder
                 : "",
             BandClass(_endPointBand[k]),
             Codes(findings));
+
+        // A figure of the end point's own run, or a dash where it has none.
+        string OfRun(Func<RunResult, string> figure) => run is { } r ? figure(r) : "–";
     }
 
     // The end point's total by the method not in force (the one in force is TotalDropPercent).

@@ -14,9 +14,6 @@ namespace DistTree.Solving;
 /// </summary>
 public sealed class DropSolver
 {
-    // The text of each set of lines, by (int)Phases.
-    private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
-
     private static readonly Finding[] NoFindings = [];
 
     private readonly ConductorCatalog _catalog;
@@ -36,13 +33,12 @@ public sealed class DropSolver
         var n = nodes.Length;
         var frequency = project.Service.FrequencyHz;
 
-        // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used.
-        var power = Scratch.Rent<ComplexPower>(n);
+        // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used. The power,
+        // the phase currents, the rows and the unit drops are the solution's own (see SolvedRows).
+        var power = new ComplexPower[n];
         var continuous = Scratch.Rent<ComplexPower>(n);
         AccumulatePower(nodes, power, continuous);
-        var currents = Scratch.Rent<Complex>(n * 3);
-        var assigned = Scratch.Rent<Phases>(n);
-        var phases = new PhaseFlow(network, power, currents, assigned);
+        var phases = new PhaseFlow(network, power, new Complex[n * 3], new Phases[n]);
 
         // Rows in network order, each transformer's row after its primary feeder's. Every figure is worked
         // out in the drafts first; each result record is then made once.
@@ -55,7 +51,7 @@ public sealed class DropSolver
             transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
         }
 
-        var rows = Scratch.Rent<RowDraft>(count);
+        var rows = new RunRow[count];
         var lineDrops = Scratch.Rent<double>(count * 8);
         var unitDrops = new double[count * 16];
         var z = Scratch.Rent<Complex>(n);
@@ -90,27 +86,26 @@ public sealed class DropSolver
             }
         }
 
-        var endPoints = SolveEndPoints(network, rows, lineDrops, incomingRow, transformerRow, power, flow, phases, rules);
-        AddReach(network, rows, incomingRow, endPoints, rules);
-        var runs = new RunResult[count];
-        var findings = 0;
-        for (var r = 0; r < count; r++)
-        {
-            runs[r] = Finish(ref rows[r], power[rows[r].Node.Index], phases, rules, unitDrops.AsMemory(r * 16, 8), unitDrops.AsMemory((r * 16) + 8, 8));
-            findings += runs[r].Findings.Count;
-        }
-
-        Scratch.Return(rows, count);
+        var solved = new SolvedRows(network, phases, power, rows, unitDrops);
+        SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
+        AddReach(network, rows, incomingRow, solved.EndPoints, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
 
+        var findings = 0;
+        foreach (ref readonly var row in rows.AsSpan())
+        {
+            findings += row.Findings.Count;
+        }
+
+        var endPoints = new EndPointResultList(solved);
         EndPointResult? worst = null;
         foreach (var e in endPoints)
         {
             findings += e.Findings.Count;
-            if (worst is null || Solution.WorstFirst(e, worst) < 0)
+            if (worst is not { } w || Solution.WorstFirst(e, w) < 0)
             {
                 worst = e;
             }
@@ -125,16 +120,13 @@ public sealed class DropSolver
             }
         }
 
-        Scratch.Return(power, n);
-        Scratch.Return(currents, n * 3);
-        Scratch.Return(assigned, n);
         return new Solution
         {
             Project = project,
             Network = network,
-            Runs = runs,
+            Runs = new RunResultList(solved),
             EndPoints = endPoints,
-            Summary = new SolutionSummary(endPoints.Length, runs.Length, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
+            Summary = new SolutionSummary(endPoints.Count, count, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
             Panels = panels.ToArray(),
             CatalogName = _catalog.SourceName,
@@ -178,7 +170,7 @@ public sealed class DropSolver
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
     // unitR and unitX: where its unit drops go (see RunResult.UnitDropsR).
     private void SolveRun(
-        ref RowDraft row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
+        ref RunRow row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
         Span<double> lineDrops, Span<double> unitR, Span<double> unitX)
     {
         var supply = run.Supply;
@@ -271,13 +263,6 @@ public sealed class DropSolver
         return dropV;
     }
 
-    private static string RacewayWord(Raceway raceway) => raceway switch
-    {
-        Raceway.Pvc => "pvc",
-        Raceway.Aluminum => "aluminum",
-        _ => "steel",
-    };
-
     private static double BranchCurrent(double connectedA, double? ocpdA, BranchCurrentBasis basis) => (basis, ocpdA) switch
     {
         (BranchCurrentBasis.Ocpd80, { } ocpd) => 0.8 * ocpd,
@@ -286,7 +271,7 @@ public sealed class DropSolver
     };
 
     // Records the load flow's drops beside the percent sum's, and makes the chosen method's the ones that count.
-    private static void ChooseMethod(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
+    private static void ChooseMethod(DistributionNetwork network, RunRow[] rows, int[] incomingRow, int[] transformerRow, LoadFlowResult flow, Rules rules)
     {
         if (!flow.Converged)
         {
@@ -300,7 +285,7 @@ public sealed class DropSolver
         }
 
         var parents = network.ParentIndices;
-        void Record(ref RowDraft r, double drop)
+        void Record(ref RunRow r, double drop)
         {
             r.LoadFlowDropPercent = drop;
             if (rules.Method == SolutionMethod.LoadFlow)
@@ -323,7 +308,7 @@ public sealed class DropSolver
         }
     }
 
-    private IReadOnlyList<Finding> RunFindings(ref RowDraft r)
+    private IReadOnlyList<Finding> RunFindings(ref RunRow r)
     {
         List<Finding>? findings = null;
         var run = r.Run!;
@@ -385,7 +370,7 @@ public sealed class DropSolver
 
     // Regulation ≈ (%R·cos θ + %X·sin θ)·(S/S_rated) − tap, %R = %Z/√(1 + (X/R)²), %X = %R·X/R (common practice).
     // Per secondary line: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap; balanced, the same as the three-phase formula.
-    private static RowDraft SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases, Span<double> drops)
+    private static RunRow SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases, Span<double> drops)
     {
         var supply = data.Secondary.FeederSupply;
         var (percentR, percentX) = PercentRx(data);
@@ -418,7 +403,7 @@ public sealed class DropSolver
                 node.Equipment!.Location)];
         }
 
-        return new RowDraft
+        return new RunRow
         {
             Node = node,
             Transformer = data,
@@ -455,15 +440,18 @@ public sealed class DropSolver
         return (percentR, percentR * data.XOverR);
     }
 
-    private static EndPointResult[] SolveEndPoints(
-        DistributionNetwork network, RowDraft[] rows, double[] lineDrops, int[] incomingRow, int[] transformerRow, ComplexPower[] power,
-        LoadFlowResult flow, PhaseFlow phases, Rules rules)
+    // Every end point's total: walking up from it, the counted rows' drops on its own lines. Fills the end point
+    // rows and their counted runs and shares into solved.
+    private static void SolveEndPoints(SolvedRows solved, double[] lineDrops, int[] incomingRow, int[] transformerRow, LoadFlowResult flow)
     {
+        var network = solved.Network;
+        var rows = solved.Runs;
+        var rules = solved.Rules;
         var nodes = network.NodeArray;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
 
-        // Depth of every node (the service is 1), top-down, so that each path is filled in place.
+        // Depth of every node (the service is 1), top-down.
         var depth = Scratch.Rent<int>(nodes.Length);
         var endPointCount = 0;
         for (var i = 0; i < nodes.Length; i++)
@@ -472,7 +460,10 @@ public sealed class DropSolver
             endPointCount += nodes[i].Circuit is null ? 0 : 1;
         }
 
-        var endPoints = new EndPointResult[endPointCount];
+        var endPoints = new EndPointRow[endPointCount];
+        var pathRuns = new int[endPointCount * 4];
+        var pathShares = new double[endPointCount * 4];
+        var used = 0;
         var e = 0;
         var countedBuffer = new int[16];
         foreach (var node in nodes)
@@ -482,13 +473,10 @@ public sealed class DropSolver
                 continue;
             }
 
-            var path = new string[depth[node.Index]];
             var count = 0;
             var counting = true;
-            var at = path.Length;
             for (var i = node.Index; i >= 0; i = nodes[i].ParentIndex)
             {
-                path[--at] = nodes[i].Id;
                 if (count + 2 > countedBuffer.Length)
                 {
                     Array.Resize(ref countedBuffer, countedBuffer.Length * 2);
@@ -510,19 +498,25 @@ public sealed class DropSolver
                 }
             }
 
+            if (used + count > pathRuns.Length)
+            {
+                var grown = Math.Max(pathRuns.Length * 2, used + count);
+                Array.Resize(ref pathRuns, grown);
+                Array.Resize(ref pathShares, grown);
+            }
+
             double percentSum = 0, loadFlow = 0;
 
             // Walking up from the end point: its own lines, until a transformer between systems of different
             // line counts, above which the worst line counts (the safe side).
-            var set = (int)phases.Assigned[node.Index];
-            var shares = new double[count];
-            var runIndices = new int[count];
+            var set = (int)solved.Phases.Assigned[node.Index];
             for (var k = 0; k < count; k++)
             {
                 var r = countedBuffer[k];
                 ref var row = ref rows[r];
-                runIndices[count - 1 - k] = r;
-                shares[count - 1 - k] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
+                var at = used + count - 1 - k;
+                pathRuns[at] = r;
+                pathShares[at] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
                 percentSum += lineDrops[(r * 8) + set];
                 loadFlow += row.LoadFlowDropPercent ?? 0;
                 if (row.WidensToAllLines)
@@ -541,11 +535,11 @@ public sealed class DropSolver
                     circuit.FullId,
                     total,
                     limit,
-                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && count < path.Length - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && count < depth[node.Index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[node.Index], rules) : null;
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, solved.Power[node.Index], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 (findings ??= []).Add(new Finding(
@@ -557,36 +551,32 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            endPoints[e++] = new EndPointResult
+            endPoints[e++] = new EndPointRow
             {
-                Id = circuit.FullId,
-                Name = circuit.Name,
-                Panel = nodes[node.ParentIndex].Id,
-                NodeIndex = node.Index,
-                Path = path,
-                RunIndices = runIndices,
-                RunSharesPercent = shares,
-                VoltageV = circuit.Supply.VoltageV,
+                Node = node.Index,
+                PathStart = used,
+                PathCount = count,
                 TotalDropPercent = total,
                 PercentSumTotalDropPercent = percentSum,
                 LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null,
                 LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[node.Index] * circuit.Supply.VoltageV : null,
-                LimitPercent = limit,
-                EndVoltageV = circuit.Supply.VoltageV * (1 - (total / 100.0)),
                 MotorStart = start,
                 Findings = findings is null ? NoFindings : findings,
             };
+            used += count;
         }
 
         Scratch.Return(depth, nodes.Length);
-        return endPoints;
+        solved.EndPoints = endPoints;
+        solved.PathRuns = pathRuns;
+        solved.PathShares = pathShares;
     }
 
     // The extra drop of ΔS = S_locked-rotor − S_running on each run: 100·(ΔP·R_loop + ΔQ·X_loop)/V², R_loop and
     // X_loop the run's impedance (both conductors for single-phase); on a transformer (%R·ΔP + %X·ΔQ)/S_rated.
     // Superposed on the steady drops of the whole path (a new origin does not stop a physical dip).
     private static MotorStartResult MotorStartCheck(
-        DistributionNetwork network, RowDraft[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
+        DistributionNetwork network, RunRow[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
     {
         var nodes = network.NodeArray;
         var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
@@ -627,14 +617,14 @@ public sealed class DropSolver
     // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it; points
     // scale with the run), so L_max = L·limit/drop. Total: the least slack (limit − total) of the end points
     // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
-    private static void AddReach(DistributionNetwork network, RowDraft[] rows, int[] incomingRow, EndPointResult[] endPoints, Rules rules)
+    private static void AddReach(DistributionNetwork network, RunRow[] rows, int[] incomingRow, EndPointRow[] endPoints, Rules rules)
     {
         var nodes = network.NodeArray;
         var slack = Scratch.Rent<double>(nodes.Length);
         slack.AsSpan(0, nodes.Length).Fill(double.PositiveInfinity);
         foreach (var e in endPoints)
         {
-            slack[e.NodeIndex] = e.LimitPercent - e.TotalDropPercent;
+            slack[e.Node] = rules.TotalLimitPercent - e.TotalDropPercent;
         }
 
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
@@ -660,114 +650,7 @@ public sealed class DropSolver
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
 
-    // The result record of a finished draft.
-    private static RunResult Finish(ref RowDraft d, ComplexPower carried, PhaseFlow phases, Rules rules, ReadOnlyMemory<double> unitDropsR, ReadOnlyMemory<double> unitDropsX)
-    {
-        var node = d.Node;
-        if (d.Run is not { } run)
-        {
-            var t = d.Transformer!;
-            return new RunResult
-            {
-                Id = node.Id,
-                Kind = RunResultKind.Transformer,
-                From = node.Id,
-                To = node.Id,
-                NodeIndex = node.Index,
-                System = t.Secondary.Name,
-                VoltageV = d.VoltageV,
-                Phases = t.Secondary.FeederSupply.Phases,
-                CurrentA = d.CurrentA,
-                DesignCurrentA = d.DesignCurrentA,
-                PowerFactor = carried.PowerFactor,
-                ApparentPowerVa = carried.VoltAmperes,
-                AmpacityA = d.RatedA,
-                DropV = d.DropV,
-                DropPercent = d.DropPercent,
-                PercentSumDropPercent = d.PercentSumDropPercent,
-                LoadFlowDropPercent = d.LoadFlowDropPercent,
-                CountsInTotal = rules.TransformerDrop == TransformerDropMode.Count,
-                Findings = d.Findings,
-                Location = node.Equipment!.Location,
-            };
-        }
-
-        var conductors = run.Conductors;
-        var system = run.Source.System;
-        var branch = run.Kind == RunKind.Branch;
-        return new RunResult
-        {
-            Id = run.Id,
-            Kind = branch ? RunResultKind.Branch : RunResultKind.Feeder,
-            From = run.Source.Id,
-            To = node.Id,
-            NodeIndex = node.Index,
-            System = system.Name,
-            VoltageV = d.VoltageV,
-            Phases = run.Supply.Phases,
-            CurrentA = d.CurrentA,
-            DesignCurrentA = d.DesignCurrentA,
-            PowerFactor = carried.PowerFactor,
-            ApparentPowerVa = carried.VoltAmperes,
-            Size = conductors.Size.Text,
-            Material = MaterialWord(conductors.Material),
-            Raceway = RacewayWord(conductors.Raceway),
-            Sets = conductors.Sets,
-            LengthM = conductors.LengthM,
-            TemperatureC = d.TemperatureC,
-            ResistanceOhmPerKm = d.ResistanceOhmPerKm,
-            ReactanceOhmPerKm = d.ReactanceOhmPerKm,
-            AmpacityA = d.AmpacityA,
-            OcpdA = conductors.OcpdA,
-            DropV = d.DropV,
-            DropPercent = d.DropPercent,
-            PercentSumDropPercent = d.PercentSumDropPercent,
-            LoadFlowDropPercent = d.LoadFlowDropPercent,
-            LimitPercent = run.LimitPercent,
-            MaxLengthM = d.MaxLengthM,
-            MaxLengthTotalM = d.MaxLengthTotalM,
-            NeutralCurrentA = system.HasNeutral ? phases.NeutralCurrentA(node.Index) : null,
-            LineCurrentsA = phases.LineCurrentsA(node.Index, PhaseRules.Lines(system)),
-            Lines = branch ? LinesText[(int)phases.Assigned[node.Index]] : null,
-            Findings = d.Findings,
-            UnitDropsR = unitDropsR,
-            UnitDropsX = unitDropsX,
-            OwnLines = d.OwnLines,
-            Location = conductors.Location,
-        };
-    }
-
     private static string MaterialWord(Material material) => material == Material.Copper ? "cu" : "al";
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
-
-    /// <summary>
-    /// A row's figures while the solve is under way: every figure of a run or transformer, filled in stage by
-    /// stage (the run, the load flow, the findings, the reach) before its <see cref="RunResult"/> is made.
-    /// </summary>
-    private struct RowDraft
-    {
-        public NetworkNode Node;
-        public NetworkRun? Run;
-        public TransformerData? Transformer;
-        public double CurrentA;
-        public double DesignCurrentA;
-        public double TemperatureC;
-        public double ResistanceOhmPerKm;
-        public double ReactanceOhmPerKm;
-        public double? AmpacityA;
-        public double RatedA;
-        public int OwnLines;
-        public double VoltageV;
-        public double DropPercent;
-        public double PercentSumDropPercent;
-        public double? LoadFlowDropPercent;
-        public double? MaxLengthM;
-        public double? MaxLengthTotalM;
-        public IReadOnlyList<Finding> Findings;
-        public bool WidensToAllLines;
-
-        /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
-        public readonly double DropV => DropPercent / 100.0 * VoltageV;
-    }
 }

@@ -1,53 +1,109 @@
+using DistTree.Network;
+
 namespace DistTree.Solving;
 
-/// <summary>The solved figures of one point of use: the total along its path from the service.</summary>
-public sealed record EndPointResult
+/// <summary>
+/// The solved figures of one point of use, the total along its path from the service: a view into its solution
+/// (a copy is cheap, and reading a figure reads the solve's own arrays). Two views are equal when they show the
+/// same end point of the same solution.
+/// </summary>
+public readonly struct EndPointResult : IEquatable<EndPointResult>
 {
+    private readonly SolvedRows _rows;
+    private readonly int _index;
+
+    internal EndPointResult(SolvedRows rows, int index)
+    {
+        _rows = rows;
+        _index = index;
+    }
+
+    private ref readonly EndPointRow Row => ref _rows.EndPoints[_index];
+
+    private NetworkNode Node => _rows.Nodes[Row.Node];
+
     /// <summary>The circuit's full id (<c>PANEL/ID</c>).</summary>
-    public required string Id { get; init; }
+    public string Id => Node.Circuit!.FullId;
 
     /// <summary>The circuit's name.</summary>
-    public required string Name { get; init; }
+    public string Name => Node.Circuit!.Name;
 
     /// <summary>The panel's id.</summary>
-    public required string Panel { get; init; }
+    public string Panel => _rows.Nodes[Node.ParentIndex].Id;
 
     /// <summary>Index of the end point's node in the network.</summary>
-    public required int NodeIndex { get; init; }
+    public int NodeIndex => Row.Node;
 
-    /// <summary>Node ids from the service to the end point.</summary>
-    public required IReadOnlyList<string> Path { get; init; }
+    /// <summary>Node ids from the service to the end point (made anew at each reading).</summary>
+    public IReadOnlyList<string> Path
+    {
+        get
+        {
+            var nodes = _rows.Nodes;
+            var depth = 0;
+            for (var i = Row.Node; i >= 0; i = nodes[i].ParentIndex)
+            {
+                depth++;
+            }
+
+            var path = new string[depth];
+            for (var i = Row.Node; i >= 0; i = nodes[i].ParentIndex)
+            {
+                path[--depth] = nodes[i].Id;
+            }
+
+            return path;
+        }
+    }
 
     /// <summary>Indices into <see cref="Solution.Runs"/> of the runs along the path that count in the total, service side first.</summary>
-    public required IReadOnlyList<int> RunIndices { get; init; }
+    public IReadOnlyList<int> RunIndices => new ArraySegment<int>(_rows.PathRuns, Row.PathStart, Row.PathCount);
 
     /// <summary>Each counted run's share of <see cref="TotalDropPercent"/>, percent, aligned with <see cref="RunIndices"/>: the drop on the end point's own lines.</summary>
-    public required IReadOnlyList<double> RunSharesPercent { get; init; }
+    public IReadOnlyList<double> RunSharesPercent => new ArraySegment<double>(_rows.PathShares, Row.PathStart, Row.PathCount);
 
     /// <summary>The circuit's nominal voltage in volts.</summary>
-    public required double VoltageV { get; init; }
+    public double VoltageV => Node.Circuit!.Supply.VoltageV;
 
     /// <summary>Sum of the percent drops along the path (from a new origin where the rules say so).</summary>
-    public required double TotalDropPercent { get; init; }
+    public double TotalDropPercent => Row.TotalDropPercent;
 
     /// <summary>The total limit in percent.</summary>
-    public required double LimitPercent { get; init; }
+    public double LimitPercent => _rows.Rules.TotalLimitPercent;
 
     /// <summary>The voltage at the point of use: nominal × (1 − total/100).</summary>
-    public required double EndVoltageV { get; init; }
+    public double EndVoltageV => VoltageV * (1 - (TotalDropPercent / 100.0));
 
     /// <summary>The total by the percent-sum method, percent.</summary>
-    public double PercentSumTotalDropPercent { get; init; }
+    public double PercentSumTotalDropPercent => Row.PercentSumTotalDropPercent;
 
     /// <summary>The total by the load flow, percent; null when it did not converge.</summary>
-    public double? LoadFlowTotalDropPercent { get; init; }
+    public double? LoadFlowTotalDropPercent => Row.LoadFlowTotalDropPercent;
 
     /// <summary>The voltage at the point of use by the load flow, volts; null when it did not converge.</summary>
-    public double? LoadFlowEndVoltageV { get; init; }
+    public double? LoadFlowEndVoltageV => Row.LoadFlowEndVoltageV;
 
     /// <summary>The starting check of a motor end point; null for other loads.</summary>
-    public MotorStartResult? MotorStart { get; init; }
+    public MotorStartResult? MotorStart => Row.MotorStart;
 
     /// <summary>The limits this end point exceeds (the total; its own runs' findings are on the runs).</summary>
-    public IReadOnlyList<Finding> Findings { get; init; } = [];
+    public IReadOnlyList<Finding> Findings => Row.Findings;
+
+    /// <summary>Equal when both show the same end point of the same solution.</summary>
+    public static bool operator ==(EndPointResult left, EndPointResult right) => left.Equals(right);
+
+    /// <summary>Not equal unless both show the same end point of the same solution.</summary>
+    public static bool operator !=(EndPointResult left, EndPointResult right) => !left.Equals(right);
+
+    /// <inheritdoc/>
+    public bool Equals(EndPointResult other) => ReferenceEquals(_rows, other._rows) && _index == other._index;
+
+    /// <inheritdoc/>
+    public override bool Equals(object? obj) => obj is EndPointResult other && Equals(other);
+
+    /// <inheritdoc/>
+    public override int GetHashCode() => HashCode.Combine(_rows, _index);
+
+    /// <inheritdoc/>
+    public override string ToString() => $"{Id}: {TotalDropPercent} %";
 }

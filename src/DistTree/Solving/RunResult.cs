@@ -1,4 +1,6 @@
 using DistTree.Diagnostics;
+using DistTree.Model;
+using DistTree.Network;
 
 namespace DistTree.Solving;
 
@@ -15,130 +17,179 @@ public enum RunResultKind
     Transformer,
 }
 
-/// <summary>The solved figures of one feeder, branch circuit or transformer.</summary>
-public sealed record RunResult
+/// <summary>
+/// The solved figures of one feeder, branch circuit or transformer: a view into its solution (a copy is cheap,
+/// and reading a figure reads the solve's own arrays). Two views are equal when they show the same row of the same solution.
+/// </summary>
+public readonly struct RunResult : IEquatable<RunResult>
 {
+    // No unit drops (a transformer's drop is not a conductor's): shared, never written.
+    private static readonly double[] NoUnitDrops = new double[8];
+
+    private readonly SolvedRows _rows;
+    private readonly int _index;
+
+    internal RunResult(SolvedRows rows, int index)
+    {
+        _rows = rows;
+        _index = index;
+    }
+
+    private ref readonly RunRow Row => ref _rows.Runs[_index];
+
+    private NetworkRun? Run => Row.Run;
+
+    private TransformerData Transformer => Row.Transformer!;
+
+    private NetworkNode Node => Row.Node;
+
     /// <summary>The id of the node it feeds.</summary>
-    public required string Id { get; init; }
+    public string Id => Node.Id;
 
     /// <summary>Feeder, branch or transformer.</summary>
-    public required RunResultKind Kind { get; init; }
+    public RunResultKind Kind => Run switch
+    {
+        null => RunResultKind.Transformer,
+        { Kind: RunKind.Branch } => RunResultKind.Branch,
+        _ => RunResultKind.Feeder,
+    };
 
     /// <summary>The source node's id.</summary>
-    public required string From { get; init; }
+    public string From => Run?.Source.Id ?? Node.Id;
 
     /// <summary>The fed node's id.</summary>
-    public required string To { get; init; }
+    public string To => Node.Id;
 
     /// <summary>Index of the fed node in the network.</summary>
-    public required int NodeIndex { get; init; }
+    public int NodeIndex => Node.Index;
 
     /// <summary>The system designation the run carries.</summary>
-    public required string System { get; init; }
+    public string System => Run is { } run ? run.Source.System.Name : Transformer.Secondary.Name;
 
     /// <summary>Nominal voltage in volts that the percentages refer to.</summary>
-    public required double VoltageV { get; init; }
+    public double VoltageV => Row.VoltageV;
 
     /// <summary>Phases: 1 or 3.</summary>
-    public required int Phases { get; init; }
+    public int Phases => Run is { } run ? run.Supply.Phases : Transformer.Secondary.FeederSupply.Phases;
 
     /// <summary>Line current in amperes the drop is computed at.</summary>
-    public required double CurrentA { get; init; }
+    public double CurrentA => Row.CurrentA;
 
     /// <summary>Design current in amperes for the ampacity check (125 % of continuous load plus the rest).</summary>
-    public required double DesignCurrentA { get; init; }
+    public double DesignCurrentA => Row.DesignCurrentA;
 
     /// <summary>The current in each line (A, B, C; as many as the run's system has), amperes; empty for a transformer.</summary>
-    public IReadOnlyList<double> LineCurrentsA { get; init; } = [];
+    public IReadOnlyList<double> LineCurrentsA => Run is { } run ? _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.Source.System)) : [];
 
     /// <summary>Neutral current in amperes (Ia + Ib + Ic), or null on a system without a neutral or for a transformer.</summary>
-    public double? NeutralCurrentA { get; init; }
+    public double? NeutralCurrentA => Run is { Source.System.HasNeutral: true } ? _rows.Phases.NeutralCurrentA(NodeIndex) : null;
 
     /// <summary>A branch circuit's lines (<c>A</c>, <c>BC</c>, <c>ABC</c> …), or null for feeders and transformers.</summary>
-    public string? Lines { get; init; }
+    public string? Lines => Run is { Kind: RunKind.Branch } ? SolvedRows.LinesOf(_rows.Phases.Assigned[NodeIndex]) : null;
 
     /// <summary>Power factor of the power carried.</summary>
-    public required double PowerFactor { get; init; }
+    public double PowerFactor => _rows.Power[NodeIndex].PowerFactor;
 
     /// <summary>Apparent power carried, in VA.</summary>
-    public required double ApparentPowerVa { get; init; }
+    public double ApparentPowerVa => _rows.Power[NodeIndex].VoltAmperes;
 
     /// <summary>Conductor size text, or null for a transformer.</summary>
-    public string? Size { get; init; }
+    public string? Size => Run?.Conductors.Size.Text;
 
     /// <summary><c>cu</c> or <c>al</c>, or null for a transformer.</summary>
-    public string? Material { get; init; }
+    public string? Material => Run is { } run ? (run.Conductors.Material == Conductors.Material.Copper ? "cu" : "al") : null;
 
     /// <summary><c>pvc</c>, <c>aluminum</c> or <c>steel</c>, or null for a transformer.</summary>
-    public string? Raceway { get; init; }
+    public string? Raceway => Run?.Conductors.Raceway switch
+    {
+        null => null,
+        Conductors.Raceway.Pvc => "pvc",
+        Conductors.Raceway.Aluminum => "aluminum",
+        _ => "steel",
+    };
 
-    /// <summary>Parallel sets.</summary>
-    public int Sets { get; init; } = 1;
+    /// <summary>Parallel sets (1 for a transformer).</summary>
+    public int Sets => Run?.Conductors.Sets ?? 1;
 
     /// <summary>One-way length in metres (0 for a transformer).</summary>
-    public double LengthM { get; init; }
+    public double LengthM => Run?.Conductors.LengthM ?? 0;
 
     /// <summary>Conductor temperature in °C used for resistance, or null for a transformer.</summary>
-    public double? TemperatureC { get; init; }
+    public double? TemperatureC => Run is null ? null : Row.TemperatureC;
 
-    /// <summary>AC resistance per conductor in ohm/km.</summary>
-    public double? ResistanceOhmPerKm { get; init; }
+    /// <summary>AC resistance per conductor in ohm/km, or null for a transformer.</summary>
+    public double? ResistanceOhmPerKm => Run is null ? null : Row.ResistanceOhmPerKm;
 
-    /// <summary>Reactance per conductor in ohm/km.</summary>
-    public double? ReactanceOhmPerKm { get; init; }
+    /// <summary>Reactance per conductor in ohm/km, or null for a transformer.</summary>
+    public double? ReactanceOhmPerKm => Run is null ? null : Row.ReactanceOhmPerKm;
 
     /// <summary>Allowable ampacity of all sets, in amperes (for a transformer: its rated current).</summary>
-    public double? AmpacityA { get; init; }
+    public double? AmpacityA => Run is null ? Row.RatedA : Row.AmpacityA;
 
     /// <summary>Overcurrent device rating in amperes, if given.</summary>
-    public double? OcpdA { get; init; }
+    public double? OcpdA => Run?.Conductors.OcpdA;
 
     /// <summary>Voltage drop in volts.</summary>
-    public required double DropV { get; init; }
+    public double DropV => Row.DropV;
 
     /// <summary>Voltage drop in percent of <see cref="VoltageV"/>, by the method the rules choose.</summary>
-    public required double DropPercent { get; init; }
+    public double DropPercent => Row.DropPercent;
 
     /// <summary>The drop by the percent-sum (effective-impedance) method, percent.</summary>
-    public double PercentSumDropPercent { get; init; }
+    public double PercentSumDropPercent => Row.PercentSumDropPercent;
 
     /// <summary>The drop by the load flow, percent (difference of the per-unit voltages at its ends); null when it did not converge.</summary>
-    public double? LoadFlowDropPercent { get; init; }
+    public double? LoadFlowDropPercent => Row.LoadFlowDropPercent;
 
     /// <summary>The run's own limit in percent, or null for a transformer.</summary>
-    public double? LimitPercent { get; init; }
+    public double? LimitPercent => Run?.LimitPercent;
 
     /// <summary>Longest length in metres at which the run meets its own limit, the rest unchanged; null when unbounded.</summary>
-    public double? MaxLengthM { get; init; }
+    public double? MaxLengthM => Row.MaxLengthM;
 
     /// <summary>Longest length in metres at which every end point below it meets the total limit; null when unbounded.</summary>
-    public double? MaxLengthTotalM { get; init; }
+    public double? MaxLengthTotalM => Row.MaxLengthTotalM;
 
     /// <summary>True when this run's drop counts in the totals of the end points below it.</summary>
-    public bool CountsInTotal { get; init; } = true;
+    public bool CountsInTotal => Run is not null || _rows.Rules.TransformerDrop == TransformerDropMode.Count;
 
     /// <summary>The limits this run exceeds.</summary>
-    public IReadOnlyList<Finding> Findings { get; init; } = [];
+    public IReadOnlyList<Finding> Findings => Row.Findings;
 
     /// <summary>
     /// Per set of lines ((int)Phases, 1 = A … 7 = ABC), the drop in percent that a circuit on those lines sees
     /// on this run per ohm/km of resistance and per ohm/km of reactance, at the run's present length and sets:
     /// the drop is linear in R and X, so the sizer can price any size without solving the tree again.
     /// </summary>
-    internal ReadOnlyMemory<double> UnitDropsR { get; init; } = NoUnitDrops;
+    internal ReadOnlyMemory<double> UnitDropsR => Run is null ? NoUnitDrops : _rows.UnitDrops.AsMemory(_index * 16, 8);
 
     /// <summary>See <see cref="UnitDropsR"/>, per ohm/km of reactance.</summary>
-    internal ReadOnlyMemory<double> UnitDropsX { get; init; } = NoUnitDrops;
+    internal ReadOnlyMemory<double> UnitDropsX => Run is null ? NoUnitDrops : _rows.UnitDrops.AsMemory((_index * 16) + 8, 8);
 
     /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
-    internal int OwnLines { get; init; }
-
-    /// <summary>The drop on each set of lines at the run's size: R·UnitDropsR + X·UnitDropsX.</summary>
-    internal double LineDrop(int set) => (ResistanceOhmPerKm!.Value * UnitDropsR.Span[set]) + (ReactanceOhmPerKm!.Value * UnitDropsX.Span[set]);
-
-    // No unit drops (a transformer's drop is not a conductor's): shared, never written.
-    private static readonly double[] NoUnitDrops = new double[8];
+    internal int OwnLines => Row.OwnLines;
 
     /// <summary>Where the run is in the project file.</summary>
-    public SourceLocation Location { get; init; } = SourceLocation.None;
+    public SourceLocation Location => Run is { } run ? run.Conductors.Location : Node.Equipment!.Location;
+
+    /// <summary>Equal when both show the same row of the same solution.</summary>
+    public static bool operator ==(RunResult left, RunResult right) => left.Equals(right);
+
+    /// <summary>Not equal unless both show the same row of the same solution.</summary>
+    public static bool operator !=(RunResult left, RunResult right) => !left.Equals(right);
+
+    /// <summary>The drop on each set of lines at the run's size: R·UnitDropsR + X·UnitDropsX.</summary>
+    internal double LineDrop(int set) => (Row.ResistanceOhmPerKm * UnitDropsR.Span[set]) + (Row.ReactanceOhmPerKm * UnitDropsX.Span[set]);
+
+    /// <inheritdoc/>
+    public bool Equals(RunResult other) => ReferenceEquals(_rows, other._rows) && _index == other._index;
+
+    /// <inheritdoc/>
+    public override bool Equals(object? obj) => obj is RunResult other && Equals(other);
+
+    /// <inheritdoc/>
+    public override int GetHashCode() => HashCode.Combine(_rows, _index);
+
+    /// <inheritdoc/>
+    public override string ToString() => $"{Kind} {Id}: {DropPercent} %";
 }

@@ -1,0 +1,134 @@
+using System.Collections;
+using DistTree.Model;
+using DistTree.Network;
+
+namespace DistTree.Solving;
+
+/// <summary>
+/// Every figure a solve worked out, held as a few arrays: one element a run or end point, and the per-node
+/// arrays the solve filled. <see cref="RunResult"/> and <see cref="EndPointResult"/> are views into it, so a
+/// solve of 100,000 runs makes a handful of arrays rather than 100,000 result objects for the collector to copy
+/// (DEVELOPERS.md, Performance). Nothing here is written after the solve.
+/// </summary>
+internal sealed class SolvedRows
+{
+    // The text of each set of lines, by (int)Phases.
+    private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
+
+    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs, double[] unitDrops)
+    {
+        Network = network;
+        Rules = network.Project.Rules;
+        Nodes = network.NodeArray;
+        Phases = phases;
+        Power = power;
+        Runs = runs;
+        UnitDrops = unitDrops;
+    }
+
+    public DistributionNetwork Network { get; }
+
+    public Rules Rules { get; }
+
+    public NetworkNode[] Nodes { get; }
+
+    /// <summary>The phase currents and line assignments per node.</summary>
+    public PhaseFlow Phases { get; }
+
+    /// <summary>Per node, the complex power it carries after demand factors.</summary>
+    public ComplexPower[] Power { get; }
+
+    /// <summary>Per row, its figures (see <see cref="RunResult"/>).</summary>
+    public RunRow[] Runs { get; }
+
+    /// <summary>Per row, 16 values: the unit drops per resistance (8 sets of lines), then per reactance (8).</summary>
+    public double[] UnitDrops { get; }
+
+    /// <summary>Per end point, its figures (see <see cref="EndPointResult"/>).</summary>
+    public EndPointRow[] EndPoints { get; set; } = [];
+
+    /// <summary>The counted runs of every end point's path, end point after end point (see <see cref="EndPointRow.PathStart"/>).</summary>
+    public int[] PathRuns { get; set; } = [];
+
+    /// <summary>Each counted run's share, aligned with <see cref="PathRuns"/>.</summary>
+    public double[] PathShares { get; set; } = [];
+
+    public static string LinesOf(Phases set) => LinesText[(int)set];
+}
+
+/// <summary>A run's or transformer's figures, filled in stage by stage during the solve (the run, the load flow, the findings, the reach).</summary>
+internal struct RunRow
+{
+    public NetworkNode Node;
+    public NetworkRun? Run;
+    public TransformerData? Transformer;
+    public double CurrentA;
+    public double DesignCurrentA;
+    public double TemperatureC;
+    public double ResistanceOhmPerKm;
+    public double ReactanceOhmPerKm;
+    public double? AmpacityA;
+    public double RatedA;
+    public int OwnLines;
+    public double VoltageV;
+    public double DropPercent;
+    public double PercentSumDropPercent;
+    public double? LoadFlowDropPercent;
+    public double? MaxLengthM;
+    public double? MaxLengthTotalM;
+    public IReadOnlyList<Finding> Findings;
+    public bool WidensToAllLines;
+
+    /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
+    public readonly double DropV => DropPercent / 100.0 * VoltageV;
+}
+
+/// <summary>An end point's figures; its counted runs are <c>PathRuns[PathStart .. PathStart + PathCount]</c>.</summary>
+internal struct EndPointRow
+{
+    public int Node;
+    public int PathStart;
+    public int PathCount;
+    public double TotalDropPercent;
+    public double PercentSumTotalDropPercent;
+    public double? LoadFlowTotalDropPercent;
+    public double? LoadFlowEndVoltageV;
+    public MotorStartResult? MotorStart;
+    public IReadOnlyList<Finding> Findings;
+}
+
+/// <summary>The runs of a solution as a list of views.</summary>
+internal sealed class RunResultList(SolvedRows rows) : IReadOnlyList<RunResult>
+{
+    public int Count => rows.Runs.Length;
+
+    public RunResult this[int index] => (uint)index < (uint)rows.Runs.Length ? new RunResult(rows, index) : throw new ArgumentOutOfRangeException(nameof(index));
+
+    public IEnumerator<RunResult> GetEnumerator()
+    {
+        for (var i = 0; i < rows.Runs.Length; i++)
+        {
+            yield return new RunResult(rows, i);
+        }
+    }
+
+    IEnumerator IEnumerable.GetEnumerator() => GetEnumerator();
+}
+
+/// <summary>The end points of a solution as a list of views.</summary>
+internal sealed class EndPointResultList(SolvedRows rows) : IReadOnlyList<EndPointResult>
+{
+    public int Count => rows.EndPoints.Length;
+
+    public EndPointResult this[int index] => (uint)index < (uint)rows.EndPoints.Length ? new EndPointResult(rows, index) : throw new ArgumentOutOfRangeException(nameof(index));
+
+    public IEnumerator<EndPointResult> GetEnumerator()
+    {
+        for (var i = 0; i < rows.EndPoints.Length; i++)
+        {
+            yield return new EndPointResult(rows, i);
+        }
+    }
+
+    IEnumerator IEnumerable.GetEnumerator() => GetEnumerator();
+}
