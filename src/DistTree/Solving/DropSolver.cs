@@ -40,8 +40,7 @@ public sealed class DropSolver
         AccumulatePower(nodes, power, continuous);
         var phases = new PhaseFlow(network, power, new Complex[n * 3], new Phases[n]);
 
-        // Rows in network order, each transformer's row after its primary feeder's. Every figure is worked
-        // out in the drafts first; each result record is then made once.
+        // Rows in network order, each transformer's row after its primary feeder's, filled in stage by stage.
         var incomingRow = Scratch.Rent<int>(n);
         var transformerRow = Scratch.Rent<int>(n);
         var count = 0;
@@ -55,36 +54,42 @@ public sealed class DropSolver
         var lineDrops = Scratch.Rent<double>(count * 8);
         var unitDrops = new double[count * 16];
         var z = Scratch.Rent<Complex>(n);
-        for (var i = 0; i < n; i++)
+        ParallelRanges.For(n, (start, end) =>
         {
-            var node = nodes[i];
-            if (node.Incoming is { } run)
+            for (var i = start; i < end; i++)
             {
-                var row = incomingRow[i];
-                SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
+                var node = nodes[i];
+                if (node.Incoming is { } run)
+                {
+                    var row = incomingRow[i];
+                    SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
 
-                // The load flow's impedance of the run: its whole length, sets in parallel.
-                var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
-                z[i] = new Complex(rows[row].ResistanceOhmPerKm * km, rows[row].ReactanceOhmPerKm * km);
-            }
+                    // The load flow's impedance of the run: its whole length, sets in parallel.
+                    var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
+                    z[i] = new Complex(rows[row].ResistanceOhmPerKm * km, rows[row].ReactanceOhmPerKm * km);
+                }
 
-            if (node.Equipment?.Transformer is { } transformer)
-            {
-                rows[transformerRow[i]] = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
+                if (node.Equipment?.Transformer is { } transformer)
+                {
+                    rows[transformerRow[i]] = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
+                }
             }
-        }
+        });
 
         // The load flow on the same impedances the percent sum used.
         var flow = LoadFlow.Solve(network, power, z);
         Scratch.Return(z, n);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
-        foreach (ref var row in rows.AsSpan(0, count))
+        ParallelRanges.For(count, (start, end) =>
         {
-            if (row.Run is not null)
+            foreach (ref var row in rows.AsSpan(start, end - start))
             {
-                row.Findings = RunFindings(ref row);
+                if (row.Run is not null)
+                {
+                    row.Findings = RunFindings(ref row);
+                }
             }
-        }
+        });
 
         var solved = new SolvedRows(network, phases, power, rows, unitDrops);
         SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
@@ -448,80 +453,88 @@ public sealed class DropSolver
         var rows = solved.Runs;
         var rules = solved.Rules;
         var nodes = network.NodeArray;
+        var parents = network.ParentIndices;
+        var n = nodes.Length;
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         var onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
 
-        // Depth of every node (the service is 1), top-down.
-        var depth = Scratch.Rent<int>(nodes.Length);
+        // Top-down: the depth of every node (the service is 1), and how many rows a walk up from below a node
+        // counts from it to the service: its transformer's and its incoming run's, unless the transformer is a
+        // new origin, where the counting stops.
+        var depth = Scratch.Rent<int>(n);
+        var counted = Scratch.Rent<int>(n);
         var endPointCount = 0;
-        for (var i = 0; i < nodes.Length; i++)
+        for (var i = 0; i < n; i++)
         {
-            depth[i] = i == 0 ? 1 : depth[nodes[i].ParentIndex] + 1;
+            var above = i == 0 ? 0 : counted[parents[i]];
+            depth[i] = i == 0 ? 1 : depth[parents[i]] + 1;
+            counted[i] = newOrigin && transformerRow[i] >= 0 ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
             endPointCount += nodes[i].Circuit is null ? 0 : 1;
         }
 
+        // Each end point's place in the path arrays: its counted rows, its own run's and those above its panel.
         var endPoints = new EndPointRow[endPointCount];
-        var pathRuns = new int[endPointCount * 4];
-        var pathShares = new double[endPointCount * 4];
         var used = 0;
-        var e = 0;
-        var countedBuffer = new int[16];
-        foreach (var node in nodes)
+        for (int i = 0, e = 0; i < n; i++)
         {
-            if (node.Circuit is not { } circuit)
+            if (nodes[i].Circuit is not null)
             {
-                continue;
+                var count = (incomingRow[i] >= 0 ? 1 : 0) + counted[parents[i]];
+                endPoints[e++] = new EndPointRow { Node = i, PathStart = used, PathCount = count };
+                used += count;
             }
+        }
 
-            var count = 0;
-            var counting = true;
-            for (var i = node.Index; i >= 0; i = nodes[i].ParentIndex)
+        var pathRuns = new int[used];
+        var pathShares = new double[used];
+        ParallelRanges.For(endPointCount, (start, end) =>
+        {
+            for (var e = start; e < end; e++)
             {
-                if (count + 2 > countedBuffer.Length)
-                {
-                    Array.Resize(ref countedBuffer, countedBuffer.Length * 2);
-                }
-
-                if (transformerRow[i] >= 0 && i != node.Index)
-                {
-                    if (counting && !newOrigin)
-                    {
-                        countedBuffer[count++] = transformerRow[i];
-                    }
-
-                    counting &= !newOrigin;
-                }
-
-                if (counting && incomingRow[i] >= 0)
-                {
-                    countedBuffer[count++] = incomingRow[i];
-                }
+                SolveEndPoint(ref endPoints[e]);
             }
+        });
 
-            if (used + count > pathRuns.Length)
-            {
-                var grown = Math.Max(pathRuns.Length * 2, used + count);
-                Array.Resize(ref pathRuns, grown);
-                Array.Resize(ref pathShares, grown);
-            }
+        Scratch.Return(depth, n);
+        Scratch.Return(counted, n);
+        solved.EndPoints = endPoints;
+        solved.PathRuns = pathRuns;
+        solved.PathShares = pathShares;
 
+        void SolveEndPoint(ref EndPointRow point)
+        {
+            var node = nodes[point.Node];
+            var circuit = node.Circuit!;
             double percentSum = 0, loadFlow = 0;
 
             // Walking up from the end point: its own lines, until a transformer between systems of different
-            // line counts, above which the worst line counts (the safe side).
-            var set = (int)solved.Phases.Assigned[node.Index];
-            for (var k = 0; k < count; k++)
+            // line counts, above which the worst line counts (the safe side). Each transformer's row before its
+            // primary feeder's; the rows are stored service side first.
+            var set = (int)solved.Phases.Assigned[point.Node];
+            var at = point.PathStart + point.PathCount;
+            void Count(int r)
             {
-                var r = countedBuffer[k];
                 ref var row = ref rows[r];
-                var at = used + count - 1 - k;
-                pathRuns[at] = r;
+                pathRuns[--at] = r;
                 pathShares[at] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
                 percentSum += lineDrops[(r * 8) + set];
                 loadFlow += row.LoadFlowDropPercent ?? 0;
                 if (row.WidensToAllLines)
                 {
                     set = (int)Phases.ABC;
+                }
+            }
+
+            for (var i = point.Node; at > point.PathStart; i = parents[i])
+            {
+                if (transformerRow[i] >= 0 && i != point.Node)
+                {
+                    Count(transformerRow[i]);
+                }
+
+                if (incomingRow[i] >= 0)
+                {
+                    Count(incomingRow[i]);
                 }
             }
 
@@ -535,11 +548,11 @@ public sealed class DropSolver
                     circuit.FullId,
                     total,
                     limit,
-                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && count < depth[node.Index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && point.PathCount < depth[point.Node] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, solved.Power[node.Index], rules) : null;
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, solved.Power[point.Node], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 (findings ??= []).Add(new Finding(
@@ -551,25 +564,13 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            endPoints[e++] = new EndPointRow
-            {
-                Node = node.Index,
-                PathStart = used,
-                PathCount = count,
-                TotalDropPercent = total,
-                PercentSumTotalDropPercent = percentSum,
-                LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null,
-                LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[node.Index] * circuit.Supply.VoltageV : null,
-                MotorStart = start,
-                Findings = findings is null ? NoFindings : findings,
-            };
-            used += count;
+            point.TotalDropPercent = total;
+            point.PercentSumTotalDropPercent = percentSum;
+            point.LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null;
+            point.LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[point.Node] * circuit.Supply.VoltageV : null;
+            point.MotorStart = start;
+            point.Findings = findings is null ? NoFindings : findings;
         }
-
-        Scratch.Return(depth, nodes.Length);
-        solved.EndPoints = endPoints;
-        solved.PathRuns = pathRuns;
-        solved.PathShares = pathShares;
     }
 
     // The extra drop of ΔS = S_locked-rotor − S_running on each run: 100·(ΔP·R_loop + ΔQ·X_loop)/V², R_loop and

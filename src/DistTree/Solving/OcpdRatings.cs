@@ -32,7 +32,15 @@ public static class OcpdRatings
             return false;
         }
 
-        var next = Standard.FirstOrDefault(r => r >= ampacityA - 1e-9);
-        return next > 0 && ocpdA <= next + 1e-9;
+        // The next standard rating at or above the ampacity (none above the largest).
+        foreach (var next in Standard)
+        {
+            if (next >= ampacityA - 1e-9)
+            {
+                return ocpdA <= next + 1e-9;
+            }
+        }
+
+        return false;
     }
 }
