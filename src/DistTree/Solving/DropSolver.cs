@@ -628,22 +628,34 @@ public sealed class DropSolver
             slack[e.Node] = rules.TotalLimitPercent - e.TotalDropPercent;
         }
 
+        // Bottom-up, the slack each node's incoming run sees (a new origin hides what is below it from above);
+        // then each run's reach from it, run by run.
         var newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         var parents = network.ParentIndices;
         for (var i = nodes.Length - 1; i > 0; i--)
         {
-            var visible = newOrigin && nodes[i].Kind == NodeKind.Transformer ? double.PositiveInfinity : slack[i];
-            if (incomingRow[i] >= 0)
+            if (newOrigin && nodes[i].Kind == NodeKind.Transformer)
             {
-                ref var row = ref rows[incomingRow[i]];
-                var lengthM = row.Run!.Conductors.LengthM;
-                row.MaxLengthM = Reach(lengthM, row.DropPercent, row.Run.LimitPercent);
-                row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
+                slack[i] = double.PositiveInfinity;
             }
 
-            var parent = parents[i];
-            slack[parent] = Math.Min(slack[parent], visible);
+            slack[parents[i]] = Math.Min(slack[parents[i]], slack[i]);
         }
+
+        ParallelRanges.For(nodes.Length, (start, end) =>
+        {
+            for (var i = Math.Max(start, 1); i < end; i++)
+            {
+                if (incomingRow[i] >= 0)
+                {
+                    ref var row = ref rows[incomingRow[i]];
+                    var lengthM = row.Run!.Conductors.LengthM;
+                    var visible = slack[i];
+                    row.MaxLengthM = Reach(lengthM, row.DropPercent, row.Run.LimitPercent);
+                    row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
+                }
+            }
+        });
 
         Scratch.Return(slack, nodes.Length);
     }
