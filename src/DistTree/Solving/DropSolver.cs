@@ -141,23 +141,32 @@ public sealed class DropSolver
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
     private static void AccumulatePower(NetworkNode[] nodes, ComplexPower[] power, ComplexPower[] continuous)
     {
+        // The end points' loads first, each on its own, on every core. Each range runs from its last index down, so
+        // that on one thread the bad load met first is the same one the plain bottom-up loop met first.
+        ParallelRanges.For(nodes.Length, (start, end) =>
+        {
+            for (var i = end - 1; i >= start; i--)
+            {
+                if (nodes[i].Circuit is { } circuit)
+                {
+                    try
+                    {
+                        power[i] = LoadPower.Of(circuit.Load, circuit.Supply);
+                    }
+                    catch (ArgumentException e)
+                    {
+                        throw ProjectException.At(circuit.Location, e.Message);
+                    }
+
+                    continuous[i] = circuit.Continuous ? power[i] : ComplexPower.Zero;
+                }
+            }
+        });
+
         for (var i = nodes.Length - 1; i >= 0; i--)
         {
             var node = nodes[i];
-            if (node.Circuit is { } circuit)
-            {
-                try
-                {
-                    power[i] = LoadPower.Of(circuit.Load, circuit.Supply);
-                }
-                catch (ArgumentException e)
-                {
-                    throw ProjectException.At(circuit.Location, e.Message);
-                }
-
-                continuous[i] = circuit.Continuous ? power[i] : ComplexPower.Zero;
-            }
-            else
+            if (node.Circuit is null)
             {
                 var factor = node.Equipment?.DemandFactor ?? 1.0;
                 power[i] *= factor;
