@@ -137,6 +137,9 @@ internal sealed class SizingProblem
         var cos = row.PowerFactor;
         var sin = Math.Sqrt(Math.Max(0, 1 - (cos * cos)));
         var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
+        var unitR = new double[8];
+        var unitX = new double[8];
+        row.UnitDrops(unitR, unitX);
         var steps = 0;
         for (ConductorSize? size = conductors.Size; size is { } s; size = conductors.Fixed ? null : s.NextLarger, steps++)
         {
@@ -163,7 +166,7 @@ internal sealed class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, run.Supply, project.Service.FrequencyHz, row.CurrentA, cos, sin);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = DropSolver.OwnDrop(row.UnitDropsR.Span, row.UnitDropsX.Span, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines);
+                var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines);
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }

@@ -52,7 +52,6 @@ public sealed class DropSolver
 
         var rows = new RunRow[count];
         var lineDrops = Scratch.Rent<double>(count * 8);
-        var unitDrops = new double[count * 16];
         var z = Scratch.Rent<Complex>(n);
         ParallelRanges.For(n, (start, end) =>
         {
@@ -62,7 +61,7 @@ public sealed class DropSolver
                 if (node.Incoming is { } run)
                 {
                     var row = incomingRow[i];
-                    SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8), unitDrops.AsSpan(row * 16, 8), unitDrops.AsSpan((row * 16) + 8, 8));
+                    SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8));
 
                     // The load flow's impedance of the run: its whole length, sets in parallel.
                     var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
@@ -91,7 +90,7 @@ public sealed class DropSolver
             }
         });
 
-        var solved = new SolvedRows(network, phases, power, rows, unitDrops);
+        var solved = new SolvedRows(network, phases, power, rows);
         SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
         AddReach(network, rows, incomingRow, solved.EndPoints, rules);
         Scratch.Return(lineDrops, count * 8);
@@ -182,10 +181,9 @@ public sealed class DropSolver
     }
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
-    // unitR and unitX: where its unit drops go (see RunResult.UnitDropsR).
     private void SolveRun(
         ref RunRow row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
-        Span<double> lineDrops, Span<double> unitR, Span<double> unitX)
+        Span<double> lineDrops)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -199,19 +197,9 @@ public sealed class DropSolver
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
-        var system = run.Source.System;
-        if (points.Count > 0)
-        {
-            unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
-            unitX.Fill(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
-        }
-        else
-        {
-            var km = conductors.LengthM / 1000.0 / conductors.Sets;
-            var scale = lineA > 0 ? currentA / lineA : 1.0;
-            phases.UnitDrops(index, km, system, scale, unitR, unitX);
-        }
-
+        Span<double> unitR = stackalloc double[8];
+        Span<double> unitX = stackalloc double[8];
+        UnitDrops(run, phases, currentA, lineA, unitR, unitX);
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
         var ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
         for (var set = 0; set < 8; set++)
@@ -232,6 +220,28 @@ public sealed class DropSolver
         row.PercentSumDropPercent = ownDrop;
         row.VoltageV = supply.VoltageV;
         row.Findings = NoFindings;
+    }
+
+    /// <summary>
+    /// A run's unit drops (see <see cref="RunResult.UnitDrops"/>) at the current it carries and the largest of its
+    /// line currents: loads along the run span by span, else the phase currents of what it feeds.
+    /// </summary>
+    internal static void UnitDrops(NetworkRun run, PhaseFlow phases, double currentA, double lineA, Span<double> unitR, Span<double> unitX)
+    {
+        var supply = run.Supply;
+        var conductors = run.Conductors;
+        var points = run.Target.Circuit?.Points ?? [];
+        if (points.Count > 0)
+        {
+            unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
+            unitX.Fill(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
+        }
+        else
+        {
+            var km = conductors.LengthM / 1000.0 / conductors.Sets;
+            var scale = lineA > 0 ? currentA / lineA : 1.0;
+            phases.UnitDrops(run.Target.Index, km, run.Source.System, scale, unitR, unitX);
+        }
     }
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>

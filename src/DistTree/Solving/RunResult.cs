@@ -23,9 +23,6 @@ public enum RunResultKind
 /// </summary>
 public readonly struct RunResult : IEquatable<RunResult>
 {
-    // No unit drops (a transformer's drop is not a conductor's): shared, never written.
-    private static readonly double[] NoUnitDrops = new double[8];
-
     private readonly SolvedRows _rows;
     private readonly int _index;
 
@@ -156,18 +153,27 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>The limits this run exceeds.</summary>
     public IReadOnlyList<Finding> Findings => Row.Findings;
 
-    /// <summary>
-    /// Per set of lines ((int)Phases, 1 = A … 7 = ABC), the drop in percent that a circuit on those lines sees
-    /// on this run per ohm/km of resistance and per ohm/km of reactance, at the run's present length and sets:
-    /// the drop is linear in R and X, so the sizer can price any size without solving the tree again.
-    /// </summary>
-    internal ReadOnlyMemory<double> UnitDropsR => Run is null ? NoUnitDrops : _rows.UnitDrops.AsMemory(_index * 16, 8);
-
-    /// <summary>See <see cref="UnitDropsR"/>, per ohm/km of reactance.</summary>
-    internal ReadOnlyMemory<double> UnitDropsX => Run is null ? NoUnitDrops : _rows.UnitDrops.AsMemory((_index * 16) + 8, 8);
-
     /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
     internal int OwnLines => Row.OwnLines;
+
+    /// <summary>
+    /// Per set of lines ((int)Phases, 1 = A … 7 = ABC), the drop in percent that a circuit on those lines sees
+    /// on this run per ohm/km of resistance (into <paramref name="unitR"/>) and per ohm/km of reactance (into
+    /// <paramref name="unitX"/>), at the run's present length and sets: the drop is linear in R and X, so the
+    /// sizer can price any size without solving the tree again. Worked out when asked, as the solve did; zero for a transformer.
+    /// </summary>
+    internal void UnitDrops(Span<double> unitR, Span<double> unitX)
+    {
+        if (Run is { } run)
+        {
+            DropSolver.UnitDrops(run, _rows.Phases, Row.CurrentA, _rows.Phases.MaxLineCurrentA(NodeIndex), unitR, unitX);
+        }
+        else
+        {
+            unitR.Clear();
+            unitX.Clear();
+        }
+    }
 
     /// <summary>Where the run is in the project file.</summary>
     public SourceLocation Location => Run is { } run ? run.Conductors.Location : Node.Equipment!.Location;
@@ -177,9 +183,6 @@ public readonly struct RunResult : IEquatable<RunResult>
 
     /// <summary>Not equal unless both show the same row of the same solution.</summary>
     public static bool operator !=(RunResult left, RunResult right) => !left.Equals(right);
-
-    /// <summary>The drop on each set of lines at the run's size: R·UnitDropsR + X·UnitDropsX.</summary>
-    internal double LineDrop(int set) => (Row.ResistanceOhmPerKm * UnitDropsR.Span[set]) + (Row.ReactanceOhmPerKm * UnitDropsX.Span[set]);
 
     /// <inheritdoc/>
     public bool Equals(RunResult other) => ReferenceEquals(_rows, other._rows) && _index == other._index;

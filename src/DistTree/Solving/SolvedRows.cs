@@ -15,7 +15,7 @@ internal sealed class SolvedRows
     // The text of each set of lines, by (int)Phases.
     private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
 
-    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs, double[] unitDrops)
+    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs)
     {
         Network = network;
         Rules = network.Project.Rules;
@@ -23,7 +23,6 @@ internal sealed class SolvedRows
         Phases = phases;
         Power = power;
         Runs = runs;
-        UnitDrops = unitDrops;
     }
 
     public DistributionNetwork Network { get; }
@@ -40,9 +39,6 @@ internal sealed class SolvedRows
 
     /// <summary>Per row, its figures (see <see cref="RunResult"/>).</summary>
     public RunRow[] Runs { get; }
-
-    /// <summary>Per row, 16 values: the unit drops per resistance (8 sets of lines), then per reactance (8).</summary>
-    public double[] UnitDrops { get; }
 
     /// <summary>Per end point, its figures (see <see cref="EndPointResult"/>).</summary>
     public EndPointRow[] EndPoints { get; set; } = [];
