@@ -96,6 +96,11 @@ try
             var m = Measurement.Of("solve", size, repeats, () => solution = DropSolver.Standard.Solve(network));
             results.Add(m);
             solveRunsPerSecond[size] = solution.Runs.Count / m.Median;
+
+            // The same solve with every pass on this thread alone: what the passes on every core gain, in one run.
+            ParallelRanges.OnOneThread = true;
+            results.Add(Measurement.Of("solve-1t", size, repeats, () => solution = DropSolver.Standard.Solve(network)));
+            ParallelRanges.OnOneThread = false;
         }
 
         solution ??= DropSolver.Standard.Solve(network);
@@ -233,7 +238,10 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
 
     foreach (var (size, rate) in runsPerSecond.OrderBy(p => p.Key))
     {
-        Console.WriteLine($"  solver runs per second at {size,7:N0} {rate / 1e6,8:0.00} M  target > 2 M  {Verdict(rate > 2e6)}");
+        var oneThread = Find("solve-1t", size) is { } single && Find("solve", size) is { } all
+            ? $"  (on one thread {rate * all.Median / single.Median / 1e6:0.00} M; every core {single.Median / all.Median:0.00}× that)"
+            : "";
+        Console.WriteLine($"  solver runs per second at {size,7:N0} {rate / 1e6,8:0.00} M  target > 2 M  {Verdict(rate > 2e6)}{oneThread}");
     }
 
     foreach (var size in results.Select(r => r.Size).Distinct())
