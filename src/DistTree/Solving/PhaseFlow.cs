@@ -32,10 +32,25 @@ internal sealed class PhaseFlow
     private static readonly Complex[] PairConjugate = new Complex[32];
     private static readonly double[] PairMagnitude = new double[32];
 
+    // Per (lines × 3 + line): conj(Unit(line, lines)).
+    private static readonly Complex[] UnitConjugate = new Complex[12];
+
     private readonly DistributionNetwork _network;
+
+    // The voltages of the system last asked for (see VoltagesOf): runs of one panel share its system.
+    private ElectricalSystem? _lastSystem;
+    private SystemVoltages _lastVoltages;
 
     static PhaseFlow()
     {
+        for (var lines = 1; lines <= 3; lines++)
+        {
+            for (var line = 0; line < lines; line++)
+            {
+                UnitConjugate[(lines * 3) + line] = Complex.Conjugate(Unit(line, lines));
+            }
+        }
+
         for (var lines = 2; lines <= 3; lines++)
         {
             for (var on = 0; on < 8; on++)
@@ -77,8 +92,9 @@ internal sealed class PhaseFlow
     /// </summary>
     public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
+        var voltages = VoltagesOf(system);
         var i = Currents.AsSpan(node * 3, 3);
-        var neutral = system.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
         var resistive = new Complex(km, 0);
         var reactive = new Complex(0, km);
         Span<Complex> deltaR = stackalloc Complex[3];
@@ -90,12 +106,8 @@ internal sealed class PhaseFlow
             deltaX[x] = flowing * reactive * scale;
         }
 
-        var lines = PhaseRules.Lines(system);
-        var single = SetV(1, system);
-        var pair = SetV(2, system);
-        var perLine = LineToNeutralV(system);
-        LineDropsOn(deltaR, lines, single, pair, perLine, unitR);
-        LineDropsOn(deltaX, lines, single, pair, perLine, unitX);
+        LineDropsOn(deltaR, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitR);
+        LineDropsOn(deltaX, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitX);
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
@@ -119,7 +131,7 @@ internal sealed class PhaseFlow
     public double MaxLineCurrentA(int node)
     {
         var i = Currents.AsSpan(node * 3, 3);
-        return Math.Max(i[0].Magnitude, Math.Max(i[1].Magnitude, i[2].Magnitude));
+        return Math.Max(Magnitude(i[0]), Math.Max(Magnitude(i[1]), Magnitude(i[2])));
     }
 
     /// <summary>The line current magnitudes of the run into <paramref name="node"/> on a system of <paramref name="lines"/> lines, amperes.</summary>
@@ -128,7 +140,7 @@ internal sealed class PhaseFlow
         var result = new double[lines];
         for (var x = 0; x < lines; x++)
         {
-            result[x] = Currents[(node * 3) + x].Magnitude;
+            result[x] = Magnitude(Currents[(node * 3) + x]);
         }
 
         return result;
@@ -157,23 +169,26 @@ internal sealed class PhaseFlow
         Span<double> inPhase = stackalloc double[3];
         for (var x = 0; x < lines; x++)
         {
-            inPhase[x] = (deltaV[x] * Complex.Conjugate(Unit(x, lines))).Real;
+            inPhase[x] = (deltaV[x] * UnitConjugate[(lines * 3) + x]).Real;
         }
 
-        for (var set = 1; set < 8; set++)
+        // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
+        // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
+        var mask = (1 << lines) - 1;
+        Span<double> byLines = stackalloc double[8];
+        for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
         {
-            var on = set & ((1 << lines) - 1);
             switch (BitOperations.PopCount((uint)on))
             {
                 case 0:
-                    into[set] = inPhase[0] / perLine * 100.0;
+                    byLines[on] = inPhase[0] / perLine * 100.0;
                     break;
                 case 1:
-                    into[set] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
+                    byLines[on] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
                     break;
                 case 2:
                     var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    into[set] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
+                    byLines[on] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
                     break;
                 default:
                     var worst = double.NegativeInfinity;
@@ -182,9 +197,14 @@ internal sealed class PhaseFlow
                         worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
                     }
 
-                    into[set] = worst;
+                    byLines[on] = worst;
                     break;
             }
+        }
+
+        for (var set = 1; set < 8; set++)
+        {
+            into[set] = byLines[set & mask];
         }
     }
 
@@ -200,6 +220,21 @@ internal sealed class PhaseFlow
             var s = x < lines ? vln * Unit(x, lines) * Complex.Conjugate(secondary[x]) : Complex.Zero;
             into[x] = x < lines ? (((percentR * s.Real) + (percentX * s.Imaginary)) / perLine) - data.TapPercent : double.NegativeInfinity;
         }
+    }
+
+    // |c|, without the call for no current (a line a circuit does not take): the magnitude of zero is zero.
+    private static double Magnitude(Complex c) => c.Real == 0 && c.Imaginary == 0 ? 0.0 : c.Magnitude;
+
+    // The voltages of SetV and LineToNeutralV on the system, kept for the system last asked for.
+    private SystemVoltages VoltagesOf(ElectricalSystem system)
+    {
+        if (!ReferenceEquals(system, _lastSystem))
+        {
+            _lastVoltages = new SystemVoltages(PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), system.HasNeutral);
+            _lastSystem = system;
+        }
+
+        return _lastVoltages;
     }
 
     /// <summary>The unit phasor of line <paramref name="line"/>'s voltage to neutral on a system of <paramref name="lines"/> lines.</summary>
@@ -338,6 +373,10 @@ internal sealed class PhaseFlow
             }
         }
     }
+
+    // A system's lines, the voltages a circuit on one line, on two lines and per line of a balanced set is
+    // rated at (SetV(1), SetV(2), LineToNeutralV), and whether it has a neutral.
+    private readonly record struct SystemVoltages(int Lines, double SingleV, double PairV, double PerLineV, bool HasNeutral);
 
     private static Phases[] Candidates(int poles, int lines) => (poles, lines) switch
     {
