@@ -230,12 +230,15 @@ internal sealed class PhaseFlow
     {
         if (!ReferenceEquals(system, _lastSystem))
         {
-            _lastVoltages = new SystemVoltages(PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), system.HasNeutral);
+            _lastVoltages = Voltages(system);
             _lastSystem = system;
         }
 
         return _lastVoltages;
     }
+
+    private static SystemVoltages Voltages(ElectricalSystem system) =>
+        new(PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), system.HasNeutral);
 
     /// <summary>The unit phasor of line <paramref name="line"/>'s voltage to neutral on a system of <paramref name="lines"/> lines.</summary>
     public static Complex Unit(int line, int lines) => lines == 3 ? ThreeLines[line] : (lines == 2 ? TwoLines[line] : Complex.One);
@@ -258,13 +261,22 @@ internal sealed class PhaseFlow
     };
 
     /// <summary>The line currents of a circuit's load on its lines, at the circuit's nominal voltage.</summary>
-    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Span<Complex> into)
+    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Span<Complex> into) =>
+        LoadCurrents(s, phases, Voltages(system), into);
+
+    // LoadCurrents on a system of the given lines and voltages.
+    private static void LoadCurrents(ComplexPower s, Phases phases, SystemVoltages system, Span<Complex> into)
     {
-        var lines = PhaseRules.Lines(system);
+        var lines = system.Lines;
         var power = new Complex(s.Watts, s.Vars);
         var on = (int)phases & ((1 << lines) - 1);
         var count = BitOperations.PopCount((uint)on);
-        var v = SetV(count, system);
+        var v = count switch
+        {
+            1 => system.SingleV,
+            2 => system.PairV,
+            _ => system.PerLineV,
+        };
         if (count == 1)
         {
             var x = BitOperations.TrailingZeroCount(on);
@@ -274,7 +286,7 @@ internal sealed class PhaseFlow
         {
             var (x, y) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
             var u = Unit(x, lines) - Unit(y, lines);
-            var i = Complex.Conjugate(power / (v * u / u.Magnitude));
+            var i = Complex.Conjugate(power / (v * u / PairMagnitude[(lines * 8) + on]));
             into[x] += i;
             into[y] -= i;
         }
@@ -296,10 +308,17 @@ internal sealed class PhaseFlow
     {
         var nodes = _network.NodeArray;
         Span<double> load = stackalloc double[3];
-        var automatic = new List<int>();
+        var automatic = new List<Automatic>();
+        var largestFirst = Comparer<Automatic>.Create((a, b) =>
+        {
+            var order = b.VoltAmperes.CompareTo(a.VoltAmperes);
+            return order != 0 ? order : string.CompareOrdinal(nodes[a.Child].Id, nodes[b.Child].Id);
+        });
         foreach (var panel in nodes)
         {
-            if (panel.Circuit is not null || panel.Children.Count == 0)
+            // The list itself, not the read-only view: no enumerator is made per panel.
+            var children = panel.MutableChildren;
+            if (panel.Circuit is not null || children.Count == 0)
             {
                 continue;
             }
@@ -307,7 +326,7 @@ internal sealed class PhaseFlow
             var lines = PhaseRules.Lines(panel.System);
             load.Clear();
             automatic.Clear();
-            foreach (var child in panel.Children)
+            foreach (var child in children)
             {
                 if (nodes[child].Circuit is not { } circuit)
                 {
@@ -321,17 +340,13 @@ internal sealed class PhaseFlow
                 }
                 else
                 {
-                    automatic.Add(child);
+                    automatic.Add(new Automatic(child, power[child].VoltAmperes));
                 }
             }
 
             // Largest first; ids are unique in a panel, so the order is total.
-            automatic.Sort((a, b) =>
-            {
-                var order = power[b].VoltAmperes.CompareTo(power[a].VoltAmperes);
-                return order != 0 ? order : string.CompareOrdinal(nodes[a].Id, nodes[b].Id);
-            });
-            foreach (var child in automatic)
+            automatic.Sort(largestFirst);
+            foreach (var (child, voltAmperes) in automatic)
             {
                 var poles = Math.Min(nodes[child].Circuit!.Poles, lines);
                 var best = Phases.None;
@@ -355,7 +370,7 @@ internal sealed class PhaseFlow
                 }
 
                 Assigned[child] = best;
-                AddLoad(load, best, lines, power[child].VoltAmperes);
+                AddLoad(load, best, lines, voltAmperes);
             }
         }
     }
@@ -378,6 +393,9 @@ internal sealed class PhaseFlow
     // rated at (SetV(1), SetV(2), LineToNeutralV), and whether it has a neutral.
     private readonly record struct SystemVoltages(int Lines, double SingleV, double PairV, double PerLineV, bool HasNeutral);
 
+    // A circuit without stated phases, and its apparent power (VA), worked out once for the sort.
+    private readonly record struct Automatic(int Child, double VoltAmperes);
+
     private static Phases[] Candidates(int poles, int lines) => (poles, lines) switch
     {
         (1, 3) => OneOfThree,
@@ -398,7 +416,7 @@ internal sealed class PhaseFlow
             var mine = Currents.AsSpan(i * 3, 3);
             if (node.Circuit is not null)
             {
-                LoadCurrents(power[i], Assigned[i], nodes[node.ParentIndex].System, mine);
+                LoadCurrents(power[i], Assigned[i], VoltagesOf(nodes[node.ParentIndex].System), mine);
             }
             else
             {
