@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using DistTree.Model;
 using DistTree.Network;
 
@@ -97,8 +98,8 @@ internal sealed class PhaseFlow
         var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
         var resistive = new Complex(km, 0);
         var reactive = new Complex(0, km);
-        Span<Complex> deltaR = stackalloc Complex[3];
-        Span<Complex> deltaX = stackalloc Complex[3];
+        var deltaR = default(PerLine<Complex>);
+        var deltaX = default(PerLine<Complex>);
         for (var x = 0; x < 3; x++)
         {
             var flowing = i[x] + neutral;
@@ -166,7 +167,7 @@ internal sealed class PhaseFlow
     private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
     {
         // The part of each line's ΔV in phase with the line's voltage.
-        Span<double> inPhase = stackalloc double[3];
+        var inPhase = default(PerLine<double>);
         for (var x = 0; x < lines; x++)
         {
             inPhase[x] = (deltaV[x] * UnitConjugate[(lines * 3) + x]).Real;
@@ -175,7 +176,7 @@ internal sealed class PhaseFlow
         // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
         // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
         var mask = (1 << lines) - 1;
-        Span<double> byLines = stackalloc double[8];
+        var byLines = default(PerSet);
         for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
         {
             switch (BitOperations.PopCount((uint)on))
@@ -392,6 +393,20 @@ internal sealed class PhaseFlow
     // A system's lines, the voltages a circuit on one line, on two lines and per line of a balanced set is
     // rated at (SetV(1), SetV(2), LineToNeutralV), and whether it has a neutral.
     private readonly record struct SystemVoltages(int Lines, double SingleV, double PairV, double PerLineV, bool HasNeutral);
+
+    // A value per line, held in place (no stack allocation: UnitDrops runs once per run of a large tree).
+    [InlineArray(3)]
+    private struct PerLine<T>
+    {
+        private T _line;
+    }
+
+    // A value per set of lines, by (int)Phases.
+    [InlineArray(8)]
+    private struct PerSet
+    {
+        private double _set;
+    }
 
     // A circuit without stated phases, and its apparent power (VA), worked out once for the sort.
     private readonly record struct Automatic(int Child, double VoltAmperes);
