@@ -45,26 +45,14 @@ public static class LoadFlow
         var demand = Scratch.Rent<double>(n);
         var ratio = Scratch.Rent<double>(n);
         var zTransformer = Scratch.Rent<Complex>(n);
+        var supply = Scratch.Rent<CircuitSupply>(n);
+
+        // First what the objects of the tree hold, in a loop of reads only: the processor then has the reads of
+        // many nodes under way at once (objects of a large tree are rarely in cache). The arithmetic follows.
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
             var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
-            ratio[i] = 1.0;
-            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
-            if (node.Incoming is { } run)
-            {
-                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
-                var loop = run.Supply.Phases == 3 ? 1.0 : 2.0;
-                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (run.Supply.VoltageV * run.Supply.VoltageV);
-            }
-
-            if (node.Equipment?.Transformer is { } t)
-            {
-                var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
-                zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
-                ratio[i] = 1.0 + (t.TapPercent / 100.0);
-            }
-
             if (node.Circuit is { } circuit)
             {
                 // An end point is never a transformer (it has a circuit, not equipment).
@@ -74,10 +62,34 @@ public static class LoadFlow
                     LoadModel.ConstantImpedance => Role.ConstantImpedance,
                     _ => Role.ConstantPower,
                 };
-                s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
             }
 
-            link[i] = new Link(parents[i], role);
+            var run = node.Incoming;
+            supply[i] = run?.Supply ?? default;
+            link[i] = new Link(parents[i], role, run is not null);
+            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+            ratio[i] = 1.0;
+            if (node.Equipment?.Transformer is { } t)
+            {
+                var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
+                zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
+                ratio[i] = 1.0 + (t.TapPercent / 100.0);
+            }
+        }
+
+        for (var i = 0; i < n; i++)
+        {
+            if (link[i].HasRun)
+            {
+                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
+                var loop = supply[i].Phases == 3 ? 1.0 : 2.0;
+                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (supply[i].VoltageV * supply[i].VoltageV);
+            }
+
+            if (link[i].Role >= Role.ConstantPower)
+            {
+                s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
+            }
         }
 
         // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
@@ -111,6 +123,7 @@ public static class LoadFlow
             Scratch.Return(link, n);
             Scratch.Return(demand, n);
             Scratch.Return(ratio, n);
+            Scratch.Return(supply, n);
             return result;
         }
 
@@ -120,7 +133,7 @@ public static class LoadFlow
             // reaches it (its children come after it); it is cleared there for the next sweep.
             for (var i = n - 1; i > 0; i--)
             {
-                var (parent, role) = link[i];
+                var (parent, role, _) = link[i];
                 Complex drawn;
                 if (role >= Role.ConstantPower)
                 {
@@ -150,7 +163,7 @@ public static class LoadFlow
             var finite = true;
             for (var i = 1; i < n; i++)
             {
-                var (parent, role) = link[i];
+                var (parent, role, _) = link[i];
                 var after = bus[parent] - (current[i] * zPu[i]);
                 double squared;
                 if (role == Role.Transformer)
@@ -203,6 +216,6 @@ public static class LoadFlow
         ConstantImpedance,
     }
 
-    // A node's parent and role, read together by both sweeps.
-    private readonly record struct Link(int Parent, Role Role);
+    // A node's parent and role, read together by both sweeps, and whether a run comes into it.
+    private readonly record struct Link(int Parent, Role Role, bool HasRun);
 }
