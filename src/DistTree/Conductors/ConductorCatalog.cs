@@ -13,7 +13,16 @@ public sealed class ConductorCatalog
     private const double FeetPerKft = 1000.0;
     private const double MetresPerFoot = 0.3048;
 
+    // A power of two: the AC resistance cache's length (see AcResistanceOhmPerKm).
+    private const int AcResistanceCacheLength = 1 << 14;
+
     private readonly CatalogRow?[] _rows;
+
+    // AC resistances already worked out, one per slot by a hash of the inputs (see AcResistanceOhmPerKm).
+    private readonly AcResistance?[] _acResistances = new AcResistance?[AcResistanceCacheLength];
+
+    // The ambient correction factors at the ambient last asked for (see ThermalAmpacityA).
+    private AmbientFactors? _ambientFactors;
 
     private ConductorCatalog(string sourceName, IReadOnlyList<string> header, CatalogRow?[] rows)
     {
@@ -70,6 +79,26 @@ public sealed class ConductorCatalog
     /// </summary>
     public double AcResistanceOhmPerKm(ConductorSize size, Material material, Raceway raceway, double temperatureC, double frequencyHz)
     {
+        // The same inputs give the same resistance: a large project repeats a few sizes at a few loads (about
+        // 5,000 different inputs among 100,000 runs of a generated campus), so a resistance is worked out once
+        // and then looked up. An entry is never changed, only replaced whole, so that solves on other threads
+        // may share the catalogue; the inputs are compared bit for bit.
+        var temperatureBits = BitConverter.DoubleToInt64Bits(temperatureC);
+        var frequencyBits = BitConverter.DoubleToInt64Bits(frequencyHz);
+        var slot = HashCode.Combine(size.Index, material, raceway, temperatureBits, frequencyBits) & (AcResistanceCacheLength - 1);
+        if (_acResistances[slot] is { } known && known.SizeIndex == size.Index && known.Material == material && known.Raceway == raceway
+            && known.TemperatureBits == temperatureBits && known.FrequencyBits == frequencyBits)
+        {
+            return known.OhmPerKm;
+        }
+
+        var ohmPerKm = ComputeAcResistanceOhmPerKm(size, material, raceway, temperatureC, frequencyHz);
+        _acResistances[slot] = new AcResistance(size.Index, material, raceway, temperatureBits, frequencyBits, ohmPerKm);
+        return ohmPerKm;
+    }
+
+    private double ComputeAcResistanceOhmPerKm(ConductorSize size, Material material, Raceway raceway, double temperatureC, double frequencyHz)
+    {
         var row = Row(size);
         var rdc = ConductorPhysics.AtTemperature(material == Material.Copper ? row.Rdc20CuOhmPerKm : row.Rdc20AlOhmPerKm, material, temperatureC);
         var dc = row.StrandedDiameterMm;
@@ -117,7 +146,7 @@ public sealed class ConductorCatalog
     public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarryingConductors = 3)
     {
         var table = TableAmpacityA(size, material, insulationC);
-        return table * Ampacity.AmbientFactor(RatedTemperatureC(size, insulationC), ambientC)
+        return table * AmbientFactor(RatedTemperatureC(size, insulationC), ambientC)
             * Ampacity.AdjustmentFactor(currentCarryingConductors);
     }
 
@@ -146,6 +175,32 @@ public sealed class ConductorCatalog
     {
         var row = Row(size);
         return material == Material.Copper ? row.MaxOcpdCuA : row.MaxOcpdAlA;
+    }
+
+    // Ampacity.AmbientFactor, kept for the last ambient asked for: a project has one ambient, and each run asks
+    // again. The ratings are those RatedTemperatureC gives; any other is worked out each time.
+    private double AmbientFactor(double ratedC, double ambientC)
+    {
+        var factors = _ambientFactors;
+        if (factors is null || BitConverter.DoubleToInt64Bits(factors.AmbientC) != BitConverter.DoubleToInt64Bits(ambientC))
+        {
+            factors = new AmbientFactors(
+                ambientC,
+                Ampacity.AmbientFactor(60.0, ambientC),
+                Ampacity.AmbientFactor(70.0, ambientC),
+                Ampacity.AmbientFactor(75.0, ambientC),
+                Ampacity.AmbientFactor(90.0, ambientC));
+            _ambientFactors = factors;
+        }
+
+        return ratedC switch
+        {
+            60.0 => factors.At60C,
+            70.0 => factors.At70C,
+            75.0 => factors.At75C,
+            90.0 => factors.At90C,
+            _ => Ampacity.AmbientFactor(ratedC, ambientC),
+        };
     }
 
     internal static double ToOhmPerKm(double value, bool perKft) =>
@@ -235,6 +290,12 @@ public sealed class ConductorCatalog
 
         return points[^1].Value;
     }
+
+    // A worked-out AC resistance and its inputs (doubles as their bits).
+    private sealed record AcResistance(int SizeIndex, Material Material, Raceway Raceway, long TemperatureBits, long FrequencyBits, double OhmPerKm);
+
+    // Ampacity.AmbientFactor at one ambient for each rating a column may have.
+    private sealed record AmbientFactors(double AmbientC, double At60C, double At70C, double At75C, double At90C);
 
     internal sealed record RawRow(
         bool PerKft, double? XPvc, double? XSteel, double? RpvcCu, double? RsteelCu, double? RpvcAl, double? RsteelAl,

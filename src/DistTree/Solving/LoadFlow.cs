@@ -35,82 +35,113 @@ public static class LoadFlow
     {
         var nodes = network.NodeArray;
         var n = nodes.Length;
-        // Scratch arrays (see Scratch): only the first n elements are used.
+        var parents = network.ParentIndices;
+
+        // Scratch arrays (see Scratch): only the first n elements are used. Every sweep reads link, current, zPu
+        // and bus of every node; the other arrays only at the few nodes that are not end points.
+        var link = Scratch.Rent<Link>(n);
         var zPu = Scratch.Rent<Complex>(n);
-        var zTransformer = Scratch.Rent<Complex>(n);
-        var ratio = Scratch.Rent<double>(n);
-        var model = Scratch.Rent<LoadModel>(n);
-        var demand = Scratch.Rent<double>(n);
         var s0 = Scratch.Rent<Complex>(n);
-        var parent = network.ParentIndices;
-        var isLoad = Scratch.Rent<bool>(n);
-        var isTransformer = Scratch.Rent<bool>(n);
+        var demand = Scratch.Rent<double>(n);
+        var ratio = Scratch.Rent<double>(n);
+        var zTransformer = Scratch.Rent<Complex>(n);
+        var supply = Scratch.Rent<CircuitSupply>(n);
+
+        // First what the objects of the tree hold, in a loop of reads only: the processor then has the reads of
+        // many nodes under way at once (objects of a large tree are rarely in cache). The arithmetic follows.
         for (var i = 0; i < n; i++)
         {
             var node = nodes[i];
-            isLoad[i] = node.Circuit is not null;
-            isTransformer[i] = node.Kind == NodeKind.Transformer;
-            ratio[i] = 1.0;
-            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
-            if (node.Incoming is { } run)
+            var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
+            if (node.Circuit is { } circuit)
             {
-                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
-                var loop = run.Supply.Phases == 3 ? 1.0 : 2.0;
-                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (run.Supply.VoltageV * run.Supply.VoltageV);
+                // An end point is never a transformer (it has a circuit, not equipment).
+                role = circuit.Load.Model switch
+                {
+                    LoadModel.ConstantCurrent => Role.ConstantCurrent,
+                    LoadModel.ConstantImpedance => Role.ConstantImpedance,
+                    _ => Role.ConstantPower,
+                };
             }
 
+            var run = node.Incoming;
+            supply[i] = run?.Supply ?? default;
+            link[i] = new Link(parents[i], role, run is not null);
+            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+            ratio[i] = 1.0;
             if (node.Equipment?.Transformer is { } t)
             {
                 var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
                 zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
                 ratio[i] = 1.0 + (t.TapPercent / 100.0);
             }
+        }
 
-            if (node.Circuit is { } circuit)
+        for (var i = 0; i < n; i++)
+        {
+            if (link[i].HasRun)
             {
-                model[i] = circuit.Load.Model;
+                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
+                var loop = supply[i].Phases == 3 ? 1.0 : 2.0;
+                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (supply[i].VoltageV * supply[i].VoltageV);
+            }
+
+            if (link[i].Role >= Role.ConstantPower)
+            {
                 s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
             }
         }
 
-        var input = Scratch.Rent<Complex>(n);
+        // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
+        // impedance), elsewhere the input is the bus.
         var bus = Scratch.Rent<Complex>(n);
-        input.AsSpan(0, n).Fill(Complex.One);
-        bus.AsSpan(0, n).Fill(Complex.One);
+        var transformerInput = Scratch.Rent<Complex>(n);
+        for (var i = 0; i < n; i++)
+        {
+            bus[i] = Complex.One;
+            transformerInput[i] = Complex.One;
+        }
+
         var current = Scratch.Rent<Complex>(n);
         var busCurrent = Scratch.Rent<Complex>(n);
 
         // The result, with the scratch arrays given back.
         LoadFlowResult Result(bool converged, int iterations)
         {
-            var result = new LoadFlowResult(converged, iterations, Magnitudes(input, n), Magnitudes(bus, n));
-            foreach (var array in new[] { zPu, zTransformer, s0, input, bus, current, busCurrent })
+            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
+            for (var i = 0; i < n; i++)
+            {
+                result.BusPu[i] = bus[i].Magnitude;
+                result.InputPu[i] = link[i].Role == Role.Transformer ? transformerInput[i].Magnitude : result.BusPu[i];
+            }
+
+            foreach (var array in new[] { zPu, s0, zTransformer, bus, transformerInput, current, busCurrent })
             {
                 Scratch.Return(array, n);
             }
 
-            Scratch.Return(ratio, n);
+            Scratch.Return(link, n);
             Scratch.Return(demand, n);
-            Scratch.Return(model, n);
-            Scratch.Return(isLoad, n);
-            Scratch.Return(isTransformer, n);
+            Scratch.Return(ratio, n);
+            Scratch.Return(supply, n);
             return result;
         }
 
         for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
-            // Backward sweep: currents from the end points up.
-            busCurrent.AsSpan(0, n).Clear();
+            // Backward sweep: currents from the end points up. A node's bus current is complete when the sweep
+            // reaches it (its children come after it); it is cleared there for the next sweep.
             for (var i = n - 1; i > 0; i--)
             {
+                var (parent, role, _) = link[i];
                 Complex drawn;
-                if (isLoad[i])
+                if (role >= Role.ConstantPower)
                 {
-                    var v = input[i];
-                    var s = model[i] switch
+                    var v = bus[i];
+                    var s = role switch
                     {
-                        LoadModel.ConstantCurrent => s0[i] * v.Magnitude,
-                        LoadModel.ConstantImpedance => s0[i] * v.Magnitude * v.Magnitude,
+                        Role.ConstantCurrent => s0[i] * v.Magnitude,
+                        Role.ConstantImpedance => s0[i] * v.Magnitude * v.Magnitude,
                         _ => s0[i],
                     };
                     drawn = Complex.Conjugate(s / v);
@@ -118,28 +149,45 @@ public static class LoadFlow
                 else
                 {
                     drawn = busCurrent[i] * demand[i] * ratio[i];
+                    busCurrent[i] = Complex.Zero;
                 }
 
                 current[i] = drawn;
-                busCurrent[parent[i]] += drawn;
+                busCurrent[parent] += drawn;
             }
+
+            busCurrent[0] = Complex.Zero;
 
             // Forward sweep: voltages from the service down. The largest change is compared by its square.
             var movedSquared = 0.0;
             var finite = true;
             for (var i = 1; i < n; i++)
             {
-                var after = bus[parent[i]] - (current[i] * zPu[i]);
-                var onBus = isTransformer[i] ? ratio[i] * (after - (current[i] * zTransformer[i])) : after;
-                var changeIn = after - input[i];
-                var changeBus = onBus - bus[i];
-                var squared = Math.Max(
-                    (changeIn.Real * changeIn.Real) + (changeIn.Imaginary * changeIn.Imaginary),
-                    (changeBus.Real * changeBus.Real) + (changeBus.Imaginary * changeBus.Imaginary));
+                var (parent, role, _) = link[i];
+                var after = bus[parent] - (current[i] * zPu[i]);
+                double squared;
+                if (role == Role.Transformer)
+                {
+                    var onBus = ratio[i] * (after - (current[i] * zTransformer[i]));
+                    var changeIn = after - transformerInput[i];
+                    var changeBus = onBus - bus[i];
+                    squared = Math.Max(
+                        (changeIn.Real * changeIn.Real) + (changeIn.Imaginary * changeIn.Imaginary),
+                        (changeBus.Real * changeBus.Real) + (changeBus.Imaginary * changeBus.Imaginary));
+                    finite &= double.IsFinite(after.Real) && double.IsFinite(after.Imaginary) && double.IsFinite(onBus.Real) && double.IsFinite(onBus.Imaginary);
+                    transformerInput[i] = after;
+                    bus[i] = onBus;
+                }
+                else
+                {
+                    // The bus is the input: one change, both of the same size.
+                    var change = after - bus[i];
+                    squared = (change.Real * change.Real) + (change.Imaginary * change.Imaginary);
+                    finite &= double.IsFinite(after.Real) && double.IsFinite(after.Imaginary);
+                    bus[i] = after;
+                }
+
                 movedSquared = squared > movedSquared ? squared : movedSquared;
-                finite &= double.IsFinite(after.Real) && double.IsFinite(after.Imaginary) && double.IsFinite(onBus.Real) && double.IsFinite(onBus.Imaginary);
-                input[i] = after;
-                bus[i] = onBus;
             }
 
             // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
@@ -158,14 +206,16 @@ public static class LoadFlow
         return Result(false, MaxIterations);
     }
 
-    private static double[] Magnitudes(Complex[] values, int n)
+    // What a node is to the sweeps: an end point by its load model, a transformer, or any other node.
+    private enum Role : byte
     {
-        var magnitudes = new double[n];
-        for (var i = 0; i < n; i++)
-        {
-            magnitudes[i] = values[i].Magnitude;
-        }
-
-        return magnitudes;
+        Junction,
+        Transformer,
+        ConstantPower,
+        ConstantCurrent,
+        ConstantImpedance,
     }
+
+    // A node's parent and role, read together by both sweeps, and whether a run comes into it.
+    private readonly record struct Link(int Parent, Role Role, bool HasRun);
 }

@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using DistTree.Model;
 using DistTree.Network;
 
@@ -32,10 +33,25 @@ internal sealed class PhaseFlow
     private static readonly Complex[] PairConjugate = new Complex[32];
     private static readonly double[] PairMagnitude = new double[32];
 
+    // Per (lines × 3 + line): conj(Unit(line, lines)).
+    private static readonly Complex[] UnitConjugate = new Complex[12];
+
     private readonly DistributionNetwork _network;
+
+    // The voltages of the system last asked for (see VoltagesOf): runs of one panel share its system.
+    private ElectricalSystem? _lastSystem;
+    private SystemVoltages _lastVoltages;
 
     static PhaseFlow()
     {
+        for (var lines = 1; lines <= 3; lines++)
+        {
+            for (var line = 0; line < lines; line++)
+            {
+                UnitConjugate[(lines * 3) + line] = Complex.Conjugate(Unit(line, lines));
+            }
+        }
+
         for (var lines = 2; lines <= 3; lines++)
         {
             for (var on = 0; on < 8; on++)
@@ -77,12 +93,13 @@ internal sealed class PhaseFlow
     /// </summary>
     public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
+        var voltages = VoltagesOf(system);
         var i = Currents.AsSpan(node * 3, 3);
-        var neutral = system.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
         var resistive = new Complex(km, 0);
         var reactive = new Complex(0, km);
-        Span<Complex> deltaR = stackalloc Complex[3];
-        Span<Complex> deltaX = stackalloc Complex[3];
+        var deltaR = default(PerLine<Complex>);
+        var deltaX = default(PerLine<Complex>);
         for (var x = 0; x < 3; x++)
         {
             var flowing = i[x] + neutral;
@@ -90,12 +107,8 @@ internal sealed class PhaseFlow
             deltaX[x] = flowing * reactive * scale;
         }
 
-        var lines = PhaseRules.Lines(system);
-        var single = SetV(1, system);
-        var pair = SetV(2, system);
-        var perLine = LineToNeutralV(system);
-        LineDropsOn(deltaR, lines, single, pair, perLine, unitR);
-        LineDropsOn(deltaX, lines, single, pair, perLine, unitX);
+        LineDropsOn(deltaR, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitR);
+        LineDropsOn(deltaX, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitX);
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
@@ -119,7 +132,7 @@ internal sealed class PhaseFlow
     public double MaxLineCurrentA(int node)
     {
         var i = Currents.AsSpan(node * 3, 3);
-        return Math.Max(i[0].Magnitude, Math.Max(i[1].Magnitude, i[2].Magnitude));
+        return Math.Max(Magnitude(i[0]), Math.Max(Magnitude(i[1]), Magnitude(i[2])));
     }
 
     /// <summary>The line current magnitudes of the run into <paramref name="node"/> on a system of <paramref name="lines"/> lines, amperes.</summary>
@@ -128,7 +141,7 @@ internal sealed class PhaseFlow
         var result = new double[lines];
         for (var x = 0; x < lines; x++)
         {
-            result[x] = Currents[(node * 3) + x].Magnitude;
+            result[x] = Magnitude(Currents[(node * 3) + x]);
         }
 
         return result;
@@ -154,26 +167,29 @@ internal sealed class PhaseFlow
     private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
     {
         // The part of each line's ΔV in phase with the line's voltage.
-        Span<double> inPhase = stackalloc double[3];
+        var inPhase = default(PerLine<double>);
         for (var x = 0; x < lines; x++)
         {
-            inPhase[x] = (deltaV[x] * Complex.Conjugate(Unit(x, lines))).Real;
+            inPhase[x] = (deltaV[x] * UnitConjugate[(lines * 3) + x]).Real;
         }
 
-        for (var set = 1; set < 8; set++)
+        // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
+        // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
+        var mask = (1 << lines) - 1;
+        var byLines = default(PerSet);
+        for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
         {
-            var on = set & ((1 << lines) - 1);
             switch (BitOperations.PopCount((uint)on))
             {
                 case 0:
-                    into[set] = inPhase[0] / perLine * 100.0;
+                    byLines[on] = inPhase[0] / perLine * 100.0;
                     break;
                 case 1:
-                    into[set] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
+                    byLines[on] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
                     break;
                 case 2:
                     var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    into[set] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
+                    byLines[on] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
                     break;
                 default:
                     var worst = double.NegativeInfinity;
@@ -182,9 +198,14 @@ internal sealed class PhaseFlow
                         worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
                     }
 
-                    into[set] = worst;
+                    byLines[on] = worst;
                     break;
             }
+        }
+
+        for (var set = 1; set < 8; set++)
+        {
+            into[set] = byLines[set & mask];
         }
     }
 
@@ -201,6 +222,24 @@ internal sealed class PhaseFlow
             into[x] = x < lines ? (((percentR * s.Real) + (percentX * s.Imaginary)) / perLine) - data.TapPercent : double.NegativeInfinity;
         }
     }
+
+    // |c|, without the call for no current (a line a circuit does not take): the magnitude of zero is zero.
+    private static double Magnitude(Complex c) => c.Real == 0 && c.Imaginary == 0 ? 0.0 : c.Magnitude;
+
+    // The voltages of SetV and LineToNeutralV on the system, kept for the system last asked for.
+    private SystemVoltages VoltagesOf(ElectricalSystem system)
+    {
+        if (!ReferenceEquals(system, _lastSystem))
+        {
+            _lastVoltages = Voltages(system);
+            _lastSystem = system;
+        }
+
+        return _lastVoltages;
+    }
+
+    private static SystemVoltages Voltages(ElectricalSystem system) =>
+        new(PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), system.HasNeutral);
 
     /// <summary>The unit phasor of line <paramref name="line"/>'s voltage to neutral on a system of <paramref name="lines"/> lines.</summary>
     public static Complex Unit(int line, int lines) => lines == 3 ? ThreeLines[line] : (lines == 2 ? TwoLines[line] : Complex.One);
@@ -223,13 +262,22 @@ internal sealed class PhaseFlow
     };
 
     /// <summary>The line currents of a circuit's load on its lines, at the circuit's nominal voltage.</summary>
-    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Span<Complex> into)
+    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Span<Complex> into) =>
+        LoadCurrents(s, phases, Voltages(system), into);
+
+    // LoadCurrents on a system of the given lines and voltages.
+    private static void LoadCurrents(ComplexPower s, Phases phases, SystemVoltages system, Span<Complex> into)
     {
-        var lines = PhaseRules.Lines(system);
+        var lines = system.Lines;
         var power = new Complex(s.Watts, s.Vars);
         var on = (int)phases & ((1 << lines) - 1);
         var count = BitOperations.PopCount((uint)on);
-        var v = SetV(count, system);
+        var v = count switch
+        {
+            1 => system.SingleV,
+            2 => system.PairV,
+            _ => system.PerLineV,
+        };
         if (count == 1)
         {
             var x = BitOperations.TrailingZeroCount(on);
@@ -239,7 +287,7 @@ internal sealed class PhaseFlow
         {
             var (x, y) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
             var u = Unit(x, lines) - Unit(y, lines);
-            var i = Complex.Conjugate(power / (v * u / u.Magnitude));
+            var i = Complex.Conjugate(power / (v * u / PairMagnitude[(lines * 8) + on]));
             into[x] += i;
             into[y] -= i;
         }
@@ -261,10 +309,17 @@ internal sealed class PhaseFlow
     {
         var nodes = _network.NodeArray;
         Span<double> load = stackalloc double[3];
-        var automatic = new List<int>();
+        var automatic = new List<Automatic>();
+        var largestFirst = Comparer<Automatic>.Create((a, b) =>
+        {
+            var order = b.VoltAmperes.CompareTo(a.VoltAmperes);
+            return order != 0 ? order : string.CompareOrdinal(nodes[a.Child].Id, nodes[b.Child].Id);
+        });
         foreach (var panel in nodes)
         {
-            if (panel.Circuit is not null || panel.Children.Count == 0)
+            // The list itself, not the read-only view: no enumerator is made per panel.
+            var children = panel.MutableChildren;
+            if (panel.Circuit is not null || children.Count == 0)
             {
                 continue;
             }
@@ -272,7 +327,7 @@ internal sealed class PhaseFlow
             var lines = PhaseRules.Lines(panel.System);
             load.Clear();
             automatic.Clear();
-            foreach (var child in panel.Children)
+            foreach (var child in children)
             {
                 if (nodes[child].Circuit is not { } circuit)
                 {
@@ -286,17 +341,13 @@ internal sealed class PhaseFlow
                 }
                 else
                 {
-                    automatic.Add(child);
+                    automatic.Add(new Automatic(child, power[child].VoltAmperes));
                 }
             }
 
             // Largest first; ids are unique in a panel, so the order is total.
-            automatic.Sort((a, b) =>
-            {
-                var order = power[b].VoltAmperes.CompareTo(power[a].VoltAmperes);
-                return order != 0 ? order : string.CompareOrdinal(nodes[a].Id, nodes[b].Id);
-            });
-            foreach (var child in automatic)
+            automatic.Sort(largestFirst);
+            foreach (var (child, voltAmperes) in automatic)
             {
                 var poles = Math.Min(nodes[child].Circuit!.Poles, lines);
                 var best = Phases.None;
@@ -320,7 +371,7 @@ internal sealed class PhaseFlow
                 }
 
                 Assigned[child] = best;
-                AddLoad(load, best, lines, power[child].VoltAmperes);
+                AddLoad(load, best, lines, voltAmperes);
             }
         }
     }
@@ -338,6 +389,27 @@ internal sealed class PhaseFlow
             }
         }
     }
+
+    // A system's lines, the voltages a circuit on one line, on two lines and per line of a balanced set is
+    // rated at (SetV(1), SetV(2), LineToNeutralV), and whether it has a neutral.
+    private readonly record struct SystemVoltages(int Lines, double SingleV, double PairV, double PerLineV, bool HasNeutral);
+
+    // A value per line, held in place (no stack allocation: UnitDrops runs once per run of a large tree).
+    [InlineArray(3)]
+    private struct PerLine<T>
+    {
+        private T _line;
+    }
+
+    // A value per set of lines, by (int)Phases.
+    [InlineArray(8)]
+    private struct PerSet
+    {
+        private double _set;
+    }
+
+    // A circuit without stated phases, and its apparent power (VA), worked out once for the sort.
+    private readonly record struct Automatic(int Child, double VoltAmperes);
 
     private static Phases[] Candidates(int poles, int lines) => (poles, lines) switch
     {
@@ -359,7 +431,7 @@ internal sealed class PhaseFlow
             var mine = Currents.AsSpan(i * 3, 3);
             if (node.Circuit is not null)
             {
-                LoadCurrents(power[i], Assigned[i], nodes[node.ParentIndex].System, mine);
+                LoadCurrents(power[i], Assigned[i], VoltagesOf(nodes[node.ParentIndex].System), mine);
             }
             else
             {
