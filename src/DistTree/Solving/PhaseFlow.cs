@@ -38,9 +38,10 @@ internal sealed class PhaseFlow
 
     private readonly DistributionNetwork _network;
 
-    // The voltages of the system last asked for (see VoltagesOf): runs of one panel share its system.
-    private ElectricalSystem? _lastSystem;
-    private SystemVoltages _lastVoltages;
+    // The voltages of the system this thread last asked for (see VoltagesOf): runs of one panel share its system,
+    // and the solver asks from several threads at once. A system's voltages follow from the system alone.
+    [ThreadStatic]
+    private static KnownVoltages? t_last;
 
     static PhaseFlow()
     {
@@ -227,15 +228,16 @@ internal sealed class PhaseFlow
     private static double Magnitude(Complex c) => c.Real == 0 && c.Imaginary == 0 ? 0.0 : c.Magnitude;
 
     // The voltages of SetV and LineToNeutralV on the system, kept for the system last asked for.
-    private SystemVoltages VoltagesOf(ElectricalSystem system)
+    private static SystemVoltages VoltagesOf(ElectricalSystem system)
     {
-        if (!ReferenceEquals(system, _lastSystem))
+        var last = t_last;
+        if (last is null || !ReferenceEquals(system, last.System))
         {
-            _lastVoltages = Voltages(system);
-            _lastSystem = system;
+            last = new KnownVoltages(system, Voltages(system));
+            t_last = last;
         }
 
-        return _lastVoltages;
+        return last.Voltages;
     }
 
     private static SystemVoltages Voltages(ElectricalSystem system) =>
@@ -393,6 +395,9 @@ internal sealed class PhaseFlow
     // A system's lines, the voltages a circuit on one line, on two lines and per line of a balanced set is
     // rated at (SetV(1), SetV(2), LineToNeutralV), and whether it has a neutral.
     private readonly record struct SystemVoltages(int Lines, double SingleV, double PairV, double PerLineV, bool HasNeutral);
+
+    // A system and its voltages, kept together so that one reference holds both.
+    private sealed record KnownVoltages(ElectricalSystem System, SystemVoltages Voltages);
 
     // A value per line, held in place (no stack allocation: UnitDrops runs once per run of a large tree).
     [InlineArray(3)]
