@@ -37,7 +37,7 @@ public sealed class DropSolver
         // the phase currents, the rows and the unit drops are the solution's own (see SolvedRows).
         var power = new ComplexPower[n];
         var continuous = Scratch.Rent<ComplexPower>(n);
-        AccumulatePower(nodes, power, continuous);
+        AccumulatePower(nodes, network.ParentIndices, power, continuous);
         var phases = new PhaseFlow(network, power, new Complex[n * 3], new Phases[n]);
 
         // Rows in network order, each transformer's row after its primary feeder's, filled in stage by stage.
@@ -79,41 +79,33 @@ public sealed class DropSolver
         var flow = LoadFlow.Solve(network, power, z);
         Scratch.Return(z, n);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
+        var findings = 0;
         ParallelRanges.For(count, (start, end) =>
         {
+            var found = 0;
             foreach (ref var row in rows.AsSpan(start, end - start))
             {
                 if (row.Run is not null)
                 {
                     row.Findings = RunFindings(ref row);
                 }
+
+                found += row.Findings.Count;
             }
+
+            Interlocked.Add(ref findings, found);
         });
 
         var solved = new SolvedRows(network, phases, power, rows);
-        SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
+        var (worstPoint, pointFindings) = SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
         AddReach(network, rows, incomingRow, solved.EndPoints, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
 
-        var findings = 0;
-        foreach (ref readonly var row in rows.AsSpan())
-        {
-            findings += row.Findings.Count;
-        }
-
         var endPoints = new EndPointResultList(solved);
-        EndPointResult? worst = null;
-        foreach (var e in endPoints)
-        {
-            findings += e.Findings.Count;
-            if (worst is not { } w || Solution.WorstFirst(e, w) < 0)
-            {
-                worst = e;
-            }
-        }
+        EndPointResult? worst = worstPoint < 0 ? null : endPoints[worstPoint];
 
         var panels = new List<PanelResult>();
         foreach (var node in nodes)
@@ -130,7 +122,7 @@ public sealed class DropSolver
             Network = network,
             Runs = new RunResultList(solved),
             EndPoints = endPoints,
-            Summary = new SolutionSummary(endPoints.Count, count, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
+            Summary = new SolutionSummary(endPoints.Count, count, findings + pointFindings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
             Panels = panels.ToArray(),
             CatalogName = _catalog.SourceName,
@@ -138,15 +130,20 @@ public sealed class DropSolver
     }
 
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
-    private static void AccumulatePower(NetworkNode[] nodes, ComplexPower[] power, ComplexPower[] continuous)
+    private static void AccumulatePower(NetworkNode[] nodes, int[] parents, ComplexPower[] power, ComplexPower[] continuous)
     {
-        // The end points' loads first, each on its own, on every core. Each range runs from its last index down, so
-        // that on one thread the bad load met first is the same one the plain bottom-up loop met first.
-        ParallelRanges.For(nodes.Length, (start, end) =>
+        // The end points' loads and the other nodes' demand factors first, each node on its own, on every core.
+        // Each range runs from its last index down, so that on one thread the bad load met first is the same one
+        // the plain bottom-up loop met first.
+        var n = nodes.Length;
+        var demand = Scratch.Rent<double>(n);
+        ParallelRanges.For(n, (start, end) =>
         {
             for (var i = end - 1; i >= start; i--)
             {
-                if (nodes[i].Circuit is { } circuit)
+                var node = nodes[i];
+                demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+                if (node.Circuit is { } circuit)
                 {
                     try
                     {
@@ -162,22 +159,19 @@ public sealed class DropSolver
             }
         });
 
-        for (var i = nodes.Length - 1; i >= 0; i--)
+        // Then the sums, in flat arrays. An end point's factor is 1, and a product by 1 is exact: its load stays as it is.
+        for (var i = n - 1; i >= 0; i--)
         {
-            var node = nodes[i];
-            if (node.Circuit is null)
+            power[i] *= demand[i];
+            continuous[i] *= demand[i];
+            if (parents[i] >= 0)
             {
-                var factor = node.Equipment?.DemandFactor ?? 1.0;
-                power[i] *= factor;
-                continuous[i] *= factor;
-            }
-
-            if (node.ParentIndex >= 0)
-            {
-                power[node.ParentIndex] += power[i];
-                continuous[node.ParentIndex] += continuous[i];
+                power[parents[i]] += power[i];
+                continuous[parents[i]] += continuous[i];
             }
         }
+
+        Scratch.Return(demand, n);
     }
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
@@ -465,8 +459,9 @@ public sealed class DropSolver
     }
 
     // Every end point's total: walking up from it, the counted rows' drops on its own lines. Fills the end point
-    // rows and their counted runs and shares into solved.
-    private static void SolveEndPoints(SolvedRows solved, double[] lineDrops, int[] incomingRow, int[] transformerRow, LoadFlowResult flow)
+    // rows and their counted runs and shares into solved; returns the worst end point (-1 without any) and the
+    // number of end-point findings.
+    private static (int Worst, int Findings) SolveEndPoints(SolvedRows solved, double[] lineDrops, int[] incomingRow, int[] transformerRow, LoadFlowResult flow)
     {
         var network = solved.Network;
         var rows = solved.Runs;
@@ -479,46 +474,69 @@ public sealed class DropSolver
 
         // Top-down: the depth of every node (the service is 1), and how many rows a walk up from below a node
         // counts from it to the service: its transformer's and its incoming run's, unless the transformer is a
-        // new origin, where the counting stops.
+        // new origin, where the counting stops. An end point's counted rows are its own run's and those above its
+        // panel; they take the next places in the path arrays.
         var depth = Scratch.Rent<int>(n);
         var counted = Scratch.Rent<int>(n);
+        var endPointNode = Scratch.Rent<int>(n);
+        var pathStart = Scratch.Rent<int>(n + 1);
         var endPointCount = 0;
+        var used = 0;
         for (var i = 0; i < n; i++)
         {
             var above = i == 0 ? 0 : counted[parents[i]];
             depth[i] = i == 0 ? 1 : depth[parents[i]] + 1;
             counted[i] = newOrigin && transformerRow[i] >= 0 ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
-            endPointCount += nodes[i].Circuit is null ? 0 : 1;
-        }
-
-        // Each end point's place in the path arrays: its counted rows, its own run's and those above its panel.
-        var endPoints = new EndPointRow[endPointCount];
-        var used = 0;
-        for (int i = 0, e = 0; i < n; i++)
-        {
             if (nodes[i].Circuit is not null)
             {
-                var count = (incomingRow[i] >= 0 ? 1 : 0) + counted[parents[i]];
-                endPoints[e++] = new EndPointRow { Node = i, PathStart = used, PathCount = count };
-                used += count;
+                endPointNode[endPointCount] = i;
+                pathStart[endPointCount++] = used;
+                used += (incomingRow[i] >= 0 ? 1 : 0) + above;
             }
         }
 
+        pathStart[endPointCount] = used;
+        var endPoints = new EndPointRow[endPointCount];
         var pathRuns = new int[used];
         var pathShares = new double[used];
+        var worst = -1;
+        var findingCount = 0;
+        var gate = new object();
         ParallelRanges.For(endPointCount, (start, end) =>
         {
+            // The worst of the range and its findings, merged into the whole under the gate: the worst-first
+            // order is total (ties go by id), so the merge order does not matter.
+            var worstHere = -1;
+            var found = 0;
             for (var e = start; e < end; e++)
             {
-                SolveEndPoint(ref endPoints[e]);
+                ref var point = ref endPoints[e];
+                point.Node = endPointNode[e];
+                point.PathStart = pathStart[e];
+                point.PathCount = pathStart[e + 1] - pathStart[e];
+                SolveEndPoint(ref point);
+                found += point.Findings.Count;
+                worstHere = worstHere < 0 || WorseThan(e, worstHere) ? e : worstHere;
+            }
+
+            lock (gate)
+            {
+                findingCount += found;
+                worst = worstHere >= 0 && (worst < 0 || WorseThan(worstHere, worst)) ? worstHere : worst;
             }
         });
 
         Scratch.Return(depth, n);
         Scratch.Return(counted, n);
+        Scratch.Return(endPointNode, n);
+        Scratch.Return(pathStart, n + 1);
         solved.EndPoints = endPoints;
         solved.PathRuns = pathRuns;
         solved.PathShares = pathShares;
+        return (worst, findingCount);
+
+        bool WorseThan(int a, int b) =>
+            Solution.WorstFirst(endPoints[a].TotalDropPercent, nodes[endPoints[a].Node].Id, endPoints[b].TotalDropPercent, nodes[endPoints[b].Node].Id) < 0;
 
         void SolveEndPoint(ref EndPointRow point)
         {

@@ -49,9 +49,12 @@ public sealed record Solution
         EndPoints.Order(Comparer<EndPointResult>.Create(WorstFirst)).Take(count).ToArray();
 
     /// <summary>The order of end points, worst first: the larger total first (a total that is not a number last), then by id, ordinal.</summary>
-    internal static int WorstFirst(EndPointResult a, EndPointResult b)
+    internal static int WorstFirst(EndPointResult a, EndPointResult b) => WorstFirst(a.TotalDropPercent, a.Id, b.TotalDropPercent, b.Id);
+
+    /// <summary>The same order on an end point's total and id.</summary>
+    internal static int WorstFirst(double totalA, string idA, double totalB, string idB)
     {
-        var order = b.TotalDropPercent.CompareTo(a.TotalDropPercent);
-        return order != 0 ? order : string.CompareOrdinal(a.Id, b.Id);
+        var order = totalB.CompareTo(totalA);
+        return order != 0 ? order : string.CompareOrdinal(idA, idB);
     }
 }
