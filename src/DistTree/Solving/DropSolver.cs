@@ -107,14 +107,16 @@ public sealed class DropSolver
         var endPoints = new EndPointResultList(solved);
         EndPointResult? worst = worstPoint < 0 ? null : endPoints[worstPoint];
 
-        var panels = new List<PanelResult>();
-        foreach (var node in nodes)
+        // Each panel's phase loads on every core, kept in node order.
+        var panelAt = new PanelResult?[n];
+        ParallelRanges.For(n, (start, end) =>
         {
-            if (node.Equipment is { Circuits.Count: > 0 })
+            for (var i = start; i < end; i++)
             {
-                panels.Add(phases.Panel(node));
+                panelAt[i] = nodes[i].Equipment is { Circuits.Count: > 0 } ? phases.Panel(nodes[i]) : null;
             }
-        }
+        });
+        var panels = panelAt.OfType<PanelResult>().ToArray();
 
         return new Solution
         {
@@ -124,7 +126,7 @@ public sealed class DropSolver
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, count, findings + pointFindings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
-            Panels = panels.ToArray(),
+            Panels = panels,
             CatalogName = _catalog.SourceName,
         };
     }
@@ -312,18 +314,21 @@ public sealed class DropSolver
             }
         }
 
-        for (var i = 1; i < parents.Length; i++)
+        ParallelRanges.For(parents.Length, (start, end) =>
         {
-            if (incomingRow[i] >= 0)
+            for (var i = Math.Max(start, 1); i < end; i++)
             {
-                Record(ref rows[incomingRow[i]], (flow.BusPu[parents[i]] - flow.InputPu[i]) * 100.0);
-            }
+                if (incomingRow[i] >= 0)
+                {
+                    Record(ref rows[incomingRow[i]], (flow.BusPu[parents[i]] - flow.InputPu[i]) * 100.0);
+                }
 
-            if (transformerRow[i] >= 0)
-            {
-                Record(ref rows[transformerRow[i]], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
+                if (transformerRow[i] >= 0)
+                {
+                    Record(ref rows[transformerRow[i]], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
+                }
             }
-        }
+        });
     }
 
     private IReadOnlyList<Finding> RunFindings(ref RunRow r)
