@@ -104,7 +104,7 @@ public sealed class DropSolver
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
 
-        var endPoints = new EndPointResultList(solved);
+        var endPoints = new ViewList<EndPointResult>(solved.EndPoints.Length, e => new EndPointResult(solved, e));
         EndPointResult? worst = worstPoint < 0 ? null : endPoints[worstPoint];
 
         // Each panel's phase loads on every core, kept in node order.
@@ -122,7 +122,7 @@ public sealed class DropSolver
         {
             Project = project,
             Network = network,
-            Runs = new RunResultList(solved),
+            Runs = new ViewList<RunResult>(count, r => new RunResult(solved, r)),
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, count, findings + pointFindings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,

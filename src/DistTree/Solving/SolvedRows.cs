@@ -93,36 +93,18 @@ internal struct EndPointRow
     public IReadOnlyList<Finding> Findings;
 }
 
-/// <summary>The runs of a solution as a list of views.</summary>
-internal sealed class RunResultList(SolvedRows rows) : IReadOnlyList<RunResult>
+/// <summary>A solution's runs or end points as a list of views: the view of an index is made when it is read.</summary>
+internal sealed class ViewList<T>(int count, Func<int, T> view) : IReadOnlyList<T>
 {
-    public int Count => rows.Runs.Length;
+    public int Count => count;
 
-    public RunResult this[int index] => (uint)index < (uint)rows.Runs.Length ? new RunResult(rows, index) : throw new ArgumentOutOfRangeException(nameof(index));
+    public T this[int index] => (uint)index < (uint)count ? view(index) : throw new ArgumentOutOfRangeException(nameof(index));
 
-    public IEnumerator<RunResult> GetEnumerator()
+    public IEnumerator<T> GetEnumerator()
     {
-        for (var i = 0; i < rows.Runs.Length; i++)
+        for (var i = 0; i < count; i++)
         {
-            yield return new RunResult(rows, i);
-        }
-    }
-
-    IEnumerator IEnumerable.GetEnumerator() => GetEnumerator();
-}
-
-/// <summary>The end points of a solution as a list of views.</summary>
-internal sealed class EndPointResultList(SolvedRows rows) : IReadOnlyList<EndPointResult>
-{
-    public int Count => rows.EndPoints.Length;
-
-    public EndPointResult this[int index] => (uint)index < (uint)rows.EndPoints.Length ? new EndPointResult(rows, index) : throw new ArgumentOutOfRangeException(nameof(index));
-
-    public IEnumerator<EndPointResult> GetEnumerator()
-    {
-        for (var i = 0; i < rows.EndPoints.Length; i++)
-        {
-            yield return new EndPointResult(rows, i);
+            yield return view(i);
         }
     }
 
