@@ -36,105 +36,156 @@ public static class LoadFlow
         var nodes = network.NodeArray;
         var n = nodes.Length;
         var parents = network.ParentIndices;
+        var levels = network.Levels;
+        var sweeps = new Sweeps(n, levels.ChildStarts);
+        var (link, zPu, s0, demand, ratio, zTransformer) = (sweeps.Link, sweeps.ZPu, sweeps.S0, sweeps.Demand, sweeps.Ratio, sweeps.ZTransformer);
 
-        // Scratch arrays (see Scratch): only the first n elements are used. Every sweep reads link, current, zPu
-        // and bus of every node; the other arrays only at the few nodes that are not end points.
-        var link = Scratch.Rent<Link>(n);
-        var zPu = Scratch.Rent<Complex>(n);
-        var s0 = Scratch.Rent<Complex>(n);
-        var demand = Scratch.Rent<double>(n);
-        var ratio = Scratch.Rent<double>(n);
-        var zTransformer = Scratch.Rent<Complex>(n);
-        var supply = Scratch.Rent<CircuitSupply>(n);
-
-        // First what the objects of the tree hold, in a loop of reads only: the processor then has the reads of
-        // many nodes under way at once (objects of a large tree are rarely in cache). The arithmetic follows.
-        for (var i = 0; i < n; i++)
+        // What the objects of the tree hold, then the arithmetic on it, each node on its own: on every core.
+        ParallelRanges.For(n, (start, end) =>
         {
-            var node = nodes[i];
-            var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
-            if (node.Circuit is { } circuit)
+            // First a loop of reads only: the processor then has the reads of many nodes under way at once
+            // (objects of a large tree are rarely in cache). The arithmetic follows.
+            var supply = Scratch.Rent<CircuitSupply>(end - start);
+            for (var i = start; i < end; i++)
             {
-                // An end point is never a transformer (it has a circuit, not equipment).
-                role = circuit.Load.Model switch
+                var node = nodes[i];
+                var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
+                if (node.Circuit is { } circuit)
                 {
-                    LoadModel.ConstantCurrent => Role.ConstantCurrent,
-                    LoadModel.ConstantImpedance => Role.ConstantImpedance,
-                    _ => Role.ConstantPower,
-                };
+                    // An end point is never a transformer (it has a circuit, not equipment).
+                    role = circuit.Load.Model switch
+                    {
+                        LoadModel.ConstantCurrent => Role.ConstantCurrent,
+                        LoadModel.ConstantImpedance => Role.ConstantImpedance,
+                        _ => Role.ConstantPower,
+                    };
+                }
+
+                var run = node.Incoming;
+                supply[i - start] = run?.Supply ?? default;
+                link[i] = new Link(parents[i], role, run is not null);
+                demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+                ratio[i] = 1.0;
+                if (node.Equipment?.Transformer is { } t)
+                {
+                    var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
+                    zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
+                    ratio[i] = 1.0 + (t.TapPercent / 100.0);
+                }
             }
 
-            var run = node.Incoming;
-            supply[i] = run?.Supply ?? default;
-            link[i] = new Link(parents[i], role, run is not null);
-            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
-            ratio[i] = 1.0;
-            if (node.Equipment?.Transformer is { } t)
+            for (var i = start; i < end; i++)
             {
-                var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
-                zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
-                ratio[i] = 1.0 + (t.TapPercent / 100.0);
-            }
-        }
+                if (link[i].HasRun)
+                {
+                    // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
+                    var feed = supply[i - start];
+                    var loop = feed.Phases == 3 ? 1.0 : 2.0;
+                    zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (feed.VoltageV * feed.VoltageV);
+                }
 
-        for (var i = 0; i < n; i++)
+                if (link[i].Role >= Role.ConstantPower)
+                {
+                    s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
+                }
+            }
+
+            Scratch.Return(supply, end - start);
+        });
+
+        Action<int, int> backward = sweeps.Backward;
+        Action<int, int> forward = sweeps.Forward;
+        for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
-            if (link[i].HasRun)
+            // Backward sweep: currents from the end points up, the deepest level first.
+            ParallelRanges.BottomUp(levels.Steps, backward);
+
+            // Forward sweep: voltages from the service down.
+            sweeps.MovedSquared = 0.0;
+            sweeps.Finite = true;
+            ParallelRanges.TopDown(levels.Steps, forward);
+
+            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
+            var movedSquared = sweeps.MovedSquared;
+            var moved = !sweeps.Finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
+            if (moved < TolerancePu)
             {
-                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
-                var loop = supply[i].Phases == 3 ? 1.0 : 2.0;
-                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (supply[i].VoltageV * supply[i].VoltageV);
+                return sweeps.Result(true, iteration);
             }
 
-            if (link[i].Role >= Role.ConstantPower)
+            if (!double.IsFinite(moved))
             {
-                s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
+                return sweeps.Result(false, iteration);
             }
         }
+
+        return sweeps.Result(false, MaxIterations);
+    }
+
+    // The per-node arrays of the sweeps (scratch arrays, see Scratch: only the first n elements are used) and the
+    // sweeps over a range of nodes. Every sweep reads link, current, zPu and bus of every node; the other arrays
+    // only at the few nodes that are not end points. Each node writes its own elements only.
+    private sealed class Sweeps
+    {
+        private readonly int _n;
+        private readonly int[] _childStarts;
 
         // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
         // impedance), elsewhere the input is the bus.
-        var bus = Scratch.Rent<Complex>(n);
-        var transformerInput = Scratch.Rent<Complex>(n);
-        for (var i = 0; i < n; i++)
+        private readonly Complex[] _bus;
+        private readonly Complex[] _transformerInput;
+
+        // The current each node draws from its parent.
+        private readonly Complex[] _current;
+
+        // Guards MovedSquared and Finite, to which each range of a forward sweep adds its own.
+        private readonly Lock _gate = new();
+
+        public Sweeps(int n, int[] childStarts)
         {
-            bus[i] = Complex.One;
-            transformerInput[i] = Complex.One;
+            _n = n;
+            _childStarts = childStarts;
+            Link = Scratch.Rent<Link>(n);
+            ZPu = Scratch.Rent<Complex>(n);
+            S0 = Scratch.Rent<Complex>(n);
+            Demand = Scratch.Rent<double>(n);
+            Ratio = Scratch.Rent<double>(n);
+            ZTransformer = Scratch.Rent<Complex>(n);
+            _bus = Scratch.Rent<Complex>(n);
+            _transformerInput = Scratch.Rent<Complex>(n);
+            _current = Scratch.Rent<Complex>(n);
+            _bus.AsSpan(0, n).Fill(Complex.One);
+            _transformerInput.AsSpan(0, n).Fill(Complex.One);
         }
 
-        var current = Scratch.Rent<Complex>(n);
-        var busCurrent = Scratch.Rent<Complex>(n);
+        public Link[] Link { get; }
 
-        // The result, with the scratch arrays given back.
-        LoadFlowResult Result(bool converged, int iterations)
+        public Complex[] ZPu { get; }
+
+        public Complex[] S0 { get; }
+
+        public double[] Demand { get; }
+
+        public double[] Ratio { get; }
+
+        public Complex[] ZTransformer { get; }
+
+        /// <summary>The largest square of a voltage change in the last forward sweep.</summary>
+        public double MovedSquared { get; set; }
+
+        /// <summary>Whether every voltage of the last forward sweep was finite.</summary>
+        public bool Finite { get; set; }
+
+        // Each end point draws I = conj(S(V)/V); every other node the sum of its children's currents. A node pulls
+        // its children's (a level below, so already worked out), from the last child to the first: the order in
+        // which they were first added up, so that the sums are the same to the bit.
+        public void Backward(int start, int end)
         {
-            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
-            for (var i = 0; i < n; i++)
+            // The arrays in locals, read once: the loop then indexes them without going through this object.
+            var (link, current, bus, s0, childStarts) = (Link, _current, _bus, S0, _childStarts);
+            for (var i = end - 1; i >= start; i--)
             {
-                result.BusPu[i] = bus[i].Magnitude;
-                result.InputPu[i] = link[i].Role == Role.Transformer ? transformerInput[i].Magnitude : result.BusPu[i];
-            }
-
-            foreach (var array in new[] { zPu, s0, zTransformer, bus, transformerInput, current, busCurrent })
-            {
-                Scratch.Return(array, n);
-            }
-
-            Scratch.Return(link, n);
-            Scratch.Return(demand, n);
-            Scratch.Return(ratio, n);
-            Scratch.Return(supply, n);
-            return result;
-        }
-
-        for (var iteration = 1; iteration <= MaxIterations; iteration++)
-        {
-            // Backward sweep: currents from the end points up. A node's bus current is complete when the sweep
-            // reaches it (its children come after it); it is cleared there for the next sweep.
-            for (var i = n - 1; i > 0; i--)
-            {
-                var (parent, role, _) = link[i];
-                Complex drawn;
+                var role = link[i].Role;
                 if (role >= Role.ConstantPower)
                 {
                     var v = bus[i];
@@ -144,31 +195,37 @@ public static class LoadFlow
                         Role.ConstantImpedance => s0[i] * v.Magnitude * v.Magnitude,
                         _ => s0[i],
                     };
-                    drawn = Complex.Conjugate(s / v);
+                    current[i] = Complex.Conjugate(s / v);
                 }
                 else
                 {
-                    drawn = busCurrent[i] * demand[i] * ratio[i];
-                    busCurrent[i] = Complex.Zero;
+                    var busCurrent = Complex.Zero;
+                    for (var child = childStarts[i + 1] - 1; child >= childStarts[i]; child--)
+                    {
+                        busCurrent += current[child];
+                    }
+
+                    current[i] = busCurrent * Demand[i] * Ratio[i];
                 }
-
-                current[i] = drawn;
-                busCurrent[parent] += drawn;
             }
+        }
 
-            busCurrent[0] = Complex.Zero;
-
-            // Forward sweep: voltages from the service down. The largest change is compared by its square.
+        // V_child = V_parent − I·Z, the parent a level above (so already worked out). The largest change is
+        // compared by its square.
+        public void Forward(int start, int end)
+        {
+            // The arrays in locals, as in Backward.
+            var (link, current, bus, zPu, transformerInput) = (Link, _current, _bus, ZPu, _transformerInput);
             var movedSquared = 0.0;
             var finite = true;
-            for (var i = 1; i < n; i++)
+            for (var i = start; i < end; i++)
             {
                 var (parent, role, _) = link[i];
                 var after = bus[parent] - (current[i] * zPu[i]);
                 double squared;
                 if (role == Role.Transformer)
                 {
-                    var onBus = ratio[i] * (after - (current[i] * zTransformer[i]));
+                    var onBus = Ratio[i] * (after - (current[i] * ZTransformer[i]));
                     var changeIn = after - transformerInput[i];
                     var changeBus = onBus - bus[i];
                     squared = Math.Max(
@@ -190,20 +247,38 @@ public static class LoadFlow
                 movedSquared = squared > movedSquared ? squared : movedSquared;
             }
 
-            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
-            var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
-            if (moved < TolerancePu)
+            // A largest value and an AND: the same whichever range comes first.
+            lock (_gate)
             {
-                return Result(true, iteration);
-            }
-
-            if (!double.IsFinite(moved))
-            {
-                return Result(false, iteration);
+                MovedSquared = movedSquared > MovedSquared ? movedSquared : MovedSquared;
+                Finite &= finite;
             }
         }
 
-        return Result(false, MaxIterations);
+        // The result, with the scratch arrays given back.
+        public LoadFlowResult Result(bool converged, int iterations)
+        {
+            var n = _n;
+            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
+            ParallelRanges.For(n, (start, end) =>
+            {
+                for (var i = start; i < end; i++)
+                {
+                    result.BusPu[i] = _bus[i].Magnitude;
+                    result.InputPu[i] = Link[i].Role == Role.Transformer ? _transformerInput[i].Magnitude : result.BusPu[i];
+                }
+            });
+
+            foreach (var array in new[] { ZPu, S0, ZTransformer, _bus, _transformerInput, _current })
+            {
+                Scratch.Return(array, n);
+            }
+
+            Scratch.Return(Link, n);
+            Scratch.Return(Demand, n);
+            Scratch.Return(Ratio, n);
+            return result;
+        }
     }
 
     // What a node is to the sweeps: an end point by its load model, a transformer, or any other node.
