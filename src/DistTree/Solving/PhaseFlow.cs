@@ -321,19 +321,21 @@ internal sealed class PhaseFlow
             var order = b.VoltAmperes.CompareTo(a.VoltAmperes);
             return order != 0 ? order : string.CompareOrdinal(nodes[a.Child].Id, nodes[b.Child].Id);
         });
-        foreach (var panel in nodes.AsSpan(start, end - start))
+        var childStarts = _network.Levels.ChildStarts;
+        for (var p = start; p < end; p++)
         {
-            // The list itself, not the read-only view: no enumerator is made per panel.
-            var children = panel.MutableChildren;
-            if (panel.Circuit is not null || children.Count == 0)
+            // A node without children (most are end points) is passed over without reading its object.
+            var (firstChild, endChild) = (childStarts[p], childStarts[p + 1]);
+            if (firstChild == endChild)
             {
                 continue;
             }
 
+            var panel = nodes[p];
             var lines = PhaseRules.Lines(panel.System);
             load.Clear();
             automatic.Clear();
-            foreach (var child in children)
+            for (var child = firstChild; child < endChild; child++)
             {
                 if (nodes[child].Circuit is not { } circuit)
                 {
