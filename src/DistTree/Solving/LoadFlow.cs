@@ -38,11 +38,96 @@ public static class LoadFlow
         var parents = network.ParentIndices;
         var levels = network.Levels;
         var sweeps = new Sweeps(n, levels.ChildStarts);
-        var (link, zPu, s0, demand, ratio, zTransformer) = (sweeps.Link, sweeps.ZPu, sweeps.S0, sweeps.Demand, sweeps.Ratio, sweeps.ZTransformer);
 
         // What the objects of the tree hold, then the arithmetic on it, each node on its own: on every core.
-        ParallelRanges.For(n, (start, end) =>
+        ParallelRanges.For(n, (start, end) => sweeps.Prepare(nodes, parents, loads, runImpedanceOhm, start, end));
+
+        Action<int, int> backward = sweeps.Backward;
+        Action<int, int> forward = sweeps.Forward;
+        for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
+            // Backward sweep: currents from the end points up, the deepest level first.
+            ParallelRanges.BottomUp(levels.Steps, backward);
+
+            // Forward sweep: voltages from the service down.
+            sweeps.MovedSquared = 0.0;
+            sweeps.Finite = true;
+            ParallelRanges.TopDown(levels.Steps, forward);
+
+            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
+            var movedSquared = sweeps.MovedSquared;
+            var moved = !sweeps.Finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
+            if (moved < TolerancePu)
+            {
+                return sweeps.Result(true, iteration);
+            }
+
+            if (!double.IsFinite(moved))
+            {
+                return sweeps.Result(false, iteration);
+            }
+        }
+
+        return sweeps.Result(false, MaxIterations);
+    }
+
+    // The per-node arrays of the sweeps (scratch arrays, see Scratch: only the first n elements are used) and the
+    // sweeps over a range of nodes. Every sweep reads link, current, zPu and bus of every node; the other arrays
+    // only at the few nodes that are not end points. Each node writes its own elements only.
+    private sealed class Sweeps
+    {
+        private readonly int _n;
+        private readonly int[] _childStarts;
+
+        // Per node: its parent, role and run; its run's and its transformer's impedance, per unit; its load at
+        // nominal voltage, per unit; its demand factor and its transformer's ratio.
+        private readonly Link[] _link;
+        private readonly Complex[] _zPu;
+        private readonly Complex[] _zTransformer;
+        private readonly Complex[] _s0;
+        private readonly double[] _demand;
+        private readonly double[] _ratio;
+
+        // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
+        // impedance), elsewhere the input is the bus.
+        private readonly Complex[] _bus;
+        private readonly Complex[] _transformerInput;
+
+        // The current each node draws from its parent.
+        private readonly Complex[] _current;
+
+        // Guards MovedSquared and Finite, to which each range of a forward sweep adds its own.
+        private readonly Lock _gate = new();
+
+        public Sweeps(int n, int[] childStarts)
+        {
+            _n = n;
+            _childStarts = childStarts;
+            _link = Scratch.Rent<Link>(n);
+            _zPu = Scratch.Rent<Complex>(n);
+            _s0 = Scratch.Rent<Complex>(n);
+            _demand = Scratch.Rent<double>(n);
+            _ratio = Scratch.Rent<double>(n);
+            _zTransformer = Scratch.Rent<Complex>(n);
+            _bus = Scratch.Rent<Complex>(n);
+            _transformerInput = Scratch.Rent<Complex>(n);
+            _current = Scratch.Rent<Complex>(n);
+            _bus.AsSpan(0, n).Fill(Complex.One);
+            _transformerInput.AsSpan(0, n).Fill(Complex.One);
+        }
+
+        /// <summary>The largest square of a voltage change in the last forward sweep.</summary>
+        public double MovedSquared { get; set; }
+
+        /// <summary>Whether every voltage of the last forward sweep was finite.</summary>
+        public bool Finite { get; set; }
+
+        // Fills the arrays of nodes start … end − 1 from the tree, the loads and the runs' impedances.
+        public void Prepare(NetworkNode[] nodes, int[] parents, ComplexPower[] loads, Complex[] runImpedanceOhm, int start, int end)
+        {
+            // The arrays in locals, read once: the loops then index them without going through this object.
+            var (link, zPu, s0, demand, ratio, zTransformer) = (_link, _zPu, _s0, _demand, _ratio, _zTransformer);
+
             // First a loop of reads only: the processor then has the reads of many nodes under way at once
             // (objects of a large tree are rarely in cache). The arithmetic follows.
             var supply = Scratch.Rent<CircuitSupply>(end - start);
@@ -91,90 +176,7 @@ public static class LoadFlow
             }
 
             Scratch.Return(supply, end - start);
-        });
-
-        Action<int, int> backward = sweeps.Backward;
-        Action<int, int> forward = sweeps.Forward;
-        for (var iteration = 1; iteration <= MaxIterations; iteration++)
-        {
-            // Backward sweep: currents from the end points up, the deepest level first.
-            ParallelRanges.BottomUp(levels.Steps, backward);
-
-            // Forward sweep: voltages from the service down.
-            sweeps.MovedSquared = 0.0;
-            sweeps.Finite = true;
-            ParallelRanges.TopDown(levels.Steps, forward);
-
-            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
-            var movedSquared = sweeps.MovedSquared;
-            var moved = !sweeps.Finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
-            if (moved < TolerancePu)
-            {
-                return sweeps.Result(true, iteration);
-            }
-
-            if (!double.IsFinite(moved))
-            {
-                return sweeps.Result(false, iteration);
-            }
         }
-
-        return sweeps.Result(false, MaxIterations);
-    }
-
-    // The per-node arrays of the sweeps (scratch arrays, see Scratch: only the first n elements are used) and the
-    // sweeps over a range of nodes. Every sweep reads link, current, zPu and bus of every node; the other arrays
-    // only at the few nodes that are not end points. Each node writes its own elements only.
-    private sealed class Sweeps
-    {
-        private readonly int _n;
-        private readonly int[] _childStarts;
-
-        // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
-        // impedance), elsewhere the input is the bus.
-        private readonly Complex[] _bus;
-        private readonly Complex[] _transformerInput;
-
-        // The current each node draws from its parent.
-        private readonly Complex[] _current;
-
-        // Guards MovedSquared and Finite, to which each range of a forward sweep adds its own.
-        private readonly Lock _gate = new();
-
-        public Sweeps(int n, int[] childStarts)
-        {
-            _n = n;
-            _childStarts = childStarts;
-            Link = Scratch.Rent<Link>(n);
-            ZPu = Scratch.Rent<Complex>(n);
-            S0 = Scratch.Rent<Complex>(n);
-            Demand = Scratch.Rent<double>(n);
-            Ratio = Scratch.Rent<double>(n);
-            ZTransformer = Scratch.Rent<Complex>(n);
-            _bus = Scratch.Rent<Complex>(n);
-            _transformerInput = Scratch.Rent<Complex>(n);
-            _current = Scratch.Rent<Complex>(n);
-            _bus.AsSpan(0, n).Fill(Complex.One);
-            _transformerInput.AsSpan(0, n).Fill(Complex.One);
-        }
-
-        public Link[] Link { get; }
-
-        public Complex[] ZPu { get; }
-
-        public Complex[] S0 { get; }
-
-        public double[] Demand { get; }
-
-        public double[] Ratio { get; }
-
-        public Complex[] ZTransformer { get; }
-
-        /// <summary>The largest square of a voltage change in the last forward sweep.</summary>
-        public double MovedSquared { get; set; }
-
-        /// <summary>Whether every voltage of the last forward sweep was finite.</summary>
-        public bool Finite { get; set; }
 
         // Each end point draws I = conj(S(V)/V); every other node the sum of its children's currents. A node pulls
         // its children's (a level below, so already worked out), from the last child to the first: the order in
@@ -182,7 +184,7 @@ public static class LoadFlow
         public void Backward(int start, int end)
         {
             // The arrays in locals, read once: the loop then indexes them without going through this object.
-            var (link, current, bus, s0, childStarts) = (Link, _current, _bus, S0, _childStarts);
+            var (link, current, bus, s0, childStarts) = (_link, _current, _bus, _s0, _childStarts);
             for (var i = end - 1; i >= start; i--)
             {
                 var role = link[i].Role;
@@ -205,7 +207,7 @@ public static class LoadFlow
                         busCurrent += current[child];
                     }
 
-                    current[i] = busCurrent * Demand[i] * Ratio[i];
+                    current[i] = busCurrent * _demand[i] * _ratio[i];
                 }
             }
         }
@@ -215,7 +217,7 @@ public static class LoadFlow
         public void Forward(int start, int end)
         {
             // The arrays in locals, as in Backward.
-            var (link, current, bus, zPu, transformerInput) = (Link, _current, _bus, ZPu, _transformerInput);
+            var (link, current, bus, zPu, transformerInput) = (_link, _current, _bus, _zPu, _transformerInput);
             var movedSquared = 0.0;
             var finite = true;
             for (var i = start; i < end; i++)
@@ -225,7 +227,7 @@ public static class LoadFlow
                 double squared;
                 if (role == Role.Transformer)
                 {
-                    var onBus = Ratio[i] * (after - (current[i] * ZTransformer[i]));
+                    var onBus = _ratio[i] * (after - (current[i] * _zTransformer[i]));
                     var changeIn = after - transformerInput[i];
                     var changeBus = onBus - bus[i];
                     squared = Math.Max(
@@ -265,18 +267,18 @@ public static class LoadFlow
                 for (var i = start; i < end; i++)
                 {
                     result.BusPu[i] = _bus[i].Magnitude;
-                    result.InputPu[i] = Link[i].Role == Role.Transformer ? _transformerInput[i].Magnitude : result.BusPu[i];
+                    result.InputPu[i] = _link[i].Role == Role.Transformer ? _transformerInput[i].Magnitude : result.BusPu[i];
                 }
             });
 
-            foreach (var array in new[] { ZPu, S0, ZTransformer, _bus, _transformerInput, _current })
+            foreach (var array in new[] { _zPu, _s0, _zTransformer, _bus, _transformerInput, _current })
             {
                 Scratch.Return(array, n);
             }
 
-            Scratch.Return(Link, n);
-            Scratch.Return(Demand, n);
-            Scratch.Return(Ratio, n);
+            Scratch.Return(_link, n);
+            Scratch.Return(_demand, n);
+            Scratch.Return(_ratio, n);
             return result;
         }
     }
