@@ -441,8 +441,7 @@ internal sealed class PhaseFlow
         AddChildren(0, Currents.AsSpan(0, 3));
     }
 
-    // Accumulate for the nodes end − 1 down to start. A node's currents are overwritten, not added to, so that a
-    // range run again (see ParallelRanges.For) gives the same.
+    // Accumulate for the nodes end − 1 down to start, into the zeros the constructor was given.
     private void Accumulate(ComplexPower[] power, int start, int end)
     {
         var nodes = _network.NodeArray;
@@ -451,7 +450,6 @@ internal sealed class PhaseFlow
         {
             var node = nodes[i];
             var mine = Currents.AsSpan(i * 3, 3);
-            mine.Clear();
             if (node.Circuit is not null)
             {
                 LoadCurrents(power[i], Assigned[i], VoltagesOf(nodes[node.ParentIndex].System), mine);
@@ -483,12 +481,12 @@ internal sealed class PhaseFlow
     // were first added up, so that the sums are the same to the bit.
     private void AddChildren(int node, Span<Complex> into)
     {
-        var childStarts = _network.Levels.ChildStarts;
+        var (childStarts, currents) = (_network.Levels.ChildStarts, Currents);
         for (var child = childStarts[node + 1] - 1; child >= childStarts[node]; child--)
         {
             for (var x = 0; x < 3; x++)
             {
-                into[x] += Currents[(child * 3) + x];
+                into[x] += currents[(child * 3) + x];
             }
         }
     }
