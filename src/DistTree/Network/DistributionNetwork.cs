@@ -29,6 +29,9 @@ public sealed class DistributionNetwork
     /// <summary>Every node's parent index (-1 for the service), in node order.</summary>
     internal int[] ParentIndices => _parentIndices ??= NodeArray.Select(node => node.ParentIndex).ToArray();
 
+    /// <summary>The nodes of each depth and the children of each node as ranges of indices, for passes that take the tree a level at a time.</summary>
+    internal TreeLevels Levels => _levels ??= TreeLevels.Of(ParentIndices);
+
     /// <summary>The tree as a QuikGraph graph: vertices are nodes, edges are runs.</summary>
     public BidirectionalGraph<NetworkNode, NetworkRun> Graph { get; }
 
@@ -37,6 +40,7 @@ public sealed class DistributionNetwork
 
     private NetworkNode[]? _nodeArray;
     private int[]? _parentIndices;
+    private TreeLevels? _levels;
 
     /// <summary>The path of node indices from the service to <paramref name="node"/>, service first.</summary>
     public IReadOnlyList<int> PathTo(NetworkNode node)

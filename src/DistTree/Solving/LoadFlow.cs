@@ -36,105 +36,158 @@ public static class LoadFlow
         var nodes = network.NodeArray;
         var n = nodes.Length;
         var parents = network.ParentIndices;
+        var levels = network.Levels;
+        var sweeps = new Sweeps(n, levels.ChildStarts);
 
-        // Scratch arrays (see Scratch): only the first n elements are used. Every sweep reads link, current, zPu
-        // and bus of every node; the other arrays only at the few nodes that are not end points.
-        var link = Scratch.Rent<Link>(n);
-        var zPu = Scratch.Rent<Complex>(n);
-        var s0 = Scratch.Rent<Complex>(n);
-        var demand = Scratch.Rent<double>(n);
-        var ratio = Scratch.Rent<double>(n);
-        var zTransformer = Scratch.Rent<Complex>(n);
-        var supply = Scratch.Rent<CircuitSupply>(n);
+        // What the objects of the tree hold, then the arithmetic on it, each node on its own: on every core.
+        ParallelRanges.For(n, (start, end) => sweeps.Prepare(nodes, parents, loads, runImpedanceOhm, start, end));
 
-        // First what the objects of the tree hold, in a loop of reads only: the processor then has the reads of
-        // many nodes under way at once (objects of a large tree are rarely in cache). The arithmetic follows.
-        for (var i = 0; i < n; i++)
+        Action<int, int> backward = sweeps.Backward;
+        Action<int, int> forward = sweeps.Forward;
+        for (var iteration = 1; iteration <= MaxIterations; iteration++)
         {
-            var node = nodes[i];
-            var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
-            if (node.Circuit is { } circuit)
+            // Backward sweep: currents from the end points up, the deepest level first.
+            ParallelRanges.BottomUp(levels.Steps, backward);
+
+            // Forward sweep: voltages from the service down.
+            sweeps.MovedSquared = 0.0;
+            sweeps.Finite = true;
+            ParallelRanges.TopDown(levels.Steps, forward);
+
+            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
+            var movedSquared = sweeps.MovedSquared;
+            var moved = !sweeps.Finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
+            if (moved < TolerancePu)
             {
-                // An end point is never a transformer (it has a circuit, not equipment).
-                role = circuit.Load.Model switch
-                {
-                    LoadModel.ConstantCurrent => Role.ConstantCurrent,
-                    LoadModel.ConstantImpedance => Role.ConstantImpedance,
-                    _ => Role.ConstantPower,
-                };
+                return sweeps.Result(true, iteration);
             }
 
-            var run = node.Incoming;
-            supply[i] = run?.Supply ?? default;
-            link[i] = new Link(parents[i], role, run is not null);
-            demand[i] = node.Equipment?.DemandFactor ?? 1.0;
-            ratio[i] = 1.0;
-            if (node.Equipment?.Transformer is { } t)
+            if (!double.IsFinite(moved))
             {
-                var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
-                zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
-                ratio[i] = 1.0 + (t.TapPercent / 100.0);
+                return sweeps.Result(false, iteration);
             }
         }
 
-        for (var i = 0; i < n; i++)
-        {
-            if (link[i].HasRun)
-            {
-                // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
-                var loop = supply[i].Phases == 3 ? 1.0 : 2.0;
-                zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (supply[i].VoltageV * supply[i].VoltageV);
-            }
+        return sweeps.Result(false, MaxIterations);
+    }
 
-            if (link[i].Role >= Role.ConstantPower)
-            {
-                s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
-            }
-        }
+    // The per-node arrays of the sweeps (scratch arrays, see Scratch: only the first n elements are used) and the
+    // sweeps over a range of nodes. Every sweep reads link, current, zPu and bus of every node; the other arrays
+    // only at the few nodes that are not end points. Each node writes its own elements only.
+    private sealed class Sweeps
+    {
+        private readonly int _n;
+        private readonly int[] _childStarts;
+
+        // Per node: its parent, role and run; its run's and its transformer's impedance, per unit; its load at
+        // nominal voltage, per unit; its demand factor and its transformer's ratio.
+        private readonly Link[] _link;
+        private readonly Complex[] _zPu;
+        private readonly Complex[] _zTransformer;
+        private readonly Complex[] _s0;
+        private readonly double[] _demand;
+        private readonly double[] _ratio;
 
         // The voltage on each node's bus; only a transformer has an input apart from it (before its ratio and
         // impedance), elsewhere the input is the bus.
-        var bus = Scratch.Rent<Complex>(n);
-        var transformerInput = Scratch.Rent<Complex>(n);
-        for (var i = 0; i < n; i++)
+        private readonly Complex[] _bus;
+        private readonly Complex[] _transformerInput;
+
+        // The current each node draws from its parent.
+        private readonly Complex[] _current;
+
+        // Guards MovedSquared and Finite, to which each range of a forward sweep adds its own.
+        private readonly Lock _gate = new();
+
+        public Sweeps(int n, int[] childStarts)
         {
-            bus[i] = Complex.One;
-            transformerInput[i] = Complex.One;
+            _n = n;
+            _childStarts = childStarts;
+            _link = Scratch.Rent<Link>(n);
+            _zPu = Scratch.Rent<Complex>(n);
+            _s0 = Scratch.Rent<Complex>(n);
+            _demand = Scratch.Rent<double>(n);
+            _ratio = Scratch.Rent<double>(n);
+            _zTransformer = Scratch.Rent<Complex>(n);
+            _bus = Scratch.Rent<Complex>(n);
+            _transformerInput = Scratch.Rent<Complex>(n);
+            _current = Scratch.Rent<Complex>(n);
+            _bus.AsSpan(0, n).Fill(Complex.One);
+            _transformerInput.AsSpan(0, n).Fill(Complex.One);
         }
 
-        var current = Scratch.Rent<Complex>(n);
-        var busCurrent = Scratch.Rent<Complex>(n);
+        /// <summary>The largest square of a voltage change in the last forward sweep.</summary>
+        public double MovedSquared { get; set; }
 
-        // The result, with the scratch arrays given back.
-        LoadFlowResult Result(bool converged, int iterations)
+        /// <summary>Whether every voltage of the last forward sweep was finite.</summary>
+        public bool Finite { get; set; }
+
+        // Fills the arrays of nodes start … end − 1 from the tree, the loads and the runs' impedances.
+        public void Prepare(NetworkNode[] nodes, int[] parents, ComplexPower[] loads, Complex[] runImpedanceOhm, int start, int end)
         {
-            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
-            for (var i = 0; i < n; i++)
+            // The arrays in locals, read once: the loops then index them without going through this object.
+            var (link, zPu, s0, demand, ratio, zTransformer) = (_link, _zPu, _s0, _demand, _ratio, _zTransformer);
+
+            // First a loop of reads only: the processor then has the reads of many nodes under way at once
+            // (objects of a large tree are rarely in cache). The arithmetic follows.
+            var supply = Scratch.Rent<CircuitSupply>(end - start);
+            for (var i = start; i < end; i++)
             {
-                result.BusPu[i] = bus[i].Magnitude;
-                result.InputPu[i] = link[i].Role == Role.Transformer ? transformerInput[i].Magnitude : result.BusPu[i];
+                var node = nodes[i];
+                var role = node.Kind == NodeKind.Transformer ? Role.Transformer : Role.Junction;
+                if (node.Circuit is { } circuit)
+                {
+                    // An end point is never a transformer (it has a circuit, not equipment).
+                    role = circuit.Load.Model switch
+                    {
+                        LoadModel.ConstantCurrent => Role.ConstantCurrent,
+                        LoadModel.ConstantImpedance => Role.ConstantImpedance,
+                        _ => Role.ConstantPower,
+                    };
+                }
+
+                var run = node.Incoming;
+                supply[i - start] = run?.Supply ?? default;
+                link[i] = new Link(parents[i], role, run is not null);
+                demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+                ratio[i] = 1.0;
+                if (node.Equipment?.Transformer is { } t)
+                {
+                    var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
+                    zTransformer[i] = new Complex(r, r * t.XOverR) * BaseVa / (t.Kva * 1000.0);
+                    ratio[i] = 1.0 + (t.TapPercent / 100.0);
+                }
             }
 
-            foreach (var array in new[] { zPu, s0, zTransformer, bus, transformerInput, current, busCurrent })
+            for (var i = start; i < end; i++)
             {
-                Scratch.Return(array, n);
+                if (link[i].HasRun)
+                {
+                    // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
+                    var feed = supply[i - start];
+                    var loop = feed.Phases == 3 ? 1.0 : 2.0;
+                    zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (feed.VoltageV * feed.VoltageV);
+                }
+
+                if (link[i].Role >= Role.ConstantPower)
+                {
+                    s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
+                }
             }
 
-            Scratch.Return(link, n);
-            Scratch.Return(demand, n);
-            Scratch.Return(ratio, n);
-            Scratch.Return(supply, n);
-            return result;
+            Scratch.Return(supply, end - start);
         }
 
-        for (var iteration = 1; iteration <= MaxIterations; iteration++)
+        // Each end point draws I = conj(S(V)/V); every other node the sum of its children's currents. A node pulls
+        // its children's (a level below, so already worked out), from the last child to the first: the order in
+        // which they were first added up, so that the sums are the same to the bit.
+        public void Backward(int start, int end)
         {
-            // Backward sweep: currents from the end points up. A node's bus current is complete when the sweep
-            // reaches it (its children come after it); it is cleared there for the next sweep.
-            for (var i = n - 1; i > 0; i--)
+            // The arrays in locals, read once: the loop then indexes them without going through this object.
+            var (link, current, bus, s0, childStarts) = (_link, _current, _bus, _s0, _childStarts);
+            for (var i = end - 1; i >= start; i--)
             {
-                var (parent, role, _) = link[i];
-                Complex drawn;
+                var role = link[i].Role;
                 if (role >= Role.ConstantPower)
                 {
                     var v = bus[i];
@@ -144,31 +197,37 @@ public static class LoadFlow
                         Role.ConstantImpedance => s0[i] * v.Magnitude * v.Magnitude,
                         _ => s0[i],
                     };
-                    drawn = Complex.Conjugate(s / v);
+                    current[i] = Complex.Conjugate(s / v);
                 }
                 else
                 {
-                    drawn = busCurrent[i] * demand[i] * ratio[i];
-                    busCurrent[i] = Complex.Zero;
+                    var busCurrent = Complex.Zero;
+                    for (var child = childStarts[i + 1] - 1; child >= childStarts[i]; child--)
+                    {
+                        busCurrent += current[child];
+                    }
+
+                    current[i] = busCurrent * _demand[i] * _ratio[i];
                 }
-
-                current[i] = drawn;
-                busCurrent[parent] += drawn;
             }
+        }
 
-            busCurrent[0] = Complex.Zero;
-
-            // Forward sweep: voltages from the service down. The largest change is compared by its square.
+        // V_child = V_parent − I·Z, the parent a level above (so already worked out). The largest change is
+        // compared by its square.
+        public void Forward(int start, int end)
+        {
+            // The arrays in locals, as in Backward.
+            var (link, current, bus, zPu, transformerInput) = (_link, _current, _bus, _zPu, _transformerInput);
             var movedSquared = 0.0;
             var finite = true;
-            for (var i = 1; i < n; i++)
+            for (var i = start; i < end; i++)
             {
                 var (parent, role, _) = link[i];
                 var after = bus[parent] - (current[i] * zPu[i]);
                 double squared;
                 if (role == Role.Transformer)
                 {
-                    var onBus = ratio[i] * (after - (current[i] * zTransformer[i]));
+                    var onBus = _ratio[i] * (after - (current[i] * _zTransformer[i]));
                     var changeIn = after - transformerInput[i];
                     var changeBus = onBus - bus[i];
                     squared = Math.Max(
@@ -190,20 +249,38 @@ public static class LoadFlow
                 movedSquared = squared > movedSquared ? squared : movedSquared;
             }
 
-            // Not finite: a voltage collapse. A square beyond the double range is still a finite (large) change.
-            var moved = !finite ? double.NaN : (double.IsPositiveInfinity(movedSquared) ? double.MaxValue : Math.Sqrt(movedSquared));
-            if (moved < TolerancePu)
+            // A largest value and an AND: the same whichever range comes first.
+            lock (_gate)
             {
-                return Result(true, iteration);
-            }
-
-            if (!double.IsFinite(moved))
-            {
-                return Result(false, iteration);
+                MovedSquared = movedSquared > MovedSquared ? movedSquared : MovedSquared;
+                Finite &= finite;
             }
         }
 
-        return Result(false, MaxIterations);
+        // The result, with the scratch arrays given back.
+        public LoadFlowResult Result(bool converged, int iterations)
+        {
+            var n = _n;
+            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
+            ParallelRanges.For(n, (start, end) =>
+            {
+                for (var i = start; i < end; i++)
+                {
+                    result.BusPu[i] = _bus[i].Magnitude;
+                    result.InputPu[i] = _link[i].Role == Role.Transformer ? _transformerInput[i].Magnitude : result.BusPu[i];
+                }
+            });
+
+            foreach (var array in new[] { _zPu, _s0, _zTransformer, _bus, _transformerInput, _current })
+            {
+                Scratch.Return(array, n);
+            }
+
+            Scratch.Return(_link, n);
+            Scratch.Return(_demand, n);
+            Scratch.Return(_ratio, n);
+            return result;
+        }
     }
 
     // What a node is to the sweeps: an end point by its load model, a transformer, or any other node.

@@ -1,3 +1,5 @@
+using DistTree.Network;
+
 namespace DistTree.Solving;
 
 /// <summary>
@@ -18,22 +20,64 @@ internal static class ParallelRanges
     /// throws, the loop is run again in order on this thread, so the error is the first one in index order, as a
     /// plain loop would throw it.
     /// </summary>
-    public static void For(int count, Action<int, int> body)
+    public static void For(int count, Action<int, int> body) => For(0, count, body);
+
+    /// <summary>
+    /// A pass down a tree (see <see cref="TreeLevels.Steps"/>): calls <paramref name="body"/>(start, end) step by
+    /// step from the service's children down, a wide level in ranges on every core. The body must take its nodes
+    /// from start up, as a run of narrow levels holds parents before their children.
+    /// </summary>
+    public static void TopDown(LevelStep[] steps, Action<int, int> body)
     {
-        var ranges = (count + RangeSize - 1) / RangeSize;
+        foreach (var step in steps)
+        {
+            Step(step, body);
+        }
+    }
+
+    /// <summary>
+    /// A pass up a tree (see <see cref="TreeLevels.Steps"/>): calls <paramref name="body"/>(start, end) step by
+    /// step from the deepest level up to the service's children, a wide level in ranges on every core. The body
+    /// must take its nodes from end − 1 down, as a run of narrow levels holds children after their parents.
+    /// </summary>
+    public static void BottomUp(LevelStep[] steps, Action<int, int> body)
+    {
+        for (var s = steps.Length - 1; s >= 0; s--)
+        {
+            Step(steps[s], body);
+        }
+    }
+
+    // One step of a pass: the nodes of a wide level are independent of each other; a narrow step runs inline.
+    private static void Step(LevelStep step, Action<int, int> body)
+    {
+        if (step.Wide)
+        {
+            For(step.Start, step.End, body);
+        }
+        else
+        {
+            body(step.Start, step.End);
+        }
+    }
+
+    // For over start … end − 1.
+    private static void For(int start, int end, Action<int, int> body)
+    {
+        var ranges = (end - start + RangeSize - 1) / RangeSize;
         if (ranges < 2 || Environment.ProcessorCount < 2 || OnOneThread)
         {
-            body(0, count);
+            body(start, end);
             return;
         }
 
         try
         {
-            Parallel.For(0, ranges, r => body(r * RangeSize, Math.Min(count, (r + 1) * RangeSize)));
+            Parallel.For(0, ranges, r => body(start + (r * RangeSize), Math.Min(end, start + ((r + 1) * RangeSize))));
         }
         catch (AggregateException)
         {
-            body(0, count);
+            body(start, end);
         }
     }
 }

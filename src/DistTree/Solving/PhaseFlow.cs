@@ -306,8 +306,12 @@ internal sealed class PhaseFlow
     }
 
     // Circuits without stated or numbered phases, largest first, each onto the least-loaded line (1 pole) or
-    // pair of lines (2 poles); 3 poles take all lines. Ties go to the earlier line (A before B before C).
-    private void Assign(ComplexPower[] power)
+    // pair of lines (2 poles); 3 poles take all lines. Ties go to the earlier line (A before B before C). Each
+    // panel sets the lines of its own circuits only: the panels are shared out over the cores.
+    private void Assign(ComplexPower[] power) => ParallelRanges.For(_network.NodeArray.Length, (start, end) => Assign(power, start, end));
+
+    // Assign for the panels start … end − 1.
+    private void Assign(ComplexPower[] power, int start, int end)
     {
         var nodes = _network.NodeArray;
         Span<double> load = stackalloc double[3];
@@ -317,19 +321,21 @@ internal sealed class PhaseFlow
             var order = b.VoltAmperes.CompareTo(a.VoltAmperes);
             return order != 0 ? order : string.CompareOrdinal(nodes[a.Child].Id, nodes[b.Child].Id);
         });
-        foreach (var panel in nodes)
+        var childStarts = _network.Levels.ChildStarts;
+        for (var p = start; p < end; p++)
         {
-            // The list itself, not the read-only view: no enumerator is made per panel.
-            var children = panel.MutableChildren;
-            if (panel.Circuit is not null || children.Count == 0)
+            // A node without children (most are end points) is passed over without reading its object.
+            var (firstChild, endChild) = (childStarts[p], childStarts[p + 1]);
+            if (firstChild == endChild)
             {
                 continue;
             }
 
+            var panel = nodes[p];
             var lines = PhaseRules.Lines(panel.System);
             load.Clear();
             automatic.Clear();
-            foreach (var child in children)
+            for (var child = firstChild; child < endChild; child++)
             {
                 if (nodes[child].Circuit is not { } circuit)
                 {
@@ -426,38 +432,61 @@ internal sealed class PhaseFlow
         _ => TheOne,
     };
 
+    // Bottom-up, a level at a time (see TreeLevels): each node works out its own currents; a node that is not an
+    // end point pulls its children's (a level below, so already worked out). The service, above the levels the
+    // pass takes, draws the sum of its children's.
     private void Accumulate(ComplexPower[] power)
+    {
+        ParallelRanges.BottomUp(_network.Levels.Steps, (start, end) => Accumulate(power, start, end));
+        AddChildren(0, Currents.AsSpan(0, 3));
+    }
+
+    // Accumulate for the nodes end − 1 down to start, into the zeros the constructor was given.
+    private void Accumulate(ComplexPower[] power, int start, int end)
     {
         var nodes = _network.NodeArray;
         Span<Complex> bus = stackalloc Complex[3];
-        for (var i = nodes.Length - 1; i > 0; i--)
+        for (var i = end - 1; i >= start; i--)
         {
             var node = nodes[i];
             var mine = Currents.AsSpan(i * 3, 3);
             if (node.Circuit is not null)
             {
                 LoadCurrents(power[i], Assigned[i], VoltagesOf(nodes[node.ParentIndex].System), mine);
-            }
-            else
-            {
-                var factor = node.Equipment?.DemandFactor ?? 1.0;
-                for (var x = 0; x < 3; x++)
-                {
-                    mine[x] *= factor;
-                }
-
-                if (node.Equipment?.Transformer is { } t)
-                {
-                    _secondaryCurrents[i] = mine.ToArray();
-                    mine.CopyTo(bus);
-                    ToPrimary(bus, t.Secondary, node.Equipment.System, mine);
-                }
+                continue;
             }
 
-            var parent = Currents.AsSpan(node.ParentIndex * 3, 3);
+            AddChildren(i, mine);
+            var factor = node.Equipment?.DemandFactor ?? 1.0;
             for (var x = 0; x < 3; x++)
             {
-                parent[x] += mine[x];
+                mine[x] *= factor;
+            }
+
+            if (node.Equipment?.Transformer is { } t)
+            {
+                // Few nodes are transformers; the lock keeps the dictionary whole when two write at once.
+                lock (_secondaryCurrents)
+                {
+                    _secondaryCurrents[i] = mine.ToArray();
+                }
+
+                mine.CopyTo(bus);
+                ToPrimary(bus, t.Secondary, node.Equipment.System, mine);
+            }
+        }
+    }
+
+    // Adds the currents of node's children to into, from the last child to the first: the order in which they
+    // were first added up, so that the sums are the same to the bit.
+    private void AddChildren(int node, Span<Complex> into)
+    {
+        var (childStarts, currents) = (_network.Levels.ChildStarts, Currents);
+        for (var child = childStarts[node + 1] - 1; child >= childStarts[node]; child--)
+        {
+            for (var x = 0; x < 3; x++)
+            {
+                into[x] += currents[(child * 3) + x];
             }
         }
     }

@@ -1,3 +1,8 @@
+using System.Text;
+using DistTree.Network;
+using DistTree.ProjectFiles;
+using DistTree.Solving;
+
 namespace DistTree.Tests.Solving;
 
 public sealed class DropSolverTests
@@ -147,5 +152,44 @@ public sealed class DropSolverTests
         var s = SolverHarness.Solve(SolverHarness.OneCircuit("480Y/277", "imperial",
             "{ id: \"1\", poles: 3, ocpd: 25, load: { hp: 10, pf: 0.85 }, run: { length: 50, size: 12 AWG } }"));
         Assert.Equal(14, s.Branch().CurrentA, 6);
+    }
+
+    [Fact]
+    public void Solve_Chain100000Levels_NoStackOverflowAndTheLoadFlowConverges()
+    {
+        // A level per panel: the level-by-level passes meet 100,000 narrow levels.
+        const int levels = 100_000;
+        var text = new StringBuilder("disttree: 1\nproject: { name: Chain }\nservice: { id: SVC, system: 208Y/120 }\nequipment:\n");
+        for (var i = 0; i < levels; i++)
+        {
+            var from = i == 0 ? "SVC" : $"P{i - 1}";
+            text.Append($"  - {{ id: P{i}, kind: panelboard, from: {from}, feeder: {{ length: 1, size: 4/0 AWG }} }}\n");
+        }
+
+        text.Append($"  - {{ id: END, kind: panelboard, from: P{levels - 1}, circuits: [ {{ id: \"1\", poles: 1, load: {{ va: 100 }}, run: {{ length: 3, size: 12 AWG }} }} ] }}\n");
+        var network = NetworkBuilder.Build(ProjectLoader.Parse(text.ToString(), "chain.yaml"));
+
+        Solution? solution = null;
+        Exception? failure = null;
+        // A small stack (256 KiB) makes any recursion over the chain fail here, not only in production.
+        var thread = new Thread(() =>
+        {
+            try
+            {
+                solution = DropSolver.Standard.Solve(network);
+            }
+            catch (Exception e)
+            {
+                failure = e;
+            }
+        }, 256 * 1024);
+        thread.Start();
+        thread.Join();
+
+        Assert.Null(failure);
+        // The panels' feeders and the one branch circuit (END stands at its source, without a feeder).
+        Assert.Equal(levels + 1, solution!.Runs.Count);
+        Assert.True(solution.LoadFlow.Converged);
+        Assert.InRange(solution.EndPoints.Single().LoadFlowEndVoltageV!.Value, 100, 120);
     }
 }

@@ -12,14 +12,19 @@ namespace DistTree.Tests.Solving;
 /// </summary>
 public sealed class SolutionViewTests
 {
-    // Invented demo data (disttree generate), large enough that every pass is cut into several ranges.
+    // Invented demo data (disttree generate), large enough that every pass is cut into several ranges, and that
+    // the passes along the tree split two levels over the cores: one of end points only, one of panels as well.
     private static readonly Lazy<DistributionNetwork> Campus = new(() =>
-        NetworkBuilder.Build(ProjectLoader.Parse(ProjectGenerator.Generate(20_000, 3, 11), "generated.yaml")));
+        NetworkBuilder.Build(ProjectLoader.Parse(ProjectGenerator.Generate(30_000, 3, 11), "generated.yaml")));
 
     [Fact]
     public void Solve_OnEveryCore_WritesTheSameBytesAsOnOneThread()
     {
         var network = Campus.Value;
+        var wide = network.Levels.Steps.Where(step => step.Wide).ToArray();
+        Assert.Equal(2, wide.Length);
+        Assert.Contains(wide, step => network.NodeArray[step.Start..step.End].Any(node => node.Children.Count > 0));
+
         var allCores = JsonResults.Write(DropSolver.Standard.Solve(network));
         string oneThread;
         ParallelRanges.OnOneThread = true;
