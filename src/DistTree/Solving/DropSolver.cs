@@ -107,16 +107,17 @@ public sealed class DropSolver
         var endPoints = new ViewList<EndPointResult>(solved.EndPoints.Length, e => new EndPointResult(solved, e));
         EndPointResult? worst = worstPoint < 0 ? null : endPoints[worstPoint];
 
-        // Each panel's phase loads on every core, kept in node order.
-        var panelAt = new PanelResult?[n];
-        ParallelRanges.For(n, (start, end) =>
+        // Each panel's phase loads, in node order. Only a node with children can be a panel with circuits, so the
+        // end points (nearly all the nodes) are passed over without reading them.
+        var childStarts = network.Levels.ChildStarts;
+        var panels = new List<PanelResult>();
+        for (var i = 0; i < n; i++)
         {
-            for (var i = start; i < end; i++)
+            if (childStarts[i + 1] > childStarts[i] && nodes[i].Equipment is { Circuits.Count: > 0 })
             {
-                panelAt[i] = nodes[i].Equipment is { Circuits.Count: > 0 } ? phases.Panel(nodes[i]) : null;
+                panels.Add(phases.Panel(nodes[i]));
             }
-        });
-        var panels = panelAt.OfType<PanelResult>().ToArray();
+        }
 
         return new Solution
         {
@@ -126,7 +127,7 @@ public sealed class DropSolver
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, count, findings + pointFindings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
-            Panels = panels,
+            Panels = panels.ToArray(),
             CatalogName = _catalog.SourceName,
         };
     }
