@@ -1,4 +1,3 @@
-using System.Text;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
@@ -101,34 +100,10 @@ public sealed class NetworkBuilderTests
     public void LoadAndBuild_Chain100000Levels_NoStackOverflow()
     {
         const int levels = 100_000;
-        var text = new StringBuilder("disttree: 1\nproject: { name: Chain }\nservice: { id: SVC, system: 208Y/120 }\nequipment:\n");
-        for (var i = 0; i < levels; i++)
-        {
-            var from = i == 0 ? "SVC" : $"P{i - 1}";
-            text.Append($"  - {{ id: P{i}, kind: panelboard, from: {from}, feeder: {{ length: 1, size: 4/0 AWG }} }}\n");
-        }
 
-        text.Append($"  - {{ id: END, kind: panelboard, from: P{levels - 1}, circuits: [ {{ id: \"1\", poles: 1, load: {{ va: 100 }}, run: {{ length: 3, size: 12 AWG }} }} ] }}\n");
+        var network = DeepChain.OnSmallStack(() => NetworkBuilder.Build(ProjectLoader.Parse(DeepChain.Text(levels), "chain.yaml")));
 
-        DistributionNetwork? network = null;
-        Exception? failure = null;
-        // A small stack (256 KiB) makes any recursion over the chain fail here, not only in production.
-        var thread = new Thread(() =>
-        {
-            try
-            {
-                network = NetworkBuilder.Build(ProjectLoader.Parse(text.ToString(), "chain.yaml"));
-            }
-            catch (Exception e)
-            {
-                failure = e;
-            }
-        }, 256 * 1024);
-        thread.Start();
-        thread.Join();
-
-        Assert.Null(failure);
-        Assert.Equal(levels + 3, network!.Nodes.Count);
+        Assert.Equal(levels + 3, network.Nodes.Count);
         var end = network.Nodes[^1];
         Assert.Equal("END/1", end.Id);
         Assert.Equal(levels + 3, network.PathTo(end).Count);

@@ -1,4 +1,3 @@
-using System.Text;
 using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Solving;
@@ -159,36 +158,12 @@ public sealed class DropSolverTests
     {
         // A level per panel: the level-by-level passes meet 100,000 narrow levels.
         const int levels = 100_000;
-        var text = new StringBuilder("disttree: 1\nproject: { name: Chain }\nservice: { id: SVC, system: 208Y/120 }\nequipment:\n");
-        for (var i = 0; i < levels; i++)
-        {
-            var from = i == 0 ? "SVC" : $"P{i - 1}";
-            text.Append($"  - {{ id: P{i}, kind: panelboard, from: {from}, feeder: {{ length: 1, size: 4/0 AWG }} }}\n");
-        }
+        var network = NetworkBuilder.Build(ProjectLoader.Parse(DeepChain.Text(levels), "chain.yaml"));
 
-        text.Append($"  - {{ id: END, kind: panelboard, from: P{levels - 1}, circuits: [ {{ id: \"1\", poles: 1, load: {{ va: 100 }}, run: {{ length: 3, size: 12 AWG }} }} ] }}\n");
-        var network = NetworkBuilder.Build(ProjectLoader.Parse(text.ToString(), "chain.yaml"));
+        var solution = DeepChain.OnSmallStack(() => DropSolver.Standard.Solve(network));
 
-        Solution? solution = null;
-        Exception? failure = null;
-        // A small stack (256 KiB) makes any recursion over the chain fail here, not only in production.
-        var thread = new Thread(() =>
-        {
-            try
-            {
-                solution = DropSolver.Standard.Solve(network);
-            }
-            catch (Exception e)
-            {
-                failure = e;
-            }
-        }, 256 * 1024);
-        thread.Start();
-        thread.Join();
-
-        Assert.Null(failure);
         // The panels' feeders and the one branch circuit (END stands at its source, without a feeder).
-        Assert.Equal(levels + 1, solution!.Runs.Count);
+        Assert.Equal(levels + 1, solution.Runs.Count);
         Assert.True(solution.LoadFlow.Converged);
         Assert.InRange(solution.EndPoints.Single().LoadFlowEndVoltageV!.Value, 100, 120);
     }
