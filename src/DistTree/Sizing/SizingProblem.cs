@@ -56,8 +56,12 @@ internal sealed class SizingProblem
 
     public bool NewOrigin => Solution.Project.Rules.TransformerDrop == TransformerDropMode.NewOrigin;
 
-    /// <summary>Builds the problem. <paramref name="maxSteps"/> limits each run to that many sizes above its own (tests).</summary>
-    public static SizingProblem Build(Solution solution, ConductorCatalog catalog, int? maxSteps = null)
+    /// <summary>
+    /// Builds the problem. <paramref name="maxSteps"/> limits each run to that many sizes above its own (tests).
+    /// <paramref name="dropFactors"/>, per node index, scales the drops priced for its incoming run (1 where absent):
+    /// the upsizer's allowance for a load flow whose drops come out larger than the percent sums it prices.
+    /// </summary>
+    public static SizingProblem Build(Solution solution, ConductorCatalog catalog, int? maxSteps = null, IReadOnlyDictionary<int, double>? dropFactors = null)
     {
         var project = solution.Project;
         var sizing = project.Sizing;
@@ -75,7 +79,8 @@ internal sealed class SizingProblem
             }
 
             var run = nodes[row.NodeIndex].Incoming!;
-            var all = Candidates(run, row, project, catalog, maxSteps).ToArray();
+            var factor = dropFactors?.GetValueOrDefault(row.NodeIndex, 1.0) ?? 1.0;
+            var all = Candidates(run, row, project, catalog, maxSteps, factor).ToArray();
             var fitting = all.Where(o => o.MeetsRunLimits).ToArray();
             if (fitting.Length == 0)
             {
@@ -130,7 +135,7 @@ internal sealed class SizingProblem
         return NewOrigin ? 0 : stepsAtInputAfterRun + TransformerSteps[node];
     }
 
-    private static IEnumerable<RunOption> Candidates(NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, int? maxSteps)
+    private static IEnumerable<RunOption> Candidates(NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, int? maxSteps, double dropFactor)
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
@@ -166,7 +171,7 @@ internal sealed class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, run.Supply, project.Service.FrequencyHz, row.CurrentA, cos, sin);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines);
+                var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using DistTree.Conductors;
+using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
@@ -28,21 +29,44 @@ public sealed class Upsizer
 
     internal UpsizePlan Plan(Solution before, int? maxSteps)
     {
-        var problem = SizingProblem.Build(before, _catalog, maxSteps);
-        var (choice, cost) = FrontierSolver.Solve(problem);
-        if (double.IsInfinity(cost))
+        // The sizer prices drops by the percent sum, linear in R and X. Where the findings rest on the load flow
+        // (rules: method: load_flow), a run's drop there comes out larger (a lower voltage draws more current), so
+        // each run's priced drops are scaled by how much larger its load-flow drop is, and the plan is made again
+        // with the factors of its own proof until the proof holds (the factors only grow: the safe side).
+        var onLoadFlow = before.Project.Rules.Method == SolutionMethod.LoadFlow;
+        var factors = new Dictionary<int, double>();
+        var solved = before;
+        SizingProblem problem;
+        Dictionary<int, RunOption> picks;
+        List<UnresolvableLimit> unresolvable;
+        Solution after;
+        var round = 0;
+        do
         {
-            throw new InvalidOperationException("the sizing problem has no solution although every end point was fixable on its own");
-        }
+            if (onLoadFlow)
+            {
+                GrowLoadFlowFactors(factors, solved);
+            }
 
-        var unresolvable = problem.Unresolvable.ToList();
-        foreach (var f in before.AllFindings.Where(f => f.Kind == FindingKind.TransformerOverload))
-        {
-            unresolvable.Add(new UnresolvableLimit(f.Subject, $"{f.Message}: conductor sizes cannot fix this; it needs a larger transformer or less load"));
-        }
+            problem = SizingProblem.Build(before, _catalog, maxSteps, factors);
+            var (choice, cost) = FrontierSolver.Solve(problem);
+            if (double.IsInfinity(cost))
+            {
+                throw new InvalidOperationException("the sizing problem has no solution although every end point was fixable on its own");
+            }
 
-        var picks = Picks(problem, choice);
-        var after = new DropSolver(_catalog).Solve(NetworkBuilder.Build(Apply(before.Project, before.Network, picks)));
+            unresolvable = problem.Unresolvable.ToList();
+            foreach (var f in before.AllFindings.Where(f => f.Kind == FindingKind.TransformerOverload))
+            {
+                unresolvable.Add(new UnresolvableLimit(f.Subject, $"{f.Message}: conductor sizes cannot fix this; it needs a larger transformer or less load"));
+            }
+
+            picks = Picks(problem, choice);
+            after = new DropSolver(_catalog).Solve(NetworkBuilder.Build(Apply(before.Project, before.Network, picks)));
+            solved = after;
+        }
+        while (onLoadFlow && ++round < LoadFlowRounds && LeftOver(after, unresolvable) is not null);
+
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
         return new UpsizePlan
@@ -99,14 +123,35 @@ public sealed class Upsizer
         return project with { Equipment = equipment };
     }
 
-    // The proof: re-solved, nothing a conductor choice can fix is left over a limit.
-    private static void Verify(Solution after, List<UnresolvableLimit> unresolvable)
+    // How many times a plan on the load flow is made again with the factors of its proof.
+    private const int LoadFlowRounds = 6;
+
+    // Per run, the largest ratio yet of its load-flow drop to its percent-sum drop (at least 1).
+    private static void GrowLoadFlowFactors(Dictionary<int, double> factors, Solution solved)
+    {
+        foreach (var r in solved.Runs)
+        {
+            if (r.Kind != RunResultKind.Transformer && r.LoadFlowDropPercent is { } flow && r.PercentSumDropPercent > 0 && flow > r.PercentSumDropPercent)
+            {
+                factors[r.NodeIndex] = Math.Max(factors.GetValueOrDefault(r.NodeIndex, 1.0), flow / r.PercentSumDropPercent);
+            }
+        }
+    }
+
+    // A finding a conductor choice could fix that the re-solved plan still has, or null.
+    private static Finding? LeftOver(Solution after, List<UnresolvableLimit> unresolvable)
     {
         var known = new HashSet<string>(unresolvable.Select(u => u.Subject), StringComparer.Ordinal);
-        var left = after.AllFindings.FirstOrDefault(f => f.Kind != FindingKind.TransformerOverload && !known.Contains(f.Subject));
-        if (left is not null)
+        return after.AllFindings.FirstOrDefault(f => f.Kind != FindingKind.TransformerOverload && !known.Contains(f.Subject));
+    }
+
+    // The proof: re-solved, nothing a conductor choice can fix is left over a limit. Where it is not, the user is told
+    // where, not shown a crash.
+    private static void Verify(Solution after, List<UnresolvableLimit> unresolvable)
+    {
+        if (LeftOver(after, unresolvable) is { } left)
         {
-            throw new InvalidOperationException($"the upsize plan failed its proof: {left.Message}");
+            throw ProjectException.At(left.Location, $"the upsize plan failed its proof: {left.Message}; size this run by hand, or plan with 'method: percent_sum' and check the result by the load flow");
         }
     }
 

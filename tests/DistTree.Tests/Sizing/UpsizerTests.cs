@@ -1,4 +1,6 @@
 using DistTree.Conductors;
+using DistTree.Generating;
+using DistTree.Model;
 using DistTree.Sizing;
 using DistTree.Solving;
 using DistTree.Tests.Solving;
@@ -121,5 +123,23 @@ public sealed class UpsizerTests
         var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
             "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 90, size: 12 AWG } }"));
         Assert.Contains("250.122(B)", Assert.Single(plan.Changes).GroundingNote, StringComparison.Ordinal);
+    }
+
+    // With the findings on the load flow, its drops come out larger than the percent sums the sizer prices (a lower
+    // voltage draws more current on constant-power loads; common practice). The plan still has to pass its proof.
+    [Fact]
+    public void Plan_OnTheLoadFlow_PassesItsProof()
+    {
+        // Invented demo data (disttree generate) with the findings put on the load flow.
+        var text = ProjectGenerator.Generate(2000, 3, 7).Replace("\ndefaults:", "\nrules: { method: load_flow }\ndefaults:", StringComparison.Ordinal);
+        var before = SolverHarness.Solve(text);
+        Assert.Equal(SolutionMethod.LoadFlow, before.Project.Rules.Method);
+        Assert.True(before.HasFindings);
+
+        var plan = Upsizer.Standard.Plan(before);
+
+        var unresolvable = plan.Unresolvable.Select(u => u.Subject).ToHashSet(StringComparer.Ordinal);
+        Assert.All(plan.After.AllFindings, f => Assert.True(f.Kind == FindingKind.TransformerOverload || unresolvable.Contains(f.Subject), f.Message));
+        Assert.All(plan.After.Runs.Where(r => r.Kind != RunResultKind.Transformer && !unresolvable.Contains(r.Id)), r => Assert.True(r.DropPercent <= r.LimitPercent + 1e-9));
     }
 }
