@@ -307,13 +307,7 @@ public static class JsonResults
         Number(w, "max_length_m"u8, r.MaxLengthM, 2);
         Number(w, "max_length_total_m"u8, r.MaxLengthTotalM, 2);
         w.WriteBoolean("counts_in_total"u8, r.CountsInTotal);
-        w.WriteStartArray("findings"u8);
-        foreach (var f in r.Findings)
-        {
-            WriteFinding(w, f);
-        }
-
-        w.WriteEndArray();
+        WriteFindings(w, r.Findings);
         w.WriteEndObject();
     }
 
@@ -349,14 +343,20 @@ public static class JsonResults
         {
             w.WriteNull("motor_start"u8);
         }
+
+        WriteFindings(w, e.Findings);
+        w.WriteEndObject();
+    }
+
+    private static void WriteFindings(Utf8JsonWriter w, IReadOnlyList<Finding> findings)
+    {
         w.WriteStartArray("findings"u8);
-        foreach (var f in e.Findings)
+        foreach (var f in findings)
         {
             WriteFinding(w, f);
         }
 
         w.WriteEndArray();
-        w.WriteEndObject();
     }
 
     private static void NullableString(Utf8JsonWriter w, ReadOnlySpan<byte> name, string? value)

@@ -39,9 +39,9 @@ internal sealed class FieldSet
             .Text("service.id", p.Service.Id)
             .Text("service.system", p.Service.System.Name)
             .Number("service.frequency_hz", p.Service.FrequencyHz)
-            .Text("defaults.material", MaterialText(p.Defaults.Material))
+            .Text("defaults.material", ConductorWords.Of(p.Defaults.Material))
             .Number("defaults.insulation_c", p.Defaults.InsulationC)
-            .Text("defaults.raceway", RacewayText(p.Defaults.Raceway));
+            .Text("defaults.raceway", ConductorWords.Of(p.Defaults.Raceway));
         return set;
     }
 
@@ -178,9 +178,9 @@ internal sealed class FieldSet
         this
             .Text($"{prefix}.size", run.Size.Text)
             .Number($"{prefix}.sets", run.Sets)
-            .Text($"{prefix}.material", MaterialText(run.Material))
+            .Text($"{prefix}.material", ConductorWords.Of(run.Material))
             .Number($"{prefix}.insulation_c", run.InsulationC)
-            .Text($"{prefix}.raceway", RacewayText(run.Raceway))
+            .Text($"{prefix}.raceway", ConductorWords.Of(run.Raceway))
             .Number($"{prefix}.ocpd_a", run.OcpdA)
             .Number($"{prefix}.limit_percent", run.LimitPercent)
             .Text($"{prefix}.fixed", run.Fixed ? "true" : "false");
@@ -207,8 +207,4 @@ internal sealed class FieldSet
             ? Format(v) + (Feet ? $" ({(v / ValueReader.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
             : Text ?? "none";
     }
-
-    private static string MaterialText(Material m) => m == Material.Copper ? "cu" : "al";
-
-    private static string RacewayText(Raceway r) => r.ToString().ToLowerInvariant();
 }

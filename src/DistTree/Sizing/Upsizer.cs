@@ -29,44 +29,31 @@ public sealed class Upsizer
 
     internal UpsizePlan Plan(Solution before, int? maxSteps)
     {
+        var transformerOverloads = new List<UnresolvableLimit>();
+        foreach (var f in before.AllFindings.Where(f => f.Kind == FindingKind.TransformerOverload))
+        {
+            transformerOverloads.Add(new UnresolvableLimit(f.Subject, $"{f.Message}: conductor sizes cannot fix this; it needs a larger transformer or less load"));
+        }
+
         // The sizer prices drops by the percent sum, linear in R and X. Where the findings rest on the load flow
         // (rules: method: load_flow), a run's drop there comes out larger (a lower voltage draws more current), so
         // each run's priced drops are scaled by how much larger its load-flow drop is, and the plan is made again
         // with the factors of its own proof until the proof holds (the factors only grow: the safe side).
         var onLoadFlow = before.Project.Rules.Method == SolutionMethod.LoadFlow;
         var factors = new Dictionary<int, double>();
-        var solved = before;
-        SizingProblem problem;
-        Dictionary<int, RunOption> picks;
-        List<UnresolvableLimit> unresolvable;
-        Solution after;
-        var round = 0;
-        do
+        if (onLoadFlow)
         {
-            if (onLoadFlow)
-            {
-                GrowLoadFlowFactors(factors, solved);
-            }
-
-            problem = SizingProblem.Build(before, _catalog, maxSteps, factors);
-            var (choice, cost) = FrontierSolver.Solve(problem);
-            if (double.IsInfinity(cost))
-            {
-                throw new InvalidOperationException("the sizing problem has no solution although every end point was fixable on its own");
-            }
-
-            unresolvable = problem.Unresolvable.ToList();
-            foreach (var f in before.AllFindings.Where(f => f.Kind == FindingKind.TransformerOverload))
-            {
-                unresolvable.Add(new UnresolvableLimit(f.Subject, $"{f.Message}: conductor sizes cannot fix this; it needs a larger transformer or less load"));
-            }
-
-            picks = Picks(problem, choice);
-            after = new DropSolver(_catalog).Solve(NetworkBuilder.Build(Apply(before.Project, before.Network, picks)));
-            solved = after;
+            GrowLoadFlowFactors(factors, before);
         }
-        while (onLoadFlow && ++round < LoadFlowRounds && LeftOver(after, unresolvable) is not null);
 
+        var attempt = Attempt(before, maxSteps, factors, transformerOverloads);
+        for (var round = 1; onLoadFlow && round < LoadFlowRounds && LeftOver(attempt.After, attempt.Unresolvable) is not null; round++)
+        {
+            GrowLoadFlowFactors(factors, attempt.After);
+            attempt = Attempt(before, maxSteps, factors, transformerOverloads);
+        }
+
+        var (picks, unresolvable, after) = attempt;
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
         return new UpsizePlan
@@ -78,6 +65,21 @@ public sealed class Upsizer
             Before = before,
             After = after,
         };
+    }
+
+    // One plan at the given drop factors, and its proof: the tree solved again with it applied.
+    private Attempted Attempt(Solution before, int? maxSteps, Dictionary<int, double> factors, List<UnresolvableLimit> transformerOverloads)
+    {
+        var problem = SizingProblem.Build(before, _catalog, maxSteps, factors);
+        var (choice, cost) = FrontierSolver.Solve(problem);
+        if (double.IsInfinity(cost))
+        {
+            throw new InvalidOperationException("the sizing problem has no solution although every end point was fixable on its own");
+        }
+
+        var picks = Picks(problem, choice);
+        var after = new DropSolver(_catalog).Solve(NetworkBuilder.Build(Apply(before.Project, before.Network, picks)));
+        return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
     }
 
     // The chosen size and sets per node, where they differ from the present ones.
@@ -193,4 +195,7 @@ public sealed class Upsizer
             ? null
             : string.Create(CultureInfo.InvariantCulture, $"increase a wire-type equipment grounding conductor in proportion to the circular-mil area (×{ratio:0.00}), NEC 250.122(B)");
     }
+
+    // A plan, what it reports as unfixable, and its proof.
+    private sealed record Attempted(Dictionary<int, RunOption> Picks, List<UnresolvableLimit> Unresolvable, Solution After);
 }

@@ -34,7 +34,7 @@ public sealed class DropSolver
         var frequency = project.Service.FrequencyHz;
 
         // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used. The power,
-        // the phase currents, the rows and the unit drops are the solution's own (see SolvedRows).
+        // the phase currents and the rows are the solution's own (see SolvedRows).
         var power = new ComplexPower[n];
         var continuous = Scratch.Rent<ComplexPower>(n);
         AccumulatePower(nodes, network.ParentIndices, power, continuous);
@@ -385,7 +385,7 @@ public sealed class DropSolver
                 run.Id,
                 device,
                 smallMax,
-                Invariant($"{what} {run.Id}: a {size} {MaterialWord(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                Invariant($"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
                 conductors.Location));
         }
 
@@ -705,8 +705,6 @@ public sealed class DropSolver
 
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
-
-    private static string MaterialWord(Material material) => material == Material.Copper ? "cu" : "al";
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

@@ -1,3 +1,4 @@
+using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
@@ -94,16 +95,10 @@ public readonly struct RunResult : IEquatable<RunResult>
     public string? Size => Run?.Conductors.Size.Text;
 
     /// <summary><c>cu</c> or <c>al</c>, or null for a transformer.</summary>
-    public string? Material => Run is { } run ? (run.Conductors.Material == Conductors.Material.Copper ? "cu" : "al") : null;
+    public string? Material => Run is { } run ? ConductorWords.Of(run.Conductors.Material) : null;
 
     /// <summary><c>pvc</c>, <c>aluminum</c> or <c>steel</c>, or null for a transformer.</summary>
-    public string? Raceway => Run?.Conductors.Raceway switch
-    {
-        null => null,
-        Conductors.Raceway.Pvc => "pvc",
-        Conductors.Raceway.Aluminum => "aluminum",
-        _ => "steel",
-    };
+    public string? Raceway => Run is { } run ? ConductorWords.Of(run.Conductors.Raceway) : null;
 
     /// <summary>Parallel sets (1 for a transformer).</summary>
     public int Sets => Run?.Conductors.Sets ?? 1;
