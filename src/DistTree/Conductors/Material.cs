@@ -24,7 +24,7 @@ public enum Raceway
 }
 
 /// <summary>The words a project file uses for materials and raceways, as the outputs write them.</summary>
-public static class ConductorWords
+internal static class ConductorWords
 {
     /// <summary><c>cu</c> or <c>al</c>.</summary>
     public static string Of(Material material) => material == Material.Copper ? "cu" : "al";

@@ -96,16 +96,16 @@ public sealed class DropSolver
             Interlocked.Add(ref findings, found);
         });
 
-        var solved = new SolvedRows(network, phases, power, rows);
-        var (worstPoint, pointFindings) = SolveEndPoints(solved, lineDrops, incomingRow, transformerRow, flow);
-        AddReach(network, rows, incomingRow, solved.EndPoints, rules);
+        var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, flow);
+        AddReach(network, rows, incomingRow, points.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
 
-        var endPoints = new ViewList<EndPointResult>(solved.EndPoints.Length, e => new EndPointResult(solved, e));
-        EndPointResult? worst = worstPoint < 0 ? null : endPoints[worstPoint];
+        var solved = new SolvedRows(network, phases, power, rows, points.Rows, points.PathRuns, points.PathShares);
+        var endPoints = new ViewList<EndPointResult>(points.Rows.Length, e => new EndPointResult(solved, e));
+        EndPointResult? worst = points.Worst < 0 ? null : endPoints[points.Worst];
 
         // Each panel's phase loads, in node order. Only a node with children can be a panel with circuits, so the
         // end points (nearly all the nodes) are passed over without reading them.
@@ -125,7 +125,7 @@ public sealed class DropSolver
             Network = network,
             Runs = new ViewList<RunResult>(count, r => new RunResult(solved, r)),
             EndPoints = endPoints,
-            Summary = new SolutionSummary(endPoints.Count, count, findings + pointFindings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
+            Summary = new SolutionSummary(endPoints.Count, count, findings + points.Findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
             Panels = panels.ToArray(),
             CatalogName = _catalog.SourceName,
@@ -464,14 +464,14 @@ public sealed class DropSolver
         return (percentR, percentR * data.XOverR);
     }
 
-    // Every end point's total: walking up from it, the counted rows' drops on its own lines. Fills the end point
-    // rows and their counted runs and shares into solved; returns the worst end point (-1 without any) and the
-    // number of end-point findings.
-    private static (int Worst, int Findings) SolveEndPoints(SolvedRows solved, double[] lineDrops, int[] incomingRow, int[] transformerRow, LoadFlowResult flow)
+    // Every end point's total: walking up from it, the counted rows' drops on its own lines. Gives the end point
+    // rows, their counted runs and shares (see SolvedRows), the worst end point (-1 without any) and the number of
+    // end-point findings.
+    private static (EndPointRow[] Rows, int[] PathRuns, double[] PathShares, int Worst, int Findings) SolveEndPoints(
+        DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, int[] incomingRow, int[] transformerRow,
+        LoadFlowResult flow)
     {
-        var network = solved.Network;
-        var rows = solved.Runs;
-        var rules = solved.Rules;
+        var rules = network.Project.Rules;
         var nodes = network.NodeArray;
         var parents = network.ParentIndices;
         var n = nodes.Length;
@@ -536,10 +536,7 @@ public sealed class DropSolver
         Scratch.Return(counted, n);
         Scratch.Return(endPointNode, n);
         Scratch.Return(pathStart, n + 1);
-        solved.EndPoints = endPoints;
-        solved.PathRuns = pathRuns;
-        solved.PathShares = pathShares;
-        return (worst, findingCount);
+        return (endPoints, pathRuns, pathShares, worst, findingCount);
 
         bool WorseThan(int a, int b) =>
             Solution.WorstFirst(endPoints[a].TotalDropPercent, nodes[endPoints[a].Node].Id, endPoints[b].TotalDropPercent, nodes[endPoints[b].Node].Id) < 0;
@@ -553,7 +550,7 @@ public sealed class DropSolver
             // Walking up from the end point: its own lines, until a transformer between systems of different
             // line counts, above which the worst line counts (the safe side). Each transformer's row before its
             // primary feeder's; the rows are stored service side first.
-            var set = (int)solved.Phases.Assigned[point.Node];
+            var set = (int)phases.Assigned[point.Node];
             var at = point.PathStart + point.PathCount;
             void Count(int r)
             {
@@ -595,7 +592,7 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, solved.Power[point.Node], rules) : null;
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[point.Node], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 (findings ??= []).Add(new Finding(

@@ -15,7 +15,8 @@ internal sealed class SolvedRows
     // The text of each set of lines, by (int)Phases.
     private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
 
-    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs)
+    public SolvedRows(
+        DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs, EndPointRow[] endPoints, int[] pathRuns, double[] pathShares)
     {
         Network = network;
         Rules = network.Project.Rules;
@@ -23,6 +24,9 @@ internal sealed class SolvedRows
         Phases = phases;
         Power = power;
         Runs = runs;
+        EndPoints = endPoints;
+        PathRuns = pathRuns;
+        PathShares = pathShares;
     }
 
     public DistributionNetwork Network { get; }
@@ -41,13 +45,13 @@ internal sealed class SolvedRows
     public RunRow[] Runs { get; }
 
     /// <summary>Per end point, its figures (see <see cref="EndPointResult"/>).</summary>
-    public EndPointRow[] EndPoints { get; set; } = [];
+    public EndPointRow[] EndPoints { get; }
 
     /// <summary>The counted runs of every end point's path, end point after end point (see <see cref="EndPointRow.PathStart"/>).</summary>
-    public int[] PathRuns { get; set; } = [];
+    public int[] PathRuns { get; }
 
     /// <summary>Each counted run's share, aligned with <see cref="PathRuns"/>.</summary>
-    public double[] PathShares { get; set; } = [];
+    public double[] PathShares { get; }
 
     public static string LinesOf(Phases set) => LinesText[(int)set];
 }
