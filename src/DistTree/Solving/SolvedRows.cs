@@ -18,7 +18,6 @@ internal sealed class SolvedRows
     public SolvedRows(
         DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs, EndPointRow[] endPoints, int[] pathRuns, double[] pathShares)
     {
-        Network = network;
         Rules = network.Project.Rules;
         Nodes = network.NodeArray;
         Phases = phases;
@@ -28,8 +27,6 @@ internal sealed class SolvedRows
         PathRuns = pathRuns;
         PathShares = pathShares;
     }
-
-    public DistributionNetwork Network { get; }
 
     public Rules Rules { get; }
 
