@@ -50,51 +50,66 @@ public sealed class DropSolver
             transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
         }
 
+        // A run's findings follow from its drop: on the percent sum, known as soon as the run is solved, so they are
+        // found in the same pass, while the run's objects are at hand; on the load flow, once it is solved.
         var rows = new RunRow[count];
         var lineDrops = Scratch.Rent<double>(count * 8);
         var z = Scratch.Rent<Complex>(n);
+        var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
+        var findings = 0;
         ParallelRanges.For(n, (start, end) =>
         {
+            var found = 0;
             for (var i = start; i < end; i++)
             {
                 var node = nodes[i];
                 if (node.Incoming is { } run)
                 {
-                    var row = incomingRow[i];
-                    SolveRun(ref rows[row], run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(row * 8, 8));
+                    ref var row = ref rows[incomingRow[i]];
+                    SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
+                    if (findingsWithRuns)
+                    {
+                        row.Findings = RunFindings(ref row);
+                        found += row.Findings.Count;
+                    }
 
                     // The load flow's impedance of the run: its whole length, sets in parallel.
                     var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
-                    z[i] = new Complex(rows[row].ResistanceOhmPerKm * km, rows[row].ReactanceOhmPerKm * km);
+                    z[i] = new Complex(row.ResistanceOhmPerKm * km, row.ReactanceOhmPerKm * km);
                 }
 
                 if (node.Equipment?.Transformer is { } transformer)
                 {
-                    rows[transformerRow[i]] = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
+                    ref var row = ref rows[transformerRow[i]];
+                    row = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
+                    found += row.Findings.Count;
                 }
             }
+
+            Interlocked.Add(ref findings, found);
         });
 
         // The load flow on the same impedances the percent sum used.
         var flow = LoadFlow.Solve(network, power, z);
         Scratch.Return(z, n);
         ChooseMethod(network, rows, incomingRow, transformerRow, flow, rules);
-        var findings = 0;
-        ParallelRanges.For(count, (start, end) =>
+        if (!findingsWithRuns)
         {
-            var found = 0;
-            foreach (ref var row in rows.AsSpan(start, end - start))
+            ParallelRanges.For(count, (start, end) =>
             {
-                if (row.Run is not null)
+                var found = 0;
+                foreach (ref var row in rows.AsSpan(start, end - start))
                 {
-                    row.Findings = RunFindings(ref row);
+                    if (row.Run is not null)
+                    {
+                        row.Findings = RunFindings(ref row);
+                        found += row.Findings.Count;
+                    }
                 }
 
-                found += row.Findings.Count;
-            }
-
-            Interlocked.Add(ref findings, found);
-        });
+                Interlocked.Add(ref findings, found);
+            });
+        }
 
         var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, flow);
         AddReach(network, rows, incomingRow, points.Rows, rules);
@@ -298,7 +313,8 @@ public sealed class DropSolver
         {
             if (rules.Method == SolutionMethod.LoadFlow)
             {
-                throw ProjectException.At(network.Project.Service.Location, Invariant(
+                throw ProjectException.At(network.Project.Service.Location, string.Create(
+                    CultureInfo.InvariantCulture,
                     $"the load flow did not converge in {flow.Iterations} sweeps: the loads are too heavy for the conductors and transformers (a voltage collapse); fix the worst runs, or use 'method: percent_sum' to see them"));
             }
 
@@ -349,7 +365,7 @@ public sealed class DropSolver
                 run.Id,
                 r.DropPercent,
                 limit,
-                Invariant($"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
+                string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
                 conductors.Location));
         }
 
@@ -362,7 +378,7 @@ public sealed class DropSolver
                     run.Id,
                     r.DesignCurrentA,
                     ampacity,
-                    Invariant($"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
+                    string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
                     conductors.Location));
             }
 
@@ -373,7 +389,7 @@ public sealed class DropSolver
                     run.Id,
                     ocpd,
                     ampacity,
-                    Invariant($"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
+                    string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
                     conductors.Location));
             }
         }
@@ -385,7 +401,7 @@ public sealed class DropSolver
                 run.Id,
                 device,
                 smallMax,
-                Invariant($"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
                 conductors.Location));
         }
 
@@ -423,7 +439,7 @@ public sealed class DropSolver
                 node.Id,
                 carried.VoltAmperes / 1000.0,
                 data.Kva,
-                Invariant($"transformer {node.Id}: load {carried.VoltAmperes / 1000.0:0.0} kVA exceeds its {data.Kva:0.#} kVA rating ({loading * 100:0} %)"),
+                string.Create(CultureInfo.InvariantCulture, $"transformer {node.Id}: load {carried.VoltAmperes / 1000.0:0.0} kVA exceeds its {data.Kva:0.#} kVA rating ({loading * 100:0} %)"),
                 node.Equipment!.Location)];
         }
 
@@ -588,7 +604,7 @@ public sealed class DropSolver
                     circuit.FullId,
                     total,
                     limit,
-                    Invariant($"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && point.PathCount < depth[point.Node] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    string.Create(CultureInfo.InvariantCulture, $"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && point.PathCount < depth[point.Node] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
                     circuit.Location));
             }
 
@@ -600,7 +616,7 @@ public sealed class DropSolver
                     circuit.FullId,
                     start.TerminalDipPercent,
                     start.LimitPercent,
-                    Invariant($"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit"),
+                    string.Create(CultureInfo.InvariantCulture, $"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit"),
                     circuit.Location));
             }
 
@@ -702,6 +718,4 @@ public sealed class DropSolver
 
     private static double? Reach(double lengthM, double dropPercent, double allowedPercent) =>
         dropPercent <= 0 ? null : Math.Max(0.0, lengthM * allowedPercent / dropPercent);
-
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }
