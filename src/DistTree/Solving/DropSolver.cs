@@ -14,8 +14,6 @@ namespace DistTree.Solving;
 /// </summary>
 public sealed class DropSolver
 {
-    private static readonly Finding[] NoFindings = [];
-
     private readonly ConductorCatalog _catalog;
 
     /// <summary>Creates a solver that takes conductor data from <paramref name="catalog"/>.</summary>
@@ -34,8 +32,9 @@ public sealed class DropSolver
         var frequency = project.Service.FrequencyHz;
 
         // Scratch arrays (see Scratch): only the first n (nodes) or count (rows) elements are used. The power,
-        // the phase currents and the rows are the solution's own (see SolvedRows).
-        var power = new ComplexPower[n];
+        // the phase currents and the rows are the solution's own (see SolvedRows). The arrays that the passes
+        // fill whole are made without clearing, so that their memory is first written on every core.
+        var power = GC.AllocateUninitializedArray<ComplexPower>(n);
         var continuous = Scratch.Rent<ComplexPower>(n);
         AccumulatePower(nodes, network.ParentIndices, power, continuous);
         var phases = new PhaseFlow(network, power, new Complex[n * 3], new Phases[n]);
@@ -52,7 +51,8 @@ public sealed class DropSolver
 
         // A run's findings follow from its drop: on the percent sum, known as soon as the run is solved, so they are
         // found in the same pass, while the run's objects are at hand; on the load flow, once it is solved.
-        var rows = new RunRow[count];
+        var rows = GC.AllocateUninitializedArray<RunRow>(count);
+        var runFindings = new IReadOnlyList<Finding>?[count];
         var lineDrops = Scratch.Rent<double>(count * 8);
         var z = Scratch.Rent<Complex>(n);
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
@@ -69,8 +69,7 @@ public sealed class DropSolver
                     SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
                     if (findingsWithRuns)
                     {
-                        row.Findings = RunFindings(ref row);
-                        found += row.Findings.Count;
+                        found += (runFindings[incomingRow[i]] = RunFindings(ref row, run))?.Count ?? 0;
                     }
 
                     // The load flow's impedance of the run: its whole length, sets in parallel.
@@ -80,9 +79,8 @@ public sealed class DropSolver
 
                 if (node.Equipment?.Transformer is { } transformer)
                 {
-                    ref var row = ref rows[transformerRow[i]];
-                    row = SolveTransformer(node, transformer, power[i], rules, phases, lineDrops.AsSpan(transformerRow[i] * 8, 8));
-                    found += row.Findings.Count;
+                    var row = transformerRow[i];
+                    found += (runFindings[row] = SolveTransformer(ref rows[row], node, transformer, power[i], rules, phases, lineDrops.AsSpan(row * 8, 8)))?.Count ?? 0;
                 }
             }
 
@@ -98,12 +96,12 @@ public sealed class DropSolver
             ParallelRanges.For(count, (start, end) =>
             {
                 var found = 0;
-                foreach (ref var row in rows.AsSpan(start, end - start))
+                for (var r = start; r < end; r++)
                 {
-                    if (row.Run is not null)
+                    ref var row = ref rows[r];
+                    if (!row.IsTransformer)
                     {
-                        row.Findings = RunFindings(ref row);
-                        found += row.Findings.Count;
+                        found += (runFindings[r] = RunFindings(ref row, nodes[row.Node].Incoming!))?.Count ?? 0;
                     }
                 }
 
@@ -112,14 +110,14 @@ public sealed class DropSolver
         }
 
         var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, flow);
-        AddReach(network, rows, incomingRow, points.Rows, rules);
+        AddReach(network, rows, incomingRow, points.EndPoints.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
 
-        var solved = new SolvedRows(network, phases, power, rows, points.Rows, points.PathRuns, points.PathShares);
-        var endPoints = new ViewList<EndPointResult>(points.Rows.Length, e => new EndPointResult(solved, e));
+        var solved = new SolvedRows(network, phases, power, new SolvedRuns(rows, runFindings), points.EndPoints);
+        var endPoints = new ViewList<EndPointResult>(points.EndPoints.Rows.Length, e => new EndPointResult(solved, e));
         EndPointResult? worst = points.Worst < 0 ? null : endPoints[points.Worst];
 
         // Each panel's phase loads, in node order. Only a node with children can be a panel with circuits, so the
@@ -174,6 +172,11 @@ public sealed class DropSolver
 
                     continuous[i] = circuit.Continuous ? power[i] : ComplexPower.Zero;
                 }
+                else
+                {
+                    power[i] = ComplexPower.Zero;
+                    continuous[i] = ComplexPower.Zero;
+                }
             }
         });
 
@@ -219,19 +222,20 @@ public sealed class DropSolver
             lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
         }
 
-        row.Node = run.Target;
-        row.Run = run;
-        row.CurrentA = currentA;
-        row.DesignCurrentA = designA;
-        row.TemperatureC = figures.TemperatureC;
-        row.ResistanceOhmPerKm = figures.ResistanceOhmPerKm;
-        row.ReactanceOhmPerKm = figures.ReactanceOhmPerKm;
-        row.AmpacityA = figures.AmpacityA;
-        row.OwnLines = ownLines;
-        row.DropPercent = ownDrop;
-        row.PercentSumDropPercent = ownDrop;
-        row.VoltageV = supply.VoltageV;
-        row.Findings = NoFindings;
+        row = new RunRow
+        {
+            Node = index,
+            CurrentA = currentA,
+            DesignCurrentA = designA,
+            TemperatureC = figures.TemperatureC,
+            ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
+            ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
+            AmpacityA = figures.AmpacityA,
+            OwnLines = ownLines,
+            DropPercent = ownDrop,
+            PercentSumDropPercent = ownDrop,
+            VoltageV = supply.VoltageV,
+        };
     }
 
     /// <summary>
@@ -348,10 +352,10 @@ public sealed class DropSolver
         });
     }
 
-    private IReadOnlyList<Finding> RunFindings(ref RunRow r)
+    // A run's findings, or null for none.
+    private List<Finding>? RunFindings(ref RunRow r, NetworkRun run)
     {
         List<Finding>? findings = null;
-        var run = r.Run!;
         var conductors = run.Conductors;
         var branch = run.Kind == RunKind.Branch;
         var what = branch ? "branch circuit" : "feeder";
@@ -405,12 +409,13 @@ public sealed class DropSolver
                 conductors.Location));
         }
 
-        return findings is null ? NoFindings : findings;
+        return findings;
     }
 
     // Regulation ≈ (%R·cos θ + %X·sin θ)·(S/S_rated) − tap, %R = %Z/√(1 + (X/R)²), %X = %R·X/R (common practice).
     // Per secondary line: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap; balanced, the same as the three-phase formula.
-    private static RunRow SolveTransformer(NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases, Span<double> drops)
+    // Fills the transformer's row; gives its findings, or null for none.
+    private static List<Finding>? SolveTransformer(ref RunRow row, NetworkNode node, TransformerData data, ComplexPower carried, Rules rules, PhaseFlow phases, Span<double> drops)
     {
         var supply = data.Secondary.FeederSupply;
         var (percentR, percentX) = PercentRx(data);
@@ -431,7 +436,7 @@ public sealed class DropSolver
 
         var dropPercent = drops[(int)Phases.ABC];
         var currentA = LoadPower.CurrentA(carried.VoltAmperes, supply);
-        IReadOnlyList<Finding> findings = NoFindings;
+        List<Finding>? findings = null;
         if (loading > 1 + 1e-9)
         {
             findings = [new Finding(
@@ -443,19 +448,19 @@ public sealed class DropSolver
                 node.Equipment!.Location)];
         }
 
-        return new RunRow
+        row = new RunRow
         {
-            Node = node,
-            Transformer = data,
+            Node = node.Index,
+            IsTransformer = true,
             CurrentA = currentA,
             DesignCurrentA = currentA,
             RatedA = LoadPower.CurrentA(data.Kva * 1000.0, supply),
             DropPercent = dropPercent,
             PercentSumDropPercent = dropPercent,
             VoltageV = supply.VoltageV,
-            Findings = findings,
             WidensToAllLines = PhaseRules.Lines(data.Secondary) != PhaseRules.Lines(node.Equipment!.System),
         };
+        return findings;
     }
 
     // The largest of the per-line figures on the lines of a set (bits 0..2 = A..C). A line whose figure is not a
@@ -483,7 +488,7 @@ public sealed class DropSolver
     // Every end point's total: walking up from it, the counted rows' drops on its own lines. Gives the end point
     // rows, their counted runs and shares (see SolvedRows), the worst end point (-1 without any) and the number of
     // end-point findings.
-    private static (EndPointRow[] Rows, int[] PathRuns, double[] PathShares, int Worst, int Findings) SolveEndPoints(
+    private static (SolvedEndPoints EndPoints, int Worst, int Findings) SolveEndPoints(
         DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, int[] incomingRow, int[] transformerRow,
         LoadFlowResult flow)
     {
@@ -518,9 +523,11 @@ public sealed class DropSolver
         }
 
         pathStart[endPointCount] = used;
-        var endPoints = new EndPointRow[endPointCount];
-        var pathRuns = new int[used];
-        var pathShares = new double[used];
+        var endPoints = GC.AllocateUninitializedArray<EndPointRow>(endPointCount);
+        var findings = new IReadOnlyList<Finding>?[endPointCount];
+        var motorStarts = new MotorStartResult?[endPointCount];
+        var pathRuns = GC.AllocateUninitializedArray<int>(used);
+        var pathShares = GC.AllocateUninitializedArray<double>(used);
         var worst = -1;
         var findingCount = 0;
         var gate = new object();
@@ -532,12 +539,7 @@ public sealed class DropSolver
             var found = 0;
             for (var e = start; e < end; e++)
             {
-                ref var point = ref endPoints[e];
-                point.Node = endPointNode[e];
-                point.PathStart = pathStart[e];
-                point.PathCount = pathStart[e + 1] - pathStart[e];
-                SolveEndPoint(ref point);
-                found += point.Findings.Count;
+                found += SolveEndPoint(e);
                 worstHere = worstHere < 0 || WorseThan(e, worstHere) ? e : worstHere;
             }
 
@@ -552,22 +554,25 @@ public sealed class DropSolver
         Scratch.Return(counted, n);
         Scratch.Return(endPointNode, n);
         Scratch.Return(pathStart, n + 1);
-        return (endPoints, pathRuns, pathShares, worst, findingCount);
+        return (new SolvedEndPoints(endPoints, findings, motorStarts, pathRuns, pathShares), worst, findingCount);
 
         bool WorseThan(int a, int b) =>
             Solution.WorstFirst(endPoints[a].TotalDropPercent, nodes[endPoints[a].Node].Id, endPoints[b].TotalDropPercent, nodes[endPoints[b].Node].Id) < 0;
 
-        void SolveEndPoint(ref EndPointRow point)
+        // Fills end point e's row, findings and motor-start check; gives the number of its findings.
+        int SolveEndPoint(int e)
         {
-            var node = nodes[point.Node];
+            var index = endPointNode[e];
+            var (first, pathCount) = (pathStart[e], pathStart[e + 1] - pathStart[e]);
+            var node = nodes[index];
             var circuit = node.Circuit!;
             double percentSum = 0, loadFlow = 0;
 
             // Walking up from the end point: its own lines, until a transformer between systems of different
             // line counts, above which the worst line counts (the safe side). Each transformer's row before its
             // primary feeder's; the rows are stored service side first.
-            var set = (int)phases.Assigned[point.Node];
-            var at = point.PathStart + point.PathCount;
+            var set = (int)phases.Assigned[index];
+            var at = first + pathCount;
             void Count(int r)
             {
                 ref var row = ref rows[r];
@@ -581,9 +586,9 @@ public sealed class DropSolver
                 }
             }
 
-            for (var i = point.Node; at > point.PathStart; i = parents[i])
+            for (var i = index; at > first; i = parents[i])
             {
-                if (transformerRow[i] >= 0 && i != point.Node)
+                if (transformerRow[i] >= 0 && i != index)
                 {
                     Count(transformerRow[i]);
                 }
@@ -596,22 +601,22 @@ public sealed class DropSolver
 
             var total = onLoadFlow ? loadFlow : percentSum;
             var limit = rules.TotalLimitPercent;
-            List<Finding>? findings = null;
+            List<Finding>? found = null;
             if (total > limit + 1e-9)
             {
-                (findings ??= []).Add(new Finding(
+                (found ??= []).Add(new Finding(
                     FindingKind.TotalDrop,
                     circuit.FullId,
                     total,
                     limit,
-                    string.Create(CultureInfo.InvariantCulture, $"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && point.PathCount < depth[point.Node] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    string.Create(CultureInfo.InvariantCulture, $"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && pathCount < depth[index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[point.Node], rules) : null;
+            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[index], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
-                (findings ??= []).Add(new Finding(
+                (found ??= []).Add(new Finding(
                     FindingKind.MotorStart,
                     circuit.FullId,
                     start.TerminalDipPercent,
@@ -620,12 +625,19 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            point.TotalDropPercent = total;
-            point.PercentSumTotalDropPercent = percentSum;
-            point.LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null;
-            point.LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[point.Node] * circuit.Supply.VoltageV : null;
-            point.MotorStart = start;
-            point.Findings = findings is null ? NoFindings : findings;
+            endPoints[e] = new EndPointRow
+            {
+                Node = index,
+                PathStart = first,
+                PathCount = pathCount,
+                TotalDropPercent = total,
+                PercentSumTotalDropPercent = percentSum,
+                LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null,
+                LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[index] * circuit.Supply.VoltageV : null,
+            };
+            motorStarts[e] = start;
+            findings[e] = found;
+            return found?.Count ?? 0;
         }
     }
 
@@ -646,8 +658,9 @@ public sealed class DropSolver
             if (incomingRow[i] >= 0)
             {
                 ref var r = ref rows[incomingRow[i]];
-                var conductors = r.Run!.Conductors;
-                var loop = r.Run.Supply.Phases == 3 ? 1.0 : 2.0;
+                var run = nodes[i].Incoming!;
+                var conductors = run.Conductors;
+                var loop = run.Supply.Phases == 3 ? 1.0 : 2.0;
                 var km = conductors.LengthM / 1000.0 / conductors.Sets * loop;
                 extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
@@ -705,9 +718,10 @@ public sealed class DropSolver
                 if (incomingRow[i] >= 0)
                 {
                     ref var row = ref rows[incomingRow[i]];
-                    var lengthM = row.Run!.Conductors.LengthM;
+                    var run = nodes[i].Incoming!;
+                    var lengthM = run.Conductors.LengthM;
                     var visible = slack[i];
-                    row.MaxLengthM = Reach(lengthM, row.DropPercent, row.Run.LimitPercent);
+                    row.MaxLengthM = Reach(lengthM, row.DropPercent, run.LimitPercent);
                     row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
                 }
             }

@@ -84,10 +84,10 @@ public readonly struct EndPointResult : IEquatable<EndPointResult>
     public double? LoadFlowEndVoltageV => Row.LoadFlowEndVoltageV;
 
     /// <summary>The starting check of a motor end point; null for other loads.</summary>
-    public MotorStartResult? MotorStart => Row.MotorStart;
+    public MotorStartResult? MotorStart => _rows.MotorStarts[_index];
 
     /// <summary>The limits this end point exceeds (the total; its own runs' findings are on the runs).</summary>
-    public IReadOnlyList<Finding> Findings => Row.Findings;
+    public IReadOnlyList<Finding> Findings => _rows.EndPointFindings[_index] ?? [];
 
     /// <summary>Equal when both show the same end point of the same solution.</summary>
     public static bool operator ==(EndPointResult left, EndPointResult right) => left.Equals(right);

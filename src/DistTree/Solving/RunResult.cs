@@ -35,11 +35,11 @@ public readonly struct RunResult : IEquatable<RunResult>
 
     private ref readonly RunRow Row => ref _rows.Runs[_index];
 
-    private NetworkRun? Run => Row.Run;
+    private NetworkRun? Run => Row.IsTransformer ? null : Node.Incoming;
 
-    private TransformerData Transformer => Row.Transformer!;
+    private TransformerData Transformer => Node.Equipment!.Transformer!;
 
-    private NetworkNode Node => Row.Node;
+    private NetworkNode Node => _rows.Nodes[Row.Node];
 
     /// <summary>The id of the node it feeds.</summary>
     public string Id => Node.Id;
@@ -59,7 +59,7 @@ public readonly struct RunResult : IEquatable<RunResult>
     public string To => Node.Id;
 
     /// <summary>Index of the fed node in the network.</summary>
-    public int NodeIndex => Node.Index;
+    public int NodeIndex => Row.Node;
 
     /// <summary>The system designation the run carries.</summary>
     public string System => Run is { } run ? run.Source.System.Name : Transformer.Secondary.Name;
@@ -146,7 +146,7 @@ public readonly struct RunResult : IEquatable<RunResult>
     public bool CountsInTotal => Run is not null || _rows.Rules.TransformerDrop == TransformerDropMode.Count;
 
     /// <summary>The limits this run exceeds.</summary>
-    public IReadOnlyList<Finding> Findings => Row.Findings;
+    public IReadOnlyList<Finding> Findings => _rows.RunFindings[_index] ?? [];
 
     /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
     internal int OwnLines => Row.OwnLines;

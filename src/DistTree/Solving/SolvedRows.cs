@@ -15,17 +15,19 @@ internal sealed class SolvedRows
     // The text of each set of lines, by (int)Phases.
     private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
 
-    public SolvedRows(
-        DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRow[] runs, EndPointRow[] endPoints, int[] pathRuns, double[] pathShares)
+    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, SolvedRuns runs, SolvedEndPoints endPoints)
     {
         Rules = network.Project.Rules;
         Nodes = network.NodeArray;
         Phases = phases;
         Power = power;
-        Runs = runs;
-        EndPoints = endPoints;
-        PathRuns = pathRuns;
-        PathShares = pathShares;
+        Runs = runs.Rows;
+        RunFindings = runs.Findings;
+        EndPoints = endPoints.Rows;
+        EndPointFindings = endPoints.Findings;
+        MotorStarts = endPoints.MotorStarts;
+        PathRuns = endPoints.PathRuns;
+        PathShares = endPoints.PathShares;
     }
 
     public Rules Rules { get; }
@@ -41,8 +43,17 @@ internal sealed class SolvedRows
     /// <summary>Per row, its figures (see <see cref="RunResult"/>).</summary>
     public RunRow[] Runs { get; }
 
+    /// <summary>Per row, the limits it exceeds, or null for none.</summary>
+    public IReadOnlyList<Finding>?[] RunFindings { get; }
+
     /// <summary>Per end point, its figures (see <see cref="EndPointResult"/>).</summary>
     public EndPointRow[] EndPoints { get; }
+
+    /// <summary>Per end point, the limits it exceeds, or null for none.</summary>
+    public IReadOnlyList<Finding>?[] EndPointFindings { get; }
+
+    /// <summary>Per end point, a motor's starting check, or null for any other load.</summary>
+    public MotorStartResult?[] MotorStarts { get; }
 
     /// <summary>The counted runs of every end point's path, end point after end point (see <see cref="EndPointRow.PathStart"/>).</summary>
     public int[] PathRuns { get; }
@@ -53,12 +64,24 @@ internal sealed class SolvedRows
     public static string LinesOf(Phases set) => LinesText[(int)set];
 }
 
-/// <summary>A run's or transformer's figures, filled in stage by stage during the solve (the run, the load flow, the findings, the reach).</summary>
+/// <summary>What the runs' pass of a solve gives: a row per run or transformer, and each row's findings (null for none).</summary>
+internal readonly record struct SolvedRuns(RunRow[] Rows, IReadOnlyList<Finding>?[] Findings);
+
+/// <summary>What the end points' pass of a solve gives (see <see cref="SolvedRows"/>).</summary>
+internal readonly record struct SolvedEndPoints(
+    EndPointRow[] Rows, IReadOnlyList<Finding>?[] Findings, MotorStartResult?[] MotorStarts, int[] PathRuns, double[] PathShares);
+
+/// <summary>
+/// A run's or transformer's figures, filled in stage by stage during the solve (the run, the load flow, the reach).
+/// Plain numbers only, no references: an array of them is made without clearing and is never scanned by the
+/// collector; the run and the transformer are found from the node, the findings kept beside the rows.
+/// </summary>
 internal struct RunRow
 {
-    public NetworkNode Node;
-    public NetworkRun? Run;
-    public TransformerData? Transformer;
+    public int Node;
+    public bool IsTransformer;
+    public bool WidensToAllLines;
+    public int OwnLines;
     public double CurrentA;
     public double DesignCurrentA;
     public double TemperatureC;
@@ -66,21 +89,21 @@ internal struct RunRow
     public double ReactanceOhmPerKm;
     public double? AmpacityA;
     public double RatedA;
-    public int OwnLines;
     public double VoltageV;
     public double DropPercent;
     public double PercentSumDropPercent;
     public double? LoadFlowDropPercent;
     public double? MaxLengthM;
     public double? MaxLengthTotalM;
-    public IReadOnlyList<Finding> Findings;
-    public bool WidensToAllLines;
 
     /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
     public readonly double DropV => DropPercent / 100.0 * VoltageV;
 }
 
-/// <summary>An end point's figures; its counted runs are <c>PathRuns[PathStart .. PathStart + PathCount]</c>.</summary>
+/// <summary>
+/// An end point's figures; its counted runs are <c>PathRuns[PathStart .. PathStart + PathCount]</c>. Plain numbers
+/// only, as <see cref="RunRow"/>; the findings and motor-start checks are kept beside the rows.
+/// </summary>
 internal struct EndPointRow
 {
     public int Node;
@@ -90,8 +113,6 @@ internal struct EndPointRow
     public double PercentSumTotalDropPercent;
     public double? LoadFlowTotalDropPercent;
     public double? LoadFlowEndVoltageV;
-    public MotorStartResult? MotorStart;
-    public IReadOnlyList<Finding> Findings;
 }
 
 /// <summary>A solution's runs or end points as a list of views: the view of an index is made when it is read.</summary>
