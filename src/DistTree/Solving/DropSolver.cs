@@ -73,7 +73,7 @@ public sealed class DropSolver
                     }
 
                     // The load flow's impedance of the run: its whole length, sets in parallel.
-                    var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
+                    var km = PerSetKm(run.Conductors);
                     z[i] = new Complex(row.ResistanceOhmPerKm * km, row.ReactanceOhmPerKm * km);
                 }
 
@@ -212,14 +212,26 @@ public sealed class DropSolver
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
         var figures = RunElectrics.Compute(
             _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
-        Span<double> unitR = stackalloc double[8];
-        Span<double> unitX = stackalloc double[8];
-        UnitDrops(run, phases, currentA, lineA, unitR, unitX);
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
-        var ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
-        for (var set = 0; set < 8; set++)
+        double ownDrop;
+        if (ownLines > 0 && points.Count == 0)
         {
-            lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
+            // A branch circuit's row is read on its own lines only, by the one end point it feeds: that set alone
+            // is worked out (the others stay zero), by the same arithmetic as all of them.
+            var (unitR, unitX) = phases.UnitDropsOn(index, PerSetKm(conductors), run.Source.System, LineScale(currentA, lineA), ownLines);
+            ownDrop = (figures.ResistanceOhmPerKm * unitR) + (figures.ReactanceOhmPerKm * unitX);
+            lineDrops[ownLines] = ownDrop;
+        }
+        else
+        {
+            Span<double> unitR = stackalloc double[8];
+            Span<double> unitX = stackalloc double[8];
+            UnitDrops(run, phases, currentA, lineA, unitR, unitX);
+            ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
+            for (var set = 0; set < 8; set++)
+            {
+                lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
+            }
         }
 
         row = new RunRow
@@ -254,11 +266,15 @@ public sealed class DropSolver
         }
         else
         {
-            var km = conductors.LengthM / 1000.0 / conductors.Sets;
-            var scale = lineA > 0 ? currentA / lineA : 1.0;
-            phases.UnitDrops(run.Target.Index, km, run.Source.System, scale, unitR, unitX);
+            phases.UnitDrops(run.Target.Index, PerSetKm(conductors), run.Source.System, LineScale(currentA, lineA), unitR, unitX);
         }
     }
+
+    // A run's length in km per set: the sets share the current.
+    private static double PerSetKm(Run conductors) => conductors.LengthM / 1000.0 / conductors.Sets;
+
+    // The phase currents scaled to the current the run is figured at (a branch circuit on its device's rating).
+    private static double LineScale(double currentA, double lineA) => lineA > 0 ? currentA / lineA : 1.0;
 
     /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
     internal static double OwnDrop(ReadOnlySpan<double> unitR, ReadOnlySpan<double> unitX, double r, double x, int ownLines)
@@ -661,7 +677,7 @@ public sealed class DropSolver
                 var run = nodes[i].Incoming!;
                 var conductors = run.Conductors;
                 var loop = run.Supply.Phases == 3 ? 1.0 : 2.0;
-                var km = conductors.LengthM / 1000.0 / conductors.Sets * loop;
+                var km = PerSetKm(conductors) * loop;
                 extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
             }

@@ -95,21 +95,26 @@ internal sealed class PhaseFlow
     public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
         var voltages = VoltagesOf(system);
-        var i = Currents.AsSpan(node * 3, 3);
-        var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
-        var resistive = new Complex(km, 0);
-        var reactive = new Complex(0, km);
-        var deltaR = default(PerLine<Complex>);
-        var deltaX = default(PerLine<Complex>);
-        for (var x = 0; x < 3; x++)
-        {
-            var flowing = i[x] + neutral;
-            deltaR[x] = flowing * resistive * scale;
-            deltaX[x] = flowing * reactive * scale;
-        }
-
+        var (deltaR, deltaX) = UnitDeltas(node, km, scale, voltages.HasNeutral);
         LineDropsOn(deltaR, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitR);
         LineDropsOn(deltaX, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitX);
+    }
+
+    /// <summary>
+    /// The unit drops of <see cref="UnitDrops"/> for the one set of lines <paramref name="set"/> ((int)Phases, 1 … 7):
+    /// the same figures, the others not worked out.
+    /// </summary>
+    public (double UnitR, double UnitX) UnitDropsOn(int node, double km, ElectricalSystem system, double scale, int set)
+    {
+        var voltages = VoltagesOf(system);
+        var (deltaR, deltaX) = UnitDeltas(node, km, scale, voltages.HasNeutral);
+        var lines = voltages.Lines;
+        var on = set & ((1 << lines) - 1);
+        var inPhaseR = InPhase(deltaR, lines);
+        var inPhaseX = InPhase(deltaX, lines);
+        return (
+            DropOn(on, deltaR, inPhaseR, lines, voltages.SingleV, voltages.PairV, voltages.PerLineV),
+            DropOn(on, deltaX, inPhaseX, lines, voltages.SingleV, voltages.PairV, voltages.PerLineV));
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
@@ -167,46 +172,74 @@ internal sealed class PhaseFlow
     // LineDrops on a system of the given lines and voltages (see SetV and LineToNeutralV).
     private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
     {
-        // The part of each line's ΔV in phase with the line's voltage.
+        // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
+        // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
+        var inPhase = InPhase(deltaV, lines);
+        var mask = (1 << lines) - 1;
+        var byLines = default(PerSet);
+        for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
+        {
+            byLines[on] = DropOn(on, deltaV, inPhase, lines, single, pair, perLine);
+        }
+
+        for (var set = 1; set < 8; set++)
+        {
+            into[set] = byLines[set & mask];
+        }
+    }
+
+    // The per-line ΔV that one ohm/km of resistance (R) and of reactance (X) makes on the run into a node:
+    // (I_line + I_neutral)·(km + j0)·scale and (I_line + I_neutral)·(0 + j·km)·scale.
+    private (PerLine<Complex> DeltaR, PerLine<Complex> DeltaX) UnitDeltas(int node, double km, double scale, bool hasNeutral)
+    {
+        var i = Currents.AsSpan(node * 3, 3);
+        var neutral = hasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var resistive = new Complex(km, 0);
+        var reactive = new Complex(0, km);
+        var deltaR = default(PerLine<Complex>);
+        var deltaX = default(PerLine<Complex>);
+        for (var x = 0; x < 3; x++)
+        {
+            var flowing = i[x] + neutral;
+            deltaR[x] = flowing * resistive * scale;
+            deltaX[x] = flowing * reactive * scale;
+        }
+
+        return (deltaR, deltaX);
+    }
+
+    // The part of each line's ΔV in phase with the line's voltage (lines the system has not: zero).
+    private static PerLine<double> InPhase(ReadOnlySpan<Complex> deltaV, int lines)
+    {
         var inPhase = default(PerLine<double>);
         for (var x = 0; x < lines; x++)
         {
             inPhase[x] = (deltaV[x] * UnitConjugate[(lines * 3) + x]).Real;
         }
 
-        // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
-        // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
-        var mask = (1 << lines) - 1;
-        var byLines = default(PerSet);
-        for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
-        {
-            switch (BitOperations.PopCount((uint)on))
-            {
-                case 0:
-                    byLines[on] = inPhase[0] / perLine * 100.0;
-                    break;
-                case 1:
-                    byLines[on] = inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
-                    break;
-                case 2:
-                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    byLines[on] = ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
-                    break;
-                default:
-                    var worst = double.NegativeInfinity;
-                    for (var x = 0; x < 3; x++)
-                    {
-                        worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
-                    }
+        return inPhase;
+    }
 
-                    byLines[on] = worst;
-                    break;
-            }
-        }
-
-        for (var set = 1; set < 8; set++)
+    // The drop in percent on the system's lines `on` (a bit per line; see LineDrops) from per-line ΔV and its in-phase parts.
+    private static double DropOn(int on, ReadOnlySpan<Complex> deltaV, ReadOnlySpan<double> inPhase, int lines, double single, double pair, double perLine)
+    {
+        switch (BitOperations.PopCount((uint)on))
         {
-            into[set] = byLines[set & mask];
+            case 0:
+                return inPhase[0] / perLine * 100.0;
+            case 1:
+                return inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
+            case 2:
+                var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                return ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
+            default:
+                var worst = double.NegativeInfinity;
+                for (var x = 0; x < 3; x++)
+                {
+                    worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
+                }
+
+                return worst;
         }
     }
 
