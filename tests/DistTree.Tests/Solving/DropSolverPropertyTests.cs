@@ -24,6 +24,29 @@ public sealed class DropSolverPropertyTests
         });
     });
 
+    // The solve works out a branch circuit's drop on its own lines only (the one set its end point reads); the
+    // figure must be, to the bit, the one that the run's unit drops for every set give on those lines, which
+    // the sizer prices (internal consistency: the same arithmetic by two routes).
+    [Property(MaxTest = 60)]
+    public Property BranchDrop_IsItsOwnLinesFigureOfTheFullUnitDrops() => Prop.ForAll(RandomTree.Arbitrary, tree =>
+    {
+        var s = SolverHarness.Solve(tree.ToYaml());
+        Span<double> unitR = stackalloc double[8];
+        Span<double> unitX = stackalloc double[8];
+        foreach (var run in s.Runs.Where(r => r.Kind == RunResultKind.Branch))
+        {
+            run.UnitDrops(unitR, unitX);
+            var full = (run.ResistanceOhmPerKm!.Value * unitR[run.OwnLines]) + (run.ReactanceOhmPerKm!.Value * unitX[run.OwnLines]);
+            var endPoint = s.EndPoints.Single(e => e.NodeIndex == run.NodeIndex);
+            if (run.OwnLines == 0 || run.PercentSumDropPercent != full || endPoint.RunSharesPercent[^1] != full)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    });
+
     // A perfectly balanced tree (3-pole loads only) gives the balanced result: each end point's total is the
     // sum of its path's drops by the three-phase effective-impedance formula, √3·I·L·(R cos θ + X sin θ)/V_LL.
     [Property(MaxTest = 40)]
