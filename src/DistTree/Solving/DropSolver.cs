@@ -589,29 +589,26 @@ public sealed class DropSolver
             // primary feeder's; the rows are stored service side first.
             var set = (int)phases.Assigned[index];
             var at = first + pathCount;
-            void Count(int r)
-            {
-                ref var row = ref rows[r];
-                pathRuns[--at] = r;
-                pathShares[at] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
-                percentSum += lineDrops[(r * 8) + set];
-                loadFlow += row.LoadFlowDropPercent ?? 0;
-                if (row.WidensToAllLines)
-                {
-                    set = (int)Phases.ABC;
-                }
-            }
-
             for (var i = index; at > first; i = parents[i])
             {
-                if (transformerRow[i] >= 0 && i != index)
+                // The node's transformer's row (an end point has none), then its incoming run's.
+                for (var k = 0; k < 2; k++)
                 {
-                    Count(transformerRow[i]);
-                }
+                    var r = k == 0 ? transformerRow[i] : incomingRow[i];
+                    if (r < 0)
+                    {
+                        continue;
+                    }
 
-                if (incomingRow[i] >= 0)
-                {
-                    Count(incomingRow[i]);
+                    ref var row = ref rows[r];
+                    pathRuns[--at] = r;
+                    pathShares[at] = onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
+                    percentSum += lineDrops[(r * 8) + set];
+                    loadFlow += row.LoadFlowDropPercent ?? 0;
+                    if (row.WidensToAllLines)
+                    {
+                        set = (int)Phases.ABC;
+                    }
                 }
             }
 
