@@ -35,13 +35,13 @@ public sealed class DropSolver
         // the phase currents and the rows are the solution's own (see SolvedRows). The arrays that the passes
         // fill whole are made without clearing, so that their memory is first written on every core.
         var power = GC.AllocateUninitializedArray<ComplexPower>(n);
-        var continuous = Scratch.Rent<ComplexPower>(n);
+        var continuous = Scratch.RentToFill<ComplexPower>(n);
         AccumulatePower(nodes, network.ParentIndices, power, continuous);
-        var phases = new PhaseFlow(network, power, new Complex[n * 3], new Phases[n]);
+        var phases = new PhaseFlow(network, power, GC.AllocateUninitializedArray<Complex>(n * 3), new Phases[n]);
 
         // Rows in network order, each transformer's row after its primary feeder's, filled in stage by stage.
-        var incomingRow = Scratch.Rent<int>(n);
-        var transformerRow = Scratch.Rent<int>(n);
+        var incomingRow = Scratch.RentToFill<int>(n);
+        var transformerRow = Scratch.RentToFill<int>(n);
         var count = 0;
         for (var i = 0; i < n; i++)
         {
@@ -53,7 +53,7 @@ public sealed class DropSolver
         // found in the same pass, while the run's objects are at hand; on the load flow, once it is solved.
         var rows = GC.AllocateUninitializedArray<RunRow>(count);
         var runFindings = new IReadOnlyList<Finding>?[count];
-        var lineDrops = Scratch.Rent<double>(count * 8);
+        var lineDrops = Scratch.RentToFill<double>(count * 8);
         var z = Scratch.Rent<Complex>(n);
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
         var findings = 0;
@@ -66,6 +66,7 @@ public sealed class DropSolver
                 if (node.Incoming is { } run)
                 {
                     ref var row = ref rows[incomingRow[i]];
+                    lineDrops.AsSpan(incomingRow[i] * 8, 8).Clear();
                     SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
                     if (findingsWithRuns)
                     {
@@ -80,6 +81,7 @@ public sealed class DropSolver
                 if (node.Equipment?.Transformer is { } transformer)
                 {
                     var row = transformerRow[i];
+                    lineDrops.AsSpan(row * 8, 8).Clear();
                     found += (runFindings[row] = SolveTransformer(ref rows[row], node, transformer, power[i], rules, phases, lineDrops.AsSpan(row * 8, 8)))?.Count ?? 0;
                 }
             }
@@ -152,7 +154,7 @@ public sealed class DropSolver
         // Each range runs from its last index down, so that on one thread the bad load met first is the same one
         // the plain bottom-up loop met first.
         var n = nodes.Length;
-        var demand = Scratch.Rent<double>(n);
+        var demand = Scratch.RentToFill<double>(n);
         ParallelRanges.For(n, (start, end) =>
         {
             for (var i = end - 1; i >= start; i--)
@@ -519,10 +521,10 @@ public sealed class DropSolver
         // counts from it to the service: its transformer's and its incoming run's, unless the transformer is a
         // new origin, where the counting stops. An end point's counted rows are its own run's and those above its
         // panel; they take the next places in the path arrays.
-        var depth = Scratch.Rent<int>(n);
-        var counted = Scratch.Rent<int>(n);
-        var endPointNode = Scratch.Rent<int>(n);
-        var pathStart = Scratch.Rent<int>(n + 1);
+        var depth = Scratch.RentToFill<int>(n);
+        var counted = Scratch.RentToFill<int>(n);
+        var endPointNode = Scratch.RentToFill<int>(n);
+        var pathStart = Scratch.RentToFill<int>(n + 1);
         var endPointCount = 0;
         var used = 0;
         for (var i = 0; i < n; i++)

@@ -103,17 +103,16 @@ public static class LoadFlow
         {
             _n = n;
             _childStarts = childStarts;
-            _link = Scratch.Rent<Link>(n);
-            _zPu = Scratch.Rent<Complex>(n);
-            _s0 = Scratch.Rent<Complex>(n);
-            _demand = Scratch.Rent<double>(n);
-            _ratio = Scratch.Rent<double>(n);
-            _zTransformer = Scratch.Rent<Complex>(n);
-            _bus = Scratch.Rent<Complex>(n);
-            _transformerInput = Scratch.Rent<Complex>(n);
-            _current = Scratch.Rent<Complex>(n);
-            _bus.AsSpan(0, n).Fill(Complex.One);
-            _transformerInput.AsSpan(0, n).Fill(Complex.One);
+            // Every element is written by Prepare, on every core.
+            _link = Scratch.RentToFill<Link>(n);
+            _zPu = Scratch.RentToFill<Complex>(n);
+            _s0 = Scratch.RentToFill<Complex>(n);
+            _demand = Scratch.RentToFill<double>(n);
+            _ratio = Scratch.RentToFill<double>(n);
+            _zTransformer = Scratch.RentToFill<Complex>(n);
+            _bus = Scratch.RentToFill<Complex>(n);
+            _transformerInput = Scratch.RentToFill<Complex>(n);
+            _current = Scratch.RentToFill<Complex>(n);
         }
 
         /// <summary>The largest square of a voltage change in the last forward sweep.</summary>
@@ -128,9 +127,14 @@ public static class LoadFlow
             // The arrays in locals, read once: the loops then index them without going through this object.
             var (link, zPu, s0, demand, ratio, zTransformer) = (_link, _zPu, _s0, _demand, _ratio, _zTransformer);
 
+            // The sweeps start from the nominal voltage everywhere and no current.
+            _bus.AsSpan(start, end - start).Fill(Complex.One);
+            _transformerInput.AsSpan(start, end - start).Fill(Complex.One);
+            _current.AsSpan(start, end - start).Clear();
+
             // First a loop of reads only: the processor then has the reads of many nodes under way at once
             // (objects of a large tree are rarely in cache). The arithmetic follows.
-            var supply = Scratch.Rent<CircuitSupply>(end - start);
+            var supply = Scratch.RentToFill<CircuitSupply>(end - start);
             for (var i = start; i < end; i++)
             {
                 var node = nodes[i];
@@ -151,6 +155,7 @@ public static class LoadFlow
                 link[i] = new Link(parents[i], role, run is not null);
                 demand[i] = node.Equipment?.DemandFactor ?? 1.0;
                 ratio[i] = 1.0;
+                zTransformer[i] = Complex.Zero;
                 if (node.Equipment?.Transformer is { } t)
                 {
                     var r = t.ImpedancePercent / Math.Sqrt(1 + (t.XOverR * t.XOverR)) / 100.0;
@@ -161,6 +166,7 @@ public static class LoadFlow
 
             for (var i = start; i < end; i++)
             {
+                zPu[i] = Complex.Zero;
                 if (link[i].HasRun)
                 {
                     // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
@@ -169,6 +175,7 @@ public static class LoadFlow
                     zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (feed.VoltageV * feed.VoltageV);
                 }
 
+                s0[i] = Complex.Zero;
                 if (link[i].Role >= Role.ConstantPower)
                 {
                     s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
@@ -261,7 +268,7 @@ public static class LoadFlow
         public LoadFlowResult Result(bool converged, int iterations)
         {
             var n = _n;
-            var result = new LoadFlowResult(converged, iterations, new double[n], new double[n]);
+            var result = new LoadFlowResult(converged, iterations, GC.AllocateUninitializedArray<double>(n), GC.AllocateUninitializedArray<double>(n));
             ParallelRanges.For(n, (start, end) =>
             {
                 for (var i = start; i < end; i++)

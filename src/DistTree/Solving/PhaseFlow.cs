@@ -68,7 +68,10 @@ internal sealed class PhaseFlow
         }
     }
 
-    /// <summary>Works out the lines and currents of <paramref name="network"/> into <paramref name="currents"/> (3 per node) and <paramref name="assigned"/> (1 per node), both zero.</summary>
+    /// <summary>
+    /// Works out the lines and currents of <paramref name="network"/> into <paramref name="currents"/> (3 per node, of
+    /// any content: each node's are cleared where they are worked out) and <paramref name="assigned"/> (1 per node, zero).
+    /// </summary>
     public PhaseFlow(DistributionNetwork network, ComplexPower[] power, Complex[] currents, Phases[] assigned)
     {
         _network = network;
@@ -471,10 +474,11 @@ internal sealed class PhaseFlow
     private void Accumulate(ComplexPower[] power)
     {
         ParallelRanges.BottomUp(_network.Levels.Steps, (start, end) => Accumulate(power, start, end));
+        Currents.AsSpan(0, 3).Clear();
         AddChildren(0, Currents.AsSpan(0, 3));
     }
 
-    // Accumulate for the nodes end − 1 down to start, into the zeros the constructor was given.
+    // Accumulate for the nodes end − 1 down to start.
     private void Accumulate(ComplexPower[] power, int start, int end)
     {
         var nodes = _network.NodeArray;
@@ -483,6 +487,7 @@ internal sealed class PhaseFlow
         {
             var node = nodes[i];
             var mine = Currents.AsSpan(i * 3, 3);
+            mine.Clear();
             if (node.Circuit is not null)
             {
                 LoadCurrents(power[i], Assigned[i], VoltagesOf(nodes[node.ParentIndex].System), mine);

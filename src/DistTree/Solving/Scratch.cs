@@ -18,6 +18,13 @@ internal static class Scratch
         return array;
     }
 
+    /// <summary>
+    /// An array of at least <paramref name="length"/> elements of any content, for a pass that writes each of the
+    /// first <paramref name="length"/> before it reads it: the clearing is left out, and the writing is spread over
+    /// the cores with the pass.
+    /// </summary>
+    public static T[] RentToFill<T>(int length) => ArrayPool<T>.Shared.Rent(length);
+
     /// <summary>Gives back an array from <see cref="Rent"/>, clearing the first <paramref name="length"/> elements when they hold references.</summary>
     public static void Return<T>(T[] array, int length)
     {
