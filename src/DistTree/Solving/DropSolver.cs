@@ -36,7 +36,8 @@ public sealed class DropSolver
         // fill whole are made without clearing, so that their memory is first written on every core.
         var power = GC.AllocateUninitializedArray<ComplexPower>(n);
         var continuous = Scratch.RentToFill<ComplexPower>(n);
-        AccumulatePower(nodes, network.ParentIndices, power, continuous);
+        var has = Scratch.RentToFill<Has>(n);
+        AccumulatePower(nodes, network.ParentIndices, power, continuous, has);
         var phases = new PhaseFlow(network, power, GC.AllocateUninitializedArray<Complex>(n * 3), new Phases[n]);
 
         // Rows in network order, each transformer's row after its primary feeder's, filled in stage by stage.
@@ -45,8 +46,8 @@ public sealed class DropSolver
         var count = 0;
         for (var i = 0; i < n; i++)
         {
-            incomingRow[i] = nodes[i].Incoming is null ? -1 : count++;
-            transformerRow[i] = nodes[i].Equipment?.Transformer is null ? -1 : count++;
+            incomingRow[i] = (has[i] & Has.Run) == 0 ? -1 : count++;
+            transformerRow[i] = (has[i] & Has.Transformer) == 0 ? -1 : count++;
         }
 
         // A run's findings follow from its drop: on the percent sum, known as soon as the run is solved, so they are
@@ -111,12 +112,13 @@ public sealed class DropSolver
             });
         }
 
-        var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, flow);
+        var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, has, flow);
         AddReach(network, rows, incomingRow, points.EndPoints.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
+        Scratch.Return(has, n);
 
         var solved = new SolvedRows(network, phases, power, new SolvedRuns(rows, runFindings), points.EndPoints);
         var endPoints = new ViewList<EndPointResult>(points.EndPoints.Rows.Length, e => new EndPointResult(solved, e));
@@ -147,8 +149,19 @@ public sealed class DropSolver
         };
     }
 
+    // What a node has, read from its objects once (see AccumulatePower): the passes that need only this read a byte.
+    [Flags]
+    private enum Has : byte
+    {
+        None = 0,
+        Circuit = 1,
+        Run = 2,
+        Transformer = 4,
+    }
+
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
-    private static void AccumulatePower(NetworkNode[] nodes, int[] parents, ComplexPower[] power, ComplexPower[] continuous)
+    // Notes on the way what each node has, for the passes that need only that.
+    private static void AccumulatePower(NetworkNode[] nodes, int[] parents, ComplexPower[] power, ComplexPower[] continuous, Has[] has)
     {
         // The end points' loads and the other nodes' demand factors first, each node on its own, on every core.
         // Each range runs from its last index down, so that on one thread the bad load met first is the same one
@@ -161,6 +174,9 @@ public sealed class DropSolver
             {
                 var node = nodes[i];
                 demand[i] = node.Equipment?.DemandFactor ?? 1.0;
+                has[i] = (node.Circuit is null ? Has.None : Has.Circuit)
+                    | (node.Incoming is null ? Has.None : Has.Run)
+                    | (node.Equipment?.Transformer is null ? Has.None : Has.Transformer);
                 if (node.Circuit is { } circuit)
                 {
                     try
@@ -508,7 +524,7 @@ public sealed class DropSolver
     // end-point findings.
     private static (SolvedEndPoints EndPoints, int Worst, int Findings) SolveEndPoints(
         DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, int[] incomingRow, int[] transformerRow,
-        LoadFlowResult flow)
+        Has[] has, LoadFlowResult flow)
     {
         var rules = network.Project.Rules;
         var nodes = network.NodeArray;
@@ -532,7 +548,7 @@ public sealed class DropSolver
             var above = i == 0 ? 0 : counted[parents[i]];
             depth[i] = i == 0 ? 1 : depth[parents[i]] + 1;
             counted[i] = newOrigin && transformerRow[i] >= 0 ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
-            if (nodes[i].Circuit is not null)
+            if ((has[i] & Has.Circuit) != 0)
             {
                 endPointNode[endPointCount] = i;
                 pathStart[endPointCount++] = used;
