@@ -55,7 +55,7 @@ public sealed class DropSolver
         var rows = GC.AllocateUninitializedArray<RunRow>(count);
         var runFindings = new IReadOnlyList<Finding>?[count];
         var lineDrops = Scratch.RentToFill<double>(count * 8);
-        var z = Scratch.Rent<Complex>(n);
+        var z = Scratch.RentToFill<Complex>(n); // read only where a run comes in, and written there
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
         var findings = 0;
         ParallelRanges.For(n, (start, end) =>
@@ -721,7 +721,7 @@ public sealed class DropSolver
     private static void AddReach(DistributionNetwork network, RunRow[] rows, int[] incomingRow, EndPointRow[] endPoints, Rules rules)
     {
         var nodes = network.NodeArray;
-        var slack = Scratch.Rent<double>(nodes.Length);
+        var slack = Scratch.RentToFill<double>(nodes.Length);
         slack.AsSpan(0, nodes.Length).Fill(double.PositiveInfinity);
         foreach (var e in endPoints)
         {
