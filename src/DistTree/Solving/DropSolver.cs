@@ -149,7 +149,8 @@ public sealed class DropSolver
         };
     }
 
-    // What a node has, read from its objects once (see AccumulatePower): the passes that need only this read a byte.
+    // What a node has, read from its objects once (see AccumulatePower): the passes that need only this read a
+    // byte, and the end points' pass reads an end point's objects only for a finding or a motor.
     [Flags]
     private enum Has : byte
     {
@@ -157,6 +158,7 @@ public sealed class DropSolver
         Circuit = 1,
         Run = 2,
         Transformer = 4,
+        Motor = 8,
     }
 
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
@@ -175,6 +177,7 @@ public sealed class DropSolver
                 var node = nodes[i];
                 demand[i] = node.Equipment?.DemandFactor ?? 1.0;
                 has[i] = (node.Circuit is null ? Has.None : Has.Circuit)
+                    | (node.Circuit is { Load.IsMotor: true } ? Has.Motor : Has.None)
                     | (node.Incoming is null ? Has.None : Has.Run)
                     | (node.Equipment?.Transformer is null ? Has.None : Has.Transformer);
                 if (node.Circuit is { } circuit)
@@ -598,8 +601,6 @@ public sealed class DropSolver
         {
             var index = endPointNode[e];
             var (first, pathCount) = (pathStart[e], pathStart[e + 1] - pathStart[e]);
-            var node = nodes[index];
-            var circuit = node.Circuit!;
             double percentSum = 0, loadFlow = 0;
 
             // Walking up from the end point: its own lines, until a transformer between systems of different
@@ -632,9 +633,11 @@ public sealed class DropSolver
 
             var total = onLoadFlow ? loadFlow : percentSum;
             var limit = rules.TotalLimitPercent;
+            // The end point's objects are read only for a finding or a motor (see Has).
             List<Finding>? found = null;
             if (total > limit + 1e-9)
             {
+                var circuit = nodes[index].Circuit!;
                 (found ??= []).Add(new Finding(
                     FindingKind.TotalDrop,
                     circuit.FullId,
@@ -644,9 +647,10 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            var start = circuit.Load.IsMotor ? MotorStartCheck(network, rows, incomingRow, transformerRow, node, power[index], rules) : null;
+            var start = (has[index] & Has.Motor) != 0 ? MotorStartCheck(network, rows, incomingRow, transformerRow, nodes[index], power[index], rules) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
+                var circuit = nodes[index].Circuit!;
                 (found ??= []).Add(new Finding(
                     FindingKind.MotorStart,
                     circuit.FullId,
@@ -664,7 +668,7 @@ public sealed class DropSolver
                 TotalDropPercent = total,
                 PercentSumTotalDropPercent = percentSum,
                 LoadFlowTotalDropPercent = flow.Converged ? loadFlow : null,
-                LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[index] * circuit.Supply.VoltageV : null,
+                LoadFlowEndVoltageV = flow.Converged ? flow.InputPu[index] * rows[incomingRow[index]].VoltageV : null,
             };
             motorStarts[e] = start;
             findings[e] = found;
