@@ -46,6 +46,33 @@ internal sealed record Measurement(string Name, int Size, IReadOnlyList<double> 
         return new Measurement(name, size, times, cpu, allocated);
     }
 
+    /// <summary>
+    /// Times two pieces of work in turn, <paramref name="repeats"/> times each, after <paramref name="warmUps"/> runs of
+    /// each in turn: both see the same machine and the same compiled code (a method called once per run is
+    /// compiled at its final tier only after some 30 calls).
+    /// </summary>
+    public static (Measurement First, Measurement Second) Alternately(
+        string firstName, string secondName, int size, int repeats, int warmUps, Action first, Action second)
+    {
+        for (var i = 0; i < warmUps; i++)
+        {
+            first();
+            second();
+        }
+
+        var (a, b) = (new List<Measurement>(repeats), new List<Measurement>(repeats));
+        for (var i = 0; i < repeats; i++)
+        {
+            a.Add(Of(firstName, size, 1, first, warmUp: false));
+            b.Add(Of(secondName, size, 1, second, warmUp: false));
+        }
+
+        return (Merge(a), Merge(b));
+
+        static Measurement Merge(List<Measurement> runs) => new(
+            runs[0].Name, runs[0].Size, [.. runs.SelectMany(r => r.Seconds)], [.. runs.SelectMany(r => r.CpuSeconds)], runs[^1].AllocatedBytes);
+    }
+
     public override string ToString() =>
         $"{Name,-9} {Size,8:N0}  median {Format(Median),9}  spread {Format(Min)} .. {Format(Max)}  cpu {Format(CpuMedian),9}  allocated {AllocatedBytes / 1048576.0,7:0.0} MiB";
 

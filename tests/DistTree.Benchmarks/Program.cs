@@ -92,15 +92,22 @@ try
         Solution solution = null!;
         if (Wanted("solve") || Wanted("upsize"))
         {
-            // Upsize is read beside solve (same run, same load), so solve is timed whenever upsize is.
-            var m = Measurement.Of("solve", size, repeats, () => solution = DropSolver.Standard.Solve(network));
+            // Upsize is read beside solve (same run, same load), so solve is timed whenever upsize is. A solve is
+            // short beside the other stages: 11 repeats at least, so that one slow moment of a shared machine does
+            // not make the median. The same solve with every pass on this thread alone, in turn with it: what the
+            // passes on every core gain, in the same moments and on the same compiled code, warmed up first.
+            var (m, single) = Measurement.Alternately(
+                "solve", "solve-1t", size, Math.Max(repeats, 11), warmUps: 30,
+                () => solution = DropSolver.Standard.Solve(network),
+                () =>
+                {
+                    ParallelRanges.OnOneThread = true;
+                    solution = DropSolver.Standard.Solve(network);
+                    ParallelRanges.OnOneThread = false;
+                });
             results.Add(m);
+            results.Add(single);
             solveRunsPerSecond[size] = solution.Runs.Count / m.Median;
-
-            // The same solve with every pass on this thread alone: what the passes on every core gain, in one run.
-            ParallelRanges.OnOneThread = true;
-            results.Add(Measurement.Of("solve-1t", size, repeats, () => solution = DropSolver.Standard.Solve(network)));
-            ParallelRanges.OnOneThread = false;
         }
 
         solution ??= DropSolver.Standard.Solve(network);
