@@ -17,6 +17,14 @@ using DistTree.Solving;
 // Filters select stages (generate yaml parse validate build solve json analyze upsize compare html) and sizes
 // (1000 10000 100000);
 // none selects everything.
+// Or: builds PROJECT ROUNDS [one-thread] FOLDER FOLDER… to time the solve of several builds in one process (see
+// BuildComparison and DEVELOPERS.md, Performance).
+if (args is ["builds", .. var buildArguments])
+{
+    BuildComparison.Run(buildArguments);
+    return;
+}
+
 var filters = args.Select(a => a.ToLowerInvariant()).ToHashSet();
 int[] allSizes = [1_000, 10_000, 100_000];
 string[] allStages = ["generate", "yaml", "parse", "validate", "build", "solve", "json", "analyze", "upsize", "compare", "html"];
