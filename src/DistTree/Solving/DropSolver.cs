@@ -66,12 +66,14 @@ public sealed class DropSolver
                 var node = nodes[i];
                 if (node.Incoming is { } run)
                 {
-                    ref var row = ref rows[incomingRow[i]];
-                    lineDrops.AsSpan(incomingRow[i] * 8, 8).Clear();
-                    SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, lineDrops.AsSpan(incomingRow[i] * 8, 8));
+                    var r = incomingRow[i];
+                    ref var row = ref rows[r];
+                    var drops = lineDrops.AsSpan(r * 8, 8);
+                    drops.Clear();
+                    SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, drops);
                     if (findingsWithRuns)
                     {
-                        found += (runFindings[incomingRow[i]] = RunFindings(ref row, run))?.Count ?? 0;
+                        found += (runFindings[r] = RunFindings(ref row, run))?.Count ?? 0;
                     }
 
                     // The load flow's impedance of the run: its whole length, sets in parallel.
@@ -81,9 +83,10 @@ public sealed class DropSolver
 
                 if (node.Equipment?.Transformer is { } transformer)
                 {
-                    var row = transformerRow[i];
-                    lineDrops.AsSpan(row * 8, 8).Clear();
-                    found += (runFindings[row] = SolveTransformer(ref rows[row], node, transformer, power[i], rules, phases, lineDrops.AsSpan(row * 8, 8)))?.Count ?? 0;
+                    var r = transformerRow[i];
+                    var drops = lineDrops.AsSpan(r * 8, 8);
+                    drops.Clear();
+                    found += (runFindings[r] = SolveTransformer(ref rows[r], node, transformer, power[i], rules, phases, drops))?.Count ?? 0;
                 }
             }
 
