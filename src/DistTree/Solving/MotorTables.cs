@@ -47,8 +47,13 @@ public static class MotorTables
         var (ratings, volts, amps) = supply.Phases == 3
             ? (ThreePhaseHp, ThreePhaseVolts, ThreePhaseAmps)
             : (SinglePhaseHp, SinglePhaseVolts, SinglePhaseAmps);
-        var row = Array.FindIndex(ratings, r => Math.Abs(r - hp) < 1e-6);
-        if (row < 0)
+        var row = 0;
+        while (row < ratings.Length && Math.Abs(ratings[row] - hp) >= 1e-6)
+        {
+            row++;
+        }
+
+        if (row == ratings.Length)
         {
             return null;
         }
