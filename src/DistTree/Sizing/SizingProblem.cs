@@ -139,8 +139,6 @@ internal sealed class SizingProblem
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
-        var cos = row.PowerFactor;
-        var sin = Math.Sqrt(Math.Max(0, 1 - (cos * cos)));
         var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
         var unitR = new double[8];
         var unitX = new double[8];
@@ -169,7 +167,7 @@ internal sealed class SizingProblem
 
                 // The drop is linear in R and X (per phase too): the run's unit responses price any size. A branch
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
-                var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, run.Supply, project.Service.FrequencyHz, row.CurrentA, cos, sin);
+                var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA);
                 var ratio = (double)conductors.Sets / sets;
                 var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);

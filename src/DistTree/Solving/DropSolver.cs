@@ -234,8 +234,7 @@ public sealed class DropSolver
 
         // Design current: 125 % of the continuous part plus the rest, as a phasor sum: S + 0.25·S_continuous.
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
-        var figures = RunElectrics.Compute(
-            _catalog, rules, conductors, conductors.Size, conductors.Sets, supply, frequencyHz, currentA, carried.PowerFactor, carried.SinTheta);
+        var figures = RunElectrics.Compute(_catalog, rules, conductors, conductors.Size, conductors.Sets, frequencyHz, currentA);
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
         double ownDrop;
         if (ownLines > 0 && points.Count == 0)
