@@ -56,6 +56,7 @@ public sealed class DropSolver
         var runFindings = new IReadOnlyList<Finding>?[count];
         var lineDrops = Scratch.RentToFill<double>(count * 8);
         var z = Scratch.RentToFill<Complex>(n); // read only where a run comes in, and written there
+        var loopKm = Scratch.RentToFill<double>(count); // read only for a run's row, and written there
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
         var findings = 0;
         ParallelRanges.For(n, (start, end) =>
@@ -76,9 +77,11 @@ public sealed class DropSolver
                         found += (runFindings[r] = RunFindings(ref row, run))?.Count ?? 0;
                     }
 
-                    // The load flow's impedance of the run: its whole length, sets in parallel.
+                    // The load flow's impedance of the run: its whole length, sets in parallel. Its loop, for the
+                    // motor-start check: both conductors for single-phase.
                     var km = PerSetKm(run.Conductors);
                     z[i] = new Complex(row.ResistanceOhmPerKm * km, row.ReactanceOhmPerKm * km);
+                    loopKm[r] = km * (run.Supply.Phases == 3 ? 1.0 : 2.0);
                 }
 
                 if (node.Equipment?.Transformer is { } transformer)
@@ -115,9 +118,10 @@ public sealed class DropSolver
             });
         }
 
-        var points = SolveEndPoints(network, rows, phases, power, lineDrops, incomingRow, transformerRow, has, flow);
+        var points = SolveEndPoints(network, rows, phases, power, lineDrops, loopKm, incomingRow, transformerRow, has, flow);
         AddReach(network, rows, incomingRow, points.EndPoints.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
+        Scratch.Return(loopKm, count);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
@@ -528,8 +532,8 @@ public sealed class DropSolver
     // rows, their counted runs and shares (see SolvedRows), the worst end point (-1 without any) and the number of
     // end-point findings.
     private static (SolvedEndPoints EndPoints, int Worst, int Findings) SolveEndPoints(
-        DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, int[] incomingRow, int[] transformerRow,
-        Has[] has, LoadFlowResult flow)
+        DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, double[] loopKm, int[] incomingRow,
+        int[] transformerRow, Has[] has, LoadFlowResult flow)
     {
         var rules = network.Project.Rules;
         var nodes = network.NodeArray;
@@ -649,7 +653,7 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            var start = (has[index] & Has.Motor) != 0 ? MotorStartCheck(network, rows, incomingRow, transformerRow, nodes[index], power[index], rules) : null;
+            var start = (has[index] & Has.Motor) != 0 ? MotorStartCheck(network, rows, loopKm, incomingRow, transformerRow, index, power[index]) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 var circuit = nodes[index].Circuit!;
@@ -682,28 +686,25 @@ public sealed class DropSolver
     // X_loop the run's impedance (both conductors for single-phase); on a transformer (%R·ΔP + %X·ΔQ)/S_rated.
     // Superposed on the steady drops of the whole path (a new origin does not stop a physical dip).
     private static MotorStartResult MotorStartCheck(
-        DistributionNetwork network, RunRow[] rows, int[] incomingRow, int[] transformerRow, NetworkNode motor, ComplexPower running, Rules rules)
+        DistributionNetwork network, RunRow[] rows, double[] loopKm, int[] incomingRow, int[] transformerRow, int motor, ComplexPower running)
     {
-        var nodes = network.NodeArray;
-        var lockedRotor = MotorStarting.LockedRotor(motor.Circuit!.Load, running);
+        var (nodes, parents) = (network.NodeArray, network.ParentIndices);
+        var lockedRotor = MotorStarting.LockedRotor(nodes[motor].Circuit!.Load, running);
         var delta = lockedRotor + (running * -1.0);
         double terminal = 0, panel = 0;
-        for (var i = motor.Index; i > 0; i = nodes[i].ParentIndex)
+        for (var i = motor; i > 0; i = parents[i])
         {
             var extraHere = 0.0;
             var steadyHere = 0.0;
             if (incomingRow[i] >= 0)
             {
                 ref var r = ref rows[incomingRow[i]];
-                var run = nodes[i].Incoming!;
-                var conductors = run.Conductors;
-                var loop = run.Supply.Phases == 3 ? 1.0 : 2.0;
-                var km = PerSetKm(conductors) * loop;
+                var km = loopKm[incomingRow[i]];
                 extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
                 steadyHere += r.DropPercent;
             }
 
-            if (transformerRow[i] >= 0 && i != motor.Index)
+            if (transformerRow[i] >= 0 && i != motor)
             {
                 var t = nodes[i].Equipment!.Transformer!;
                 var (percentR, percentX) = PercentRx(t);
@@ -712,13 +713,13 @@ public sealed class DropSolver
             }
 
             terminal += extraHere + steadyHere;
-            if (i != motor.Index)
+            if (i != motor)
             {
                 panel += extraHere + steadyHere;
             }
         }
 
-        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, panel, rules.MotorStartLimitPercent);
+        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, panel, network.Project.Rules.MotorStartLimitPercent);
     }
 
     // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it; points
