@@ -37,7 +37,8 @@ public sealed class DropSolver
         var power = GC.AllocateUninitializedArray<ComplexPower>(n);
         var continuous = Scratch.RentToFill<ComplexPower>(n);
         var has = Scratch.RentToFill<Has>(n);
-        AccumulatePower(nodes, network.ParentIndices, power, continuous, has);
+        var lockedRotor = Scratch.RentToFill<ComplexPower>(n); // read only for a motor, and written there
+        AccumulatePower(nodes, network.ParentIndices, power, continuous, has, lockedRotor);
         var phases = new PhaseFlow(network, power, GC.AllocateUninitializedArray<Complex>(n * 3), new Phases[n]);
 
         // Rows in network order, each transformer's row after its primary feeder's, filled in stage by stage.
@@ -118,7 +119,7 @@ public sealed class DropSolver
             });
         }
 
-        var points = SolveEndPoints(network, rows, phases, power, lineDrops, loopKm, incomingRow, transformerRow, has, flow);
+        var points = SolveEndPoints(network, rows, phases, power, lineDrops, loopKm, lockedRotor, incomingRow, transformerRow, has, flow);
         AddReach(network, rows, incomingRow, points.EndPoints.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(loopKm, count);
@@ -126,6 +127,7 @@ public sealed class DropSolver
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
         Scratch.Return(has, n);
+        Scratch.Return(lockedRotor, n);
 
         var solved = new SolvedRows(network, phases, power, new SolvedRuns(rows, runFindings), points.EndPoints);
         var endPoints = new ViewList<EndPointResult>(points.EndPoints.Rows.Length, e => new EndPointResult(solved, e));
@@ -169,8 +171,10 @@ public sealed class DropSolver
     }
 
     // Bottom-up: an end point's power is its load; a node's is the phasor sum of its children's times its demand factor.
-    // Notes on the way what each node has, for the passes that need only that.
-    private static void AccumulatePower(NetworkNode[] nodes, int[] parents, ComplexPower[] power, ComplexPower[] continuous, Has[] has)
+    // Notes on the way what each node has, for the passes that need only that, and a motor's locked-rotor power
+    // (its load is at hand here; an end point's demand factor is 1, so its power is the one the check would read).
+    private static void AccumulatePower(
+        NetworkNode[] nodes, int[] parents, ComplexPower[] power, ComplexPower[] continuous, Has[] has, ComplexPower[] lockedRotor)
     {
         // The end points' loads and the other nodes' demand factors first, each node on its own, on every core.
         // Each range runs from its last index down, so that on one thread the bad load met first is the same one
@@ -199,6 +203,10 @@ public sealed class DropSolver
                     }
 
                     continuous[i] = circuit.Continuous ? power[i] : ComplexPower.Zero;
+                    if (circuit.Load.IsMotor)
+                    {
+                        lockedRotor[i] = MotorStarting.LockedRotor(circuit.Load, power[i]);
+                    }
                 }
                 else
                 {
@@ -532,8 +540,8 @@ public sealed class DropSolver
     // rows, their counted runs and shares (see SolvedRows), the worst end point (-1 without any) and the number of
     // end-point findings.
     private static (SolvedEndPoints EndPoints, int Worst, int Findings) SolveEndPoints(
-        DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, double[] loopKm, int[] incomingRow,
-        int[] transformerRow, Has[] has, LoadFlowResult flow)
+        DistributionNetwork network, RunRow[] rows, PhaseFlow phases, ComplexPower[] power, double[] lineDrops, double[] loopKm,
+        ComplexPower[] lockedRotor, int[] incomingRow, int[] transformerRow, Has[] has, LoadFlowResult flow)
     {
         var rules = network.Project.Rules;
         var nodes = network.NodeArray;
@@ -653,7 +661,7 @@ public sealed class DropSolver
                     circuit.Location));
             }
 
-            var start = (has[index] & Has.Motor) != 0 ? MotorStartCheck(network, rows, loopKm, incomingRow, transformerRow, index, power[index]) : null;
+            var start = (has[index] & Has.Motor) != 0 ? MotorStartCheck(network, rows, loopKm, incomingRow, transformerRow, index, power[index], lockedRotor[index]) : null;
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 var circuit = nodes[index].Circuit!;
@@ -686,10 +694,10 @@ public sealed class DropSolver
     // X_loop the run's impedance (both conductors for single-phase); on a transformer (%R·ΔP + %X·ΔQ)/S_rated.
     // Superposed on the steady drops of the whole path (a new origin does not stop a physical dip).
     private static MotorStartResult MotorStartCheck(
-        DistributionNetwork network, RunRow[] rows, double[] loopKm, int[] incomingRow, int[] transformerRow, int motor, ComplexPower running)
+        DistributionNetwork network, RunRow[] rows, double[] loopKm, int[] incomingRow, int[] transformerRow, int motor, ComplexPower running,
+        ComplexPower lockedRotor)
     {
         var (nodes, parents) = (network.NodeArray, network.ParentIndices);
-        var lockedRotor = MotorStarting.LockedRotor(nodes[motor].Circuit!.Load, running);
         var delta = lockedRotor + (running * -1.0);
         double terminal = 0, panel = 0;
         for (var i = motor; i > 0; i = parents[i])
