@@ -105,19 +105,52 @@ internal sealed class PhaseFlow
 
     /// <summary>
     /// The unit drops of <see cref="UnitDrops"/> for the one set of lines <paramref name="set"/> ((int)Phases, 1 … 7):
-    /// the same figures, the others not worked out.
+    /// the same figures, by the same arithmetic (UnitDeltas, InPhase, DropOn) on the set's own lines only.
     /// </summary>
     public (double UnitR, double UnitX) UnitDropsOn(int node, double km, ElectricalSystem system, double scale, int set)
     {
         var voltages = VoltagesOf(system);
-        var (deltaR, deltaX) = UnitDeltas(node, km, scale, voltages.HasNeutral);
         var lines = voltages.Lines;
         var on = set & ((1 << lines) - 1);
-        var inPhaseR = InPhase(deltaR, lines);
-        var inPhaseX = InPhase(deltaX, lines);
-        return (
-            DropOn(on, deltaR, inPhaseR, lines, voltages.SingleV, voltages.PairV, voltages.PerLineV),
-            DropOn(on, deltaX, inPhaseX, lines, voltages.SingleV, voltages.PairV, voltages.PerLineV));
+        var i = Currents.AsSpan(node * 3, 3);
+        var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
+        var (resistive, reactive) = (new Complex(km, 0), new Complex(0, km));
+        switch (BitOperations.PopCount((uint)on))
+        {
+            case 0:
+            case 1:
+            {
+                // One line; a set with none of the system's lines takes line A's, to the neutral.
+                var (x, v) = on == 0 ? (0, voltages.PerLineV) : (BitOperations.TrailingZeroCount(on), voltages.SingleV);
+                var flowing = i[x] + neutral;
+                var unit = UnitConjugate[(lines * 3) + x];
+                return ((flowing * resistive * scale * unit).Real / v * 100.0, (flowing * reactive * scale * unit).Real / v * 100.0);
+            }
+
+            case 2:
+            {
+                var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                var (flowingA, flowingB) = (i[a] + neutral, i[b] + neutral);
+                var (pair, magnitude) = (PairConjugate[(lines * 8) + on], PairMagnitude[(lines * 8) + on]);
+                return (
+                    (((flowingA * resistive * scale) - (flowingB * resistive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0,
+                    (((flowingA * reactive * scale) - (flowingB * reactive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0);
+            }
+
+            default:
+            {
+                var (worstR, worstX) = (double.NegativeInfinity, double.NegativeInfinity);
+                for (var x = 0; x < 3; x++)
+                {
+                    var flowing = i[x] + neutral;
+                    var unit = UnitConjugate[(lines * 3) + x];
+                    worstR = Math.Max(worstR, (flowing * resistive * scale * unit).Real / voltages.PerLineV * 100.0);
+                    worstX = Math.Max(worstX, (flowing * reactive * scale * unit).Real / voltages.PerLineV * 100.0);
+                }
+
+                return (worstR, worstX);
+            }
+        }
     }
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>

@@ -28,7 +28,7 @@ internal sealed record RandomTree(IReadOnlyList<RandomPanel> Panels)
         select new RandomPanel(parent, feederLength, feederSize, demand, circuits.ToArray());
 
     private static Gen<RandomCircuit> CircuitGen =>
-        from poles in Gen.Elements(1, 1, 3)
+        from poles in Gen.Elements(1, 1, 2, 3)
         from va in Gen.Choose(100, 3000)
         from pf in Gen.Choose(70, 100)
         from length in Gen.Choose(3, 60)
