@@ -59,6 +59,7 @@ public sealed class DropSolver
         var z = Scratch.RentToFill<Complex>(n); // read only where a run comes in, and written there
         var loopKm = Scratch.RentToFill<double>(count); // read only for a run's row, and written there
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
+        var bases = new RunElectrics.Bases(_catalog, rules, frequency);
         var findings = 0;
         ParallelRanges.For(n, (start, end) =>
         {
@@ -72,7 +73,7 @@ public sealed class DropSolver
                     ref var row = ref rows[r];
                     var drops = lineDrops.AsSpan(r * 8, 8);
                     drops.Clear();
-                    SolveRun(ref row, run, power, continuous[i], rules, frequency, phases, drops);
+                    SolveRun(ref row, run, bases, power, continuous[i], rules, frequency, phases, drops);
                     if (findingsWithRuns)
                     {
                         found += (runFindings[r] = RunFindings(ref row, run))?.Count ?? 0;
@@ -233,8 +234,8 @@ public sealed class DropSolver
 
     // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see LineDrops).
     private void SolveRun(
-        ref RunRow row, NetworkRun run, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz, PhaseFlow phases,
-        Span<double> lineDrops)
+        ref RunRow row, NetworkRun run, RunElectrics.Bases bases, ComplexPower[] power, ComplexPower continuousPart, Rules rules, double frequencyHz,
+        PhaseFlow phases, Span<double> lineDrops)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -246,7 +247,7 @@ public sealed class DropSolver
 
         // Design current: 125 % of the continuous part plus the rest, as a phasor sum: S + 0.25·S_continuous.
         var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
-        var figures = RunElectrics.Compute(_catalog, rules, conductors, conductors.Size, conductors.Sets, frequencyHz, currentA);
+        var figures = RunElectrics.Compute(_catalog, rules, conductors, conductors.Size, conductors.Sets, frequencyHz, currentA, bases.Of(conductors));
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
         double ownDrop;
         if (ownLines > 0 && points.Count == 0)

@@ -25,19 +25,66 @@ public static class RunElectrics
     /// <param name="sets">Parallel sets to compute at.</param>
     /// <param name="frequencyHz">Supply frequency.</param>
     /// <param name="currentA">Line current of the whole run (all sets).</param>
-    public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA)
+    public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA) =>
+        Compute(catalog, rules, run, size, sets, frequencyHz, currentA, BasisOf(catalog, rules, run, size, frequencyHz));
+
+    /// <summary>The figures of <see cref="Compute(ConductorCatalog, Rules, Run, ConductorSize, int, double, double)"/> from the conductor's <paramref name="basis"/>.</summary>
+    internal static RunFigures Compute(
+        ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, ConductorBasis basis)
     {
-        var thermal = catalog.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC);
-        var rated = ConductorCatalog.RatedTemperatureC(size, run.InsulationC);
         var temperature = rules.Temperature switch
         {
-            TemperatureMode.Rated => rated,
-            TemperatureMode.Fixed => rules.FixedTemperatureC ?? rated,
-            _ => ConductorTemperature.Estimate(rules.AmbientC, rated, currentA / sets, thermal),
+            TemperatureMode.Rated => basis.RatedC,
+            TemperatureMode.Fixed => rules.FixedTemperatureC ?? basis.RatedC,
+            _ => ConductorTemperature.Estimate(rules.AmbientC, basis.RatedC, currentA / sets, basis.ThermalA),
         };
         var r = catalog.AcResistanceOhmPerKm(size, run.Material, run.Raceway, temperature, frequencyHz);
-        var x = catalog.ReactanceOhmPerKm(size, run.Raceway, frequencyHz);
-        var allowable = catalog.AllowableAmpacityA(size, run.Material, run.InsulationC, rules.TerminalC, thermal);
-        return new RunFigures(temperature, r, x, allowable * sets);
+        return new RunFigures(temperature, r, basis.ReactanceOhmPerKm, basis.AllowableA * sets);
+    }
+
+    /// <summary>A conductor's figures that its current does not change, under <paramref name="rules"/> at <paramref name="frequencyHz"/>.</summary>
+    internal static ConductorBasis BasisOf(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, double frequencyHz)
+    {
+        var thermal = catalog.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC);
+        return new ConductorBasis(
+            thermal,
+            ConductorCatalog.RatedTemperatureC(size, run.InsulationC),
+            catalog.ReactanceOhmPerKm(size, run.Raceway, frequencyHz),
+            catalog.AllowableAmpacityA(size, run.Material, run.InsulationC, rules.TerminalC, thermal));
+    }
+
+    /// <summary>
+    /// The conductor bases of one solve, one per size, material, insulation rating (60, 75, 90 °C) and raceway,
+    /// each worked out when first asked for: the rules and the frequency are the solve's. Threads may ask at once;
+    /// two that work out the same basis get equal ones.
+    /// </summary>
+    internal sealed class Bases(ConductorCatalog catalog, Rules rules, double frequencyHz)
+    {
+        private readonly ConductorBasis?[] _bases = new ConductorBasis?[ConductorSize.All.Count * 2 * 3 * 3];
+
+        public ConductorBasis Of(Run run)
+        {
+            var rating = run.InsulationC switch
+            {
+                60 => 0,
+                75 => 1,
+                90 => 2,
+                _ => -1,
+            };
+            if (rating < 0)
+            {
+                return BasisOf(catalog, rules, run, run.Size, frequencyHz);
+            }
+
+            var key = ((((run.Size.Index * 2) + (int)run.Material) * 3) + rating) * 3 + (int)run.Raceway;
+            return _bases[key] ??= BasisOf(catalog, rules, run, run.Size, frequencyHz);
+        }
     }
 }
+
+/// <summary>A conductor's figures that its current does not change (see <see cref="RunElectrics.BasisOf"/>).</summary>
+/// <param name="ThermalA">Its own ampacity at the ambient, or null where the table has none.</param>
+/// <param name="RatedC">The temperature its insulation is rated at.</param>
+/// <param name="ReactanceOhmPerKm">Reactance of one conductor.</param>
+/// <param name="AllowableA">The allowable ampacity of one set, or null where the table has none.</param>
+internal sealed record ConductorBasis(double? ThermalA, double RatedC, double ReactanceOhmPerKm, double? AllowableA);
