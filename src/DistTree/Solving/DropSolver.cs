@@ -57,7 +57,10 @@ public sealed class DropSolver
         var runFindings = new IReadOnlyList<Finding>?[count];
         var lineDrops = Scratch.RentToFill<double>(count * 8);
         var z = Scratch.RentToFill<Complex>(n); // read only where a run comes in, and written there
-        var loopKm = Scratch.RentToFill<double>(count); // read only for a run's row, and written there
+        // What later passes read of a run, kept by its row: they read only a run's rows, and the runs' pass writes them.
+        var loopKm = Scratch.RentToFill<double>(count);
+        var lengthM = Scratch.RentToFill<double>(count);
+        var limitPercent = Scratch.RentToFill<double>(count);
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
         var bases = new RunElectrics.Bases(_catalog, rules, frequency);
         var findings = 0;
@@ -84,6 +87,8 @@ public sealed class DropSolver
                     var km = PerSetKm(run.Conductors);
                     z[i] = new Complex(row.ResistanceOhmPerKm * km, row.ReactanceOhmPerKm * km);
                     loopKm[r] = km * (run.Supply.Phases == 3 ? 1.0 : 2.0);
+                    lengthM[r] = run.Conductors.LengthM;
+                    limitPercent[r] = run.LimitPercent;
                 }
 
                 if (node.Equipment?.Transformer is { } transformer)
@@ -121,9 +126,11 @@ public sealed class DropSolver
         }
 
         var points = SolveEndPoints(network, rows, phases, power, lineDrops, loopKm, lockedRotor, incomingRow, transformerRow, has, flow);
-        AddReach(network, rows, incomingRow, points.EndPoints.Rows, rules);
+        AddReach(network, rows, incomingRow, lengthM, limitPercent, points.EndPoints.Rows, rules);
         Scratch.Return(lineDrops, count * 8);
         Scratch.Return(loopKm, count);
+        Scratch.Return(lengthM, count);
+        Scratch.Return(limitPercent, count);
         Scratch.Return(incomingRow, n);
         Scratch.Return(transformerRow, n);
         Scratch.Return(continuous, n);
@@ -734,7 +741,8 @@ public sealed class DropSolver
     // Reach. Own limit: drop is proportional to length (current and temperature do not depend on it; points
     // scale with the run), so L_max = L·limit/drop. Total: the least slack (limit − total) of the end points
     // whose totals include the run, found bottom-up; L_max = L·(drop + slack)/drop.
-    private static void AddReach(DistributionNetwork network, RunRow[] rows, int[] incomingRow, EndPointRow[] endPoints, Rules rules)
+    private static void AddReach(
+        DistributionNetwork network, RunRow[] rows, int[] incomingRow, double[] lengthM, double[] limitPercent, EndPointRow[] endPoints, Rules rules)
     {
         var nodes = network.NodeArray;
         var slack = Scratch.RentToFill<double>(nodes.Length);
@@ -764,12 +772,11 @@ public sealed class DropSolver
             {
                 if (incomingRow[i] >= 0)
                 {
-                    ref var row = ref rows[incomingRow[i]];
-                    var run = nodes[i].Incoming!;
-                    var lengthM = run.Conductors.LengthM;
+                    var r = incomingRow[i];
+                    ref var row = ref rows[r];
                     var visible = slack[i];
-                    row.MaxLengthM = Reach(lengthM, row.DropPercent, run.LimitPercent);
-                    row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM, row.DropPercent, row.DropPercent + visible);
+                    row.MaxLengthM = Reach(lengthM[r], row.DropPercent, limitPercent[r]);
+                    row.MaxLengthTotalM = double.IsPositiveInfinity(visible) ? null : Reach(lengthM[r], row.DropPercent, row.DropPercent + visible);
                 }
             }
         });
