@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using DistTree.Conductors;
 using DistTree.Model;
 
@@ -56,11 +57,11 @@ public static class RunElectrics
     /// <summary>
     /// The conductor bases of one solve, one per size, material, insulation rating (60, 75, 90 °C) and raceway,
     /// each worked out when first asked for: the rules and the frequency are the solve's. Threads may ask at once;
-    /// two that work out the same basis get equal ones.
+    /// two that work out the same basis get equal ones, each kept whole in a box of its own.
     /// </summary>
     internal sealed class Bases(ConductorCatalog catalog, Rules rules, double frequencyHz)
     {
-        private readonly ConductorBasis?[] _bases = new ConductorBasis?[ConductorSize.All.Count * 2 * 3 * 3];
+        private readonly StrongBox<ConductorBasis>?[] _bases = new StrongBox<ConductorBasis>?[ConductorSize.All.Count * 2 * 3 * 3];
 
         public ConductorBasis Of(Run run)
         {
@@ -77,7 +78,7 @@ public static class RunElectrics
             }
 
             var key = ((((run.Size.Index * 2) + (int)run.Material) * 3) + rating) * 3 + (int)run.Raceway;
-            return _bases[key] ??= BasisOf(catalog, rules, run, run.Size, frequencyHz);
+            return (_bases[key] ??= new StrongBox<ConductorBasis>(BasisOf(catalog, rules, run, run.Size, frequencyHz))).Value;
         }
     }
 }
@@ -87,4 +88,4 @@ public static class RunElectrics
 /// <param name="RatedC">The temperature its insulation is rated at.</param>
 /// <param name="ReactanceOhmPerKm">Reactance of one conductor.</param>
 /// <param name="AllowableA">The allowable ampacity of one set, or null where the table has none.</param>
-internal sealed record ConductorBasis(double? ThermalA, double RatedC, double ReactanceOhmPerKm, double? AllowableA);
+internal readonly record struct ConductorBasis(double? ThermalA, double RatedC, double ReactanceOhmPerKm, double? AllowableA);
