@@ -9,8 +9,10 @@ namespace DistTree.Solving;
 /// </summary>
 internal static class ParallelRanges
 {
-    // Large enough that handing out a range costs little beside its work; small enough to share the load.
-    private const int RangeSize = 4096;
+    // Large enough that handing out a range costs little beside its work; small enough to share the load: at
+    // most 4096, and at least four ranges a core down to 1024 (a loop of some thousands is then split evenly).
+    private const int MaxRangeSize = 4096;
+    private const int MinRangeSize = 1024;
 
     /// <summary>When set, every loop runs on the calling thread alone: for tests and benchmarks that compare the two ways.</summary>
     internal static bool OnOneThread { get; set; }
@@ -64,7 +66,8 @@ internal static class ParallelRanges
     // For over start … end − 1.
     private static void For(int start, int end, Action<int, int> body)
     {
-        var ranges = (end - start + RangeSize - 1) / RangeSize;
+        var rangeSize = Math.Clamp((end - start) / (Environment.ProcessorCount * 4), MinRangeSize, MaxRangeSize);
+        var ranges = (end - start + rangeSize - 1) / rangeSize;
         if (ranges < 2 || Environment.ProcessorCount < 2 || OnOneThread)
         {
             body(start, end);
@@ -73,7 +76,7 @@ internal static class ParallelRanges
 
         try
         {
-            Parallel.For(0, ranges, r => body(start + (r * RangeSize), Math.Min(end, start + ((r + 1) * RangeSize))));
+            Parallel.For(0, ranges, r => body(start + (r * rangeSize), Math.Min(end, start + ((r + 1) * rangeSize))));
         }
         catch (AggregateException)
         {
