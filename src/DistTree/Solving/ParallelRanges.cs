@@ -10,7 +10,8 @@ namespace DistTree.Solving;
 internal static class ParallelRanges
 {
     // Large enough that handing out a range costs little beside its work; small enough to share the load: at
-    // most 4096, and at least four ranges a core down to 1024 (a loop of some thousands is then split evenly).
+    // most 4096, and at least four ranges a core down to 1024, so a loop of some thousands is split evenly. A
+    // loop of 4096 or fewer runs on the calling thread: handing it out costs more than it saves.
     private const int MaxRangeSize = 4096;
     private const int MinRangeSize = 1024;
 
@@ -68,7 +69,7 @@ internal static class ParallelRanges
     {
         var rangeSize = Math.Clamp((end - start) / (Environment.ProcessorCount * 4), MinRangeSize, MaxRangeSize);
         var ranges = (end - start + rangeSize - 1) / rangeSize;
-        if (ranges < 2 || Environment.ProcessorCount < 2 || OnOneThread)
+        if (end - start <= MaxRangeSize || Environment.ProcessorCount < 2 || OnOneThread)
         {
             body(start, end);
             return;
