@@ -423,12 +423,12 @@ public sealed class DropSolver
         var limit = run.LimitPercent;
         if (r.DropPercent > limit + 1e-9)
         {
-            (findings ??= []).Add(new Finding(
+            (findings ??= []).Add(Finding.Written(
                 branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
                 run.Id,
                 r.DropPercent,
                 limit,
-                string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit"),
+                $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit",
                 conductors.Location));
         }
 
@@ -436,35 +436,35 @@ public sealed class DropSolver
         {
             if (r.DesignCurrentA > ampacity + 1e-9)
             {
-                (findings ??= []).Add(new Finding(
+                (findings ??= []).Add(Finding.Written(
                     FindingKind.Ampacity,
                     run.Id,
                     r.DesignCurrentA,
                     ampacity,
-                    string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A"),
+                    $"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A",
                     conductors.Location));
             }
 
             if (conductors.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity))
             {
-                (findings ??= []).Add(new Finding(
+                (findings ??= []).Add(Finding.Written(
                     FindingKind.OcpdAboveAmpacity,
                     run.Id,
                     ocpd,
                     ampacity,
-                    string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)"),
+                    $"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)",
                     conductors.Location));
             }
         }
 
         if (conductors.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > (smallMax * sets) + 1e-9)
         {
-            (findings ??= []).Add(new Finding(
+            (findings ??= []).Add(Finding.Written(
                 FindingKind.OcpdAboveAmpacity,
                 run.Id,
                 device,
                 smallMax,
-                string.Create(CultureInfo.InvariantCulture, $"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A"),
+                $"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
                 conductors.Location));
         }
 
@@ -498,12 +498,12 @@ public sealed class DropSolver
         List<Finding>? findings = null;
         if (loading > 1 + 1e-9)
         {
-            findings = [new Finding(
+            findings = [Finding.Written(
                 FindingKind.TransformerOverload,
                 node.Id,
                 carried.VoltAmperes / 1000.0,
                 data.Kva,
-                string.Create(CultureInfo.InvariantCulture, $"transformer {node.Id}: load {carried.VoltAmperes / 1000.0:0.0} kVA exceeds its {data.Kva:0.#} kVA rating ({loading * 100:0} %)"),
+                $"transformer {node.Id}: load {carried.VoltAmperes / 1000.0:0.0} kVA exceeds its {data.Kva:0.#} kVA rating ({loading * 100:0} %)",
                 node.Equipment!.Location)];
         }
 
@@ -660,12 +660,12 @@ public sealed class DropSolver
             if (total > limit + 1e-9)
             {
                 var circuit = nodes[index].Circuit!;
-                (found ??= []).Add(new Finding(
+                (found ??= []).Add(Finding.Written(
                     FindingKind.TotalDrop,
                     circuit.FullId,
                     total,
                     limit,
-                    string.Create(CultureInfo.InvariantCulture, $"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && pathCount < depth[index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit"),
+                    $"end point {circuit.FullId}: total drop {total:0.00} % from {(newOrigin && pathCount < depth[index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit",
                     circuit.Location));
             }
 
@@ -673,12 +673,12 @@ public sealed class DropSolver
             if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
             {
                 var circuit = nodes[index].Circuit!;
-                (found ??= []).Add(new Finding(
+                (found ??= []).Add(Finding.Written(
                     FindingKind.MotorStart,
                     circuit.FullId,
                     start.TerminalDipPercent,
                     start.LimitPercent,
-                    string.Create(CultureInfo.InvariantCulture, $"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit"),
+                    $"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit",
                     circuit.Location));
             }
 

@@ -1,3 +1,4 @@
+using System.Globalization;
 using DistTree.Diagnostics;
 
 namespace DistTree.Solving;
@@ -27,15 +28,57 @@ public enum FindingKind
     MotorStart,
 }
 
-/// <summary>A limit exceeded, with the figures that prove it.</summary>
-/// <param name="Kind">Which limit.</param>
-/// <param name="Subject">The id of the run or end point.</param>
-/// <param name="Value">The figure found (percent, amperes or kVA as the kind says).</param>
-/// <param name="Limit">The limit it exceeds, in the same unit.</param>
-/// <param name="Message">One sentence with the figures, for people.</param>
-/// <param name="Location">Where the run or circuit is in the project file.</param>
-public sealed record Finding(FindingKind Kind, string Subject, double Value, double Limit, string Message, SourceLocation Location)
+/// <summary>
+/// A limit exceeded, with the figures that prove it. Its sentence follows from them: a finding the solver makes
+/// writes it when it is first read (as a view works out a figure), so a solve writes no text that nothing reads.
+/// Two findings are equal when their figures, sentences and locations are.
+/// </summary>
+public sealed record Finding
 {
+    // The sentence, once written; until then, what writes it (in the invariant culture).
+    private readonly FormattableString? _text;
+    private string? _message;
+
+    /// <summary>A finding with its sentence.</summary>
+    /// <param name="kind">Which limit.</param>
+    /// <param name="subject">The id of the run or end point.</param>
+    /// <param name="value">The figure found (percent, amperes or kVA as the kind says).</param>
+    /// <param name="limit">The limit it exceeds, in the same unit.</param>
+    /// <param name="message">One sentence with the figures, for people.</param>
+    /// <param name="location">Where the run or circuit is in the project file.</param>
+    public Finding(FindingKind kind, string subject, double value, double limit, string message, SourceLocation location)
+        : this(kind, subject, value, limit, location) => _message = message;
+
+    private Finding(FindingKind kind, string subject, double value, double limit, FormattableString text, SourceLocation location)
+        : this(kind, subject, value, limit, location) => _text = text;
+
+    private Finding(FindingKind kind, string subject, double value, double limit, SourceLocation location)
+    {
+        Kind = kind;
+        Subject = subject;
+        Value = value;
+        Limit = limit;
+        Location = location;
+    }
+
+    /// <summary>Which limit.</summary>
+    public FindingKind Kind { get; }
+
+    /// <summary>The id of the run or end point.</summary>
+    public string Subject { get; }
+
+    /// <summary>The figure found (percent, amperes or kVA as the kind says).</summary>
+    public double Value { get; }
+
+    /// <summary>The limit it exceeds, in the same unit.</summary>
+    public double Limit { get; }
+
+    /// <summary>One sentence with the figures, for people.</summary>
+    public string Message => _message ??= _text!.ToString(CultureInfo.InvariantCulture);
+
+    /// <summary>Where the run or circuit is in the project file.</summary>
+    public SourceLocation Location { get; }
+
     /// <summary>The kind as written in JSON and reports: <c>feeder_drop</c>, <c>branch_drop</c>, …</summary>
     public string Code => Kind switch
     {
@@ -48,4 +91,16 @@ public sealed record Finding(FindingKind Kind, string Subject, double Value, dou
         FindingKind.MotorStart => "motor_start",
         _ => "unknown",
     };
+
+    /// <summary>A finding whose sentence <paramref name="text"/> is written, in the invariant culture, when it is first read.</summary>
+    internal static Finding Written(FindingKind kind, string subject, double value, double limit, FormattableString text, SourceLocation location) =>
+        new(kind, subject, value, limit, text, location);
+
+    /// <inheritdoc/>
+    public bool Equals(Finding? other) =>
+        other is not null && Kind == other.Kind && Subject == other.Subject && Value.Equals(other.Value) && Limit.Equals(other.Limit)
+        && Message == other.Message && Location.Equals(other.Location);
+
+    /// <inheritdoc/>
+    public override int GetHashCode() => HashCode.Combine(Kind, Subject, Value, Limit, Message, Location);
 }
