@@ -119,37 +119,37 @@ internal sealed class PhaseFlow
         {
             case 0:
             case 1:
-            {
-                // One line; a set with none of the system's lines takes line A's, to the neutral.
-                var (x, v) = on == 0 ? (0, voltages.PerLineV) : (BitOperations.TrailingZeroCount(on), voltages.SingleV);
-                var flowing = i[x] + neutral;
-                var unit = UnitConjugate[(lines * 3) + x];
-                return ((flowing * resistive * scale * unit).Real / v * 100.0, (flowing * reactive * scale * unit).Real / v * 100.0);
-            }
-
-            case 2:
-            {
-                var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                var (flowingA, flowingB) = (i[a] + neutral, i[b] + neutral);
-                var (pair, magnitude) = (PairConjugate[(lines * 8) + on], PairMagnitude[(lines * 8) + on]);
-                return (
-                    (((flowingA * resistive * scale) - (flowingB * resistive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0,
-                    (((flowingA * reactive * scale) - (flowingB * reactive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0);
-            }
-
-            default:
-            {
-                var (worstR, worstX) = (double.NegativeInfinity, double.NegativeInfinity);
-                for (var x = 0; x < 3; x++)
                 {
+                    // One line; a set with none of the system's lines takes line A's, to the neutral.
+                    var (x, v) = on == 0 ? (0, voltages.PerLineV) : (BitOperations.TrailingZeroCount(on), voltages.SingleV);
                     var flowing = i[x] + neutral;
                     var unit = UnitConjugate[(lines * 3) + x];
-                    worstR = Math.Max(worstR, (flowing * resistive * scale * unit).Real / voltages.PerLineV * 100.0);
-                    worstX = Math.Max(worstX, (flowing * reactive * scale * unit).Real / voltages.PerLineV * 100.0);
+                    return ((flowing * resistive * scale * unit).Real / v * 100.0, (flowing * reactive * scale * unit).Real / v * 100.0);
                 }
 
-                return (worstR, worstX);
-            }
+            case 2:
+                {
+                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
+                    var (flowingA, flowingB) = (i[a] + neutral, i[b] + neutral);
+                    var (pair, magnitude) = (PairConjugate[(lines * 8) + on], PairMagnitude[(lines * 8) + on]);
+                    return (
+                        (((flowingA * resistive * scale) - (flowingB * resistive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0,
+                        (((flowingA * reactive * scale) - (flowingB * reactive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0);
+                }
+
+            default:
+                {
+                    var (worstR, worstX) = (double.NegativeInfinity, double.NegativeInfinity);
+                    for (var x = 0; x < 3; x++)
+                    {
+                        var flowing = i[x] + neutral;
+                        var unit = UnitConjugate[(lines * 3) + x];
+                        worstR = Math.Max(worstR, (flowing * resistive * scale * unit).Real / voltages.PerLineV * 100.0);
+                        worstX = Math.Max(worstX, (flowing * reactive * scale * unit).Real / voltages.PerLineV * 100.0);
+                    }
+
+                    return (worstR, worstX);
+                }
         }
     }
 
