@@ -167,7 +167,7 @@ public sealed class DropSolver
     }
 
     // What a node has, read from its objects once (see AccumulatePower): the passes that need only this read a
-    // byte, and the end points' pass reads an end point's objects only for a finding or a motor.
+    // byte, and the end points' pass reads an end point's objects only for a finding.
     [Flags]
     private enum Has : byte
     {
