@@ -1,5 +1,4 @@
 using System.Numerics;
-using System.Runtime.CompilerServices;
 using DistTree.Model;
 using DistTree.Network;
 
@@ -91,21 +90,24 @@ internal sealed class PhaseFlow
     private readonly Dictionary<int, Complex[]> _secondaryCurrents = [];
 
     /// <summary>
-    /// The unit drops of the run into <paramref name="node"/> on <paramref name="system"/> (see <see cref="LineDrops"/>):
-    /// into <paramref name="unitR"/> from ΔV = (I_line + I_neutral)·(km + j0)·scale on each line, into
-    /// <paramref name="unitX"/> from ΔV = (I_line + I_neutral)·(0 + j·km)·scale.
+    /// The unit drops of the run into <paramref name="node"/> on <paramref name="system"/>: into
+    /// <paramref name="unitR"/>[set] and <paramref name="unitX"/>[set], for each set of lines 1 … 7, the figures of
+    /// <see cref="UnitDropsOn"/>; [0] is left as it is.
     /// </summary>
     public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
     {
-        var voltages = VoltagesOf(system);
-        var (deltaR, deltaX) = UnitDeltas(node, km, scale, voltages.HasNeutral);
-        LineDropsOn(deltaR, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitR);
-        LineDropsOn(deltaX, voltages.Lines, voltages.SingleV, voltages.PairV, voltages.PerLineV, unitX);
+        for (var set = 1; set < 8; set++)
+        {
+            (unitR[set], unitX[set]) = UnitDropsOn(node, km, system, scale, set);
+        }
     }
 
     /// <summary>
-    /// The unit drops of <see cref="UnitDrops"/> for the one set of lines <paramref name="set"/> ((int)Phases, 1 … 7):
-    /// the same figures, by the same arithmetic (UnitDeltas, InPhase, DropOn) on the set's own lines only.
+    /// The drop in percent that a circuit on the set of lines <paramref name="set"/> ((int)<see cref="Phases"/>, 1 = A …
+    /// 7 = ABC) sees on the run into <paramref name="node"/> on <paramref name="system"/>, per ohm/km of resistance
+    /// (from ΔV = (I_line + I_neutral)·(km + j0)·scale on each line) and of reactance (from ΔV = (I_line +
+    /// I_neutral)·(0 + j·km)·scale): on one line, the part of its ΔV in phase with its voltage to neutral; on two,
+    /// their line-to-line drop; on three, the worst line; a set with none of the system's lines takes line A's.
     /// </summary>
     public (double UnitR, double UnitX) UnitDropsOn(int node, double km, ElectricalSystem system, double scale, int set)
     {
@@ -194,89 +196,6 @@ internal sealed class PhaseFlow
     {
         var i = Currents.AsSpan(node * 3, 3);
         return (i[0] + i[1] + i[2]).Magnitude;
-    }
-
-    /// <summary>
-    /// Fills <paramref name="into"/>[set] for each set of lines (set = (int)<see cref="Phases"/>, 1 = A … 7 = ABC)
-    /// with the drop in percent that a circuit on those lines sees from per-line ΔV on a run of
-    /// <paramref name="system"/>: one line, its line-to-neutral drop; two, their line-to-line drop; three, the
-    /// worst line; a set with none of the system's lines, line A's. <paramref name="into"/>[0] is left as it is.
-    /// </summary>
-    public static void LineDrops(ReadOnlySpan<Complex> deltaV, ElectricalSystem system, Span<double> into) =>
-        LineDropsOn(deltaV, PhaseRules.Lines(system), SetV(1, system), SetV(2, system), LineToNeutralV(system), into);
-
-    // LineDrops on a system of the given lines and voltages (see SetV and LineToNeutralV).
-    private static void LineDropsOn(ReadOnlySpan<Complex> deltaV, int lines, double single, double pair, double perLine, Span<double> into)
-    {
-        // A set's drop depends only on the system's lines in it (on): each such part is worked out once, and a
-        // set with lines the system has not takes the part's figure (on one line, sets A, AB, CA and ABC are alike).
-        var inPhase = InPhase(deltaV, lines);
-        var mask = (1 << lines) - 1;
-        var byLines = default(PerSet);
-        for (var on = lines == 3 ? 1 : 0; on <= mask; on++)
-        {
-            byLines[on] = DropOn(on, deltaV, inPhase, lines, single, pair, perLine);
-        }
-
-        for (var set = 1; set < 8; set++)
-        {
-            into[set] = byLines[set & mask];
-        }
-    }
-
-    // The per-line ΔV that one ohm/km of resistance (R) and of reactance (X) makes on the run into a node:
-    // (I_line + I_neutral)·(km + j0)·scale and (I_line + I_neutral)·(0 + j·km)·scale.
-    private (PerLine<Complex> DeltaR, PerLine<Complex> DeltaX) UnitDeltas(int node, double km, double scale, bool hasNeutral)
-    {
-        var i = Currents.AsSpan(node * 3, 3);
-        var neutral = hasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
-        var resistive = new Complex(km, 0);
-        var reactive = new Complex(0, km);
-        var deltaR = default(PerLine<Complex>);
-        var deltaX = default(PerLine<Complex>);
-        for (var x = 0; x < 3; x++)
-        {
-            var flowing = i[x] + neutral;
-            deltaR[x] = flowing * resistive * scale;
-            deltaX[x] = flowing * reactive * scale;
-        }
-
-        return (deltaR, deltaX);
-    }
-
-    // The part of each line's ΔV in phase with the line's voltage (lines the system has not: zero).
-    private static PerLine<double> InPhase(ReadOnlySpan<Complex> deltaV, int lines)
-    {
-        var inPhase = default(PerLine<double>);
-        for (var x = 0; x < lines; x++)
-        {
-            inPhase[x] = (deltaV[x] * UnitConjugate[(lines * 3) + x]).Real;
-        }
-
-        return inPhase;
-    }
-
-    // The drop in percent on the system's lines `on` (a bit per line; see LineDrops) from per-line ΔV and its in-phase parts.
-    private static double DropOn(int on, ReadOnlySpan<Complex> deltaV, ReadOnlySpan<double> inPhase, int lines, double single, double pair, double perLine)
-    {
-        switch (BitOperations.PopCount((uint)on))
-        {
-            case 0:
-                return inPhase[0] / perLine * 100.0;
-            case 1:
-                return inPhase[BitOperations.TrailingZeroCount(on)] / single * 100.0;
-            case 2:
-                var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                return ((deltaV[a] - deltaV[b]) * PairConjugate[(lines * 8) + on]).Real / PairMagnitude[(lines * 8) + on] / pair * 100.0;
-            default:
-                var worst = double.NegativeInfinity;
-                for (var x = 0; x < 3; x++)
-                {
-                    worst = Math.Max(worst, inPhase[x] / perLine * 100.0);
-                }
-
-                return worst;
-        }
     }
 
     /// <summary>A transformer's regulation per secondary line, percent: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap.</summary>
@@ -473,20 +392,6 @@ internal sealed class PhaseFlow
 
     // A system and its voltages, kept together so that one reference holds both.
     private sealed record KnownVoltages(ElectricalSystem System, SystemVoltages Voltages);
-
-    // A value per line, held in place (no stack allocation: UnitDrops runs once per run of a large tree).
-    [InlineArray(3)]
-    private struct PerLine<T>
-    {
-        private T _line;
-    }
-
-    // A value per set of lines, by (int)Phases.
-    [InlineArray(8)]
-    private struct PerSet
-    {
-        private double _set;
-    }
 
     // A circuit without stated phases, and its apparent power (VA), worked out once for the sort.
     private readonly record struct Automatic(int Child, double VoltAmperes);

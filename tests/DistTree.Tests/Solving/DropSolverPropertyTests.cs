@@ -25,8 +25,8 @@ public sealed class DropSolverPropertyTests
     });
 
     // The solve works out a branch circuit's drop on its own lines only (the one set its end point reads); the
-    // figure must be, to the bit, the one that the run's unit drops for every set give on those lines, which
-    // the sizer prices (internal consistency: the same arithmetic by two routes).
+    // figure must be, to the bit, the one that the run's unit drops (what the sizer prices, from the result's
+    // current and conductor figures) give on those lines (internal consistency of the solve and the view).
     [Property(MaxTest = 60)]
     public Property BranchDrop_IsItsOwnLinesFigureOfTheFullUnitDrops() => Prop.ForAll(RandomTree.Arbitrary, tree =>
     {
