@@ -51,16 +51,18 @@ public sealed class DropSolver
             transformerRow[i] = (has[i] & Has.Transformer) == 0 ? -1 : count++;
         }
 
-        // A run's findings follow from its drop: on the percent sum, known as soon as the run is solved, so they are
-        // found in the same pass, while the run's objects are at hand; on the load flow, once it is solved.
         var rows = GC.AllocateUninitializedArray<RunRow>(count);
         var runFindings = new IReadOnlyList<Finding>?[count];
         var lineDrops = Scratch.RentToFill<double>(count * 8);
         var z = Scratch.RentToFill<Complex>(n); // read only where a run comes in, and written there
+
         // What later passes read of a run, kept by its row: they read only a run's rows, and the runs' pass writes them.
         var loopKm = Scratch.RentToFill<double>(count);
         var lengthM = Scratch.RentToFill<double>(count);
         var limitPercent = Scratch.RentToFill<double>(count);
+
+        // A run's findings follow from its drop: on the percent sum, known as soon as the run is solved, so they are
+        // found in the same pass, while the run's objects are at hand; on the load flow, once it is solved.
         var findingsWithRuns = rules.Method == SolutionMethod.PercentSum;
         var bases = new RunElectrics.Bases(_catalog, rules, frequency);
         var findings = 0;
