@@ -1,6 +1,7 @@
 using System.Globalization;
 using DistTree.Comparing;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -8,29 +9,13 @@ namespace DistTree.Reports;
 public static class ComparisonText
 {
     /// <summary><c>added</c>, <c>removed</c> or <c>changed</c>.</summary>
-    public static string Change(ChangeKind change) => change switch
-    {
-        ChangeKind.Added => "added",
-        ChangeKind.Removed => "removed",
-        _ => "changed",
-    };
+    public static string Change(ChangeKind change) => Words.Change.Of(change);
 
     /// <summary><c>none</c>, <c>newly_failing</c>, <c>newly_passing</c> or <c>findings_changed</c>.</summary>
-    public static string Status(StatusChange status) => status switch
-    {
-        StatusChange.NewlyFailing => "newly_failing",
-        StatusChange.NewlyPassing => "newly_passing",
-        StatusChange.FindingsChanged => "findings_changed",
-        _ => "none",
-    };
+    public static string Status(StatusChange status) => Words.Status.Of(status);
 
     /// <summary><c>feeder</c>, <c>branch</c> or <c>transformer</c>.</summary>
-    public static string RunKind(RunResultKind kind) => kind switch
-    {
-        RunResultKind.Branch => "branch",
-        RunResultKind.Transformer => "transformer",
-        _ => "feeder",
-    };
+    public static string RunKind(RunResultKind kind) => Words.RunKind.Of(kind);
 
     /// <summary>For people: "newly failing (branch_drop, total_drop)", "fails (ampacity)", "passes" and so on.</summary>
     public static string StatusPhrase(StatusChange status, IReadOnlyList<string> before, IReadOnlyList<string> after) => status switch

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -241,7 +242,7 @@ public static class JsonResults
     {
         var r = s.Project.Rules;
         w.WriteStartObject("rules");
-        w.WriteString("method", r.Method == DistTree.Model.SolutionMethod.LoadFlow ? "load_flow" : "percent_sum");
+        w.WriteString("method", RuleText.Method(r));
         w.WriteNumber("feeder_limit_percent", r.FeederLimitPercent);
         w.WriteNumber("branch_limit_percent", r.BranchLimitPercent);
         w.WriteNumber("total_limit_percent", r.TotalLimitPercent);
@@ -278,7 +279,7 @@ public static class JsonResults
     {
         w.WriteStartObject();
         w.WriteString("id"u8, r.Id);
-        w.WriteString("kind"u8, r.Kind switch { RunResultKind.Branch => "branch", RunResultKind.Transformer => "transformer", _ => "feeder" });
+        w.WriteString("kind"u8, Words.RunKind.Of(r.Kind));
         w.WriteString("from"u8, r.From);
         w.WriteString("to"u8, r.To);
         w.WriteString("system"u8, r.System);

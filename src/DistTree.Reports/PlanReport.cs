@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.Json;
 using DistTree.Sizing;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -104,7 +105,7 @@ public static class PlanReport
 
     private static string Sets(int sets) => sets > 1 ? $"{sets}×" : "";
 
-    private static string Kind(RunResultKind kind) => kind == RunResultKind.Branch ? "branch" : "feeder";
+    private static string Kind(RunResultKind kind) => Words.RunKind.Of(kind == RunResultKind.Branch ? RunResultKind.Branch : RunResultKind.Feeder);
 
     private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

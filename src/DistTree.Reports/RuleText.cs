@@ -1,5 +1,6 @@
 using System.Globalization;
 using DistTree.Model;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -7,24 +8,16 @@ namespace DistTree.Reports;
 public static class RuleText
 {
     /// <summary>The <c>branch_current</c> value as written in project files.</summary>
-    public static string BranchCurrent(Rules rules) => rules.BranchCurrent switch
-    {
-        BranchCurrentBasis.Ocpd80 => "ocpd_80",
-        BranchCurrentBasis.Lesser => "lesser",
-        _ => "connected",
-    };
+    public static string BranchCurrent(Rules rules) => Words.BranchCurrent.Of(rules.BranchCurrent);
 
     /// <summary>The <c>conductor_temperature</c> value as written in project files.</summary>
-    public static string Temperature(Rules rules) => rules.Temperature switch
-    {
-        TemperatureMode.Rated => "rated",
-        TemperatureMode.Fixed => (rules.FixedTemperatureC ?? 0).ToString("0.##", CultureInfo.InvariantCulture),
-        _ => "estimated",
-    };
+    public static string Temperature(Rules rules) => Words.TemperatureOf(rules);
 
     /// <summary>The <c>transformer_drop</c> value as written in project files.</summary>
-    public static string TransformerDrop(Rules rules) =>
-        rules.TransformerDrop == TransformerDropMode.NewOrigin ? "new_origin" : "count";
+    public static string TransformerDrop(Rules rules) => Words.TransformerDrop.Of(rules.TransformerDrop);
+
+    /// <summary>The <c>method</c> value as written in project files.</summary>
+    public static string Method(Rules rules) => Words.Method.Of(rules.Method);
 
     /// <summary>One line summing up the rules.</summary>
     public static string Summary(Rules rules) => string.Create(

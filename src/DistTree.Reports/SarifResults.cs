@@ -19,16 +19,8 @@ public static class SarifResults
     /// <summary>The schema of SARIF 2.1.0, as published by OASIS.</summary>
     public const string Schema = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
 
-    /// <summary>The rules, one per finding kind, in the order of <see cref="FindingKind"/>.</summary>
-    public static IReadOnlyList<(FindingKind Kind, string Id, string Name, string Text)> Rules { get; } =
-    [
-        (FindingKind.FeederDrop, "feeder_drop", "FeederDrop", "A feeder's voltage drop is over the feeder limit."),
-        (FindingKind.BranchDrop, "branch_drop", "BranchDrop", "A branch circuit's voltage drop is over the branch limit."),
-        (FindingKind.TotalDrop, "total_drop", "TotalDrop", "The total voltage drop from the service to an end point is over the total limit."),
-        (FindingKind.Ampacity, "ampacity", "Ampacity", "The design current of a run is above its conductors' corrected ampacity."),
-        (FindingKind.OcpdAboveAmpacity, "ocpd_above_ampacity", "OcpdAboveAmpacity", "The overcurrent device is rated above what the conductors' ampacity permits."),
-        (FindingKind.TransformerOverload, "transformer_overload", "TransformerOverload", "A transformer is loaded above its rating."),
-    ];
+    /// <summary>The rules: one per finding kind, from the registry (<see cref="FindingKinds"/>), in the order of <see cref="FindingKind"/>.</summary>
+    public static IReadOnlyList<FindingKindInfo> Rules => FindingKinds.All;
 
     private static readonly JsonWriterOptions Options = new() { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
@@ -83,10 +75,10 @@ public static class SarifResults
         foreach (var rule in Rules)
         {
             w.WriteStartObject();
-            w.WriteString("id", rule.Id);
-            w.WriteString("name", rule.Name);
+            w.WriteString("id", rule.Code);
+            w.WriteString("name", rule.SarifName);
             w.WriteStartObject("shortDescription");
-            w.WriteString("text", rule.Text);
+            w.WriteString("text", rule.Description);
             w.WriteEndObject();
             w.WriteStartObject("defaultConfiguration");
             w.WriteString("level", "error");
@@ -103,7 +95,7 @@ public static class SarifResults
     {
         w.WriteStartObject();
         w.WriteString("ruleId", finding.Code);
-        w.WriteNumber("ruleIndex", RuleIndex(finding.Kind));
+        w.WriteNumber("ruleIndex", (int)finding.Kind);
         w.WriteString("level", "error");
         w.WriteStartObject("message");
         w.WriteString("text", finding.Message);
@@ -136,18 +128,5 @@ public static class SarifResults
         w.WriteStartObject(name);
         w.WriteString("uri", artifactUri);
         w.WriteEndObject();
-    }
-
-    private static int RuleIndex(FindingKind kind)
-    {
-        for (var i = 0; i < Rules.Count; i++)
-        {
-            if (Rules[i].Kind == kind)
-            {
-                return i;
-            }
-        }
-
-        throw new ArgumentOutOfRangeException(nameof(kind), kind, "a finding kind without a SARIF rule");
     }
 }

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
 using DistTree.Conductors;
+using DistTree.Vocabulary;
 
 namespace DistTree.Cli.Commands;
 
@@ -13,10 +14,10 @@ internal static class ConductorsCommand
     public static Command Create(CliContext context)
     {
         var material = new Option<string>("--material") { Description = "cu or al", DefaultValueFactory = _ => "cu" };
-        material.AcceptOnlyFromAmong("cu", "al");
+        material.AcceptOnlyFromAmong([.. Words.Material.Words]);
         var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
         var raceway = new Option<string>("--raceway") { Description = "pvc, aluminum or steel", DefaultValueFactory = _ => "pvc" };
-        raceway.AcceptOnlyFromAmong("pvc", "aluminum", "steel");
+        raceway.AcceptOnlyFromAmong([.. Words.Raceway.Words]);
         var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
         var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };
         var json = new Option<bool>("--json") { Description = "write the catalogue as JSON to standard output" };
@@ -28,9 +29,9 @@ internal static class ConductorsCommand
         command.SetAction(parse =>
         {
             var rows = Rows(
-                parse.GetValue(material) == "al" ? Material.Aluminum : Material.Copper,
+                Words.Material.TryRead(parse.GetValue(material)!, out var metal) ? metal : Material.Copper,
                 parse.GetValue(temperature),
-                Enum.Parse<Raceway>(parse.GetValue(raceway)!, ignoreCase: true),
+                Words.Raceway.TryRead(parse.GetValue(raceway)!, out var kind) ? kind : Raceway.Pvc,
                 parse.GetValue(frequency),
                 parse.GetValue(ambient));
             if (parse.GetValue(json))

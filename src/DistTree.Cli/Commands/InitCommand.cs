@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DistTree.Model;
 using DistTree.ProjectFiles;
+using DistTree.Vocabulary;
 
 namespace DistTree.Cli.Commands;
 
@@ -14,7 +15,7 @@ internal static class InitCommand
     public static Command Create(CliContext context)
     {
         var units = new Option<string?>("--units") { Description = "Unit of bare lengths: imperial (ft) or metric (m). Default: metric for 400Y/230 and 230, else imperial." };
-        units.AcceptOnlyFromAmong("imperial", "metric");
+        units.AcceptOnlyFromAmong([.. Words.Units.Words.Order(StringComparer.Ordinal)]);
         var system = new Option<string>("--system")
         {
             Description = $"The service's system: {string.Join(", ", ElectricalSystem.Names)}.",
@@ -32,12 +33,7 @@ internal static class InitCommand
             var name = parsed.GetValue(system)!;
             var found = ElectricalSystem.Find(name)
                 ?? throw new UsageException($"unknown system '{name}' for --system; expected one of {string.Join(", ", ElectricalSystem.Names)}");
-            var unitSystem = parsed.GetValue(units) switch
-            {
-                "metric" => UnitSystem.Metric,
-                "imperial" => UnitSystem.Imperial,
-                _ => StarterProject.DefaultUnits(found),
-            };
+            var unitSystem = parsed.GetValue(units) is { } word && Words.Units.TryRead(word, out var chosen) ? chosen : StarterProject.DefaultUnits(found);
             var path = parsed.GetValue(output)!;
             var replace = parsed.GetValue(force);
             if (path != "-" && !replace && (File.Exists(path) || Directory.Exists(path)))

@@ -1,13 +1,12 @@
 using System.Globalization;
 using System.Text;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports.Html;
 
 /// <summary>Escaping and invariant number formatting for the HTML report: every string the template prints comes from here.</summary>
 internal static class HtmlText
 {
-    private const double MetresPerFoot = 0.3048;
-
     /// <summary>Escapes text for HTML element content and quoted attribute values.</summary>
     public static string Escape(string? text)
     {
@@ -51,7 +50,7 @@ internal static class HtmlText
     public static string Metres(double? value) => value is { } v ? Number(v, "0.0") : "–";
 
     /// <summary>A length given in metres, shown in feet (whole feet).</summary>
-    public static string Feet(double? metres) => metres is { } v ? Number(v / MetresPerFoot, "0") : "–";
+    public static string Feet(double? metres) => metres is { } v ? Number(v / UnitFactors.MetresPerFoot, "0") : "–";
 
     /// <summary>Volt-amperes, whole, with thousands separated by a thin space.</summary>
     public static string VoltAmperes(double value) => Number(value, "#,0").Replace(",", "\u2009", StringComparison.Ordinal);

@@ -3,6 +3,7 @@ using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
 using static DistTree.Reports.Html.HtmlText;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports.Html;
 
@@ -278,8 +279,9 @@ internal sealed class ReportViewBuilder
             }
         }
 
-        LimitRow Row(string name, string limit, int checkedCount, FindingKind kind, string worst)
+        LimitRow Row(string limit, int checkedCount, FindingKind kind, string worst)
         {
+            var name = FindingKinds.Of(kind).Check;
             var over = byKind[(int)kind];
             var status = checkedCount == 0 ? "none" : over > 0 ? "fail" : "pass";
             var text = checkedCount == 0 ? "nothing to check" : over > 0 ? "fail" : "pass";
@@ -300,27 +302,17 @@ internal sealed class ReportViewBuilder
         static string Worst(double v) => double.IsNegativeInfinity(v) ? "–" : Percent(v) + " %";
         return
         [
-            Row("Feeder drop", Limit(rules.FeederLimitPercent) + " %", feeders, FindingKind.FeederDrop, Worst(worstFeeder)),
-            Row("Branch-circuit drop", Limit(rules.BranchLimitPercent) + " %", branches, FindingKind.BranchDrop, Worst(worstBranch)),
-            Row("Total drop to each point of use", Limit(rules.TotalLimitPercent) + " %", _s.EndPoints.Count, FindingKind.TotalDrop, _s.EndPoints.Count == 0 ? "–" : Percent(_s.Summary.WorstTotalDropPercent) + " %"),
-            Row("Ampacity (design current)", "allowable ampacity", withAmpacity, FindingKind.Ampacity, "–"),
-            Row("Overcurrent device", "conductor ampacity", withOcpd, FindingKind.OcpdAboveAmpacity, "–"),
-            Row("Transformer loading", "nameplate kVA", transformers, FindingKind.TransformerOverload, "–"),
-            Row("Motor starting dip at the terminals", Limit(rules.MotorStartLimitPercent) + " %", motors, FindingKind.MotorStart, Worst(worstDip)),
+            Row(Limit(rules.FeederLimitPercent) + " %", feeders, FindingKind.FeederDrop, Worst(worstFeeder)),
+            Row(Limit(rules.BranchLimitPercent) + " %", branches, FindingKind.BranchDrop, Worst(worstBranch)),
+            Row(Limit(rules.TotalLimitPercent) + " %", _s.EndPoints.Count, FindingKind.TotalDrop, _s.EndPoints.Count == 0 ? "–" : Percent(_s.Summary.WorstTotalDropPercent) + " %"),
+            Row("allowable ampacity", withAmpacity, FindingKind.Ampacity, "–"),
+            Row("conductor ampacity", withOcpd, FindingKind.OcpdAboveAmpacity, "–"),
+            Row("nameplate kVA", transformers, FindingKind.TransformerOverload, "–"),
+            Row(Limit(rules.MotorStartLimitPercent) + " %", motors, FindingKind.MotorStart, Worst(worstDip)),
         ];
     }
 
-    private static string KindTitle(FindingKind kind) => kind switch
-    {
-        FindingKind.FeederDrop => "Feeder drop over its limit",
-        FindingKind.BranchDrop => "Branch-circuit drop over its limit",
-        FindingKind.TotalDrop => "Total drop over the total limit",
-        FindingKind.Ampacity => "Design current above the allowable ampacity",
-        FindingKind.OcpdAboveAmpacity => "Overcurrent device above what the conductors permit",
-        FindingKind.TransformerOverload => "Transformer loaded above its rating",
-        FindingKind.MotorStart => "Motor terminals dip over the limit while starting",
-        _ => "Other",
-    };
+    private static string KindTitle(FindingKind kind) => FindingKinds.Of(kind).Title;
 
     private List<Finding>[] FindingsByKind()
     {
@@ -372,12 +364,7 @@ internal sealed class ReportViewBuilder
         return Escape($"{sets}{r.Size} {r.Material}");
     }
 
-    private static string KindText(RunResultKind kind) => kind switch
-    {
-        RunResultKind.Feeder => "feeder",
-        RunResultKind.Branch => "branch",
-        _ => "transformer",
-    };
+    private static string KindText(RunResultKind kind) => Words.RunKind.Of(kind);
 
     private static string KindClass(RunResultKind kind) => kind switch
     {
@@ -786,7 +773,7 @@ internal sealed class ReportViewBuilder
         new("transformer_drop", Escape(RuleText.TransformerDrop(r)), "count = a transformer's regulation adds to the totals below it; new_origin = its secondary starts a new total budget."),
         new("ambient_c", Limit(r.AmbientC) + " °C", "Ambient temperature for ampacity correction and for the temperature estimate."),
         new("terminal_c", Count(r.TerminalC) + " °C", "Terminal rating: the ampacity column used is at most this temperature."),
-        new("method", r.Method == SolutionMethod.LoadFlow ? "load_flow" : "percent_sum", "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
+        new("method", RuleText.Method(r), "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
         new("motor_start_limit_percent", Limit(r.MotorStartLimitPercent) + " %", "The largest dip allowed at a motor's terminals while it starts."),
     ];
 }

@@ -1,7 +1,6 @@
 using System.Globalization;
-using DistTree.Conductors;
 using DistTree.Model;
-using DistTree.ProjectFiles;
+using DistTree.Vocabulary;
 
 namespace DistTree.Comparing;
 
@@ -21,34 +20,24 @@ internal sealed class FieldSet
             .Number("rules.feeder_limit_percent", r.FeederLimitPercent)
             .Number("rules.branch_limit_percent", r.BranchLimitPercent)
             .Number("rules.total_limit_percent", r.TotalLimitPercent)
-            .Text("rules.branch_current", r.BranchCurrent switch
-            {
-                BranchCurrentBasis.Ocpd80 => "ocpd_80",
-                BranchCurrentBasis.Lesser => "lesser",
-                _ => "connected",
-            })
-            .Text("rules.conductor_temperature", r.Temperature switch
-            {
-                TemperatureMode.Rated => "rated",
-                TemperatureMode.Fixed => Format(r.FixedTemperatureC ?? 0),
-                _ => "estimated",
-            })
-            .Text("rules.transformer_drop", r.TransformerDrop == TransformerDropMode.NewOrigin ? "new_origin" : "count")
+            .Text("rules.branch_current", Words.BranchCurrent.Of(r.BranchCurrent))
+            .Text("rules.conductor_temperature", r.Temperature == TemperatureMode.Fixed ? Format(r.FixedTemperatureC ?? 0) : Words.Temperature.Of(r.Temperature))
+            .Text("rules.transformer_drop", Words.TransformerDrop.Of(r.TransformerDrop))
             .Number("rules.ambient_c", r.AmbientC)
             .Number("rules.terminal_c", r.TerminalC)
             .Text("service.id", p.Service.Id)
             .Text("service.system", p.Service.System.Name)
             .Number("service.frequency_hz", p.Service.FrequencyHz)
-            .Text("defaults.material", ConductorWords.Of(p.Defaults.Material))
+            .Text("defaults.material", Words.Material.Of(p.Defaults.Material))
             .Number("defaults.insulation_c", p.Defaults.InsulationC)
-            .Text("defaults.raceway", ConductorWords.Of(p.Defaults.Raceway));
+            .Text("defaults.raceway", Words.Raceway.Of(p.Defaults.Raceway));
         return set;
     }
 
     public static FieldSet ForEquipment(Equipment e, UnitSystem units)
     {
         var set = new FieldSet()
-            .Text("kind", e.Kind.ToString().ToLowerInvariant())
+            .Text("kind", Words.EquipmentKind.Of(e.Kind))
             .Text("from", e.From)
             .Text("system", e.System.Name)
             .Text("feeder", e.Feeder is null ? "none" : "yes");
@@ -178,9 +167,9 @@ internal sealed class FieldSet
         this
             .Text($"{prefix}.size", run.Size.Text)
             .Number($"{prefix}.sets", run.Sets)
-            .Text($"{prefix}.material", ConductorWords.Of(run.Material))
+            .Text($"{prefix}.material", Words.Material.Of(run.Material))
             .Number($"{prefix}.insulation_c", run.InsulationC)
-            .Text($"{prefix}.raceway", ConductorWords.Of(run.Raceway))
+            .Text($"{prefix}.raceway", Words.Raceway.Of(run.Raceway))
             .Number($"{prefix}.ocpd_a", run.OcpdA)
             .Number($"{prefix}.limit_percent", run.LimitPercent)
             .Text($"{prefix}.fixed", run.Fixed ? "true" : "false");
@@ -204,7 +193,7 @@ internal sealed class FieldSet
     private readonly record struct Field(string Name, string? Text, double? Number, bool Feet)
     {
         public string Display => Number is { } v
-            ? Format(v) + (Feet ? $" ({(v / ValueReader.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
+            ? Format(v) + (Feet ? $" ({(v / UnitFactors.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
             : Text ?? "none";
     }
 }

@@ -1,4 +1,5 @@
 using System.Globalization;
+using DistTree.Vocabulary;
 
 namespace DistTree.Conductors;
 
@@ -10,9 +11,6 @@ namespace DistTree.Conductors;
 /// </summary>
 public sealed class ConductorCatalog
 {
-    private const double FeetPerKft = 1000.0;
-    private const double MetresPerFoot = 0.3048;
-
     // A power of two: the AC resistance cache's length (see AcResistanceOhmPerKm).
     private const int AcResistanceCacheLength = 1 << 14;
 
@@ -204,7 +202,7 @@ public sealed class ConductorCatalog
     }
 
     internal static double ToOhmPerKm(double value, bool perKft) =>
-        perKft ? value / (FeetPerKft * MetresPerFoot) * 1000.0 : value;
+        perKft ? value / (UnitFactors.FeetPerKft * UnitFactors.MetresPerFoot) * 1000.0 : value;
 
     private CatalogRow Row(ConductorSize size) =>
         _rows[size.Index] ?? throw new KeyNotFoundException($"the conductor catalogue '{SourceName}' has no data for {size}");

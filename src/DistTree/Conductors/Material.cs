@@ -22,18 +22,3 @@ public enum Raceway
     /// <summary>Steel conduit.</summary>
     Steel,
 }
-
-/// <summary>The words a project file uses for materials and raceways, as the outputs write them.</summary>
-internal static class ConductorWords
-{
-    /// <summary><c>cu</c> or <c>al</c>.</summary>
-    public static string Of(Material material) => material == Material.Copper ? "cu" : "al";
-
-    /// <summary><c>pvc</c>, <c>aluminum</c> or <c>steel</c>.</summary>
-    public static string Of(Raceway raceway) => raceway switch
-    {
-        Raceway.Pvc => "pvc",
-        Raceway.Aluminum => "aluminum",
-        _ => "steel",
-    };
-}

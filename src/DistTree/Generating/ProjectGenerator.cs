@@ -3,6 +3,7 @@ using System.Text;
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Generating;
 
@@ -298,7 +299,7 @@ public static class ProjectGenerator
 
     private static void WriteItem(StringBuilder text, Item item)
     {
-        var kind = item.Kind switch { ItemKind.Board => "switchboard", ItemKind.Transformer => "transformer", _ => "panelboard" };
+        var kind = Words.EquipmentKind.Of(item.Kind switch { ItemKind.Board => EquipmentKind.Switchboard, ItemKind.Transformer => EquipmentKind.Transformer, _ => EquipmentKind.Panelboard });
         text.Append(CultureInfo.InvariantCulture, $"  - id: {item.Id}\n    kind: {kind}\n    from: {item.Parent?.Id ?? "SVC"}\n");
         if (item.Kind == ItemKind.Transformer)
         {
@@ -322,7 +323,7 @@ public static class ProjectGenerator
         text.Append("    circuits:\n");
         foreach (var c in item.Circuits)
         {
-            var quantity = c.Kind switch { LoadKind.Kw => "kw", LoadKind.Va => "va", LoadKind.Amps => "amps", _ => "hp" };
+            var quantity = Words.LoadQuantity.Of(c.Kind);
             text.Append(CultureInfo.InvariantCulture, $"""
                       - id: "{c.Id}"
                         name: {c.Name}

@@ -1,6 +1,7 @@
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Generating;
 
@@ -12,7 +13,6 @@ namespace DistTree.Generating;
 /// </summary>
 internal static class RunSizer
 {
-    private const double MetresPerFoot = 0.3048;
     private const int MaxSets = 40;
 
     private static readonly ConductorCatalog Catalog = ConductorCatalog.Standard;
@@ -91,7 +91,7 @@ internal static class RunSizer
         var r = Catalog.AcResistanceOhmPerKm(size, Material.Copper, raceway, 75, 60);
         var x = Catalog.ReactanceOhmPerKm(size, raceway, 60);
         var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
-        var dropV = k * currentA * lengthFt * MetresPerFoot / 1000.0 * ((r * power.PowerFactor) + (x * power.SinTheta)) / sets;
+        var dropV = k * currentA * lengthFt * UnitFactors.MetresPerFoot / 1000.0 * ((r * power.PowerFactor) + (x * power.SinTheta)) / sets;
         return dropV / supply.VoltageV * 100.0;
     }
 

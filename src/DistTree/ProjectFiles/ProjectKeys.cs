@@ -37,7 +37,8 @@ internal static class ProjectKeys
 
     public static readonly string[] Point = ["at", "load"];
 
-    public static readonly string[] LoadQuantities = ["va", "kva", "kw", "amps", "hp", "fla"];
+    /// <summary>The quantities a load may be given in, from the one table of load words.</summary>
+    public static readonly IReadOnlyList<string> LoadQuantities = Vocabulary.Words.LoadQuantity.Words;
 
     public static readonly string[] MotorStart = ["code_letter", "lrc_multiple", "starting_pf"];
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles;
 
@@ -12,38 +13,14 @@ namespace DistTree.ProjectFiles;
 internal sealed class ProjectReader(DiagnosticBag bag)
 {
     /// <summary>Branch runs longer than this are probably a typo (2000 ft, common practice as a sanity bound).</summary>
-    public const double LongBranchM = 2000 * ValueReader.MetresPerFoot;
+    public const double LongBranchM = 2000 * UnitFactors.MetresPerFoot;
 
-    private static readonly (string, UnitSystem)[] UnitWords = [("metric", UnitSystem.Metric), ("imperial", UnitSystem.Imperial)];
-
-    private static readonly (string, BranchCurrentBasis)[] BranchCurrentWords =
-        [("connected", BranchCurrentBasis.Connected), ("ocpd_80", BranchCurrentBasis.Ocpd80), ("lesser", BranchCurrentBasis.Lesser)];
-
-    private static readonly (string, TransformerDropMode)[] TransformerDropWords =
-        [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)];
-
-    private static readonly (string, Material)[] MaterialWords = [("cu", Material.Copper), ("al", Material.Aluminum)];
-
-    private static readonly (string, Raceway)[] RacewayWords =
-        [("pvc", Raceway.Pvc), ("aluminum", Raceway.Aluminum), ("steel", Raceway.Steel)];
-
-    private static readonly (string, EquipmentKind)[] KindWords =
-    [
-        ("switchboard", EquipmentKind.Switchboard), ("panelboard", EquipmentKind.Panelboard),
-        ("transformer", EquipmentKind.Transformer), ("splitter", EquipmentKind.Splitter),
-    ];
-
-    private static readonly (string, LoadKind)[] LoadWords =
-        [("va", LoadKind.Va), ("kva", LoadKind.Kva), ("kw", LoadKind.Kw), ("amps", LoadKind.Amps), ("hp", LoadKind.Hp), ("fla", LoadKind.Fla)];
-
-    // "'va' of ", "'kva' of " ...: the start of a message about a load's quantity, in the order of ProjectKeys.LoadQuantities.
+    // "'va' of ", "'kva' of " ...: the start of a message about a load's quantity, in the order of Words.LoadQuantity.
     private static readonly string[] QuantityPrefixes = [.. ProjectKeys.LoadQuantities.Select(q => $"'{q}' of ")];
 
-    private static readonly (string, LoadModel)[] LoadModelWords =
-        [("power", LoadModel.ConstantPower), ("current", LoadModel.ConstantCurrent), ("impedance", LoadModel.ConstantImpedance)];
-
-    private static readonly (string, SolutionMethod)[] MethodWords =
-        [("percent_sum", SolutionMethod.PercentSum), ("load_flow", SolutionMethod.LoadFlow)];
+    // "'va', 'kva', 'kw', 'amps', 'hp' or 'fla'": the quantities a load may be given in, for messages.
+    private static readonly string QuantityList =
+        string.Join(", ", ProjectKeys.LoadQuantities.SkipLast(1).Select(q => $"'{q}'")) + $" or '{ProjectKeys.LoadQuantities[^1]}'";
 
     // NEMA locked-rotor code letters (NEC Table 430.7(B)); I, O and Q are not used.
     private static readonly string[] CodeLetters =
@@ -172,7 +149,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             _draft.Name = _values.Text(name, "'name' of the project");
         }
 
-        if (m.Optional("units") is { } units && _values.Choice(units, "'units'", "unit system", UnitWords) is { } u)
+        if (m.Optional("units") is { } units && _values.Choice(units, "'units'", "unit system", Words.Units.Pairs) is { } u)
         {
             _draft.Units = u;
         }
@@ -206,7 +183,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             rules = rules with { TotalLimitPercent = total };
         }
 
-        if (m.Optional("branch_current") is { } basisNode && _values.Choice(basisNode, "'branch_current'", "branch_current", BranchCurrentWords) is { } basis)
+        if (m.Optional("branch_current") is { } basisNode && _values.Choice(basisNode, "'branch_current'", "branch_current", Words.BranchCurrent.Pairs) is { } basis)
         {
             rules = rules with { BranchCurrent = basis };
         }
@@ -216,7 +193,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             rules = ReadTemperature(temperature, rules);
         }
 
-        if (m.Optional("transformer_drop") is { } dropNode && _values.Choice(dropNode, "'transformer_drop'", "transformer_drop", TransformerDropWords) is { } drop)
+        if (m.Optional("transformer_drop") is { } dropNode && _values.Choice(dropNode, "'transformer_drop'", "transformer_drop", Words.TransformerDrop.Pairs) is { } drop)
         {
             rules = rules with { TransformerDrop = drop };
         }
@@ -231,7 +208,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             rules = rules with { TerminalC = terminal };
         }
 
-        if (m.Optional("method") is { } methodNode && _values.Choice(methodNode, "'method'", "method", MethodWords) is { } method)
+        if (m.Optional("method") is { } methodNode && _values.Choice(methodNode, "'method'", "method", Words.Method.Pairs) is { } method)
         {
             rules = rules with { Method = method };
         }
@@ -278,7 +255,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var defaults = ConductorDefaults.Standard;
-        if (m.Optional("material") is { } materialNode && _values.Choice(materialNode, "'material'", "material", MaterialWords) is { } material)
+        if (m.Optional("material") is { } materialNode && _values.Choice(materialNode, "'material'", "material", Words.Material.Pairs) is { } material)
         {
             defaults = defaults with { Material = material };
         }
@@ -288,7 +265,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
             defaults = defaults with { InsulationC = insulation };
         }
 
-        if (m.Optional("raceway") is { } racewayNode && _values.Choice(racewayNode, "'raceway'", "raceway", RacewayWords) is { } raceway)
+        if (m.Optional("raceway") is { } racewayNode && _values.Choice(racewayNode, "'raceway'", "raceway", Words.Raceway.Pairs) is { } raceway)
         {
             defaults = defaults with { Raceway = raceway };
         }
@@ -450,7 +427,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (m.Required("kind", " (switchboard, panelboard, transformer or splitter)") is { } kindNode)
         {
-            draft.Kind = _values.Choice(kindNode, quoted.Of("'kind' of "), "kind", KindWords);
+            draft.Kind = _values.Choice(kindNode, quoted.Of("'kind' of "), "kind", Words.EquipmentKind.Pairs);
         }
 
         if (m.Required("from", " (the id of the service or equipment that feeds it)") is { } fromNode)
@@ -717,7 +694,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         foreach (var entry in m.Node.Entries)
         {
             var key = entry.Key;
-            if (Array.IndexOf(ProjectKeys.LoadQuantities, key.Value) < 0)
+            if (!Words.LoadQuantity.TryRead(key.Value, out _))
             {
                 continue;
             }
@@ -735,18 +712,18 @@ internal sealed class ProjectReader(DiagnosticBag bag)
 
         if (first is null)
         {
-            bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
+            bag.Error(m.Node.Location, $"{context} states no quantity; give exactly one of {QuantityList}");
             return null;
         }
 
         if (second is not null)
         {
-            bag.Error(second.Location, $"{context} gives both '{first.Value}' and '{second.Value}'; give exactly one of 'va', 'kva', 'kw', 'amps', 'hp' or 'fla'");
+            bag.Error(second.Location, $"{context} gives both '{first.Value}' and '{second.Value}'; give exactly one of {QuantityList}");
             return null;
         }
 
-        var quantity = Array.IndexOf(ProjectKeys.LoadQuantities, first.Value);
-        var kind = LoadWords[quantity].Item2;
+        var quantity = Words.LoadQuantity.IndexOf(first.Value);
+        var kind = Words.LoadQuantity.Pairs[quantity].Value;
         var value = m.Required(first.Value) is { } valueNode ? _values.NotNegative(valueNode, context.Of(QuantityPrefixes[quantity])) : null;
         double? pf = 1.0;
         if (m.Optional("pf") is { } pfNode)
@@ -765,7 +742,7 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var model = LoadModel.ConstantPower;
-        if (m.Optional("model") is { } modelNode && _values.Choice(modelNode, "'model'", "load model", LoadModelWords) is { } chosen)
+        if (m.Optional("model") is { } modelNode && _values.Choice(modelNode, "'model'", "load model", Words.LoadModel.Pairs) is { } chosen)
         {
             model = chosen;
         }
@@ -898,9 +875,9 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         }
 
         var defaults = _draft.Defaults;
-        var material = m.Optional("material") is { } materialNode ? _values.Choice(materialNode, context.Of("'material' of "), "material", MaterialWords) : defaults.Material;
+        var material = m.Optional("material") is { } materialNode ? _values.Choice(materialNode, context.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
         var insulation = m.Optional("insulation_c") is { } insulationNode ? _values.IntegerOf(insulationNode, context.Of("'insulation_c' of "), TemperatureRatings) : defaults.InsulationC;
-        var raceway = m.Optional("raceway") is { } racewayNode ? _values.Choice(racewayNode, context.Of("'raceway' of "), "raceway", RacewayWords) : defaults.Raceway;
+        var raceway = m.Optional("raceway") is { } racewayNode ? _values.Choice(racewayNode, context.Of("'raceway' of "), "raceway", Words.Raceway.Pairs) : defaults.Raceway;
         double? ocpd = null;
         if (m.Optional("ocpd") is { } ocpdNode)
         {
@@ -960,5 +937,5 @@ internal sealed class ProjectReader(DiagnosticBag bag)
         return null;
     }
 
-    private static string KindWord(EquipmentKind kind) => KindWords.First(w => w.Item2 == kind).Item1;
+    private static string KindWord(EquipmentKind kind) => Words.EquipmentKind.Of(kind);
 }

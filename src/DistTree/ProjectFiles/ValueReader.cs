@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Model;
+using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles;
 
@@ -10,9 +11,6 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed partial class ValueReader(DiagnosticBag bag)
 {
-    /// <summary>Feet to metres, exact by definition (international foot).</summary>
-    public const double MetresPerFoot = 0.3048;
-
     /// <summary>A finite number.</summary>
     public double? Number(SourceNode node, Subject what)
     {
@@ -183,7 +181,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         double? metres;
         if (node is SourceScalar { IsPlain: true } plain && IsNumberText(plain.Value))
         {
-            metres = Finite(plain, what) * (units == UnitSystem.Imperial ? MetresPerFoot : 1.0);
+            metres = Finite(plain, what) * (units == UnitSystem.Imperial ? UnitFactors.MetresPerFoot : 1.0);
         }
         else if (node is SourceScalar { IsNull: false } scalar && !IsBoolText(scalar.Value))
         {
@@ -240,7 +238,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
             case "m":
                 return number;
             case "ft":
-                return number * MetresPerFoot;
+                return number * UnitFactors.MetresPerFoot;
             default:
                 bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', whose unit '{unit}' is not a unit of length; use m or ft");
                 return null;

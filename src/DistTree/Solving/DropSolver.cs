@@ -4,6 +4,7 @@ using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
+using DistTree.Vocabulary;
 
 namespace DistTree.Solving;
 
@@ -466,7 +467,7 @@ public sealed class DropSolver
                 run.Id,
                 device,
                 smallMax,
-                $"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
+                $"{what} {run.Id}: a {size} {Words.Material.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
                 conductors.Location));
         }
 

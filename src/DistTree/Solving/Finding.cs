@@ -80,17 +80,7 @@ public sealed record Finding
     public SourceLocation Location { get; }
 
     /// <summary>The kind as written in JSON and reports: <c>feeder_drop</c>, <c>branch_drop</c>, …</summary>
-    public string Code => Kind switch
-    {
-        FindingKind.FeederDrop => "feeder_drop",
-        FindingKind.BranchDrop => "branch_drop",
-        FindingKind.TotalDrop => "total_drop",
-        FindingKind.Ampacity => "ampacity",
-        FindingKind.OcpdAboveAmpacity => "ocpd_above_ampacity",
-        FindingKind.TransformerOverload => "transformer_overload",
-        FindingKind.MotorStart => "motor_start",
-        _ => "unknown",
-    };
+    public string Code => FindingKinds.Of(Kind).Code;
 
     /// <summary>A finding whose sentence <paramref name="text"/> is written, in the invariant culture, when it is first read.</summary>
     internal static Finding Written(FindingKind kind, string subject, double value, double limit, FormattableString text, SourceLocation location) =>

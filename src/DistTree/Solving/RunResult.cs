@@ -1,7 +1,7 @@
-using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
+using DistTree.Vocabulary;
 
 namespace DistTree.Solving;
 
@@ -95,10 +95,10 @@ public readonly struct RunResult : IEquatable<RunResult>
     public string? Size => Run?.Conductors.Size.Text;
 
     /// <summary><c>cu</c> or <c>al</c>, or null for a transformer.</summary>
-    public string? Material => Run is { } run ? ConductorWords.Of(run.Conductors.Material) : null;
+    public string? Material => Run is { } run ? Words.Material.Of(run.Conductors.Material) : null;
 
     /// <summary><c>pvc</c>, <c>aluminum</c> or <c>steel</c>, or null for a transformer.</summary>
-    public string? Raceway => Run is { } run ? ConductorWords.Of(run.Conductors.Raceway) : null;
+    public string? Raceway => Run is { } run ? Words.Raceway.Of(run.Conductors.Raceway) : null;
 
     /// <summary>Parallel sets (1 for a transformer).</summary>
     public int Sets => Run?.Conductors.Sets ?? 1;

@@ -14,7 +14,7 @@ public sealed class SarifResultsTests
 {
     private const string Demo = "projects/quillfeather-medical.yaml";
 
-    private static readonly string[] RuleIds = ["feeder_drop", "branch_drop", "total_drop", "ampacity", "ocpd_above_ampacity", "transformer_overload"];
+    private static readonly string[] RuleIds = ["feeder_drop", "branch_drop", "total_drop", "ampacity", "ocpd_above_ampacity", "transformer_overload", "motor_start"];
 
     [Fact]
     public void Analyze_Demo_WritesAValidSarif210Log()
@@ -145,6 +145,26 @@ public sealed class SarifResultsTests
         var uri = log.RootElement.GetProperty("runs")[0].GetProperty("results")[0].GetProperty("locations")[0]
             .GetProperty("physicalLocation").GetProperty("artifactLocation").GetProperty("uri").GetString();
         Assert.Equal("design%20rev%202/demo.yaml", uri);
+    }
+
+    [Fact]
+    public void Check_MotorStartFinding_HasItsRule()
+    {
+        // A generated campus has motors whose start dips past the limit: before the registry of finding kinds, the
+        // SARIF writer listed six of the seven kinds and ended here in an unhandled exception.
+        using var folder = new TempFolder();
+        var project = folder.File("campus.yaml");
+        File.WriteAllText(project, DistTree.Generating.ProjectGenerator.Generate(1000, 3, 7));
+
+        var result = CliRunner.Run("check", project, "--sarif", "-");
+
+        Assert.Equal(1, result.ExitCode);
+        using var log = JsonDocument.Parse(result.Out);
+        var run = log.RootElement.GetProperty("runs")[0];
+        var rules = run.GetProperty("tool").GetProperty("driver").GetProperty("rules").EnumerateArray().ToArray();
+        var results = run.GetProperty("results").EnumerateArray().ToArray();
+        Assert.Contains(results, r => r.GetProperty("ruleId").GetString() == "motor_start");
+        Assert.All(results, r => Assert.Equal(r.GetProperty("ruleId").GetString(), rules[r.GetProperty("ruleIndex").GetInt32()].GetProperty("id").GetString()));
     }
 
     [Fact]
