@@ -2,8 +2,8 @@ using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
-using static DistTree.Reports.Html.HtmlText;
 using DistTree.Vocabulary;
+using static DistTree.Reports.Html.HtmlText;
 
 namespace DistTree.Reports.Html;
 
