@@ -38,11 +38,6 @@ public static class RevisionComparer
         var newFindings = Unmatched(after.AllFindings, before.AllFindings);
         var resolvedFindings = Unmatched(before.AllFindings, after.AllFindings);
 
-        var rise = endPoints.Where(e => e.TotalDropPercent.Change > ComparisonTolerance.PercentPoints)
-            .OrderByDescending(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
-        var fall = endPoints.Where(e => e.TotalDropPercent.Change < -ComparisonTolerance.PercentPoints)
-            .OrderBy(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
-
         return new Comparison
         {
             Before = Info(before),
@@ -55,28 +50,45 @@ public static class RevisionComparer
             UpstreamRuns = upstream,
             NewFindings = newFindings,
             ResolvedFindings = resolvedFindings,
-            Summary = new ComparisonSummary
-            {
-                ProjectChanges = projectChanges.Count,
-                EquipmentAdded = equipment.Count(c => c.Change == ChangeKind.Added),
-                EquipmentRemoved = equipment.Count(c => c.Change == ChangeKind.Removed),
-                EquipmentChanged = equipment.Count(c => c.Change == ChangeKind.Changed),
-                CircuitsAdded = circuits.Count(c => c.Change == ChangeKind.Added),
-                CircuitsRemoved = circuits.Count(c => c.Change == ChangeKind.Removed),
-                CircuitsChanged = circuits.Count(c => c.Change == ChangeKind.Changed),
-                EndPointsCompared = endPointsCompared,
-                EndPointsAffected = endPoints.Count,
-                EndPointsNewlyFailing = endPoints.Count(e => e.Status == StatusChange.NewlyFailing),
-                EndPointsNewlyPassing = endPoints.Count(e => e.Status == StatusChange.NewlyPassing),
-                RunsCompared = runsCompared,
-                RunsAffected = runs.Count,
-                LargestRisePoints = rise?.TotalDropPercent.Change ?? 0,
-                LargestRiseEndPoint = rise?.Id,
-                LargestFallPoints = fall is null ? 0 : -fall.TotalDropPercent.Change,
-                LargestFallEndPoint = fall?.Id,
-                NewFindings = newFindings.Length,
-                ResolvedFindings = resolvedFindings.Length,
-            },
+            Summary = Summarize(projectChanges.Count, equipment, circuits, (endPoints, endPointsCompared), (runs.Count, runsCompared), (newFindings.Length, resolvedFindings.Length)),
+        };
+    }
+
+    // The counts of a comparison, and its largest rise and fall of an end point's total.
+    private static ComparisonSummary Summarize(
+        int projectChanges,
+        List<ElementChange> equipment,
+        List<ElementChange> circuits,
+        (IReadOnlyList<EndPointDelta> Affected, int Compared) endPointCounts,
+        (int Affected, int Compared) runCounts,
+        (int New, int Resolved) findings)
+    {
+        var endPoints = endPointCounts.Affected;
+        var rise = endPoints.Where(e => e.TotalDropPercent.Change > ComparisonTolerance.PercentPoints)
+            .OrderByDescending(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
+        var fall = endPoints.Where(e => e.TotalDropPercent.Change < -ComparisonTolerance.PercentPoints)
+            .OrderBy(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
+        return new ComparisonSummary
+        {
+            ProjectChanges = projectChanges,
+            EquipmentAdded = equipment.Count(c => c.Change == ChangeKind.Added),
+            EquipmentRemoved = equipment.Count(c => c.Change == ChangeKind.Removed),
+            EquipmentChanged = equipment.Count(c => c.Change == ChangeKind.Changed),
+            CircuitsAdded = circuits.Count(c => c.Change == ChangeKind.Added),
+            CircuitsRemoved = circuits.Count(c => c.Change == ChangeKind.Removed),
+            CircuitsChanged = circuits.Count(c => c.Change == ChangeKind.Changed),
+            EndPointsCompared = endPointCounts.Compared,
+            EndPointsAffected = endPoints.Count,
+            EndPointsNewlyFailing = endPoints.Count(e => e.Status == StatusChange.NewlyFailing),
+            EndPointsNewlyPassing = endPoints.Count(e => e.Status == StatusChange.NewlyPassing),
+            RunsCompared = runCounts.Compared,
+            RunsAffected = runCounts.Affected,
+            LargestRisePoints = rise?.TotalDropPercent.Change ?? 0,
+            LargestRiseEndPoint = rise?.Id,
+            LargestFallPoints = fall is null ? 0 : -fall.TotalDropPercent.Change,
+            LargestFallEndPoint = fall?.Id,
+            NewFindings = findings.New,
+            ResolvedFindings = findings.Resolved,
         };
     }
 
