@@ -191,7 +191,7 @@ finally
 
 static void Cli(string[] args)
 {
-    var code = DisttreeApp.Run(args, TextWriter.Null, TextWriter.Null);
+    var code = DisttreeApp.Run(args, TextWriter.Null, TextWriter.Null, showProgress: false, rethrowUnexpected: true);
     if (code == ExitCodes.BadInput)
     {
         throw new InvalidOperationException($"disttree {string.Join(' ', args)} exited with code 2");
