@@ -5,8 +5,9 @@ using DistTree.Diagnostics;
 namespace DistTree.Cli;
 
 /// <summary>
-/// Builds the command tree and runs it. The one top-level catch turns user errors into messages
-/// and exit code 2; no stack trace reaches a user for bad input.
+/// Builds the command tree and runs it. The one top-level catch turns user errors into messages and exit code 2,
+/// and any other exception (a defect) into one <c>internal error:</c> line and exit code 3; no stack trace reaches
+/// a user.
 /// </summary>
 public static class DisttreeApp
 {
@@ -17,7 +18,30 @@ public static class DisttreeApp
     /// Runs <paramref name="args"/>; with <paramref name="showProgress"/> (standard error is a terminal) long work
     /// shows a status line on <paramref name="stderr"/>.
     /// </summary>
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool showProgress)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool showProgress) =>
+        Run(args, stdout, stderr, showProgress, rethrowUnexpected: false);
+
+    /// <summary>
+    /// As <see cref="Run(string[], TextWriter, TextWriter, bool)"/>; with <paramref name="rethrowUnexpected"/> (tests
+    /// and the benchmarks) an exception that is not a user error is thrown on, with its stack trace, instead of
+    /// becoming the <c>internal error:</c> line and <see cref="ExitCodes.InternalError"/>. User errors give exit
+    /// code 2 either way.
+    /// </summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool showProgress, bool rethrowUnexpected)
+    {
+        ArgumentNullException.ThrowIfNull(stderr);
+        try
+        {
+            return RunCommand(args, stdout, stderr, showProgress);
+        }
+        catch (Exception e) when (!rethrowUnexpected)
+        {
+            stderr.WriteLine(InternalError.Line(e));
+            return ExitCodes.InternalError;
+        }
+    }
+
+    private static int RunCommand(string[] args, TextWriter stdout, TextWriter stderr, bool showProgress)
     {
         var context = new CliContext(stdout, stderr) { ShowProgress = showProgress };
         var root = new RootCommand(

@@ -11,4 +11,7 @@ public static class ExitCodes
 
     /// <summary>Bad input or usage.</summary>
     public const int BadInput = 2;
+
+    /// <summary>An internal error: a defect of the program, told in one line with where to report it.</summary>
+    public const int InternalError = 3;
 }

@@ -1,10 +1,8 @@
-using DistTree.Model;
-using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Cli;
 
-/// <summary>The pipeline every analysing command runs: load, build, solve.</summary>
+/// <summary>What every analysing command runs: the library's <see cref="Analysis"/> on the file it names, its warnings on standard error.</summary>
 internal static class Pipeline
 {
     /// <summary>
@@ -16,29 +14,18 @@ internal static class Pipeline
     /// <summary>As <see cref="Solve(CliContext, string)"/>, reporting its stages on <paramref name="shared"/> (a command's own status line) when given.</summary>
     public static Solution Solve(CliContext context, string path, StatusLine? shared)
     {
-        Project project;
-        Solution solution;
+        AnalysisResult result;
         using (var own = shared is null ? context.Status() : null)
         {
-            var status = shared ?? own!;
-            project = ProjectInput.Load(path);
-
-            // The file's parse tree is garbage now (about 200 MB at 100,000 end points) and little else lives:
-            // a collection here is cheap, and spares the build, the solve and the writing one that would copy
-            // their results (analyze of 100,000 end points: about 0.3 s faster and 100 MB lower peak; README,
-            // Performance). Younger generations only, swept in place.
-            GC.Collect(1, GCCollectionMode.Forced, blocking: true, compacting: false);
-            status.Report($"building the tree of {project.Equipment.Count:N0} equipment");
-            var network = NetworkBuilder.Build(project);
-            status.Report($"solving {network.Nodes.Count:N0} nodes");
-            solution = DropSolver.Standard.Solve(network);
+            var options = new AnalysisOptions { Progress = shared ?? own };
+            result = ProjectInput.Read(path, file => Analysis.Run(file, options));
         }
 
-        foreach (var warning in project.Warnings)
+        foreach (var warning in result.Project.Warnings)
         {
             context.Error.WriteLine(warning.ToString());
         }
 
-        return solution;
+        return result.Solution;
     }
 }

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Runtime;
+using DistTree;
 using DistTree.Benchmarks;
 using DistTree.Cli;
 using DistTree.Comparing;
@@ -16,7 +17,8 @@ using DistTree.Solving;
 // Run: dotnet run -c Release --project tests/DistTree.Benchmarks -- [filters]
 // Filters select stages (generate yaml parse validate build solve json analyze upsize compare html) and sizes
 // (1000 10000 100000);
-// none selects everything.
+// none selects everything. The stages parse, build and solve are timed one by one, so they call each stage alone;
+// a project wanted whole (a revision, the demo) goes through the library's entry point, Analysis.
 // Or: builds PROJECT ROUNDS [one-thread] FOLDER FOLDER… to time the solve of several builds in one process (see
 // BuildComparison and DEVELOPERS.md, Performance).
 if (args is ["builds", .. var buildArguments])
@@ -135,7 +137,7 @@ try
             if (!big)
             {
                 // Not timed: the same building with every feeder three times as long, where feeders and branch circuits compete.
-                var stressed = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(RevisionEdit.Stress(text), path)));
+                var stressed = Analysis.Parse(RevisionEdit.Stress(text), path).Solution;
                 savings.Add(SavingOf($"  same, feeders 3 × as long", stressed, Upsizer.Standard.Plan(stressed)));
             }
         }
@@ -144,7 +146,7 @@ try
         {
             var (revised, lengthened) = RevisionEdit.Revise(text);
             var pathB = Path.Combine(folder.FullName, $"campus-{size}-rev-b.yaml");
-            var solutionB = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(revised, pathB)));
+            var solutionB = Analysis.Parse(revised, pathB).Solution;
             Comparison comparison = null!;
             results.Add(Measurement.Of("compare", size, repeats, () => comparison = RevisionComparer.Compare(solution, solutionB)));
             var c = comparison.Summary;
@@ -189,7 +191,7 @@ finally
 
 static void Cli(string[] args)
 {
-    var code = DisttreeApp.Run(args, TextWriter.Null, TextWriter.Null);
+    var code = DisttreeApp.Run(args, TextWriter.Null, TextWriter.Null, showProgress: false, rethrowUnexpected: true);
     if (code == ExitCodes.BadInput)
     {
         throw new InvalidOperationException($"disttree {string.Join(' ', args)} exited with code 2");
@@ -200,7 +202,7 @@ static void Cli(string[] args)
 void Demo(List<Measurement> results, List<Saving> savings, Dictionary<string, long> htmlBytes)
 {
     var demo = Path.Combine(RepositoryRoot(), "projects", "quillfeather-medical.yaml");
-    var solution = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Load(demo)));
+    var solution = Analysis.Run(demo).Solution;
     var endPoints = solution.EndPoints.Count;
     if (Wanted("html"))
     {

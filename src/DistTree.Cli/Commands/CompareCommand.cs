@@ -1,6 +1,5 @@
 using System.CommandLine;
 using DistTree.Comparing;
-using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Reports;
 using DistTree.Solving;
@@ -114,6 +113,6 @@ internal static class CompareCommand
             context.Error.WriteLine(warning.ToString());
         }
 
-        return DropSolver.Standard.Solve(NetworkBuilder.Build(project));
+        return Analysis.Run(project).Solution;
     }
 }

@@ -78,7 +78,7 @@ public sealed class Upsizer
         }
 
         var picks = Picks(problem, choice);
-        var after = new DropSolver(_catalog).Solve(NetworkBuilder.Build(Apply(before.Project, before.Network, picks)));
+        var after = Analysis.Run(Apply(before.Project, before.Network, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
         return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
     }
 

@@ -9,7 +9,7 @@ internal static class CliRunner
     {
         using var stdout = new StringWriter();
         using var stderr = new StringWriter();
-        var code = DisttreeApp.Run(args, stdout, stderr);
+        var code = DisttreeApp.Run(args, stdout, stderr, showProgress: false, rethrowUnexpected: true);
         return new CliResult(code, stdout.ToString(), stderr.ToString());
     }
 }

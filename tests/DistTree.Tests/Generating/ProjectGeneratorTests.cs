@@ -39,7 +39,7 @@ public sealed class ProjectGeneratorTests
     [Fact]
     public void Generate_Solved_AFewPercentOfBranchCircuitsFail()
     {
-        var solution = DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(ProjectGenerator.Generate(20000, 3, 5), "g.yaml")));
+        var solution = Analysis.Parse(ProjectGenerator.Generate(20000, 3, 5), "g.yaml").Solution;
         var branches = solution.Runs.Where(r => r.Kind == RunResultKind.Branch).ToArray();
         var failing = branches.Count(r => r.Findings.Count > 0) / (double)branches.Length;
         var feedersFailing = solution.Runs.Count(r => r.Kind != RunResultKind.Branch && r.Findings.Count > 0);

@@ -1,10 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Diagnostics;
-using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Reports;
-using DistTree.Solving;
 using FsCheck;
 using FsCheck.Fluent;
 using Xunit.Abstractions;
@@ -70,8 +67,7 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
     {
         try
         {
-            var project = ProjectLoader.Parse(text, "fuzz.yaml");
-            var solution = DropSolver.Standard.Solve(NetworkBuilder.Build(project));
+            var solution = Analysis.Parse(text, "fuzz.yaml").Solution;
             _ = JsonResults.Write(solution);
             ConsoleReport.WriteAnalysis(TextWriter.Null, solution, 10);
             ConsoleReport.WriteCheck(TextWriter.Null, solution);

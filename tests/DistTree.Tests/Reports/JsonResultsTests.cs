@@ -1,6 +1,4 @@
 using System.Text.Json;
-using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Reports;
 using DistTree.Solving;
 using FsCheck;
@@ -16,7 +14,7 @@ public sealed class JsonResultsTests
         JsonSchema.FromText(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "results.schema.json")));
 
     private static Solution SolveProject(string name) =>
-        DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Load(Path.Combine(TestPaths.RepoRoot, "projects", name))));
+        Analysis.Run(Path.Combine(TestPaths.RepoRoot, "projects", name)).Solution;
 
     public static TheoryData<string> ProjectNames()
     {

@@ -1,7 +1,5 @@
 using AngleSharp.Html.Dom;
 using AngleSharp.Html.Parser;
-using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Reports;
 using DistTree.Solving;
 
@@ -17,10 +15,10 @@ internal static class ReportFixtures
 
     public static Solution Demo => DemoSolution.Value;
 
-    public static Solution SolveFile(string path) => DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Load(path)));
+    public static Solution SolveFile(string path) => Analysis.Run(path).Solution;
 
     public static Solution SolveText(string yaml, string file = "test.yaml") =>
-        DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(yaml, file)));
+        Analysis.Parse(yaml, file).Solution;
 
     public static IHtmlDocument Parse(string html) => new HtmlParser().ParseDocument(html);
 

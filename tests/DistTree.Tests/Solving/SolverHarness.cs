@@ -1,14 +1,12 @@
-using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Solving;
 
 namespace DistTree.Tests.Solving;
 
-/// <summary>Runs the pipeline on project text: parse, build, solve.</summary>
+/// <summary>Runs the pipeline on project text (<see cref="Analysis.Parse"/>: parse, build, solve).</summary>
 internal static class SolverHarness
 {
     public static Solution Solve(string yaml, string file = "test.yaml") =>
-        DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(yaml, file)));
+        Analysis.Parse(yaml, file).Solution;
 
     /// <summary>A project with one panel at the service and one circuit; the circuit's YAML is given.</summary>
     public static string OneCircuit(string system, string units, string circuit, string rules = "conductor_temperature: rated", double frequencyHz = 60) => $"""

@@ -9,7 +9,7 @@ public sealed class ValidateCommandTests
     {
         using var stdout = new StringWriter();
         using var stderr = new StringWriter();
-        var exit = DisttreeApp.Run(args, stdout, stderr);
+        var exit = DisttreeApp.Run(args, stdout, stderr, showProgress: false, rethrowUnexpected: true);
         return (exit, stdout.ToString(), stderr.ToString());
     }
 
