@@ -23,6 +23,19 @@ public static class ComparisonConsole
             return;
         }
 
+        WriteSummary(o, c);
+        WriteElements(o, "Equipment", c.Equipment);
+        WriteElements(o, "Circuits", c.Circuits);
+        WriteEndPoints(o, c, rows);
+        WriteUpstream(o, c, rows);
+        WriteFindings(o, "New findings", c.NewFindings);
+        WriteFindings(o, "Resolved findings", c.ResolvedFindings);
+        o.WriteLine();
+        o.WriteLine($"Caution: {Caution.Text}");
+    }
+
+    private static void WriteSummary(TextWriter o, Comparison c)
+    {
         o.WriteLine($"Summary: {ComparisonText.Summary(c.Summary)}");
         var s = c.Summary;
         if (s.LargestRiseEndPoint is { } rise)
@@ -44,38 +57,41 @@ public static class ComparisonConsole
                 o.WriteLine($"  {f.Field}: {f.Before ?? "-"} -> {f.After ?? "-"}");
             }
         }
+    }
 
-        WriteElements(o, "Equipment", c.Equipment);
-        WriteElements(o, "Circuits", c.Circuits);
-        if (c.EndPoints.Count > 0)
+    private static void WriteEndPoints(TextWriter o, Comparison c, int rows)
+    {
+        if (c.EndPoints.Count == 0)
         {
-            o.WriteLine();
-            o.WriteLine("Affected end points (total drop in percent; change in percentage points):");
-            foreach (var e in c.EndPoints.Take(rows))
-            {
-                o.WriteLine(F($"  {e.Id,-14} {e.TotalDropPercent.Before,7:0.00} -> {e.TotalDropPercent.After,6:0.00}  {ComparisonText.Signed(e.TotalDropPercent.Change, 3),8}  {ComparisonText.StatusPhrase(e.Status, e.FindingsBefore, e.FindingsAfter)}"));
-            }
-
-            More(o, c.EndPoints.Count, rows);
+            return;
         }
 
-        if (c.UpstreamRuns.Count > 0)
-        {
-            o.WriteLine();
-            o.WriteLine("Upstream runs (current and ampacity margin in amperes; drop in percent):");
-            foreach (var r in c.UpstreamRuns.Take(rows))
-            {
-                var margin = r.MarginA is { } m ? F($"margin {m.Before:0.0} -> {m.After:0.0} ({ComparisonText.Signed(m.Change, 1)})") : "margin -";
-                o.WriteLine(F($"  {r.Id,-14} {ComparisonText.RunKind(r.Kind),-11} current {r.CurrentA.Before:0.0} -> {r.CurrentA.After:0.0}  {margin}  drop {r.DropPercent.Before:0.00} -> {r.DropPercent.After:0.00}  {ComparisonText.StatusPhrase(r.Status, r.FindingsBefore, r.FindingsAfter)}"));
-            }
-
-            More(o, c.UpstreamRuns.Count, rows);
-        }
-
-        WriteFindings(o, "New findings", c.NewFindings);
-        WriteFindings(o, "Resolved findings", c.ResolvedFindings);
         o.WriteLine();
-        o.WriteLine($"Caution: {Caution.Text}");
+        o.WriteLine("Affected end points (total drop in percent; change in percentage points):");
+        foreach (var e in c.EndPoints.Take(rows))
+        {
+            o.WriteLine(F($"  {e.Id,-14} {e.TotalDropPercent.Before,7:0.00} -> {e.TotalDropPercent.After,6:0.00}  {ComparisonText.Signed(e.TotalDropPercent.Change, 3),8}  {ComparisonText.StatusPhrase(e.Status, e.FindingsBefore, e.FindingsAfter)}"));
+        }
+
+        More(o, c.EndPoints.Count, rows);
+    }
+
+    private static void WriteUpstream(TextWriter o, Comparison c, int rows)
+    {
+        if (c.UpstreamRuns.Count == 0)
+        {
+            return;
+        }
+
+        o.WriteLine();
+        o.WriteLine("Upstream runs (current and ampacity margin in amperes; drop in percent):");
+        foreach (var r in c.UpstreamRuns.Take(rows))
+        {
+            var margin = r.MarginA is { } m ? F($"margin {m.Before:0.0} -> {m.After:0.0} ({ComparisonText.Signed(m.Change, 1)})") : "margin -";
+            o.WriteLine(F($"  {r.Id,-14} {ComparisonText.RunKind(r.Kind),-11} current {r.CurrentA.Before:0.0} -> {r.CurrentA.After:0.0}  {margin}  drop {r.DropPercent.Before:0.00} -> {r.DropPercent.After:0.00}  {ComparisonText.StatusPhrase(r.Status, r.FindingsBefore, r.FindingsAfter)}"));
+        }
+
+        More(o, c.UpstreamRuns.Count, rows);
     }
 
     private static void WriteRevision(TextWriter o, string label, RevisionInfo r) =>

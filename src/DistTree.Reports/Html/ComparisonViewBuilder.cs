@@ -1,5 +1,4 @@
 using DistTree.Comparing;
-using DistTree.Solving;
 using static DistTree.Reports.Html.HtmlText;
 
 namespace DistTree.Reports.Html;
@@ -22,33 +21,13 @@ internal static class ComparisonViewBuilder
     /// <summary>Upstream runs listed at most.</summary>
     public const int UpstreamRows = 20;
 
-    /// <summary>Builds the section for <paramref name="c"/>; <paramref name="panelAnchors"/> maps an end point's id to its panel table in the report, where it has one.</summary>
-    public static ComparisonView Build(Comparison c, IReadOnlyDictionary<string, string> panelAnchors)
+    /// <summary>Builds the section for <paramref name="c"/>; <paramref name="panelAnchor"/> gives the link to an end point's panel table in the report from its id, or "" where it has none.</summary>
+    public static ComparisonView Build(Comparison c, Func<string, string> panelAnchor)
     {
         var s = c.Summary;
-        var elements = c.ProjectChanges.Count == 0
-            ? new List<ElementRow>()
-            : [new ElementRow("project", "changed", "changed", c.ProjectChanges.Select(Field).ToArray())];
-        elements.AddRange(c.Equipment.Concat(c.Circuits).Select(e => new ElementRow(
-            Escape(e.Id),
-            ComparisonText.Change(e.Change),
-            ComparisonText.Change(e.Change),
-            e.Fields.Select(Field).ToArray())));
+        var elements = Elements(c);
         var shownElements = elements.Take(ElementRows).ToArray();
-
-        EndPointChangeRow Row(EndPointDelta e)
-        {
-            var change = Shown(e.TotalDropPercent.Change);
-            return new(
-                Escape(e.Id),
-                Escape(e.Name),
-                Percent(e.TotalDropPercent.Before),
-                Percent(e.TotalDropPercent.After),
-                change,
-                change.StartsWith('+') ? "up" : change.StartsWith('-') ? "down" : "same",
-                Escape(ComparisonText.StatusPhrase(e.Status, e.FindingsBefore, e.FindingsAfter)),
-                panelAnchors.TryGetValue(e.Id, out var anchor) ? anchor : "");
-        }
+        EndPointChangeRow Row(EndPointDelta e) => EndPointRow(e, panelAnchor);
 
         // The largest changes list only moves the page can show (at least 0.01 point once rounded).
         var largest = c.EndPoints
@@ -56,16 +35,7 @@ internal static class ComparisonViewBuilder
             .OrderByDescending(e => Math.Abs(e.TotalDropPercent.Change))
             .ThenBy(e => e.Id, StringComparer.Ordinal)
             .ToArray();
-        var upstream = c.UpstreamRuns.Take(UpstreamRows).Select(r => new UpstreamRow(
-            Escape(r.Id),
-            ComparisonText.RunKind(r.Kind),
-            Amperes(r.CurrentA.Before),
-            Amperes(r.CurrentA.After),
-            r.MarginA is { } m ? Amperes(m.Before) : "–",
-            r.MarginA is { } n ? Amperes(n.After) : "–",
-            r.MarginA is { } k && k.After < 0 ? "cell-over" : "",
-            ComparisonText.Signed(r.DropPercent.Change, 2),
-            Escape(ComparisonText.StatusPhrase(r.Status, r.FindingsBefore, r.FindingsAfter)))).ToArray();
+        var upstream = c.UpstreamRuns.Take(UpstreamRows).Select(UpstreamRowOf).ToArray();
 
         return new ComparisonView
         {
@@ -77,11 +47,7 @@ internal static class ComparisonViewBuilder
             FindingsBefore = Count(c.Before.Summary.Findings),
             FindingsAfter = Count(c.After.Summary.Findings),
             GateClass = c.HasNewFindings ? "fail" : "pass",
-            GateText = c.IsUnchanged
-                ? "No change: no field, drop, current or finding differs"
-                : c.HasNewFindings
-                    ? $"{Count(s.NewFindings)} new finding{(s.NewFindings == 1 ? "" : "s")} in this revision"
-                    : "No new findings in this revision",
+            GateText = GateText(c),
             Counts = Escape(ComparisonText.Summary(s)),
             Unchanged = c.IsUnchanged,
             Elements = shownElements,
@@ -92,18 +58,60 @@ internal static class ComparisonViewBuilder
             LargestMore = More(largest.Length, Math.Min(largest.Length, LargestRows), "end points moved by 0.01 point or more"),
             Upstream = upstream,
             UpstreamMore = More(c.UpstreamRuns.Count, upstream.Length, "upstream runs moved"),
-            NewFindings = c.NewFindings.Select(Item).ToArray(),
-            ResolvedFindings = c.ResolvedFindings.Select(Item).ToArray(),
+            NewFindings = c.NewFindings.Select(FindingGroupBuilder.Item).ToArray(),
+            ResolvedFindings = c.ResolvedFindings.Select(FindingGroupBuilder.Item).ToArray(),
         };
     }
+
+    // The project's own fields (as one element) where they changed, then equipment and circuits.
+    private static List<ElementRow> Elements(Comparison c)
+    {
+        var elements = c.ProjectChanges.Count == 0
+            ? new List<ElementRow>()
+            : [new ElementRow("project", "changed", "changed", c.ProjectChanges.Select(Field).ToArray())];
+        elements.AddRange(c.Equipment.Concat(c.Circuits).Select(e => new ElementRow(
+            Escape(e.Id),
+            ComparisonText.Change(e.Change),
+            ComparisonText.Change(e.Change),
+            e.Fields.Select(Field).ToArray())));
+        return elements;
+    }
+
+    private static string GateText(Comparison c) => c.IsUnchanged
+        ? "No change: no field, drop, current or finding differs"
+        : c.HasNewFindings
+            ? $"{Count(c.Summary.NewFindings)} new finding{(c.Summary.NewFindings == 1 ? "" : "s")} in this revision"
+            : "No new findings in this revision";
+
+    private static EndPointChangeRow EndPointRow(EndPointDelta e, Func<string, string> panelAnchor)
+    {
+        var change = Shown(e.TotalDropPercent.Change);
+        return new(
+            Escape(e.Id),
+            Escape(e.Name),
+            Percent(e.TotalDropPercent.Before),
+            Percent(e.TotalDropPercent.After),
+            change,
+            change.StartsWith('+') ? "up" : change.StartsWith('-') ? "down" : "same",
+            Escape(ComparisonText.StatusPhrase(e.Status, e.FindingsBefore, e.FindingsAfter)),
+            panelAnchor(e.Id));
+    }
+
+    private static UpstreamRow UpstreamRowOf(RunDelta r) => new(
+        Escape(r.Id),
+        ComparisonText.RunKind(r.Kind),
+        Amperes(r.CurrentA.Before),
+        Amperes(r.CurrentA.After),
+        r.MarginA is { } m ? Amperes(m.Before) : "–",
+        r.MarginA is { } n ? Amperes(n.After) : "–",
+        r.MarginA is { } k && k.After < 0 ? "cell-over" : "",
+        ComparisonText.Signed(r.DropPercent.Change, 2),
+        Escape(ComparisonText.StatusPhrase(r.Status, r.FindingsBefore, r.FindingsAfter)));
 
     private static string Shown(double points) => ComparisonText.Signed(points, 2);
 
     private static FieldRow Field(FieldChange f) =>
         new(Escape(f.Field), f.Before is null ? "–" : Escape(f.Before), f.After is null ? "–" : Escape(f.After), f.Before is not null && f.After is not null);
-
-    private static FindingItem Item(Finding f) =>
-        new(Escape(f.Subject), Escape(f.Message), f.Location.Line == 0 ? "(no source location)" : Escape(f.Location.ToString()));
 
     private static string? More(int total, int shown, string what) =>
         total > shown ? $"{Count(total - shown)} more {what}; the comparison document (--json) lists all." : null;

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using DistTree.Diagnostics;
 using DistTree.Vocabulary;
 
 namespace DistTree.Reports.Html;
@@ -60,6 +61,10 @@ internal static class HtmlText
 
     /// <summary>A layout coordinate for SVG, at most one decimal.</summary>
     public static string Coordinate(double value) => Number(Math.Round(value, 1), "0.#");
+
+    /// <summary>A place in the project file (<c>FILE:LINE:COL</c>), or words saying there is none; not escaped.</summary>
+    public static string Where(SourceLocation location) =>
+        location.Line == 0 ? "(no source location)" : location.ToString();
 
     /// <summary>An integer.</summary>
     public static string Count(int value) => value.ToString(CultureInfo.InvariantCulture);

@@ -50,10 +50,36 @@ internal sealed class TreeLayout
     public static TreeLayout Compute(IReadOnlyList<NetworkNode> nodes, int cap)
     {
         var n = nodes.Count;
-        var depth = new int[n];
-        var equipmentAtDepth = new List<int>();
-        var equipment = 0;
-        for (var i = 0; i < n; i++)
+        var depth = Depths(nodes, out var equipmentAtDepth, out var equipment);
+        var depthLimit = WholeLevelsUnder(equipmentAtDepth, cap);
+        var drawn = new bool[n];
+        var order = DepthFirst(nodes, depth, depthLimit, cap, equipment, drawn);
+        var row = PlaceRows(nodes, order, out var rows);
+        var hidden = new int[n];
+        for (var i = n - 1; i > 0; i--)
+        {
+            if (!drawn[i] && nodes[i].Kind != NodeKind.EndPoint)
+            {
+                hidden[nodes[i].ParentIndex] += hidden[i] + 1;
+            }
+        }
+
+        var maxDepth = 0;
+        foreach (var i in order)
+        {
+            maxDepth = Math.Max(maxDepth, depth[i]);
+        }
+
+        return new TreeLayout(order.ToArray(), depth, row, hidden, maxDepth, Math.Max(rows, 1), equipment, depthLimit);
+    }
+
+    // The depth of every node (service 0), and how many equipment nodes (not end points) each depth holds.
+    private static int[] Depths(IReadOnlyList<NetworkNode> nodes, out List<int> equipmentAtDepth, out int equipment)
+    {
+        var depth = new int[nodes.Count];
+        equipmentAtDepth = [];
+        equipment = 0;
+        for (var i = 0; i < nodes.Count; i++)
         {
             var parent = nodes[i].ParentIndex;
             depth[i] = parent < 0 ? 0 : depth[parent] + 1;
@@ -71,24 +97,32 @@ internal sealed class TreeLayout
             equipmentAtDepth[depth[i]]++;
         }
 
-        // Draw whole levels while they fit under the cap; the first level below the root is always drawn.
-        var depthLimit = int.MaxValue;
+        return depth;
+    }
+
+    // The deepest depth drawn whole: whole levels are drawn while they fit under the cap (the first level below the
+    // root always is); int.MaxValue where every level fits.
+    private static int WholeLevelsUnder(List<int> equipmentAtDepth, int cap)
+    {
         var cumulative = 0;
         for (var d = 0; d < equipmentAtDepth.Count; d++)
         {
             cumulative += equipmentAtDepth[d];
             if (cumulative > cap && d > 1)
             {
-                depthLimit = d - 1;
-                break;
+                return d - 1;
             }
         }
 
-        // Depth-first order over drawn equipment with an explicit stack; children in file order.
+        return int.MaxValue;
+    }
+
+    // Depth-first order over drawn equipment with an explicit stack; children in file order. Marks each drawn node.
+    private static List<int> DepthFirst(IReadOnlyList<NetworkNode> nodes, int[] depth, int depthLimit, int cap, int equipment, bool[] drawn)
+    {
         var order = new List<int>(Math.Min(equipment, cap));
-        var drawn = new bool[n];
         var stack = new Stack<int>();
-        if (n > 0)
+        if (nodes.Count > 0)
         {
             stack.Push(0);
         }
@@ -113,12 +147,18 @@ internal sealed class TreeLayout
             }
         }
 
-        // Leaves take the next row; parents (seen after their children in reverse order) sit midway.
+        return order;
+    }
+
+    // Leaves take the next row; parents (seen after their children in reverse order) sit midway.
+    private static double[] PlaceRows(IReadOnlyList<NetworkNode> nodes, List<int> order, out int rows)
+    {
+        var n = nodes.Count;
         var row = new double[n];
         var first = new double[n];
         var last = new double[n];
         var hasDrawnChild = new bool[n];
-        var rows = 0;
+        rows = 0;
         foreach (var i in order)
         {
             var parent = nodes[i].ParentIndex;
@@ -158,21 +198,6 @@ internal sealed class TreeLayout
             }
         }
 
-        var hidden = new int[n];
-        for (var i = n - 1; i > 0; i--)
-        {
-            if (!drawn[i] && nodes[i].Kind != NodeKind.EndPoint)
-            {
-                hidden[nodes[i].ParentIndex] += hidden[i] + 1;
-            }
-        }
-
-        var maxDepth = 0;
-        foreach (var i in order)
-        {
-            maxDepth = Math.Max(maxDepth, depth[i]);
-        }
-
-        return new TreeLayout(order.ToArray(), depth, row, hidden, maxDepth, Math.Max(rows, 1), equipment, depthLimit);
+        return row;
     }
 }

@@ -1,0 +1,52 @@
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Solving;
+using static DistTree.Reports.Html.HtmlText;
+
+namespace DistTree.Reports.Html;
+
+/// <summary>
+/// The method and data section: which method the findings rest on, the load flow's outcome, the conductor
+/// catalogue's columns and what each rule means with its value in force.
+/// </summary>
+internal static class MethodViewBuilder
+{
+    /// <summary>The load flow's tolerance, per unit, as the page prints it.</summary>
+    public static string Tolerance => LoadFlow.TolerancePu.ToString("0e0", System.Globalization.CultureInfo.InvariantCulture);
+
+    /// <summary>The method in words.</summary>
+    public static string MethodName(SolutionMethod method) => method == SolutionMethod.LoadFlow ? "load flow" : "percent sum";
+
+    /// <summary>The method not in force.</summary>
+    public static SolutionMethod Other(SolutionMethod method) =>
+        method == SolutionMethod.LoadFlow ? SolutionMethod.PercentSum : SolutionMethod.LoadFlow;
+
+    /// <summary>Whether the load flow converged, and in how many sweeps, in words.</summary>
+    public static string LoadFlowText(LoadFlowResult flow) => flow.Converged
+        ? $"converged in {Count(flow.Iterations)} sweep{(flow.Iterations == 1 ? "" : "s")} (tolerance {Tolerance} pu)"
+        : $"did not converge in {Count(flow.Iterations)} sweeps (tolerance {Tolerance} pu); its figures are left out";
+
+    /// <summary>The CSS class of the load flow's outcome.</summary>
+    public static string LoadFlowClass(LoadFlowResult flow) => flow.Converged ? "pass" : "fail";
+
+    /// <summary>The embedded catalogue's column headings where the solution used it, else none; escaped.</summary>
+    public static string[] CatalogHeader(Solution s) =>
+        string.Equals(s.CatalogName, ConductorCatalog.Standard.SourceName, StringComparison.Ordinal)
+            ? ConductorCatalog.Standard.Header.Select(Escape).ToArray()
+            : [];
+
+    /// <summary>Each rule, its value in force and what it means.</summary>
+    public static RuleMeaning[] Meanings(Rules r) =>
+    [
+        new("feeder_limit_percent", Limit(r.FeederLimitPercent) + " %", "The largest drop allowed in any one feeder, in percent of the voltage it carries. A run may set its own limit_percent."),
+        new("branch_limit_percent", Limit(r.BranchLimitPercent) + " %", "The largest drop allowed in any one branch circuit, in percent of the circuit voltage."),
+        new("total_limit_percent", Limit(r.TotalLimitPercent) + " %", "The largest sum of the percent drops from the service (or from a new origin, below) to any point of use."),
+        new("branch_current", Escape(RuleText.BranchCurrent(r)), "The current a branch circuit's drop is computed at: connected = the connected load; ocpd_80 = 80 % of the overcurrent device rating; lesser = the smaller of the two."),
+        new("conductor_temperature", Escape(RuleText.Temperature(r)), "The temperature of the conductor resistance: estimated = from loading (formula above); rated = the insulation rating; a number = that temperature in °C."),
+        new("transformer_drop", Escape(RuleText.TransformerDrop(r)), "count = a transformer's regulation adds to the totals below it; new_origin = its secondary starts a new total budget."),
+        new("ambient_c", Limit(r.AmbientC) + " °C", "Ambient temperature for ampacity correction and for the temperature estimate."),
+        new("terminal_c", Count(r.TerminalC) + " °C", "Terminal rating: the ampacity column used is at most this temperature."),
+        new("method", RuleText.Method(r), "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
+        new("motor_start_limit_percent", Limit(r.MotorStartLimitPercent) + " %", "The largest dip allowed at a motor's terminals while it starts."),
+    ];
+}

@@ -1,0 +1,36 @@
+using DistTree.Solving;
+using DistTree.Vocabulary;
+using static DistTree.Reports.Html.HtmlText;
+
+namespace DistTree.Reports.Html;
+
+/// <summary>How the page names a run, its kind and conductors, and a list of finding codes: shared by the paths, the tree, the panels and the plan.</summary>
+internal static class RunText
+{
+    /// <summary>The run's conductors (<c>2× 3/0 Cu</c>), or "regulation" for a transformer's row; escaped.</summary>
+    public static string Conductor(RunResult r)
+    {
+        if (r.Kind == RunResultKind.Transformer || r.Size is null)
+        {
+            return "regulation";
+        }
+
+        var sets = r.Sets > 1 ? $"{r.Sets}× " : "";
+        return Escape($"{sets}{r.Size} {r.Material}");
+    }
+
+    /// <summary>The kind in words.</summary>
+    public static string KindText(RunResultKind kind) => Words.RunKind.Of(kind);
+
+    /// <summary>The kind's CSS class suffix.</summary>
+    public static string KindClass(RunResultKind kind) => kind switch
+    {
+        RunResultKind.Feeder => "feeder",
+        RunResultKind.Branch => "branch",
+        _ => "xfmr",
+    };
+
+    /// <summary>The distinct codes of <paramref name="findings"/> in order, comma-separated; escaped.</summary>
+    public static string Codes(IEnumerable<Finding> findings) =>
+        Escape(string.Join(", ", findings.Select(f => f.Code).Distinct(StringComparer.Ordinal)));
+}
