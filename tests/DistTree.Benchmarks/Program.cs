@@ -15,10 +15,11 @@ using DistTree.Solving;
 
 // DistTree benchmarks: a plain harness (not BenchmarkDotNet) that prints the median and spread of repeated runs.
 // Run: dotnet run -c Release --project tests/DistTree.Benchmarks -- [filters]
-// Filters select stages (generate yaml parse validate build solve json analyze upsize compare html) and sizes
-// (1000 10000 100000);
-// none selects everything. The stages parse, build and solve are timed one by one, so they call each stage alone;
-// a project wanted whole (a revision, the demo) goes through the library's entry point, Analysis.
+// Filters select stages (generate yaml parse validate build solve json analyze upsize compare html panels) and
+// sizes (1000 10000 100000); none selects everything. "panels" is one row of its own: 100,000 circuits in one
+// panel against the same in 1,000 panels (PanelWidth). The stages parse, build and solve are timed one by one, so
+// they call each stage alone; a project wanted whole (a revision, the demo) goes through the library's entry
+// point, Analysis.
 // Or: builds PROJECT ROUNDS [one-thread] FOLDER FOLDER… to time the solve of several builds in one process (see
 // BuildComparison and DEVELOPERS.md, Performance).
 if (args is ["builds", .. var buildArguments])
@@ -29,11 +30,12 @@ if (args is ["builds", .. var buildArguments])
 
 var filters = args.Select(a => a.ToLowerInvariant()).ToHashSet();
 int[] allSizes = [1_000, 10_000, 100_000];
-string[] allStages = ["generate", "yaml", "parse", "validate", "build", "solve", "json", "analyze", "upsize", "compare", "html"];
+string[] allStages = ["generate", "yaml", "parse", "validate", "build", "solve", "json", "analyze", "upsize", "compare", "html", "panels"];
 var sizes = allSizes.Where(s => filters.Contains(s.ToString(System.Globalization.CultureInfo.InvariantCulture))).DefaultIfEmpty().ToArray();
 sizes = sizes is [0] ? allSizes : sizes;
 var stages = allStages.Where(filters.Contains).ToArray();
 stages = stages.Length == 0 ? allStages : stages;
+sizes = stages is ["panels"] ? [] : sizes; // the panel-width row alone needs no generated campus
 bool Wanted(string stage) => stages.Contains(stage);
 
 Console.WriteLine($"DistTree benchmarks: .NET {Environment.Version}, {Environment.ProcessorCount} cores, {(GCSettings.IsServerGC ? "server" : "workstation")} GC");
@@ -47,6 +49,7 @@ var solveRunsPerSecond = new Dictionary<int, double>();
 var savings = new List<Saving>();
 var htmlBytes = new Dictionary<string, long>();
 var freshAnalyze = new List<string>();
+var panelWidth = new List<string>();
 try
 {
     // The figure a user sees, measured first, while this harness holds nothing large of its own.
@@ -55,6 +58,11 @@ try
         var campus = Path.Combine(folder.FullName, "campus-100000.yaml");
         File.WriteAllText(campus, ProjectGenerator.Generate(100_000, 3, 7));
         freshAnalyze = AnalyzeInFreshProcess(campus);
+    }
+
+    if (Wanted("panels"))
+    {
+        panelWidth = PanelWidth.Run(folder.FullName);
     }
 
     foreach (var size in sizes)
@@ -177,7 +185,7 @@ try
     }
 
     Summarise(results, solveRunsPerSecond, savings, htmlBytes);
-    foreach (var line in freshAnalyze)
+    foreach (var line in freshAnalyze.Concat(panelWidth))
     {
         Console.WriteLine(line);
     }

@@ -5,12 +5,13 @@ namespace DistTree.Network;
 
 /// <summary>
 /// The distribution tree of a project: a QuikGraph graph whose root is the service, with the nodes
-/// also held in an array in which every parent precedes its children, so that stages can walk the
-/// tree iteratively (top-down forwards, bottom-up backwards) without recursion.
+/// also held, in the order the graph's breadth-first search reached them, in an array in which every parent
+/// precedes its children, so that stages can walk the tree iteratively (top-down forwards, bottom-up
+/// backwards) without recursion.
 /// </summary>
 public sealed class DistributionNetwork
 {
-    internal DistributionNetwork(Project project, IReadOnlyList<NetworkNode> nodes, BidirectionalGraph<NetworkNode, NetworkRun> graph)
+    internal DistributionNetwork(Project project, IReadOnlyList<NetworkNode> nodes, BidirectionalGraph<NetworkNode, NetworkFeed> graph)
     {
         Project = project;
         Nodes = nodes;
@@ -32,8 +33,11 @@ public sealed class DistributionNetwork
     /// <summary>The nodes of each depth and the children of each node as ranges of indices, for passes that take the tree a level at a time.</summary>
     internal TreeLevels Levels => _levels ??= TreeLevels.Of(ParentIndices);
 
-    /// <summary>The tree as a QuikGraph graph: vertices are nodes, edges are runs.</summary>
-    public BidirectionalGraph<NetworkNode, NetworkRun> Graph { get; }
+    /// <summary>
+    /// The tree as a QuikGraph graph: vertices are nodes, edges are feeds (one into every node but the service,
+    /// each with its run, if any), a node's feeds out in the order of its children.
+    /// </summary>
+    public BidirectionalGraph<NetworkNode, NetworkFeed> Graph { get; }
 
     /// <summary>The service.</summary>
     public NetworkNode Root => Nodes[0];

@@ -1,105 +1,123 @@
 using DistTree.Model;
 using QuikGraph;
+using QuikGraph.Algorithms.Search;
 
 namespace DistTree.Network;
 
 /// <summary>
-/// Builds the distribution tree of a validated project: the service is node 0, then breadth first
-/// (iteratively, never recursively) each node's branch circuits in file order and then the equipment
-/// it feeds in file order, so that every parent precedes its children.
+/// Builds the distribution tree of a validated project as a QuikGraph graph (a node per service, equipment and
+/// branch circuit; a feed from each node's source to it), then numbers the nodes in the order of QuikGraph's
+/// breadth-first search from the service: the service is node 0, then each node's branch circuits in file order
+/// and then the equipment it feeds in file order, so that every parent precedes its children.
 /// </summary>
 public static class NetworkBuilder
 {
-    /// <summary>Builds the tree; feeders and branch circuits become runs (edges).</summary>
+    /// <summary>Builds the tree; feeders and branch circuits become runs, each the run of a feed (edge).</summary>
     /// <exception cref="InvalidOperationException">
     /// The project is inconsistent (an id used twice, or equipment the service does not reach); the loader
     /// never produces such a project.
     /// </exception>
     public static DistributionNetwork Build(Project project)
     {
-        var fedFrom = new Dictionary<string, List<Equipment>>(StringComparer.Ordinal);
-        foreach (var equipment in project.Equipment)
-        {
-            if (!fedFrom.TryGetValue(equipment.From, out var list))
-            {
-                fedFrom[equipment.From] = list = [];
-            }
-
-            list.Add(equipment);
-        }
-
-        var rules = project.Rules;
         var expected = 1 + project.Equipment.Count;
         foreach (var equipment in project.Equipment)
         {
             expected += equipment.Circuits.Count;
         }
 
-        var nodes = new List<NetworkNode>(expected);
-        var graph = new BidirectionalGraph<NetworkNode, NetworkRun>(allowParallelEdges: false, capacity: expected);
-        var root = new NetworkNode(0, project.Service.Id, NodeKind.Service, project.Service.System, -1);
-        nodes.Add(root);
-        graph.AddVertex(root);
-        var ids = new HashSet<string>(expected, StringComparer.Ordinal) { root.Id };
+        // Parallel edges allowed: a tree has none, and refusing them would make each new edge scan its source's
+        // edges, a cost in the square of the circuits of one panel.
+        var graph = new BidirectionalGraph<NetworkNode, NetworkFeed>(allowParallelEdges: true, capacity: expected);
+        var byId = new Dictionary<string, NetworkNode>(expected, StringComparer.Ordinal);
+        var root = Add(graph, byId, new NetworkNode(0, project.Service.Id, NodeKind.Service, project.Service.System, -1));
+        var equipmentNodes = AddEquipmentAndCircuits(project, graph, byId);
+        AddFeeders(project, graph, byId, equipmentNodes);
 
-        for (var next = 0; next < nodes.Count; next++)
+        var nodes = ParentFirst(graph, root, expected);
+        if (nodes.Count != graph.VertexCount)
         {
-            var parent = nodes[next];
-            if (parent.Equipment is { } panel)
-            {
-                foreach (var circuit in panel.Circuits)
-                {
-                    var end = Add(nodes, graph, ids, new NetworkNode(nodes.Count, circuit.FullId, NodeKind.EndPoint, panel.OutputSystem, parent.Index) { Circuit = circuit });
-                    parent.MutableChildren.Add(end.Index);
-                    var limit = circuit.Run.LimitPercent ?? rules.BranchLimitPercent;
-                    Connect(graph, new NetworkRun(parent, end, RunKind.Branch, circuit.Run, circuit.Supply, limit));
-                }
-            }
-
-            if (parent.Kind == NodeKind.EndPoint || !fedFrom.TryGetValue(parent.Id, out var fed))
-            {
-                continue;
-            }
-
-            foreach (var equipment in fed)
-            {
-                var node = Add(nodes, graph, ids, new NetworkNode(nodes.Count, equipment.Id, KindOf(equipment.Kind), equipment.OutputSystem, parent.Index) { Equipment = equipment });
-                parent.MutableChildren.Add(node.Index);
-                if (equipment.Feeder is { } feeder)
-                {
-                    var limit = feeder.LimitPercent ?? rules.FeederLimitPercent;
-                    Connect(graph, new NetworkRun(parent, node, RunKind.Feeder, feeder, equipment.System.FeederSupply, limit));
-                }
-            }
-        }
-
-        if (nodes.Count != expected)
-        {
-            var missing = project.Equipment.Where(e => !ids.Contains(e.Id)).Select(e => e.Id).FirstOrDefault();
-            throw new InvalidOperationException(missing is null
-                ? "the project has equipment or circuits that the tree cannot place"
-                : $"equipment '{missing}' is not reached from the service '{project.Service.Id}'");
+            // Only the service has no parent once the search has placed the nodes it reaches.
+            var missing = project.Equipment[Array.FindIndex(equipmentNodes, node => node.ParentIndex == Unplaced)];
+            throw new InvalidOperationException($"equipment '{missing.Id}' is not reached from the service '{project.Service.Id}'");
         }
 
         return new DistributionNetwork(project, nodes, graph);
     }
 
-    private static NetworkNode Add(List<NetworkNode> nodes, BidirectionalGraph<NetworkNode, NetworkRun> graph, HashSet<string> ids, NetworkNode node)
+    // The parent index of a node made and not yet placed by the search.
+    private const int Unplaced = -1;
+
+    // Every piece of equipment and its branch circuits, fed from the equipment. The circuits' feeds are added
+    // before any feeder's, so that a node's feeds out are its circuits in file order, then (AddFeeders) the
+    // equipment it feeds in file order: the order the search takes them in.
+    private static NetworkNode[] AddEquipmentAndCircuits(Project project, BidirectionalGraph<NetworkNode, NetworkFeed> graph, Dictionary<string, NetworkNode> byId)
     {
-        if (!ids.Add(node.Id))
+        var rules = project.Rules;
+        var equipmentNodes = new NetworkNode[project.Equipment.Count];
+        for (var i = 0; i < equipmentNodes.Length; i++)
+        {
+            var equipment = project.Equipment[i];
+            var node = equipmentNodes[i] = Add(graph, byId, new NetworkNode(graph.VertexCount, equipment.Id, KindOf(equipment.Kind), equipment.OutputSystem, Unplaced) { Equipment = equipment });
+            foreach (var circuit in equipment.Circuits)
+            {
+                var end = Add(graph, byId, new NetworkNode(graph.VertexCount, circuit.FullId, NodeKind.EndPoint, equipment.OutputSystem, Unplaced) { Circuit = circuit });
+                var limit = circuit.Run.LimitPercent ?? rules.BranchLimitPercent;
+                end.Incoming = new NetworkRun(node, end, RunKind.Branch, circuit.Run, circuit.Supply, limit);
+                graph.AddEdge(new NetworkFeed(node, end));
+            }
+        }
+
+        return equipmentNodes;
+    }
+
+    // Each piece of equipment fed from its source (the service or other equipment), through its feeder if it has one.
+    private static void AddFeeders(Project project, BidirectionalGraph<NetworkNode, NetworkFeed> graph, Dictionary<string, NetworkNode> byId, NetworkNode[] equipmentNodes)
+    {
+        var rules = project.Rules;
+        for (var i = 0; i < equipmentNodes.Length; i++)
+        {
+            var (equipment, node) = (project.Equipment[i], equipmentNodes[i]);
+            if (!byId.TryGetValue(equipment.From, out var source) || source.Kind == NodeKind.EndPoint)
+            {
+                continue; // not reached: Build names it
+            }
+
+            if (equipment.Feeder is { } feeder)
+            {
+                var limit = feeder.LimitPercent ?? rules.FeederLimitPercent;
+                node.Incoming = new NetworkRun(source, node, RunKind.Feeder, feeder, equipment.System.FeederSupply, limit);
+            }
+
+            graph.AddEdge(new NetworkFeed(source, node));
+        }
+    }
+
+    // The nodes in the order QuikGraph's breadth-first search (a queue, no recursion) first reaches them from the
+    // service, each numbered and told its parent as it is reached.
+    private static List<NetworkNode> ParentFirst(BidirectionalGraph<NetworkNode, NetworkFeed> graph, NetworkNode root, int expected)
+    {
+        var nodes = new List<NetworkNode>(expected) { root };
+        root.Place(0, -1);
+        var search = new BreadthFirstSearchAlgorithm<NetworkNode, NetworkFeed>(graph, new QuikGraph.Collections.Queue<NetworkNode>(), new Dictionary<NetworkNode, GraphColor>(expected));
+        search.TreeEdge += feed =>
+        {
+            feed.Target.Place(nodes.Count, feed.Source.Index);
+            feed.Source.MutableChildren.Add(nodes.Count);
+            nodes.Add(feed.Target);
+        };
+        search.Compute(root);
+        return nodes;
+    }
+
+    private static NetworkNode Add(BidirectionalGraph<NetworkNode, NetworkFeed> graph, Dictionary<string, NetworkNode> byId, NetworkNode node)
+    {
+        if (!byId.TryAdd(node.Id, node))
         {
             throw new InvalidOperationException($"the id '{node.Id}' is used twice");
         }
 
-        nodes.Add(node);
         graph.AddVertex(node);
         return node;
-    }
-
-    private static void Connect(BidirectionalGraph<NetworkNode, NetworkRun> graph, NetworkRun run)
-    {
-        graph.AddEdge(run);
-        run.Target.Incoming = run;
     }
 
     private static NodeKind KindOf(EquipmentKind kind) => kind switch

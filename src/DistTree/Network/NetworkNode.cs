@@ -8,8 +8,14 @@ namespace DistTree.Network;
 /// </summary>
 public sealed class NetworkNode
 {
+    /// <summary>
+    /// A node numbered <paramref name="index"/> under <paramref name="parentIndex"/>. The builder makes its nodes
+    /// with the number they are made in and no parent, then numbers them in the order the tree's graph is traversed
+    /// (<see cref="Place"/>); the number made with stays the node's hash code, as the graph's dictionaries need.
+    /// </summary>
     internal NetworkNode(int index, string id, NodeKind kind, ElectricalSystem system, int parentIndex)
     {
+        _key = index;
         Index = index;
         Id = id;
         Kind = kind;
@@ -18,7 +24,7 @@ public sealed class NetworkNode
     }
 
     /// <summary>Position in <see cref="DistributionNetwork.Nodes"/>; a parent's index is smaller than its children's.</summary>
-    public int Index { get; }
+    public int Index { get; private set; }
 
     /// <summary>The node's id: equipment id, the service id, or a circuit's full id (<c>LP1/3</c>).</summary>
     public string Id { get; }
@@ -30,7 +36,7 @@ public sealed class NetworkNode
     public ElectricalSystem System { get; }
 
     /// <summary>The parent's index, or -1 for the service.</summary>
-    public int ParentIndex { get; }
+    public int ParentIndex { get; private set; }
 
     /// <summary>The run that feeds this node, or null for the service and for equipment standing at its source.</summary>
     public NetworkRun? Incoming { get; internal set; }
@@ -47,13 +53,22 @@ public sealed class NetworkNode
     internal List<int> MutableChildren => _children;
 
     private readonly List<int> _children = [];
+    private readonly int _key;
 
     /// <inheritdoc />
     public override string ToString() => Id;
 
     /// <summary>
-    /// The node's index: a node is equal only to itself, and its index is fixed, so the graph's dictionaries hash
-    /// it without the runtime's per-object hash code.
+    /// The number the node was made with: a node is equal only to itself, and that number is fixed (unlike
+    /// <see cref="Index"/> while the builder numbers the tree), so the graph's dictionaries hash it without the
+    /// runtime's per-object hash code.
     /// </summary>
-    public override int GetHashCode() => Index;
+    public override int GetHashCode() => _key;
+
+    /// <summary>Gives the node its place in the tree: its index and its parent's.</summary>
+    internal void Place(int index, int parentIndex)
+    {
+        Index = index;
+        ParentIndex = parentIndex;
+    }
 }

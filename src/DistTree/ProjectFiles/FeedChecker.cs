@@ -1,20 +1,18 @@
 using DistTree.Diagnostics;
 using DistTree.Model;
+using QuikGraph;
+using QuikGraph.Algorithms.Search;
 
 namespace DistTree.ProjectFiles;
 
 /// <summary>
-/// The checks that need the whole tree: duplicate ids, sources that do not exist, feed cycles,
-/// equipment the service does not reach; then, walking down from the service (breadth first,
-/// iteratively), each equipment's system and the checks that depend on it (a transformer's primary,
-/// the circuits a panel's system can give).
+/// The checks that need the whole tree: duplicate ids, sources that do not exist; then, walking down
+/// the feeds from the service (QuikGraph's breadth-first search), each equipment's system and the checks
+/// that depend on it (a transformer's primary, the circuits a panel's system can give); then feed cycles
+/// and the equipment the service does not reach (QuikGraph's depth-first search along 'from').
 /// </summary>
 internal sealed class FeedChecker(DiagnosticBag bag)
 {
-    private const int Unvisited = 0;
-    private const int OnPath = 1;
-    private const int Done = 2;
-
     /// <summary>Checks the drafts and sets each reachable draft's <see cref="EquipmentDraft.System"/>.</summary>
     public void Check(ProjectDraft project)
     {
@@ -27,7 +25,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         }
 
         var reached = AssignSystems(byId, service);
-        CheckUnreached(project, byId, reached, service.Id);
+        CheckUnreached(byId, reached, service.Id);
     }
 
     private Dictionary<string, EquipmentDraft> UniqueIds(ProjectDraft project)
@@ -86,51 +84,38 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         }
     }
 
+    // QuikGraph's breadth-first search (a queue, no recursion) down the feeds from the service: each piece of
+    // equipment takes its source's output system when first reached, in the order the loader has always checked
+    // them, each source's equipment in file order. Returns the equipment reached.
     private HashSet<EquipmentDraft> AssignSystems(Dictionary<string, EquipmentDraft> byId, Service service)
     {
-        var children = new Dictionary<string, List<EquipmentDraft>>(StringComparer.Ordinal);
-        // In the order read (a dictionary enumerates in insertion order while nothing is removed): file order.
+        // Vertices are ids; a feed from each defined source to the equipment it feeds, in file order (a dictionary
+        // enumerates in insertion order while nothing is removed).
+        var feeds = new AdjacencyGraph<string, SEquatableEdge<string>>(allowParallelEdges: true, byId.Count + 1);
+        feeds.AddVertex(service.Id);
+        feeds.AddVertexRange(byId.Keys);
         foreach (var draft in byId.Values)
         {
-            if (draft.From is { } from)
+            if (draft.From is { } from && feeds.ContainsVertex(from))
             {
-                if (!children.TryGetValue(from, out var list))
-                {
-                    children[from] = list = [];
-                }
-
-                list.Add(draft);
+                feeds.AddEdge(new SEquatableEdge<string>(from, draft.Id!));
             }
         }
 
         var reached = new HashSet<EquipmentDraft>();
-        var queue = new Queue<(string Id, ElectricalSystem? Output)>();
-        queue.Enqueue((service.Id, service.System));
-        while (queue.Count > 0)
+        var search = new BreadthFirstSearchAlgorithm<string, SEquatableEdge<string>>(feeds);
+        search.TreeEdge += feed =>
         {
-            var (id, output) = queue.Dequeue();
-            if (!children.TryGetValue(id, out var fed))
+            var child = byId[feed.Target];
+            var output = feed.Source == service.Id ? service.System : byId[feed.Source].OutputSystem;
+            reached.Add(child);
+            child.System = output;
+            if (output is not null)
             {
-                continue;
+                CheckAgainstSystem(child, feed.Source, output);
             }
-
-            foreach (var child in fed)
-            {
-                if (!reached.Add(child))
-                {
-                    continue;
-                }
-
-                child.System = output;
-                if (output is not null)
-                {
-                    CheckAgainstSystem(child, id, output);
-                }
-
-                queue.Enqueue((child.Id!, child.OutputSystem));
-            }
-        }
-
+        };
+        search.Compute(service.Id);
         return reached;
     }
 
@@ -170,68 +155,60 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         }
     }
 
-    private void CheckUnreached(ProjectDraft project, Dictionary<string, EquipmentDraft> byId, HashSet<EquipmentDraft> reached, string serviceId)
+    // Each piece of equipment has one source, so following 'from' from any unreached entry either ends at an
+    // undefined source (already reported) or enters a cycle. QuikGraph's depth-first search (its own stack, no
+    // recursion) follows 'from' over the unreached equipment, starting from each not yet visited in file order:
+    // an edge back into the walk closes a cycle, an edge to an earlier walk leads where that walk led, and each
+    // piece of equipment is finished in the reverse of the walk, which is the order its error is reported in.
+    private void CheckUnreached(Dictionary<string, EquipmentDraft> byId, HashSet<EquipmentDraft> reached, string serviceId)
     {
-        // Each piece of equipment has one source, so following 'from' from any unreached entry either
-        // ends at an undefined source (already reported) or enters a cycle. Walk iteratively.
-        var state = new Dictionary<EquipmentDraft, int>();
-        var cycleOf = new Dictionary<EquipmentDraft, EquipmentDraft>();
-        foreach (var start in project.Equipment)
+        var unreached = new AdjacencyGraph<EquipmentDraft, SEquatableEdge<EquipmentDraft>>(allowParallelEdges: true);
+        unreached.AddVertexRange(byId.Values.Where(draft => !reached.Contains(draft)));
+        if (unreached.IsVerticesEmpty)
         {
-            if (start.Id is null || !byId.TryGetValue(start.Id, out var owner) || owner != start || reached.Contains(start) || state.GetValueOrDefault(start) != Unvisited)
+            return;
+        }
+
+        foreach (var draft in unreached.Vertices.ToList())
+        {
+            if (draft.From is { } from && byId.TryGetValue(from, out var source) && unreached.ContainsVertex(source))
             {
-                continue;
-            }
-
-            var path = new List<EquipmentDraft>();
-            var current = start;
-            EquipmentDraft? entry = null;
-            while (true)
-            {
-                var s = state.GetValueOrDefault(current);
-                if (s == OnPath)
-                {
-                    var cycle = path.Skip(path.IndexOf(current)).ToList();
-                    ReportCycle(cycle);
-                    foreach (var member in cycle)
-                    {
-                        cycleOf[member] = member;
-                    }
-
-                    entry = current;
-                    break;
-                }
-
-                if (s == Done)
-                {
-                    entry = cycleOf.GetValueOrDefault(current);
-                    break;
-                }
-
-                state[current] = OnPath;
-                path.Add(current);
-                if (current.From is not { } from || from == serviceId || !byId.TryGetValue(from, out var next) || reached.Contains(next))
-                {
-                    break;
-                }
-
-                current = next;
-            }
-
-            // Everything on the path before the cycle leads into it: not reached from the service.
-            for (var i = path.Count - 1; i >= 0; i--)
-            {
-                var member = path[i];
-                state[member] = Done;
-                if (entry is null || cycleOf.ContainsKey(member))
-                {
-                    continue;
-                }
-
-                cycleOf[member] = entry;
-                bag.Error(member.FromLocation, $"'{member.Id}' is not reached from the service '{serviceId}': following 'from' leads into the feed cycle at '{entry.Id}'");
+                unreached.AddEdge(new SEquatableEdge<EquipmentDraft>(draft, source));
             }
         }
+
+        var walk = new List<EquipmentDraft>();
+        // The cycle each piece of equipment leads into, named by the member a walk entered it at; a member: itself.
+        var cycleOf = new Dictionary<EquipmentDraft, EquipmentDraft>();
+        EquipmentDraft? entry = null;
+        var search = new DepthFirstSearchAlgorithm<EquipmentDraft, SEquatableEdge<EquipmentDraft>>(unreached);
+        search.StartVertex += _ => entry = null;
+        search.DiscoverVertex += walk.Add;
+        search.BackEdge += feed =>
+        {
+            var cycle = walk[walk.IndexOf(feed.Target)..];
+            ReportCycle(cycle);
+            foreach (var member in cycle)
+            {
+                cycleOf[member] = member;
+            }
+
+            entry = feed.Target;
+        };
+        search.ForwardOrCrossEdge += feed => entry = cycleOf.GetValueOrDefault(feed.Target);
+        search.FinishVertex += member =>
+        {
+            walk.RemoveAt(walk.Count - 1);
+            if (entry is null || cycleOf.ContainsKey(member))
+            {
+                return;
+            }
+
+            // Everything on the walk before the cycle leads into it: not reached from the service.
+            cycleOf[member] = entry;
+            bag.Error(member.FromLocation, $"'{member.Id}' is not reached from the service '{serviceId}': following 'from' leads into the feed cycle at '{entry.Id}'");
+        };
+        search.Compute();
     }
 
     private void ReportCycle(List<EquipmentDraft> cycle)

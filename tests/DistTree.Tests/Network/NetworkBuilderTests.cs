@@ -1,3 +1,4 @@
+using System.Text;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
@@ -61,7 +62,7 @@ public sealed class NetworkBuilderTests
     public void Build_Runs_CarryTheirSupplyAndLimit()
     {
         var network = Build(TransformerProject);
-        var runs = network.Graph.Edges.ToDictionary(r => r.Id);
+        var runs = network.Graph.Edges.Where(f => f.Run is not null).ToDictionary(f => f.Target.Id, f => f.Run!);
 
         // The transformer's feeder carries its primary; the panel below it its secondary.
         Assert.Equal((RunKind.Feeder, new CircuitSupply(480, 3), 1.5), (runs["T1"].Kind, runs["T1"].Supply, runs["T1"].LimitPercent));
@@ -74,15 +75,17 @@ public sealed class NetworkBuilderTests
     }
 
     [Fact]
-    public void Build_EquipmentWithoutFeeder_HasNoIncomingRun()
+    public void Build_EquipmentWithoutFeeder_HasNoIncomingRunButAFeedFromItsSource()
     {
         var network = Build(TransformerProject);
         var msb = network.Nodes.Single(n => n.Id == "MSB");
 
         Assert.Null(msb.Incoming);
-        Assert.Empty(network.Graph.InEdges(msb));
+        var feed = Assert.Single(network.Graph.InEdges(msb));
+        Assert.Same(network.Root, feed.Source);
+        Assert.Null(feed.Run);
         Assert.Equal(0, msb.ParentIndex);
-        Assert.Equal(6, network.Graph.EdgeCount);
+        Assert.Equal(7, network.Graph.EdgeCount);
         Assert.Equal(8, network.Graph.VertexCount);
     }
 
@@ -97,6 +100,64 @@ public sealed class NetworkBuilderTests
     }
 
     [Fact]
+    public void Build_RandomTrees_NodesInBreadthFirstOrderAndTheGraphIsTheTree()
+    {
+        for (var seed = 0; seed < 200; seed++)
+        {
+            var (text, equipment) = RandomTree(new Random(seed));
+
+            var network = Build(text);
+
+            // By hand: from the service, each node's circuits in file order, then the equipment it feeds in file order.
+            var expected = new List<string> { "SVC" };
+            for (var next = 0; next < expected.Count; next++)
+            {
+                var id = expected[next];
+                expected.AddRange(equipment.Where(e => e.Id == id).SelectMany(e => Enumerable.Range(1, e.Circuits).Select(c => $"{id}/{c}")));
+                expected.AddRange(equipment.Where(e => e.From == id).Select(e => e.Id));
+            }
+
+            Assert.Equal(expected, network.Nodes.Select(n => n.Id));
+            Assert.Equal(network.Nodes.Count, network.Graph.VertexCount);
+            Assert.Equal(network.Nodes.Count - 1, network.Graph.EdgeCount);
+            Assert.Empty(network.Graph.InEdges(network.Root));
+            foreach (var node in network.Nodes)
+            {
+                Assert.Same(node, network.Nodes[node.Index]);
+                Assert.Equal(node.Children, network.Graph.OutEdges(node).Select(f => f.Target.Index));
+                Assert.All(node.Children, child => Assert.Equal(node.Index, network.Nodes[child].ParentIndex));
+                if (node != network.Root)
+                {
+                    var feed = Assert.Single(network.Graph.InEdges(node));
+                    Assert.Equal(node.ParentIndex, feed.Source.Index);
+                    Assert.True(node.ParentIndex < node.Index);
+                    Assert.Same(node.Incoming, feed.Run);
+                }
+            }
+        }
+    }
+
+    [Fact]
+    public void Build_OnePanelOf20000Circuits_CircuitsInFileOrderWithoutAScanPerEdge()
+    {
+        var text = new StringBuilder("disttree: 1\nproject: { name: Wide }\nservice: { id: SVC, system: 480Y/277 }\nequipment:\n");
+        text.Append("  - id: LP1\n    kind: panelboard\n    from: SVC\n    feeder: { length: 3, size: 500 kcmil, sets: 8 }\n    circuits:\n");
+        const int circuits = 20_000;
+        for (var c = 1; c <= circuits; c++)
+        {
+            text.Append("      - { id: \"").Append(c).Append("\", poles: 1, load: { va: 100 }, run: { length: 10, size: 12 AWG } }\n");
+        }
+
+        var network = Build(text.ToString());
+
+        // A graph refusing parallel edges scans the source's edges on every new edge: the square of a panel's circuits.
+        Assert.True(network.Graph.AllowParallelEdges);
+        Assert.Equal(circuits + 2, network.Nodes.Count);
+        Assert.Equal(Enumerable.Range(2, circuits), network.Nodes[1].Children);
+        Assert.Equal("LP1/20000", network.Nodes[^1].Id);
+    }
+
+    [Fact]
     public void LoadAndBuild_Chain100000Levels_NoStackOverflow()
     {
         const int levels = 100_000;
@@ -107,5 +168,37 @@ public sealed class NetworkBuilderTests
         var end = network.Nodes[^1];
         Assert.Equal("END/1", end.Id);
         Assert.Equal(levels + 3, network.PathTo(end).Count);
+    }
+
+    // A tree of panelboards and switchboards, parents made before children but written in a shuffled order, with
+    // zero to four circuits on each panelboard.
+    private static (string Text, List<(string Id, string From, int Circuits)> Equipment) RandomTree(Random random)
+    {
+        var count = random.Next(1, 30);
+        var equipment = new List<(string Id, string From, int Circuits)>();
+        for (var i = 0; i < count; i++)
+        {
+            var from = i == 0 || random.Next(4) == 0 ? "SVC" : equipment[random.Next(i)].Id;
+            equipment.Add(($"E{i}", from, random.Next(3) == 0 ? 0 : random.Next(5)));
+        }
+
+        random.Shuffle(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(equipment));
+        var text = new StringBuilder("disttree: 1\nproject: { name: Random }\nservice: { id: SVC, system: 480Y/277 }\nequipment:\n");
+        foreach (var (id, from, circuits) in equipment)
+        {
+            if (circuits == 0)
+            {
+                text.Append($"  - {{ id: {id}, kind: switchboard, from: {from} }}\n");
+                continue;
+            }
+
+            text.Append($"  - id: {id}\n    kind: panelboard\n    from: {from}\n    feeder: {{ length: 30, size: 4/0 AWG }}\n    circuits:\n");
+            for (var c = 1; c <= circuits; c++)
+            {
+                text.Append($"      - {{ id: \"{c}\", poles: 1, load: {{ va: 500 }}, run: {{ length: 20, size: 12 AWG }} }}\n");
+            }
+        }
+
+        return (text.ToString(), equipment);
     }
 }
