@@ -31,19 +31,12 @@ internal static class AnalyzeCommand
         command.SetAction(parsed =>
         {
             var path = parsed.GetValue(file)!;
-            var count = parsed.GetValue(worst);
-            if (count < 1)
-            {
-                throw new UsageException("--worst takes a whole number of 1 or more");
-            }
+            var count = OptionChecks.Positive(parsed.GetValue(worst), "--worst");
 
             var jsonPath = parsed.GetValue(json);
             var sarifPath = parsed.GetValue(sarif);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
-            if (new[] { jsonPath, sarifPath, htmlPath }.Count(p => p == "-") > 1)
-            {
-                throw new UsageException("only one of --json, --html and --sarif can write to standard output");
-            }
+            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--html", htmlPath), ("--sarif", sarifPath));
 
             Solving.Solution solution;
             using (var status = context.Status())

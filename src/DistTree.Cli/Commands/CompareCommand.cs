@@ -39,66 +39,65 @@ internal static class CompareCommand
             var jsonPath = parsed.GetValue(json);
             var markdownPath = parsed.GetValue(markdown);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(paths[^1]);
-            var count = parsed.GetValue(rows);
-            if (count < 1)
-            {
-                throw new UsageException("--rows takes a whole number of 1 or more");
-            }
+            var count = OptionChecks.Positive(parsed.GetValue(rows), "--rows");
 
-            if (new[] { jsonPath, markdownPath, htmlPath }.Count(p => p == "-") > 1)
-            {
-                throw new UsageException("only one of --json, --markdown and --html can write to standard output");
-            }
+            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath));
 
-            Solution before;
-            Solution after;
-            if (revision is not null)
-            {
-                if (paths.Length != 1)
-                {
-                    throw new UsageException("with --against, give one FILE: disttree compare FILE --against REV");
-                }
-
-                after = Pipeline.Solve(context, paths[0]);
-                var (text, name) = GitRevision.Read(paths[0], revision);
-                before = SolveText(context, text, name);
-            }
-            else
-            {
-                if (paths.Length != 2)
-                {
-                    throw new UsageException("give two files, OLD and NEW, or one FILE with --against REV");
-                }
-
-                before = Pipeline.Solve(context, paths[0]);
-                after = Pipeline.Solve(context, paths[1]);
-            }
-
+            var (before, after) = SolveBoth(context, paths, revision);
             var comparison = RevisionComparer.Compare(before, after);
-            if (jsonPath is not null)
-            {
-                OutputFile.Write(context, jsonPath, ComparisonJson.Write(comparison), paths);
-            }
-
-            if (markdownPath is not null)
-            {
-                OutputFile.Write(context, markdownPath, ComparisonMarkdown.Write(comparison, count), paths);
-            }
-
-            if (htmlPath is not null)
-            {
-                var options = new HtmlReportOptions { Comparison = comparison, Date = parsed.GetValue(date) };
-                OutputFile.Write(context, htmlPath, HtmlReport.Render(after, options), paths);
-            }
-
-            if (jsonPath != "-" && markdownPath != "-" && htmlPath != "-")
-            {
-                ComparisonConsole.Write(context.Out, comparison, count);
-            }
-
+            WriteOutputs(context, comparison, after, new Outputs(jsonPath, markdownPath, htmlPath, parsed.GetValue(date), count), paths);
             return comparison.HasNewFindings ? ExitCodes.LimitExceeded : ExitCodes.Ok;
         });
         return command;
+    }
+
+    // The old and the new revision, solved: two files, or one file and its version at a git revision.
+    private static (Solution Before, Solution After) SolveBoth(CliContext context, string[] paths, string? revision)
+    {
+        if (revision is not null)
+        {
+            if (paths.Length != 1)
+            {
+                throw new UsageException("with --against, give one FILE: disttree compare FILE --against REV");
+            }
+
+            var after = Pipeline.Solve(context, paths[0]);
+            var (text, name) = GitRevision.Read(paths[0], revision);
+            return (SolveText(context, text, name), after);
+        }
+
+        if (paths.Length != 2)
+        {
+            throw new UsageException("give two files, OLD and NEW, or one FILE with --against REV");
+        }
+
+        var before = Pipeline.Solve(context, paths[0]);
+        return (before, Pipeline.Solve(context, paths[1]));
+    }
+
+    // Every output asked for; the console's unless one of them is standard output.
+    private static void WriteOutputs(CliContext context, Comparison comparison, Solution after, Outputs o, string[] paths)
+    {
+        if (o.Json is not null)
+        {
+            OutputFile.Write(context, o.Json, ComparisonJson.Write(comparison), paths);
+        }
+
+        if (o.Markdown is not null)
+        {
+            OutputFile.Write(context, o.Markdown, ComparisonMarkdown.Write(comparison, o.Rows), paths);
+        }
+
+        if (o.Html is not null)
+        {
+            var options = new HtmlReportOptions { Comparison = comparison, Date = o.Date };
+            OutputFile.Write(context, o.Html, HtmlReport.Render(after, options), paths);
+        }
+
+        if (o.Json != "-" && o.Markdown != "-" && o.Html != "-")
+        {
+            ComparisonConsole.Write(context.Out, comparison, o.Rows);
+        }
     }
 
     /// <summary><c>reports/NAME-compare.html</c> for the new project file <c>…/NAME.yaml</c>, relative to the working directory.</summary>
@@ -115,4 +114,7 @@ internal static class CompareCommand
 
         return Analysis.Run(project).Solution;
     }
+
+    // Where each output goes (null: not asked for), the report's date and how many rows the console and Markdown list.
+    private sealed record Outputs(string? Json, string? Markdown, string? Html, string? Date, int Rows);
 }

@@ -34,23 +34,9 @@ internal static class UpsizeCommand
             var path = parsed.GetValue(file)!;
             var jsonPath = parsed.GetValue(json);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
-            if (jsonPath == "-" && htmlPath == "-")
-            {
-                throw new UsageException("only one of --json and --html can write to standard output");
-            }
+            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--html", htmlPath));
 
-            var before = Pipeline.Solve(context, path);
-            if (parsed.GetValue(maxSets) is { } sets)
-            {
-                if (sets < 1)
-                {
-                    throw new UsageException("--max-sets takes a whole number of 1 or more");
-                }
-
-                var project = before.Project with { Sizing = before.Project.Sizing with { MaxSets = sets } };
-                before = before with { Project = project };
-            }
-
+            var before = WithMaxSets(Pipeline.Solve(context, path), parsed.GetValue(maxSets));
             var plan = Upsizer.Standard.Plan(before);
             if (jsonPath is not null)
             {
@@ -81,6 +67,18 @@ internal static class UpsizeCommand
     /// <summary><c>reports/NAME-upsize.html</c> for the project file <c>…/NAME.yaml</c>, relative to the working directory.</summary>
     internal static string DefaultHtmlPath(string projectPath) =>
         Path.Combine("reports", Path.GetFileNameWithoutExtension(projectPath) + "-upsize.html");
+
+    // The solution with --max-sets in place of the project's sizing: max_sets, when given.
+    private static Solving.Solution WithMaxSets(Solving.Solution before, int? maxSets)
+    {
+        if (maxSets is not { } given)
+        {
+            return before;
+        }
+
+        var sets = OptionChecks.Positive(given, "--max-sets");
+        return before with { Project = before.Project with { Sizing = before.Project.Sizing with { MaxSets = sets } } };
+    }
 
     private static void WriteApplied(CliContext context, string path, string output, UpsizePlan plan)
     {
