@@ -1,6 +1,7 @@
 using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
 

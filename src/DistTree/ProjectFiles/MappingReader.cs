@@ -1,5 +1,6 @@
 using System.Runtime.CompilerServices;
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
 

@@ -3,6 +3,7 @@ using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
 

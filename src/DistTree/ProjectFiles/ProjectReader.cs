@@ -2,6 +2,7 @@ using System.Globalization;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
 using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles;

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
 using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles;

@@ -4,27 +4,22 @@ using DistTree.Diagnostics;
 using YamlDotNet.Core;
 using YamlDotNet.Core.Events;
 
-namespace DistTree.ProjectFiles;
+namespace DistTree.ProjectFiles.Yaml;
 
 /// <summary>
 /// Reads YAML text into a <see cref="SourceNode"/> tree with YamlDotNet's event parser, keeping every
-/// node's start mark. Iterative (an explicit stack), so deep nesting cannot overflow the call stack; and
-/// nesting deeper than <see cref="ProjectLimits.MaxDepth"/> stops the read, since YamlDotNet's scanner
-/// spends time in proportion to the depth on every token (100,000 nested '[' take it about a minute).
+/// node's start mark: the reference the fast path must match, the path for anything outside its subset,
+/// and the source of every YAML error message. Iterative (an explicit stack), so deep nesting cannot
+/// overflow the call stack; and nesting deeper than <see cref="ProjectLimits.MaxDepth"/> stops the read,
+/// since YamlDotNet's scanner spends time in proportion to the depth on every token (100,000 nested '['
+/// take it about a minute).
 /// </summary>
-internal static partial class SourceTreeReader
+internal static partial class YamlDotNetReader
 {
     private const string StringTag = "tag:yaml.org,2002:str";
 
-    /// <summary>
-    /// The document's root node, or null when the text holds none or cannot be parsed (reported). The
-    /// common subset is read by <see cref="FastYamlReader"/>; the rest, and every error, by YamlDotNet.
-    /// </summary>
-    public static SourceNode? Read(string text, string file, DiagnosticBag bag) =>
-        FastYamlReader.TryRead(text, file) ?? ReadWithParser(text, file, bag);
-
-    /// <summary>Reads with YamlDotNet alone (the reference the fast path must match, and the path for errors).</summary>
-    internal static SourceNode? ReadWithParser(string text, string file, DiagnosticBag bag)
+    /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
+    public static SourceNode? Read(string text, string file, DiagnosticBag bag)
     {
         var parser = new Parser(new StringReader(text));
         var stack = new Stack<Frame>();
