@@ -48,7 +48,10 @@ public sealed record Load(LoadKind Kind, double Value, double PowerFactor)
     public MotorStart? Start { get; init; }
 
     /// <summary>True for a motor load (<c>hp</c> or <c>fla</c>).</summary>
-    public bool IsMotor => Kind is LoadKind.Hp or LoadKind.Fla;
+    public bool IsMotor => IsMotorKind(Kind);
+
+    /// <summary>True for the quantities a motor is given in (<c>hp</c> or <c>fla</c>): such a load needs its power factor and may state how it starts.</summary>
+    public static bool IsMotorKind(LoadKind kind) => kind is LoadKind.Hp or LoadKind.Fla;
 }
 
 /// <summary>How a motor starts: its locked-rotor current from a code letter or a multiple of full-load current.</summary>

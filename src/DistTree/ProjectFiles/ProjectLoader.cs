@@ -1,8 +1,8 @@
-using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.ProjectFiles.Sections;
 using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
@@ -80,7 +80,7 @@ public static class ProjectLoader
         {
             if (!bag.HasErrors)
             {
-                bag.Error(new SourceLocation(file, 1, 1), "the file holds no project; it starts with 'disttree: 1' (see docs/project-file.md)");
+                bag.Error(new SourceLocation(file, 1, 1), ProjectMessages.NoProject());
             }
 
             throw ProjectException.FromDiagnostics(bag.Sorted());
@@ -93,7 +93,7 @@ public static class ProjectLoader
         includes.ReadAll(file, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
-            bag.Error(root.Location, "the project and the files it includes list no equipment; a project needs at least one piece of equipment");
+            bag.Error(root.Location, ProjectMessages.NoEquipmentWithIncludes());
         }
 
         new FeedChecker(bag).Check(draft);
@@ -194,11 +194,8 @@ public static class ProjectLoader
     private static string Sha256Of(List<byte[]> hashes) =>
         Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
 
-    private static ProjectException TooLarge(string file, long size, string unit) => ProjectException.At(
-        new SourceLocation(file, 1, 1),
-        string.Create(
-            CultureInfo.InvariantCulture,
-            $"the file has {size:N0} {unit}; a project file may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)"));
+    private static ProjectException TooLarge(string file, long size, string unit) =>
+        ProjectException.At(new SourceLocation(file, 1, 1), ProjectMessages.TooLarge(size, unit));
 
     /// <summary>The error for bytes that are not UTF-8, located at the first bad byte: its line, and its column counted in characters.</summary>
     private static ProjectException NotUtf8(string file, byte[] bytes)
@@ -209,11 +206,7 @@ public static class ProjectLoader
         var line = 1 + bytes.AsSpan(0, lineStart).Count((byte)'\n');
         var column = 1 + StrictUtf8.GetCharCount(bytes, lineStart, offset - lineStart);
         var hint = bytes is [0xFF, 0xFE, ..] or [0xFE, 0xFF, ..] ? " (it looks like UTF-16)" : "";
-        return ProjectException.At(
-            new SourceLocation(file, line, column),
-            string.Create(
-                CultureInfo.InvariantCulture,
-                $"the file is not UTF-8 text{hint}: the byte 0x{bytes[offset]:X2} at offset {offset:N0} does not decode; save the file as UTF-8"));
+        return ProjectException.At(new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
     }
 
     private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));

@@ -16,6 +16,7 @@ internal sealed partial class FastYamlReader
         while (true)
         {
             var column = _pos - _lineStart;
+            Frame opened;
             if (IsSequenceEntry())
             {
                 if (!ownLine && parent?.Node is SourceMapping)
@@ -24,76 +25,75 @@ internal sealed partial class FastYamlReader
                 }
 
                 var indentless = ownLine && parent is { Node: SourceMapping } && parent.Indent == column;
-                var sequence = Open(new SourceSequence(_file, _line, column + 1), column, indentless);
-                if (IndicatorOpensNode(sequence))
+                opened = Open(new SourceSequence(_file, _line, column + 1), column, indentless);
+                if (!IndicatorOpensNode(opened))
                 {
-                    parent = sequence;
-                    ownLine = false;
-                    continue;
+                    return;
                 }
-
+            }
+            else if (Cur is '[' or '{' or '"' or '\'')
+            {
+                InlineValue(parent, ownLine);
                 return;
             }
-
-            if (Cur is '[' or '{')
+            else
             {
-                if (ownLine || parent is null)
+                var scalar = BlockPlain(out var isKey);
+                if (!isKey)
                 {
-                    Fail();
+                    if (ownLine || parent is null)
+                    {
+                        Fail(); // a scalar on a line of its own: perhaps a continued plain scalar
+                    }
+
+                    parent!.Add(scalar);
+                    EndLine();
+                    return;
                 }
 
-                parent!.Add(Flow());
-                EndLine();
-                return;
-            }
-
-            if (Cur is '"' or '\'')
-            {
-                if (ownLine || parent is null)
+                if (!ownLine && parent?.Node is SourceMapping)
                 {
-                    Fail();
+                    Fail(); // "a: b: c"
                 }
 
-                var quoted = Quoted();
-                SkipSpaces();
-                if (Cur == ':')
+                opened = Open(new SourceMapping(_file, scalar.Line, scalar.Column), column, indentless: false);
+                if (!MappingValueOpensNode(opened, scalar))
                 {
-                    Fail(); // a quoted key
+                    return;
                 }
-
-                parent!.Add(quoted);
-                EndLine();
-                return;
             }
 
-            var scalar = BlockPlain(out var isKey);
-            if (!isKey)
-            {
-                if (ownLine || parent is null)
-                {
-                    Fail(); // a scalar on a line of its own: perhaps a continued plain scalar
-                }
-
-                parent!.Add(scalar);
-                EndLine();
-                return;
-            }
-
-            if (!ownLine && parent?.Node is SourceMapping)
-            {
-                Fail(); // "a: b: c"
-            }
-
-            var mapping = Open(new SourceMapping(_file, scalar.Line, scalar.Column), column, indentless: false);
-            if (MappingValueOpensNode(mapping, scalar))
-            {
-                parent = mapping;
-                ownLine = false;
-                continue;
-            }
-
-            return;
+            // The collection just opened holds a node on the same line: read it as its first.
+            parent = opened;
+            ownLine = false;
         }
+    }
+
+    /// <summary>A flow collection or a quoted scalar: a value on its parent's line (never a line of its own, never a key).</summary>
+    private void InlineValue(Frame? parent, bool ownLine)
+    {
+        if (ownLine || parent is null)
+        {
+            Fail();
+        }
+
+        SourceNode value;
+        if (Cur is '[' or '{')
+        {
+            value = Flow();
+        }
+        else
+        {
+            value = Quoted();
+            SkipSpaces();
+            if (Cur == ':')
+            {
+                Fail(); // a quoted key
+            }
+        }
+
+        parent!.Add(value);
+        EndLine();
     }
 
     /// <summary>Reads "- item" at the cursor for <paramref name="sequence"/>.</summary>

@@ -18,20 +18,12 @@ internal sealed partial class FastYamlReader
             if (c == (top.Node is SourceMapping ? '}' : ']') && top.State != FlowState.Value)
             {
                 _pos++;
-                stack.RemoveAt(stack.Count - 1);
-                var closed = top.Finish();
-                _spareFrames.Push(top);
-                if (stack.Count == 0)
+                if (CloseFlow(stack) is { } closed)
                 {
                     return closed;
                 }
-
-                stack[^1].Add(closed);
-                stack[^1].State = FlowState.AfterValue;
-                continue;
             }
-
-            if (top.State == FlowState.AfterValue)
+            else if (top.State == FlowState.AfterValue)
             {
                 if (c != ',')
                 {
@@ -40,10 +32,8 @@ internal sealed partial class FastYamlReader
 
                 _pos++;
                 top.State = FlowState.Entry;
-                continue;
             }
-
-            if (top.State == FlowState.Entry && top.Node is SourceMapping)
+            else if (top.State == FlowState.Entry && top.Node is SourceMapping)
             {
                 top.Key = FlowPlain(out var isKey);
                 if (!isKey)
@@ -53,37 +43,58 @@ internal sealed partial class FastYamlReader
 
                 _pos++;
                 top.State = FlowState.Value;
-                continue;
             }
-
-            if (c is '[' or '{')
+            else if (c is '[' or '{')
             {
                 OpenFlow(stack);
-                continue;
-            }
-
-            SourceScalar value;
-            if (c is '"' or '\'')
-            {
-                value = Quoted();
-                SkipSpaces();
-                if (Cur == ':')
-                {
-                    Fail();
-                }
             }
             else
             {
-                value = FlowPlain(out var isKey);
-                if (isKey)
-                {
-                    Fail(); // a single-pair mapping in a sequence, or "a: b: c"
-                }
+                top.Add(FlowScalar());
+                top.State = FlowState.AfterValue;
+            }
+        }
+    }
+
+    /// <summary>Closes the innermost flow collection, its bracket passed; returns it when it was the outermost.</summary>
+    private SourceNode? CloseFlow(List<Frame> stack)
+    {
+        var top = stack[^1];
+        stack.RemoveAt(stack.Count - 1);
+        var closed = top.Finish();
+        _spareFrames.Push(top);
+        if (stack.Count == 0)
+        {
+            return closed;
+        }
+
+        stack[^1].Add(closed);
+        stack[^1].State = FlowState.AfterValue;
+        return null;
+    }
+
+    /// <summary>A scalar value inside a flow collection: quoted, or plain; never a key there.</summary>
+    private SourceScalar FlowScalar()
+    {
+        if (Cur is '"' or '\'')
+        {
+            var quoted = Quoted();
+            SkipSpaces();
+            if (Cur == ':')
+            {
+                Fail();
             }
 
-            top.Add(value);
-            top.State = FlowState.AfterValue;
+            return quoted;
         }
+
+        var plain = FlowPlain(out var isKey);
+        if (isKey)
+        {
+            Fail(); // a single-pair mapping in a sequence, or "a: b: c"
+        }
+
+        return plain;
     }
 
     private void OpenFlow(List<Frame> stack)

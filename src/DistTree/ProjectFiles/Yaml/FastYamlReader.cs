@@ -139,76 +139,109 @@ internal sealed partial class FastYamlReader
                 continue;
             }
 
-            var top = _blocks[^1];
-            if (top.EmptyAt is { } emptyAt)
+            if (!PendingValue(indent))
             {
-                top.EmptyAt = null;
-                if (indent > top.Indent || (indent == top.Indent && top.Node is SourceMapping && IsSequenceEntry()))
-                {
-                    Node(ownLine: true);
-                    continue;
-                }
-
-                top.Add(Empty(emptyAt));
-            }
-
-            // Close the collections this line is left of; an indentless sequence (items at its key's
-            // column) also closes at its own column on a line that is not an item.
-            while (_blocks.Count > 0
-                && (_blocks[^1].Indent > indent || (_blocks[^1].Indentless && _blocks[^1].Indent == indent && !IsSequenceEntry())))
-            {
-                root = Close() ?? root;
-            }
-
-            if (_blocks.Count == 0 || _blocks[^1].Indent != indent)
-            {
-                Fail();
-            }
-
-            top = _blocks[^1];
-            if (top.Node is SourceSequence)
-            {
-                if (!IsSequenceEntry())
-                {
-                    Fail();
-                }
-
-                SequenceItem(top);
-            }
-            else
-            {
-                if (IsSequenceEntry())
-                {
-                    Fail();
-                }
-
-                var key = BlockPlain(out var isKey);
-                if (!isKey)
-                {
-                    Fail();
-                }
-
-                MappingValue(top, key);
+                CloseLeftOf(indent);
+                Entry(_blocks[^1]);
             }
         }
 
-        if (_blocks.Count > 0 && _blocks[^1].EmptyAt is { } last)
-        {
-            _blocks[^1].Add(Empty(last));
-            _blocks[^1].EmptyAt = null;
-        }
-
-        while (_blocks.Count > 0)
-        {
-            root = Close() ?? root;
-        }
-
+        root = CloseAll() ?? root;
         if (root is null)
         {
             Fail();
         }
 
         return root!;
+    }
+
+    /// <summary>
+    /// When the innermost collection's last key or item has no value on its own line, reads the line at the
+    /// cursor as that value if it is indented past it (or is an item of an indentless sequence) and returns true;
+    /// else the value is empty, and the line is for the collections to read.
+    /// </summary>
+    private bool PendingValue(int indent)
+    {
+        var top = _blocks[^1];
+        if (top.EmptyAt is not { } emptyAt)
+        {
+            return false;
+        }
+
+        top.EmptyAt = null;
+        if (indent > top.Indent || (indent == top.Indent && top.Node is SourceMapping && IsSequenceEntry()))
+        {
+            Node(ownLine: true);
+            return true;
+        }
+
+        top.Add(Empty(emptyAt));
+        return false;
+    }
+
+    /// <summary>
+    /// Closes the collections the line at the cursor is left of; an indentless sequence (items at its key's
+    /// column) also closes at its own column on a line that is not an item. The line must then be at the
+    /// indentation of a collection still open.
+    /// </summary>
+    private void CloseLeftOf(int indent)
+    {
+        while (_blocks.Count > 0
+            && (_blocks[^1].Indent > indent || (_blocks[^1].Indentless && _blocks[^1].Indent == indent && !IsSequenceEntry())))
+        {
+            Close();
+        }
+
+        if (_blocks.Count == 0 || _blocks[^1].Indent != indent)
+        {
+            Fail();
+        }
+    }
+
+    /// <summary>The next item of the sequence <paramref name="top"/>, or the next key of the mapping.</summary>
+    private void Entry(Frame top)
+    {
+        if (top.Node is SourceSequence)
+        {
+            if (!IsSequenceEntry())
+            {
+                Fail();
+            }
+
+            SequenceItem(top);
+            return;
+        }
+
+        if (IsSequenceEntry())
+        {
+            Fail();
+        }
+
+        var key = BlockPlain(out var isKey);
+        if (!isKey)
+        {
+            Fail();
+        }
+
+        MappingValue(top, key);
+    }
+
+    /// <summary>At the end of the text: an empty last value, then every collection closed; returns the root.</summary>
+    private SourceNode? CloseAll()
+    {
+        if (_blocks.Count > 0 && _blocks[^1].EmptyAt is { } last)
+        {
+            _blocks[^1].Add(Empty(last));
+            _blocks[^1].EmptyAt = null;
+        }
+
+        SourceNode? root = null;
+        while (_blocks.Count > 0)
+        {
+            root = Close() ?? root;
+        }
+
+        return root;
     }
 
     /// <summary>"---" or "..." at the start of the line, followed by a blank or the line's end; else null.</summary>

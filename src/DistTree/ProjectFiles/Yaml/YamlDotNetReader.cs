@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Diagnostics;
 using YamlDotNet.Core;
@@ -21,82 +20,28 @@ internal static partial class YamlDotNetReader
     /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
     public static SourceNode? Read(string text, string file, DiagnosticBag bag)
     {
-        var parser = new Parser(new StringReader(text));
-        var stack = new Stack<Frame>();
-        SourceNode? root = null;
-        var documents = 0;
-        Mark? last = null;
+        var events = new EventReader(file, bag);
         try
         {
-            while (parser.MoveNext())
-            {
-                var current = parser.Current!;
-                last = current.Start;
-                SourceNode completed;
-                switch (current)
-                {
-                    case DocumentStart start:
-                        documents++;
-                        if (documents > 1)
-                        {
-                            bag.Error(At(file, start.Start), "a project file holds one YAML document; a second one starts here");
-                            return root;
-                        }
-
-                        continue;
-                    case Scalar scalar:
-                        completed = MakeScalar(scalar, file, bag);
-                        break;
-                    case SequenceStart or MappingStart when stack.Count >= ProjectLimits.MaxDepth:
-                        bag.Error(At(file, current.Start), $"the YAML nests deeper than {ProjectLimits.MaxDepth} levels here; a project needs at most 6 (see docs/limits.md)");
-                        return null;
-                    case SequenceStart sequence:
-                        CheckTag(sequence, file, bag);
-                        stack.Push(new Frame(new SourceSequence(At(file, sequence.Start))));
-                        continue;
-                    case MappingStart mapping:
-                        CheckTag(mapping, file, bag);
-                        stack.Push(new Frame(new SourceMapping(At(file, mapping.Start))));
-                        continue;
-                    case SequenceEnd or MappingEnd:
-                        completed = stack.Pop().Node;
-                        break;
-                    case AnchorAlias alias:
-                        bag.Error(At(file, alias.Start), $"aliases ('*{alias.Value}') are not supported; write the value out (each run's size is edited in place)");
-                        completed = new SourceScalar(At(file, alias.Start), "*" + alias.Value, false) { IsInvalid = true };
-                        break;
-                    default:
-                        continue;
-                }
-
-                if (stack.Count == 0)
-                {
-                    root = completed;
-                    continue;
-                }
-
-                stack.Peek().Add(completed, bag);
-            }
+            return events.ReadAll(new Parser(new StringReader(text)));
         }
         catch (YamlException e) when (e.Message.Contains("tab", StringComparison.Ordinal) && TabIndent(text, file, e.Start) is { } tab)
         {
             // YamlDotNet marks where the block began, which may be lines earlier; name the tab itself.
-            bag.Error(tab, "a tab in the indentation; YAML indents with spaces only");
+            bag.Error(tab, ProjectMessages.TabIndent());
             return null;
         }
         catch (YamlException e)
         {
-            bag.Error(At(file, e.Start), CleanMessage(e.Message));
+            bag.Error(At(file, e.Start), ProjectMessages.InvalidYaml(MarkPrefix().Replace(e.Message, "").Trim()));
             return null;
         }
         catch (InvalidOperationException)
         {
             // YamlDotNet's scanner throws this (without a mark) for some unclosed flow collections.
-            bag.Error(last is null ? new SourceLocation(file, 1, 1) : At(file, last.Value), "invalid YAML after this point: an unclosed '[', '{' or quote?");
+            bag.Error(events.Last is null ? new SourceLocation(file, 1, 1) : At(file, events.Last.Value), ProjectMessages.UnclosedFlow());
             return null;
         }
-
-        return root;
     }
 
     /// <summary>YamlDotNet marks are 1-based and <see cref="long"/>; diagnostics use <see cref="int"/>.</summary>
@@ -140,9 +85,7 @@ internal static partial class YamlDotNetReader
         var plain = scalar.Style == ScalarStyle.Plain;
         if (scalar.Value.Length > ProjectLimits.MaxScalarLength)
         {
-            bag.Error(location, string.Create(
-                CultureInfo.InvariantCulture,
-                $"a value of {scalar.Value.Length:N0} characters; a value may have at most {ProjectLimits.MaxScalarLength:N0} (see docs/limits.md)"));
+            bag.Error(location, ProjectMessages.ScalarTooLong(scalar.Value.Length));
             return new SourceScalar(location, scalar.Value[..16] + "...", plain) { IsInvalid = true };
         }
 
@@ -154,7 +97,7 @@ internal static partial class YamlDotNetReader
             }
             else
             {
-                bag.Error(location, $"the tag '{scalar.Tag.Value}' is not supported; write the value without a tag");
+                bag.Error(location, ProjectMessages.TagNotSupported(scalar.Tag.Value));
                 return new SourceScalar(location, scalar.Value, plain) { IsInvalid = true };
             }
         }
@@ -166,24 +109,82 @@ internal static partial class YamlDotNetReader
     {
         if (!node.Tag.IsEmpty && !node.Tag.IsNonSpecific)
         {
-            bag.Error(At(file, node.Start), $"the tag '{node.Tag.Value}' is not supported; write the value without a tag");
+            bag.Error(At(file, node.Start), ProjectMessages.TagNotSupported(node.Tag.Value));
         }
-    }
-
-    private static string CleanMessage(string message)
-    {
-        var cleaned = MarkPrefix().Replace(message, "").Trim();
-        if (cleaned.Length == 0)
-        {
-            return "the YAML cannot be read here";
-        }
-
-        return "invalid YAML: " + char.ToLowerInvariant(cleaned[0]) + cleaned[1..];
     }
 
     // YamlDotNet prefixes its messages with "(Line: 3, Col: 5, Idx: 20) - (Line: 3, Col: 6, Idx: 21): ".
     [GeneratedRegex(@"^\(Line: \d+, Col: \d+, Idx: \d+\) - \(Line: \d+, Col: \d+, Idx: \d+\):\s*")]
     private static partial Regex MarkPrefix();
+
+    /// <summary>Builds the tree from the parser's events; the parser's exceptions are left to the caller.</summary>
+    private sealed class EventReader(string file, DiagnosticBag bag)
+    {
+        private readonly Stack<Frame> _stack = new();
+
+        /// <summary>Where the last event read starts, for an error YamlDotNet throws without a mark.</summary>
+        public Mark? Last { get; private set; }
+
+        /// <summary>The root; the root read so far at a second document; null when nesting is too deep (reported).</summary>
+        public SourceNode? ReadAll(Parser parser)
+        {
+            SourceNode? root = null;
+            var documents = 0;
+            while (parser.MoveNext())
+            {
+                var current = parser.Current!;
+                Last = current.Start;
+                SourceNode completed;
+                switch (current)
+                {
+                    case DocumentStart start:
+                        documents++;
+                        if (documents > 1)
+                        {
+                            bag.Error(At(file, start.Start), ProjectMessages.SecondDocument());
+                            return root;
+                        }
+
+                        continue;
+                    case Scalar scalar:
+                        completed = MakeScalar(scalar, file, bag);
+                        break;
+                    case SequenceStart or MappingStart when _stack.Count >= ProjectLimits.MaxDepth:
+                        bag.Error(At(file, current.Start), ProjectMessages.TooDeep());
+                        return null;
+                    case SequenceStart or MappingStart:
+                        Open((NodeEvent)current);
+                        continue;
+                    case SequenceEnd or MappingEnd:
+                        completed = _stack.Pop().Node;
+                        break;
+                    case AnchorAlias alias:
+                        bag.Error(At(file, alias.Start), ProjectMessages.AliasNotSupported(alias.Value.ToString()));
+                        completed = new SourceScalar(At(file, alias.Start), "*" + alias.Value, false) { IsInvalid = true };
+                        break;
+                    default:
+                        continue;
+                }
+
+                if (_stack.Count == 0)
+                {
+                    root = completed;
+                    continue;
+                }
+
+                _stack.Peek().Add(completed, bag);
+            }
+
+            return root;
+        }
+
+        private void Open(NodeEvent start)
+        {
+            CheckTag(start, file, bag);
+            var at = At(file, start.Start);
+            _stack.Push(new Frame(start is SequenceStart ? new SourceSequence(at) : new SourceMapping(at)));
+        }
+    }
 
     private sealed class Frame(SourceNode node)
     {
@@ -208,7 +209,7 @@ internal static partial class YamlDotNetReader
                 }
                 else
                 {
-                    bag.Error(child.Location, $"a key must be a plain word, not {child.Describe()}");
+                    bag.Error(child.Location, ProjectMessages.KeyNotPlain(child));
                     _pendingKey = new SourceScalar(child.Location, "?", false) { IsInvalid = true };
                 }
 
