@@ -127,7 +127,7 @@ public static class ProjectLoader
                     Name = c.Name,
                     Poles = poles,
                     Supply = supply,
-                    Load = c.Load ?? Combined(c.Points, supply),
+                    Load = c.Load ?? Model.Load.Combined(c.Points, supply),
                     Points = c.Points,
                     Phases = c.StatedPhases ?? numbered,
                     PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated : numbered is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
@@ -165,29 +165,6 @@ public static class ProjectLoader
             Warnings = warnings,
         };
     }
-
-    // The sum of the points' loads as one apparent power (phasor sum; points carry no motors).
-    private static Load Combined(IReadOnlyList<LoadPoint> points, CircuitSupply supply)
-    {
-        double p = 0, q = 0;
-        foreach (var point in points)
-        {
-            var l = point.Load;
-            var va = l.Kind switch
-            {
-                LoadKind.Kva => l.Value * 1000,
-                LoadKind.Kw => l.Value * 1000 / l.PowerFactor,
-                LoadKind.Amps => l.Value * supply.VoltageV * (supply.Phases == 3 ? Math.Sqrt(3) : 1),
-                _ => l.Value,
-            };
-            p += va * l.PowerFactor;
-            q += va * Math.Sqrt(1 - (l.PowerFactor * l.PowerFactor));
-        }
-
-        var s = Math.Sqrt((p * p) + (q * q));
-        return new Load(LoadKind.Va, s, s > 0 ? p / s : 1.0);
-    }
-
 
     // One file: the SHA-256 of its bytes. With includes: the SHA-256 of the files' 32-byte digests concatenated
     // in the order read (the main file, then depth first in list order), so a change to any file changes it.

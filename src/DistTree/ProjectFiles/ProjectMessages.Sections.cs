@@ -11,6 +11,10 @@ internal static partial class ProjectMessages
     private static readonly string QuantityList =
         string.Join(", ", Words.LoadQuantity.Words.SkipLast(1).Select(q => $"'{q}'")) + $" or '{Words.LoadQuantity.Words[^1]}'";
 
+    // "'hp' or 'fla'": the quantities a motor is given in.
+    private static readonly string MotorQuantityList =
+        string.Join(" or ", Words.LoadQuantity.Pairs.Where(p => Load.IsMotorKind(p.Value)).Select(p => $"'{p.Word}'"));
+
     /// <summary>A root that is not a mapping.</summary>
     public static string NotAProject(SourceNode found) =>
         $"a project file is a mapping of keys (disttree, project, service, equipment); found {found.Describe()}";
@@ -129,7 +133,7 @@ internal static partial class ProjectMessages
     public static string MotorNeedsPowerFactor(Subject load) => $"missing key 'pf' in {load} (a motor load needs its power factor)";
 
     /// <summary>A motor-start key on a load that is not a motor.</summary>
-    public static string MotorOnlyKey(string key, Subject load) => $"'{key}' in {load} applies to motors only (loads given as 'hp' or 'fla')";
+    public static string MotorOnlyKey(string key, Subject load) => $"'{key}' in {load} applies to motors only (loads given as {MotorQuantityList})";
 
     /// <summary>A locked-rotor code letter not in <paramref name="letters"/>.</summary>
     public static string NotACodeLetter(string text, IEnumerable<string> letters) =>

@@ -34,6 +34,12 @@ public sealed class ProjectMessagesTests
     }
 
     [Fact]
+    public void MotorOnlyKey_AnyKey_NamesTheMotorQuantities()
+    {
+        Assert.Equal("'code_letter' in the load applies to motors only (loads given as 'hp' or 'fla')", ProjectMessages.MotorOnlyKey("code_letter", "the load"));
+    }
+
+    [Fact]
     public void KindHint_EquipmentKinds_ListsEveryKind()
     {
         Assert.Equal(" (switchboard, panelboard, transformer or splitter)", ProjectMessages.KeyHints.Kind);
