@@ -9,6 +9,7 @@ using DistTree.Generating;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
+using DistTree.ProjectFiles.Yaml;
 using DistTree.Reports;
 using DistTree.Sizing;
 using DistTree.Solving;

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using DistTree.Model;
-using DistTree.ProjectFiles;
+using DistTree.ProjectFiles.Writing;
 using DistTree.Vocabulary;
 
 namespace DistTree.Cli.Commands;

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DistTree.ProjectFiles.Writing;
 using DistTree.Reports;
 using DistTree.Sizing;
 

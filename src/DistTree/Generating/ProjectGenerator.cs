@@ -1,9 +1,8 @@
 using System.Globalization;
-using System.Text;
 using DistTree.Conductors;
 using DistTree.Model;
+using DistTree.ProjectFiles.Writing;
 using DistTree.Solving;
-using DistTree.Vocabulary;
 
 namespace DistTree.Generating;
 
@@ -15,7 +14,8 @@ namespace DistTree.Generating;
 /// Runs are sized as a designer would (device above the design current, conductor the device may protect,
 /// larger for drop), except that about 3 % of branch circuits are made too long on purpose, so that an
 /// analysis has findings to show. The same settings always give the same text: the generator uses its own
-/// <see cref="SplitMix64"/>, never <see cref="Random"/>.
+/// <see cref="SplitMix64"/>, never <see cref="Random"/>. The generator invents and sizes the equipment and circuits
+/// (<see cref="PlannedEquipment"/>, <see cref="PlannedCircuit"/>); <see cref="GeneratedProjectWriter"/> writes the file.
 /// </summary>
 public static class ProjectGenerator
 {
@@ -71,7 +71,7 @@ public static class ProjectGenerator
         return Write(items, endPoints, depth, seed, progress);
     }
 
-    private static List<Item> Layout(int endPoints, int depth, SplitMix64 random)
+    private static List<PlannedEquipment> Layout(int endPoints, int depth, SplitMix64 random)
     {
         var groups = (endPoints + CircuitsPerGroup - 1) / CircuitsPerGroup;
         var fanOut = 2;
@@ -80,10 +80,10 @@ public static class ProjectGenerator
             fanOut++;
         }
 
-        var items = new List<Item>();
-        var msb = new Item("MSB", ItemKind.Board, High, null, 1);
+        var items = new List<PlannedEquipment>();
+        var msb = new PlannedEquipment("MSB", PlannedKind.Board, High, null, 1);
         items.Add(msb);
-        var level = new List<Item> { msb };
+        var level = new List<PlannedEquipment> { msb };
         var needed = groups;
         var counts = new int[depth + 1];
         for (var d = depth; d >= 2; d--)
@@ -94,12 +94,12 @@ public static class ProjectGenerator
 
         for (var d = 2; d <= depth; d++)
         {
-            var next = new List<Item>(counts[d]);
+            var next = new List<PlannedEquipment>(counts[d]);
             for (var i = 0; i < counts[d]; i++)
             {
                 var parent = level[i / fanOut];
                 var id = d == 2 ? $"DS{i + 1:D2}" : $"{parent.Id}-{(i % fanOut) + 1:D2}";
-                var board = new Item(id, ItemKind.Board, High, parent, d);
+                var board = new PlannedEquipment(id, PlannedKind.Board, High, parent, d);
                 items.Add(board);
                 next.Add(board);
             }
@@ -115,14 +115,14 @@ public static class ProjectGenerator
             var prefix = depth == 1 ? $"G{g + 1:D2}" : $"{board.Id}-{(g % fanOut) + 1:D2}";
             if (highCount > 0)
             {
-                var panel = new Item($"{prefix}-H", ItemKind.Panel, High, board, 0);
+                var panel = new PlannedEquipment($"{prefix}-H", PlannedKind.Panel, High, board, 0);
                 items.Add(panel);
                 AddCircuits(panel, highCount, random);
             }
 
-            var transformer = new Item($"{prefix}-T", ItemKind.Transformer, High, board, 0);
+            var transformer = new PlannedEquipment($"{prefix}-T", PlannedKind.Transformer, High, board, 0) { Secondary = Low };
             items.Add(transformer);
-            var low = new Item($"{prefix}-L", ItemKind.Panel, Low, transformer, 0);
+            var low = new PlannedEquipment($"{prefix}-L", PlannedKind.Panel, Low, transformer, 0);
             items.Add(low);
             AddCircuits(low, count - highCount, random);
         }
@@ -130,7 +130,7 @@ public static class ProjectGenerator
         return items;
     }
 
-    private static void AddCircuits(Item panel, int count, SplitMix64 random)
+    private static void AddCircuits(PlannedEquipment panel, int count, SplitMix64 random)
     {
         var high = panel.System == High;
         for (var i = 1; i <= count; i++)
@@ -139,7 +139,7 @@ public static class ProjectGenerator
             var c = high ? HighCircuit(roll, i, random) : LowCircuit(roll, i, random);
             c.Id = i;
             c.Supply = panel.System.CircuitFor(c.Poles)!.Value;
-            c.Power = LoadPower.Of(new Load(c.Kind, c.Value, c.Pf), c.Supply);
+            c.Power = LoadPower.Of(c.Load, c.Supply);
             c.CurrentA = LoadPower.CurrentA(c.Power.VoltAmperes, c.Supply);
             c.Failing = random.Chance(FailingShare);
             c.FailPercent = 3.6 + (2.4 * random.NextDouble());
@@ -147,23 +147,23 @@ public static class ProjectGenerator
         }
     }
 
-    private static CircuitPlan HighCircuit(double roll, int n, SplitMix64 r) => roll switch
+    private static PlannedCircuit HighCircuit(double roll, int n, SplitMix64 r) => roll switch
     {
-        < 0.55 => new CircuitPlan($"Lighting, zone {n}", 1, LoadKind.Kw, r.Between(4, 24) / 10.0, r.Pick(LightingPf), true, 20, r.Between(40, 180)),
-        < 0.75 => new CircuitPlan($"RTU-{n} rooftop unit", 3, LoadKind.Amps, r.Pick(HighHvacA), r.Pick(HvacPf), false, 15, r.Between(50, 250)),
-        _ => new CircuitPlan(r.Chance(0.5) ? $"EF-{n} exhaust fan" : $"P-{n} pump", 3, LoadKind.Hp, r.Pick(HighMotorHp), r.Pick(MotorPf), false, 15, r.Between(30, 200)),
+        < 0.55 => new PlannedCircuit($"Lighting, zone {n}", 1, LoadKind.Kw, r.Between(4, 24) / 10.0, r.Pick(LightingPf), true, 20, r.Between(40, 180)),
+        < 0.75 => new PlannedCircuit($"RTU-{n} rooftop unit", 3, LoadKind.Amps, r.Pick(HighHvacA), r.Pick(HvacPf), false, 15, r.Between(50, 250)),
+        _ => new PlannedCircuit(r.Chance(0.5) ? $"EF-{n} exhaust fan" : $"P-{n} pump", 3, LoadKind.Hp, r.Pick(HighMotorHp), r.Pick(MotorPf), false, 15, r.Between(30, 200)),
     };
 
-    private static CircuitPlan LowCircuit(double roll, int n, SplitMix64 r) => roll switch
+    private static PlannedCircuit LowCircuit(double roll, int n, SplitMix64 r) => roll switch
     {
-        < 0.55 => new CircuitPlan($"Receptacles, room {100 + n}", 1, LoadKind.Va, 180 * r.Between(3, 8), r.Pick(ReceptaclePf), false, 20, r.Between(25, 150)),
-        < 0.75 => new CircuitPlan($"Lighting, area {n}", 1, LoadKind.Kw, r.Between(2, 14) / 10.0, r.Pick(LightingPf), true, 20, r.Between(30, 140)),
-        < 0.9 => new CircuitPlan($"FCU-{n} fan coil unit", 2, LoadKind.Amps, r.Pick(LowHvacA), r.Pick(HvacPf), false, 15, r.Between(30, 160)),
-        _ => new CircuitPlan($"EF-{n} exhaust fan", 3, LoadKind.Hp, r.Pick(LowMotorHp), r.Pick(MotorPf), false, 15, r.Between(20, 150)),
+        < 0.55 => new PlannedCircuit($"Receptacles, room {100 + n}", 1, LoadKind.Va, 180 * r.Between(3, 8), r.Pick(ReceptaclePf), false, 20, r.Between(25, 150)),
+        < 0.75 => new PlannedCircuit($"Lighting, area {n}", 1, LoadKind.Kw, r.Between(2, 14) / 10.0, r.Pick(LightingPf), true, 20, r.Between(30, 140)),
+        < 0.9 => new PlannedCircuit($"FCU-{n} fan coil unit", 2, LoadKind.Amps, r.Pick(LowHvacA), r.Pick(HvacPf), false, 15, r.Between(30, 160)),
+        _ => new PlannedCircuit($"EF-{n} exhaust fan", 3, LoadKind.Hp, r.Pick(LowMotorHp), r.Pick(MotorPf), false, 15, r.Between(20, 150)),
     };
 
     // Bottom-up: items are listed parents first, so a backwards pass adds each item's power to its parent's.
-    private static void AccumulatePower(List<Item> items)
+    private static void AccumulatePower(List<PlannedEquipment> items)
     {
         for (var i = items.Count - 1; i >= 0; i--)
         {
@@ -181,7 +181,7 @@ public static class ProjectGenerator
     }
 
     // Top-down: each feeder sized for its load, then for a share of the drop; the estimate carried down.
-    private static void SizeFeeders(List<Item> items, SplitMix64 random)
+    private static void SizeFeeders(List<PlannedEquipment> items, SplitMix64 random)
     {
         foreach (var item in items)
         {
@@ -193,7 +193,7 @@ public static class ProjectGenerator
             var supply = parent.OutputSystem.FeederSupply;
             double designA;
             double target;
-            if (item.Kind == ItemKind.Transformer)
+            if (item.Kind == PlannedKind.Transformer)
             {
                 var kva = TransformerKva.FirstOrDefault(k => k * 1000 * 0.65 >= item.Power.VoltAmperes, TransformerKva[^1]);
                 item.Kva = kva;
@@ -203,7 +203,7 @@ public static class ProjectGenerator
                 designA = 1.25 * LoadPower.CurrentA(kva * 1000, supply);
                 target = 0.3;
             }
-            else if (parent.Kind == ItemKind.Transformer)
+            else if (parent.Kind == PlannedKind.Transformer)
             {
                 item.LengthFt = random.Between(5, 25);
                 designA = 1.25 * LoadPower.CurrentA(parent.Kva * 1000, supply);
@@ -211,10 +211,10 @@ public static class ProjectGenerator
             }
             else
             {
-                item.LengthFt = item.Kind != ItemKind.Board ? random.Between(20, 200) : item.Level == 2 ? random.Between(100, 500) : random.Between(50, 300);
+                item.LengthFt = item.Kind != PlannedKind.Board ? random.Between(20, 200) : item.Level == 2 ? random.Between(100, 500) : random.Between(50, 300);
                 designA = 1.25 * LoadPower.CurrentA(item.Power.VoltAmperes, supply);
-                target = item.Kind != ItemKind.Board ? 0.75 : item.Level == 2 ? 1.0 : 0.5;
-                if (item.Kind == ItemKind.Board && designA > ServiceSectionA)
+                target = item.Kind != PlannedKind.Board ? 0.75 : item.Level == 2 ? 1.0 : 0.5;
+                if (item.Kind == PlannedKind.Board && designA > ServiceSectionA)
                 {
                     // More than one feeder would carry: a service section of its own, standing at the service.
                     item.StandsAtSource = true;
@@ -229,7 +229,7 @@ public static class ProjectGenerator
             (item.Size, item.Sets) = RunSizer.ForDrop(start, item.LengthFt, currentA, item.Power, supply, Indoor, target);
             var drop = RunSizer.DropPercent(item.Size, item.Sets, item.LengthFt, currentA, item.Power, supply, Indoor);
             item.UpstreamPercent = parent.UpstreamPercent + drop;
-            if (item.Kind == ItemKind.Transformer)
+            if (item.Kind == PlannedKind.Transformer)
             {
                 var percentR = item.ImpedancePercent / Math.Sqrt(1 + (item.XOverR * item.XOverR));
                 var regulation = ((percentR * item.Power.PowerFactor) + (percentR * item.XOverR * item.Power.SinTheta)) * item.Power.VoltAmperes / (item.Kva * 1000);
@@ -239,14 +239,14 @@ public static class ProjectGenerator
         }
     }
 
-    private static void SizeCircuits(List<Item> items)
+    private static void SizeCircuits(List<PlannedEquipment> items)
     {
         foreach (var panel in items)
         {
             var budget = Math.Clamp(TotalTargetPercent - panel.UpstreamPercent, 1.0, 2.5);
             foreach (var c in panel.Circuits)
             {
-                var designA = c.Continuous || c.Kind == LoadKind.Hp ? 1.25 * c.CurrentA : c.CurrentA;
+                var designA = c.Continuous || c.Load.Kind == LoadKind.Hp ? 1.25 * c.CurrentA : c.CurrentA;
                 c.OcpdA = RunSizer.Ocpd(designA, c.MinimumOcpdA)!.Value;
                 var start = RunSizer.ForAmpacity(designA, c.OcpdA);
                 if (c.Failing)
@@ -263,29 +263,25 @@ public static class ProjectGenerator
         }
     }
 
-    private static string Write(List<Item> items, int endPoints, int depth, ulong seed, IProgress<double>? progress)
+    private static string Write(List<PlannedEquipment> items, int endPoints, int depth, ulong seed, IProgress<double>? progress)
     {
-        var text = new StringBuilder(endPoints * 230);
-        text.Append(CultureInfo.InvariantCulture, $"""
-            # Generated by 'disttree generate --end-points {endPoints} --depth {depth} --seed {seed}'.
-            # Invented: this campus, its loads and every figure below are made up and describe no real site or design.
-            # About {FailingShare * 100:0} % of branch circuits are too long on purpose, so that an analysis has findings.
-            # The service stands for the whole campus supply; a switchboard whose load is more than one
-            # feeder would carry (above 4000 A) is a service section with no feeder of its own.
-            disttree: 1
-            project:
-              name: Generated campus ({endPoints} end points, seed {seed})
-              units: imperial
-              description: Invented by disttree generate for benchmarks and trials; describes no real site.
-            defaults: {"{"} material: cu, insulation_c: 75, raceway: steel {"}"}
-            service: {"{"} id: SVC, system: 480Y/277 {"}"}
-            equipment:
-
-            """);
+        var writer = new GeneratedProjectWriter(endPoints * 230);
+        writer.Comment($"Generated by 'disttree generate --end-points {endPoints} --depth {depth} --seed {seed}'.");
+        writer.Comment("Invented: this campus, its loads and every figure below are made up and describe no real site or design.");
+        writer.Comment(string.Create(CultureInfo.InvariantCulture, $"About {FailingShare * 100:0} % of branch circuits are too long on purpose, so that an analysis has findings."));
+        writer.Comment("The service stands for the whole campus supply; a switchboard whose load is more than one");
+        writer.Comment(string.Create(CultureInfo.InvariantCulture, $"feeder would carry (above {ServiceSectionA} A) is a service section with no feeder of its own."));
+        writer.Top(
+            $"Generated campus ({endPoints} end points, seed {seed})",
+            UnitSystem.Imperial,
+            "Invented by disttree generate for benchmarks and trials; describes no real site.",
+            new ConductorDefaults(Material.Copper, RunSizer.InsulationC, Indoor),
+            "SVC",
+            High);
         var written = 0;
         foreach (var item in items)
         {
-            WriteItem(text, item);
+            WriteItem(writer, item);
             written += item.Circuits.Count;
             if (progress is not null && item.Circuits.Count > 0 && written % 5000 < item.Circuits.Count)
             {
@@ -294,25 +290,21 @@ public static class ProjectGenerator
         }
 
         progress?.Report(1.0);
-        return text.ToString();
+        return writer.ToString();
     }
 
-    private static void WriteItem(StringBuilder text, Item item)
+    private static void WriteItem(GeneratedProjectWriter writer, PlannedEquipment item)
     {
-        var kind = Words.EquipmentKind.Of(item.Kind switch { ItemKind.Board => EquipmentKind.Switchboard, ItemKind.Transformer => EquipmentKind.Transformer, _ => EquipmentKind.Panelboard });
-        text.Append(CultureInfo.InvariantCulture, $"  - id: {item.Id}\n    kind: {kind}\n    from: {item.Parent?.Id ?? "SVC"}\n");
-        if (item.Kind == ItemKind.Transformer)
+        var kind = item.Kind switch { PlannedKind.Board => EquipmentKind.Switchboard, PlannedKind.Transformer => EquipmentKind.Transformer, PlannedKind.Panel => EquipmentKind.Panelboard };
+        writer.Equipment(item.Id, kind, item.Parent?.Id ?? "SVC");
+        if (item.Kind == PlannedKind.Transformer)
         {
-            text.Append(CultureInfo.InvariantCulture, $"    kva: {N(item.Kva)}\n    secondary: {Low.Name}\n    impedance_percent: {N(item.ImpedancePercent)}\n    x_r: {N(item.XOverR)}\n");
-            if (item.TapPercent != 0)
-            {
-                text.Append(CultureInfo.InvariantCulture, $"    tap_percent: {N(item.TapPercent)}\n");
-            }
+            writer.Transformer(item.Kva, item.Secondary!, item.ImpedancePercent, item.XOverR, item.TapPercent);
         }
 
         if (item.Parent is not null && !item.StandsAtSource)
         {
-            text.Append(CultureInfo.InvariantCulture, $"    feeder: {Run(item.LengthFt, item.Size, item.Sets, item.OcpdA)}\n");
+            writer.Feeder(new WrittenRun(item.LengthFt, item.Size, item.Sets, item.OcpdA));
         }
 
         if (item.Circuits.Count == 0)
@@ -320,125 +312,10 @@ public static class ProjectGenerator
             return;
         }
 
-        text.Append("    circuits:\n");
+        writer.Circuits();
         foreach (var c in item.Circuits)
         {
-            var quantity = Words.LoadQuantity.Of(c.Kind);
-            text.Append(CultureInfo.InvariantCulture, $"""
-                      - id: "{c.Id}"
-                        name: {c.Name}
-                        poles: {c.Poles}
-                        ocpd: {N(c.OcpdA)}
-                        load: {"{"} {quantity}: {N(c.Value)}, pf: {N(c.Pf)} {"}"}
-                        continuous: {(c.Continuous ? "true" : "false")}
-                        run: {Run(c.LengthFt, c.Size, c.Sets, null)}
-
-                """);
+            writer.Circuit(c.Id, c.Name, c.Poles, c.OcpdA, c.Load, c.Continuous, new WrittenRun(c.LengthFt, c.Size, c.Sets, null));
         }
-    }
-
-    private static string Run(double lengthFt, ConductorSize size, int sets, double? ocpdA)
-    {
-        var text = new StringBuilder(64);
-        text.Append(CultureInfo.InvariantCulture, $"{{ length: {N(lengthFt)}, size: {size.Text}");
-        if (sets > 1)
-        {
-            text.Append(CultureInfo.InvariantCulture, $", sets: {sets}");
-        }
-
-        if (ocpdA is { } ocpd)
-        {
-            text.Append(CultureInfo.InvariantCulture, $", ocpd: {N(ocpd)}");
-        }
-
-        return text.Append(" }").ToString();
-    }
-
-    private static string N(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
-
-    private enum ItemKind
-    {
-        Board,
-        Transformer,
-        Panel,
-    }
-
-    private sealed class Item(string id, ItemKind kind, ElectricalSystem system, Item? parent, int level)
-    {
-        public string Id { get; } = id;
-
-        public ItemKind Kind { get; } = kind;
-
-        /// <summary>The system its feeder carries (a transformer's primary).</summary>
-        public ElectricalSystem System { get; } = system;
-
-        public ElectricalSystem OutputSystem => Kind == ItemKind.Transformer ? Low : System;
-
-        public Item? Parent { get; } = parent;
-
-        public int Level { get; } = level;
-
-        public List<CircuitPlan> Circuits { get; } = [];
-
-        public ComplexPower Power { get; set; }
-
-        public double LengthFt { get; set; }
-
-        /// <summary>True for a switchboard too large for one feeder: a service section with no feeder.</summary>
-        public bool StandsAtSource { get; set; }
-
-        public ConductorSize Size { get; set; }
-
-        public int Sets { get; set; } = 1;
-
-        public double? OcpdA { get; set; }
-
-        public double Kva { get; set; }
-
-        public double ImpedancePercent { get; set; }
-
-        public double XOverR { get; set; }
-
-        public double TapPercent { get; set; }
-
-        /// <summary>Estimated drop from the service to this item's output, percent.</summary>
-        public double UpstreamPercent { get; set; }
-    }
-
-    private sealed class CircuitPlan(string name, int poles, LoadKind kind, double value, double pf, bool continuous, double minimumOcpdA, double lengthFt)
-    {
-        public int Id { get; set; }
-
-        public string Name { get; } = name;
-
-        public int Poles { get; } = poles;
-
-        public LoadKind Kind { get; } = kind;
-
-        public double Value { get; } = value;
-
-        public double Pf { get; } = pf;
-
-        public bool Continuous { get; } = continuous;
-
-        public double MinimumOcpdA { get; } = minimumOcpdA;
-
-        public double LengthFt { get; set; } = lengthFt;
-
-        public CircuitSupply Supply { get; set; }
-
-        public ComplexPower Power { get; set; }
-
-        public double CurrentA { get; set; }
-
-        public bool Failing { get; set; }
-
-        public double FailPercent { get; set; }
-
-        public double OcpdA { get; set; }
-
-        public ConductorSize Size { get; set; }
-
-        public int Sets { get; set; } = 1;
     }
 }

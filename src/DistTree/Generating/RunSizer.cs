@@ -13,6 +13,9 @@ namespace DistTree.Generating;
 /// </summary>
 internal static class RunSizer
 {
+    /// <summary>The insulation rating of every generated conductor, °C (the project's default, written in its <c>defaults</c>).</summary>
+    public const int InsulationC = 75;
+
     private const int MaxSets = 40;
 
     private static readonly ConductorCatalog Catalog = ConductorCatalog.Standard;
@@ -88,7 +91,7 @@ internal static class RunSizer
     /// <summary>The estimated drop in percent: k·I·L·(R·cos θ + X·sin θ)/sets at 75 °C, as the solver computes it.</summary>
     public static double DropPercent(ConductorSize size, int sets, double lengthFt, double currentA, ComplexPower power, CircuitSupply supply, Raceway raceway)
     {
-        var r = Catalog.AcResistanceOhmPerKm(size, Material.Copper, raceway, 75, 60);
+        var r = Catalog.AcResistanceOhmPerKm(size, Material.Copper, raceway, InsulationC, 60);
         var x = Catalog.ReactanceOhmPerKm(size, raceway, 60);
         var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
         var dropV = k * currentA * lengthFt * UnitFactors.MetresPerFoot / 1000.0 * ((r * power.PowerFactor) + (x * power.SinTheta)) / sets;
@@ -100,5 +103,5 @@ internal static class RunSizer
         dropPercent / DropPercent(size, sets, 1.0, currentA, power, supply, raceway);
 
     private static double Ampacity(ConductorSize size) =>
-        Catalog.AllowableAmpacityA(size, Material.Copper, 75, 75, 30) ?? 0;
+        Catalog.AllowableAmpacityA(size, Material.Copper, InsulationC, 75, 30) ?? 0;
 }

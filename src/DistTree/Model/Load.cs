@@ -48,7 +48,53 @@ public sealed record Load(LoadKind Kind, double Value, double PowerFactor)
     public MotorStart? Start { get; init; }
 
     /// <summary>True for a motor load (<c>hp</c> or <c>fla</c>).</summary>
-    public bool IsMotor => Kind is LoadKind.Hp or LoadKind.Fla;
+    public bool IsMotor => IsMotorKind(Kind);
+
+    /// <summary>True for the quantities a motor is given in (<c>hp</c> or <c>fla</c>): such a load needs its power factor and may state how it starts.</summary>
+    public static bool IsMotorKind(LoadKind kind) => kind is LoadKind.Hp or LoadKind.Fla;
+
+    /// <summary>
+    /// The load's apparent power in volt-amperes at the nominal voltage of <paramref name="supply"/>: <c>va</c> and
+    /// <c>kva</c> as stated, <c>kw</c> over the power factor, <c>amps</c> and <c>fla</c> at nominal voltage
+    /// (|S| = V·I single-phase, √3·V·I three-phase), <c>hp</c> through the motor full-load current tables
+    /// (<see cref="MotorTables"/>). The one place a stated quantity becomes power: the loader (a circuit's loads at
+    /// points) and the solver both use it, so a new kind of load is worked out here and nowhere else.
+    /// </summary>
+    /// <exception cref="ArgumentException">A motor rating the tables do not list.</exception>
+    public double VoltAmperes(CircuitSupply supply) => Kind switch
+    {
+        LoadKind.Va => Value,
+        LoadKind.Kva => Value * 1000,
+        LoadKind.Kw => Value * 1000 / PowerFactor,
+        LoadKind.Amps or LoadKind.Fla => FromCurrent(Value, supply),
+        LoadKind.Hp => FromCurrent(
+            MotorTables.FullLoadCurrentA(Value, supply)
+                ?? throw new ArgumentException($"no full-load current is listed for a {Value} hp motor on {supply.Phases}-phase {supply.VoltageV} V"),
+            supply),
+    };
+
+    /// <summary>
+    /// Loads along a run as one load: the phasor sum of their powers (<see cref="VoltAmperes"/> at their power
+    /// factors, lagging) as volt-amperes at the sum's power factor (1 for no load).
+    /// </summary>
+    public static Load Combined(IReadOnlyList<LoadPoint> points, CircuitSupply supply)
+    {
+        double p = 0, q = 0;
+        foreach (var point in points)
+        {
+            var load = point.Load;
+            var va = load.VoltAmperes(supply);
+            p += va * load.PowerFactor;
+            q += va * Math.Sqrt(1 - (load.PowerFactor * load.PowerFactor));
+        }
+
+        var s = Math.Sqrt((p * p) + (q * q));
+        return new Load(LoadKind.Va, s, s > 0 ? p / s : 1.0);
+    }
+
+    // The apparent power in VA that a line current draws at the supply's nominal voltage.
+    private static double FromCurrent(double currentA, CircuitSupply supply) =>
+        supply.Phases == 3 ? Math.Sqrt(3) * supply.VoltageV * currentA : supply.VoltageV * currentA;
 }
 
 /// <summary>How a motor starts: its locked-rotor current from a code letter or a multiple of full-load current.</summary>

@@ -1,4 +1,3 @@
-using System.Globalization;
 using DistTree.Diagnostics;
 
 namespace DistTree.ProjectFiles;
@@ -62,12 +61,12 @@ internal sealed class DiagnosticBag
         var sorted = _items.OrderBy(d => _fileOrder.GetValueOrDefault(d.Location.File)).ThenBy(d => d.Location.Line).ThenBy(d => d.Location.Column).ToList();
         if (_firstDroppedError is { } error)
         {
-            sorted.Add(error with { Message = More(_errors, "errors") });
+            sorted.Add(error with { Message = ProjectMessages.More(_errors, "errors") });
         }
 
         if (_firstDroppedWarning is { } warning)
         {
-            sorted.Add(warning with { Message = More(_warnings, "warnings") });
+            sorted.Add(warning with { Message = ProjectMessages.More(_warnings, "warnings") });
         }
 
         return sorted;
@@ -75,8 +74,4 @@ internal sealed class DiagnosticBag
 
     /// <summary>The warnings alone, in file order.</summary>
     public IReadOnlyList<Diagnostic> Warnings() => Sorted().Where(d => d.Severity == Severity.Warning).ToArray();
-
-    private static string More(int count, string what) => string.Create(
-        CultureInfo.InvariantCulture,
-        $"{count - ProjectLimits.MaxDiagnostics:N0} more {what} from here on not shown (the first {ProjectLimits.MaxDiagnostics:N0} of {count:N0} are)");
 }

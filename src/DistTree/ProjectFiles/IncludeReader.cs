@@ -1,6 +1,8 @@
 using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Sections;
+using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
 
@@ -48,13 +50,13 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             if (chain.FindIndex(f => f.Full == full) is var open and >= 0)
             {
                 var names = chain.Skip(open).Select(f => $"'{f.Shown}'").Append($"'{shown}'");
-                bag.Error(entry.Location, $"include cycle: {string.Join(" includes ", names)}");
+                bag.Error(entry.Location, ProjectMessages.IncludeCycle(names));
                 continue;
             }
 
             if (seen.TryGetValue(full, out var first))
             {
-                bag.Error(entry.Location, $"'{shown}' is included twice (first at {first}); include each file once");
+                bag.Error(entry.Location, ProjectMessages.IncludedTwice(shown, first));
                 continue;
             }
 
@@ -73,14 +75,14 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
     {
         if (entry.Path.Length == 0 || Path.IsPathRooted(entry.Path))
         {
-            bag.Error(entry.Location, $"an include path is relative to the including file ('buildings/north.yaml'); found '{entry.Path}'");
+            bag.Error(entry.Location, ProjectMessages.IncludeNotRelative(entry.Path));
             return null;
         }
 
         var full = Path.GetFullPath(Path.Combine(Path.GetDirectoryName(from.Full)!, entry.Path));
         if (!full.StartsWith(folder + Path.DirectorySeparatorChar, StringComparison.Ordinal))
         {
-            bag.Error(entry.Location, $"'{entry.Path}' is outside the project's folder; an included file must be in the main file's folder or below it");
+            bag.Error(entry.Location, ProjectMessages.IncludeOutside(entry.Path));
             return null;
         }
 
@@ -104,7 +106,7 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             var why = e is FileNotFoundException or DirectoryNotFoundException ? "no such file" : e.Message;
-            bag.Error(entry.Location, $"cannot read the included file '{shown}': {why}");
+            bag.Error(entry.Location, ProjectMessages.CannotReadInclude(shown, why));
             return null;
         }
 
@@ -116,7 +118,7 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         }
         catch (DecoderFallbackException)
         {
-            bag.Error(new SourceLocation(shown, 1, 1), "the file is not UTF-8 text");
+            bag.Error(new SourceLocation(shown, 1, 1), ProjectMessages.IncludedNotUtf8());
             return null;
         }
 
@@ -126,7 +128,7 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         {
             if (root is not null)
             {
-                bag.Error(new SourceLocation(shown, 1, 1), "the included file holds nothing; it lists 'equipment:' (see docs/project-file.md)");
+                bag.Error(new SourceLocation(shown, 1, 1), ProjectMessages.IncludedHoldsNothing());
             }
 
             return null;

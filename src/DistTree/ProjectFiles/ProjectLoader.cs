@@ -1,8 +1,9 @@
-using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.ProjectFiles.Sections;
+using DistTree.ProjectFiles.Yaml;
 
 namespace DistTree.ProjectFiles;
 
@@ -79,7 +80,7 @@ public static class ProjectLoader
         {
             if (!bag.HasErrors)
             {
-                bag.Error(new SourceLocation(file, 1, 1), "the file holds no project; it starts with 'disttree: 1' (see docs/project-file.md)");
+                bag.Error(new SourceLocation(file, 1, 1), ProjectMessages.NoProject());
             }
 
             throw ProjectException.FromDiagnostics(bag.Sorted());
@@ -92,7 +93,7 @@ public static class ProjectLoader
         includes.ReadAll(file, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
-            bag.Error(root.Location, "the project and the files it includes list no equipment; a project needs at least one piece of equipment");
+            bag.Error(root.Location, ProjectMessages.NoEquipmentWithIncludes());
         }
 
         new FeedChecker(bag).Check(draft);
@@ -126,7 +127,7 @@ public static class ProjectLoader
                     Name = c.Name,
                     Poles = poles,
                     Supply = supply,
-                    Load = c.Load ?? Combined(c.Points, supply),
+                    Load = c.Load ?? Model.Load.Combined(c.Points, supply),
                     Points = c.Points,
                     Phases = c.StatedPhases ?? numbered,
                     PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated : numbered is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
@@ -165,39 +166,13 @@ public static class ProjectLoader
         };
     }
 
-    // The sum of the points' loads as one apparent power (phasor sum; points carry no motors).
-    private static Load Combined(IReadOnlyList<LoadPoint> points, CircuitSupply supply)
-    {
-        double p = 0, q = 0;
-        foreach (var point in points)
-        {
-            var l = point.Load;
-            var va = l.Kind switch
-            {
-                LoadKind.Kva => l.Value * 1000,
-                LoadKind.Kw => l.Value * 1000 / l.PowerFactor,
-                LoadKind.Amps => l.Value * supply.VoltageV * (supply.Phases == 3 ? Math.Sqrt(3) : 1),
-                _ => l.Value,
-            };
-            p += va * l.PowerFactor;
-            q += va * Math.Sqrt(1 - (l.PowerFactor * l.PowerFactor));
-        }
-
-        var s = Math.Sqrt((p * p) + (q * q));
-        return new Load(LoadKind.Va, s, s > 0 ? p / s : 1.0);
-    }
-
-
     // One file: the SHA-256 of its bytes. With includes: the SHA-256 of the files' 32-byte digests concatenated
     // in the order read (the main file, then depth first in list order), so a change to any file changes it.
     private static string Sha256Of(List<byte[]> hashes) =>
         Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
 
-    private static ProjectException TooLarge(string file, long size, string unit) => ProjectException.At(
-        new SourceLocation(file, 1, 1),
-        string.Create(
-            CultureInfo.InvariantCulture,
-            $"the file has {size:N0} {unit}; a project file may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)"));
+    private static ProjectException TooLarge(string file, long size, string unit) =>
+        ProjectException.At(new SourceLocation(file, 1, 1), ProjectMessages.TooLarge(size, unit));
 
     /// <summary>The error for bytes that are not UTF-8, located at the first bad byte: its line, and its column counted in characters.</summary>
     private static ProjectException NotUtf8(string file, byte[] bytes)
@@ -208,11 +183,7 @@ public static class ProjectLoader
         var line = 1 + bytes.AsSpan(0, lineStart).Count((byte)'\n');
         var column = 1 + StrictUtf8.GetCharCount(bytes, lineStart, offset - lineStart);
         var hint = bytes is [0xFF, 0xFE, ..] or [0xFE, 0xFF, ..] ? " (it looks like UTF-16)" : "";
-        return ProjectException.At(
-            new SourceLocation(file, line, column),
-            string.Create(
-                CultureInfo.InvariantCulture,
-                $"the file is not UTF-8 text{hint}: the byte 0x{bytes[offset]:X2} at offset {offset:N0} does not decode; save the file as UTF-8"));
+        return ProjectException.At(new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
     }
 
     private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));

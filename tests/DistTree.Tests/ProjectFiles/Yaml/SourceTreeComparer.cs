@@ -1,6 +1,6 @@
-using DistTree.ProjectFiles;
+using DistTree.ProjectFiles.Yaml;
 
-namespace DistTree.Tests.ProjectFiles;
+namespace DistTree.Tests.ProjectFiles.Yaml;
 
 /// <summary>Compares two <see cref="SourceNode"/> trees node for node, iteratively (an explicit stack).</summary>
 internal static class SourceTreeComparer

@@ -1,6 +1,4 @@
-using DistTree.Model;
-
-namespace DistTree.Solving;
+namespace DistTree.Model;
 
 /// <summary>
 /// Motor full-load currents in amperes. Source: NEC Table 430.248 (single-phase AC motors) and Table 430.250

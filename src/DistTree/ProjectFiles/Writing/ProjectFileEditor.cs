@@ -1,6 +1,7 @@
 using DistTree.Diagnostics;
+using DistTree.Sizing;
 
-namespace DistTree.Sizing;
+namespace DistTree.ProjectFiles.Writing;
 
 /// <summary>
 /// Applies an upsize plan to the text of a project file, editing only the values that change: each changed

@@ -1,7 +1,8 @@
 using System.Runtime.CompilerServices;
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Yaml;
 
-namespace DistTree.ProjectFiles;
+namespace DistTree.ProjectFiles.Sections;
 
 /// <summary>
 /// One mapping of the project file checked against the keys it may hold: unknown keys (with a
@@ -45,7 +46,7 @@ internal readonly struct MappingReader
             var index = IndexOf(key.Value);
             if (index < 0)
             {
-                bag.Error(key.Location, $"unknown key '{key.Value}' in {context}{Suggestions.Hint(key.Value, allowed)}");
+                bag.Error(key.Location, ProjectMessages.UnknownKey(key.Value, context, Suggestions.Hint(key.Value, allowed)));
                 if (Suggestions.Closest(key.Value, allowed) is { } suggested)
                 {
                     (_suggested ??= []).Add(suggested);
@@ -53,7 +54,7 @@ internal readonly struct MappingReader
             }
             else if (_given[index] > 0)
             {
-                bag.Error(key.Location, $"duplicate key '{key.Value}' in {context} (first given at line {entries[_given[index] - 1].Key.Line})");
+                bag.Error(key.Location, ProjectMessages.DuplicateKey(key.Value, context, entries[_given[index] - 1].Key.Line));
             }
             else
             {
@@ -97,7 +98,7 @@ internal readonly struct MappingReader
             // A misspelt key already reported with "did you mean '{key}'?" is not also reported missing.
             if (_suggested is null || !_suggested.Contains(key, StringComparer.Ordinal))
             {
-                _bag.Error(Node.Location, $"missing key '{key}' in {_context}{hint}");
+                _bag.Error(Node.Location, ProjectMessages.MissingKey(key, _context, hint));
             }
 
             return null;
@@ -111,7 +112,7 @@ internal readonly struct MappingReader
 
         if (entry.Value is SourceScalar { IsNull: true })
         {
-            _bag.Error(entry.Key.Location, $"'{key}' in {_context} has no value{hint}");
+            _bag.Error(entry.Key.Location, ProjectMessages.NoValue(key, _context, hint));
             return null;
         }
 

@@ -1,6 +1,6 @@
 using DistTree.Diagnostics;
 
-namespace DistTree.ProjectFiles;
+namespace DistTree.ProjectFiles.Yaml;
 
 /// <summary>
 /// A node of the YAML document as read, with the place it starts. The loader keeps its own small tree

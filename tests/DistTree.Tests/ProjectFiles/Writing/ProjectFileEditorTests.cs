@@ -1,8 +1,9 @@
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Writing;
 using DistTree.Sizing;
 using DistTree.Solving;
 
-namespace DistTree.Tests.Sizing;
+namespace DistTree.Tests.ProjectFiles.Writing;
 
 public sealed class ProjectFileEditorTests
 {

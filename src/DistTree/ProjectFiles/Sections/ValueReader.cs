@@ -1,9 +1,10 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
 using DistTree.Vocabulary;
 
-namespace DistTree.ProjectFiles;
+namespace DistTree.ProjectFiles.Sections;
 
 /// <summary>
 /// Typed values from scalars, following the YAML 1.2 core schema for plain scalars (a quoted
@@ -21,7 +22,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
                 var hint = node is SourceScalar { IsPlain: false } quoted && IsNumberText(quoted.Value)
                     ? " (write numbers without quotes)"
                     : "";
-                bag.Error(node.Location, $"{what} must be a number; found {node.Describe()}{hint}");
+                bag.Error(node.Location, ProjectMessages.NotANumber(what, node, hint));
             }
 
             return null;
@@ -36,7 +37,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         var value = Number(node, what);
         if (value is <= 0)
         {
-            bag.Error(node.Location, $"{what} must be greater than zero; found {Format(value.Value)}");
+            bag.Error(node.Location, ProjectMessages.NotPositive(what, value.Value));
             return null;
         }
 
@@ -49,7 +50,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         var value = Number(node, what);
         if (value is < 0)
         {
-            bag.Error(node.Location, $"{what} must not be negative; found {Format(value.Value)}");
+            bag.Error(node.Location, ProjectMessages.Negative(what, value.Value));
             return null;
         }
 
@@ -67,7 +68,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
 
         if (value.Value != Math.Floor(value.Value) || Math.Abs(value.Value) > int.MaxValue)
         {
-            bag.Error(node.Location, $"{what} must be a whole number; found {Format(value.Value)}");
+            bag.Error(node.Location, ProjectMessages.NotWhole(what, value.Value));
             return null;
         }
 
@@ -80,8 +81,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         var value = Integer(node, what);
         if (value is { } v && !allowed.Contains(v))
         {
-            var words = allowed.Select(a => a.ToString(CultureInfo.InvariantCulture)).ToArray();
-            bag.Error(node.Location, $"{what} must be {string.Join(", ", words[..^1])} or {words[^1]}; found {v}");
+            bag.Error(node.Location, ProjectMessages.NotOneOf(what, allowed, v));
             return null;
         }
 
@@ -104,7 +104,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
 
         if (!node.IsInvalid)
         {
-            bag.Error(node.Location, $"{what} must be true or false; found {node.Describe()}");
+            bag.Error(node.Location, ProjectMessages.NotBool(what, node));
         }
 
         return null;
@@ -117,7 +117,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         {
             if (scalar.Value.Trim().Length == 0)
             {
-                bag.Error(node.Location, $"{what} must not be empty");
+                bag.Error(node.Location, ProjectMessages.EmptyText(what));
                 return null;
             }
 
@@ -126,7 +126,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
 
         if (!node.IsInvalid)
         {
-            bag.Error(node.Location, $"{what} must be text; found {node.Describe()}");
+            bag.Error(node.Location, ProjectMessages.NotText(what, node));
         }
 
         return null;
@@ -150,7 +150,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
             }
         }
 
-        bag.Error(node.Location, $"unknown {noun} '{text}'{Suggestions.Hint(text, options.Select(o => o.Word).ToArray())}");
+        bag.Error(node.Location, ProjectMessages.UnknownWord(noun, text, Suggestions.Hint(text, options.Select(o => o.Word).ToArray())));
         return null;
     }
 
@@ -166,7 +166,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         var system = ElectricalSystem.Find(text);
         if (system is null)
         {
-            bag.Error(node.Location, $"unknown system '{text}'{Suggestions.Hint(text, ElectricalSystem.Names)}");
+            bag.Error(node.Location, ProjectMessages.UnknownWord("system", text, Suggestions.Hint(text, ElectricalSystem.Names)));
         }
 
         return system;
@@ -191,7 +191,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         {
             if (!node.IsInvalid)
             {
-                bag.Error(node.Location, $"{what} must be a length (a number, or a number with m or ft); found {node.Describe()}");
+                bag.Error(node.Location, ProjectMessages.NotALength(what, node));
             }
 
             return null;
@@ -199,15 +199,12 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
 
         if (metres is <= 0)
         {
-            bag.Error(node.Location, $"{what} must be greater than zero; found {((SourceScalar)node).Value.Trim()}");
+            bag.Error(node.Location, ProjectMessages.LengthNotPositive(what, ((SourceScalar)node).Value.Trim()));
             return null;
         }
 
         return metres;
     }
-
-    /// <summary>Formats a number for a message: shortest round-trip text, invariant culture.</summary>
-    public static string Format(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 
     /// <summary>True when plain text reads as a YAML 1.2 core-schema number (including .inf and .nan).</summary>
     public static bool IsNumberText(string text) => NumberPattern().IsMatch(text);
@@ -221,14 +218,14 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         var match = LengthPattern().Match(scalar.Value);
         if (!match.Success)
         {
-            bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', which is not a length; expected a number (in the project's unit) or a number with its unit, e.g. '28 m' or '92 ft'");
+            bag.Error(scalar.Location, ProjectMessages.LengthUnreadable(what, scalar.Value.Trim()));
             return null;
         }
 
         var number = double.Parse(match.Groups["number"].Value, NumberStyles.Float, CultureInfo.InvariantCulture);
         if (!double.IsFinite(number))
         {
-            bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', which is not a finite number");
+            bag.Error(scalar.Location, ProjectMessages.LengthNotFinite(what, scalar.Value.Trim()));
             return null;
         }
 
@@ -240,7 +237,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
             case "ft":
                 return number * UnitFactors.MetresPerFoot;
             default:
-                bag.Error(scalar.Location, $"{what} is '{scalar.Value.Trim()}', whose unit '{unit}' is not a unit of length; use m or ft");
+                bag.Error(scalar.Location, ProjectMessages.NotALengthUnit(what, scalar.Value.Trim(), unit));
                 return null;
         }
     }
@@ -268,7 +265,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
 
         if (!double.IsFinite(value))
         {
-            bag.Error(scalar.Location, $"{what} must be a finite number; found '{text}'");
+            bag.Error(scalar.Location, ProjectMessages.NotFinite(what, text));
             return null;
         }
 

@@ -1,11 +1,12 @@
 using System.Globalization;
 using DistTree.Generating;
 using DistTree.ProjectFiles;
+using DistTree.ProjectFiles.Yaml;
 using FsCheck;
 using FsCheck.Fluent;
 using Xunit.Abstractions;
 
-namespace DistTree.Tests.ProjectFiles;
+namespace DistTree.Tests.ProjectFiles.Yaml;
 
 /// <summary>
 /// The fast YAML path against YamlDotNet: for every project and case file, generated projects and
@@ -127,7 +128,7 @@ public sealed class FastYamlReaderTests(ITestOutputHelper output)
         }
 
         var bag = new DiagnosticBag();
-        var reference = SourceTreeReader.ReadWithParser(text, file, bag);
+        var reference = SourceTreeReader.Read(text, file, bag, YamlPath.YamlDotNet, out _);
         Assert.False(bag.HasErrors, $"the fast path read text YamlDotNet refuses:\n{string.Join('\n', bag.Sorted())}\n--- input ---\n{text}");
         Assert.NotNull(reference);
         if (SourceTreeComparer.Difference(reference!, fast) is { } difference)

@@ -1,0 +1,205 @@
+using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
+using DistTree.Vocabulary;
+
+namespace DistTree.ProjectFiles;
+
+/// <summary>The messages about what the sections of a project file say, in the order the file gives its sections.</summary>
+internal static partial class ProjectMessages
+{
+    // "'va', 'kva', 'kw', 'amps', 'hp' or 'fla'": the quantities a load may be given in.
+    private static readonly string QuantityList =
+        string.Join(", ", Words.LoadQuantity.Words.SkipLast(1).Select(q => $"'{q}'")) + $" or '{Words.LoadQuantity.Words[^1]}'";
+
+    // "'hp' or 'fla'": the quantities a motor is given in.
+    private static readonly string MotorQuantityList =
+        string.Join(" or ", Words.LoadQuantity.Pairs.Where(p => Load.IsMotorKind(p.Value)).Select(p => $"'{p.Word}'"));
+
+    /// <summary>A root that is not a mapping.</summary>
+    public static string NotAProject(SourceNode found) =>
+        $"a project file is a mapping of keys (disttree, project, service, equipment); found {found.Describe()}";
+
+    /// <summary>An included file's root that is not a mapping.</summary>
+    public static string NotAnIncludedFile(SourceNode found) =>
+        $"an included file is a mapping holding 'equipment:' (and 'include:'); found {found.Describe()}";
+
+    /// <summary><c>include</c> that is not a sequence.</summary>
+    public static string IncludeNotSequence(SourceNode found) =>
+        $"'include' must be a sequence of relative paths ('- buildings/north.yaml'); found {found.Describe()}";
+
+    /// <summary>A format version other than 1.</summary>
+    public static string UnsupportedVersion(int version) => $"unsupported format version {version}; this DistTree reads 'disttree: 1'";
+
+    /// <summary>A <c>conductor_temperature</c> that is neither a word nor a number; <paramref name="near"/> is a likely word meant.</summary>
+    public static string UnknownTemperature(string text, string? near)
+    {
+        var hint = near is null ? "" : $"; did you mean '{near}'?";
+        var words = string.Join(", ", Words.Temperature.Words.Select(w => $"'{w}'"));
+        return $"unknown conductor_temperature '{text}'{hint} (expected {words} or a number in °C)";
+    }
+
+    /// <summary><c>max_sets</c> below 1.</summary>
+    public static string MaxSetsBelowOne(int sets) => $"'max_sets' must be 1 or more; found {sets}";
+
+    /// <summary><c>prices</c> that is not a mapping.</summary>
+    public static string PricesNotMapping(SourceNode found) => $"'prices' must be a mapping of size to price per metre; found {found.Describe()}";
+
+    /// <summary>A size priced twice.</summary>
+    public static string PriceTwice(Conductors.ConductorSize size) => $"the price of {size} is given twice";
+
+    /// <summary>A sequence of services.</summary>
+    public static string ServiceCount(int count) => $"a project has exactly one service (the root of the tree); found {count}";
+
+    /// <summary>A service written as a sequence of one.</summary>
+    public static string ServiceIsSequence() => "'service' must be a mapping of keys, not a sequence";
+
+    /// <summary>An id holding '/', which joins a panel's id and a circuit's.</summary>
+    public static string IdWithSlash(string id) => $"the id '{id}' must not contain '/' (it joins a panel's id and a circuit's: LP1/3)";
+
+    /// <summary><c>equipment</c> that is not a sequence.</summary>
+    public static string EquipmentNotSequence(SourceNode found) => $"'equipment' must be a sequence of entries ('- id: ...'); found {found.Describe()}";
+
+    /// <summary>An empty <c>equipment</c> list.</summary>
+    public static string EquipmentEmpty() => "'equipment' lists nothing; a project needs at least one piece of equipment";
+
+    /// <summary>An equipment entry that is not a mapping.</summary>
+    public static string EquipmentEntryNotMapping(SourceNode found) => $"an equipment entry must be a mapping of keys; found {found.Describe()}";
+
+    /// <summary>A demand factor above 1 (a warning).</summary>
+    public static string DemandAboveOne(string name, double demand) =>
+        $"the demand factor of '{name}' is {Format(demand)}, above 1: it raises the load it applies to";
+
+    /// <summary>A transformer's key on other equipment.</summary>
+    public static string TransformerOnlyKey(string key, string name, EquipmentKind kind) =>
+        $"'{key}' applies to transformers only; '{name}' is a {Words.EquipmentKind.Of(kind)}";
+
+    /// <summary>A tap between the 2.5 % steps.</summary>
+    public static string TapNotAStep(string name, double tap) =>
+        $"'tap_percent' of '{name}' is {Format(tap)}; taps come in 2.5 % steps: -5, -2.5, 0, 2.5 or 5";
+
+    /// <summary>Circuits on a transformer or a splitter.</summary>
+    public static string CircuitsNotOnPanel(string panel, EquipmentKind kind) =>
+        $"'{panel}' is a {Words.EquipmentKind.Of(kind)}: branch circuits are fed from a panelboard or a switchboard";
+
+    /// <summary><c>circuits</c> that is not a sequence.</summary>
+    public static string CircuitsNotSequence(string panel, SourceNode found) =>
+        $"'circuits' of '{panel}' must be a sequence of entries ('- id: ...'); found {found.Describe()}";
+
+    /// <summary>A circuit entry that is not a mapping.</summary>
+    public static string CircuitEntryNotMapping(SourceNode found) => $"a circuit entry must be a mapping of keys; found {found.Describe()}";
+
+    /// <summary>Two circuits of one panel with one id.</summary>
+    public static string DuplicateCircuit(string id, string panel, int firstLine) =>
+        $"duplicate circuit id '{id}' in '{panel}' (first given at line {firstLine})";
+
+    /// <summary>A <c>phase</c> that names no lines.</summary>
+    public static string NotAPhase(string text) => $"'{text}' is not a phase; expected A, B, C, AB, BC, CA or ABC";
+
+    /// <summary>A circuit with both <c>load</c> and <c>points</c>.</summary>
+    public static string LoadAndPoints(Subject circuit) =>
+        $"{circuit} gives both 'load' and 'points'; give its load at the end ('load') or along the run ('points')";
+
+    /// <summary>A circuit with neither <c>load</c> nor <c>points</c>.</summary>
+    public static string NoLoad(Subject circuit) => $"missing key 'load' in {circuit} (or 'points' for loads along the run)";
+
+    /// <summary><c>ocpd</c> on a circuit and on its run.</summary>
+    public static string OcpdTwice(Subject circuit) => $"'ocpd' is given both on {circuit} and on its run; give it once";
+
+    /// <summary>A point farther along than its run is long.</summary>
+    public static string PointBeyondRun(Subject circuit, double atM, double lengthM) =>
+        $"the farthest point of {circuit} is {Format(atM)} m along a run of {Format(lengthM)} m; a point lies on its run";
+
+    /// <summary><c>points</c> that is not a sequence of one or more.</summary>
+    public static string PointsNotSequence(Subject circuit, SourceNode found) =>
+        $"'points' of {circuit} must be a sequence of one or more '{{ at: LENGTH, load: {{ ... }} }}'; found {found.Describe()}";
+
+    /// <summary>A motor at a point.</summary>
+    public static string PointCarriesMotor(Subject circuit) => $"a point of {circuit} carries a motor; a motor is a circuit of its own";
+
+    /// <summary>Points not listed nearest first.</summary>
+    public static string PointsOutOfOrder(Subject circuit) => $"the points of {circuit} must be listed nearest first";
+
+    /// <summary>A load with no quantity.</summary>
+    public static string NoQuantity(Subject load) => $"{load} states no quantity; give exactly one of {QuantityList}";
+
+    /// <summary>A load with two quantities.</summary>
+    public static string TwoQuantities(Subject load, string first, string second) =>
+        $"{load} gives both '{first}' and '{second}'; give exactly one of {QuantityList}";
+
+    /// <summary>A power factor (running or starting) outside (0, 1].</summary>
+    public static string PowerFactorRange(double pf) => $"a power factor must be greater than 0 and at most 1; found {Format(pf)}";
+
+    /// <summary>A motor load without <c>pf</c>.</summary>
+    public static string MotorNeedsPowerFactor(Subject load) => $"missing key 'pf' in {load} (a motor load needs its power factor)";
+
+    /// <summary>A motor-start key on a load that is not a motor.</summary>
+    public static string MotorOnlyKey(string key, Subject load) => $"'{key}' in {load} applies to motors only (loads given as {MotorQuantityList})";
+
+    /// <summary>A locked-rotor code letter not in <paramref name="letters"/>.</summary>
+    public static string NotACodeLetter(string text, IEnumerable<string> letters) =>
+        $"'{text}' is not a locked-rotor code letter; expected one of {string.Join(", ", letters)}";
+
+    /// <summary>A code letter on a load given in full-load amperes.</summary>
+    public static string CodeLetterWithFla(Subject load) =>
+        $"a code letter gives kVA per horsepower: {load} needs 'hp' with it, or 'lrc_multiple' with 'fla'";
+
+    /// <summary>A locked-rotor multiple below 1.</summary>
+    public static string MultipleBelowOne(Subject load) =>
+        $"'lrc_multiple' of {load} is the locked-rotor current over the full-load current: at least 1";
+
+    /// <summary>Both a code letter and a locked-rotor multiple.</summary>
+    public static string CodeLetterAndMultiple(Subject load) => $"{load} gives both 'code_letter' and 'lrc_multiple'; give one";
+
+    /// <summary>A branch run longer than is likely (a warning); <paramref name="lengthText"/> is the length in metres as written.</summary>
+    public static string LongBranch(Subject run, string lengthText) =>
+        $"{run} is {lengthText} m long, more than 609.6 m (2000 ft); check the length";
+
+    /// <summary>A run's <c>sets</c> below 1.</summary>
+    public static string SetsBelowOne(Subject run, int sets) => $"'sets' of {run} must be 1 or more; found {sets}";
+
+    /// <summary>What a required key holds, added to the message when it is missing or empty.</summary>
+    public static class KeyHints
+    {
+        /// <summary><c>disttree</c>.</summary>
+        public const string FormatVersion = " (the format version: 1)";
+
+        /// <summary><c>equipment</c> of an included file.</summary>
+        public const string IncludedEquipment = " (an included file lists equipment)";
+
+        /// <summary><c>system</c> of the service.</summary>
+        public const string System = " (e.g. 480Y/277)";
+
+        /// <summary><c>from</c>.</summary>
+        public const string From = " (the id of the service or equipment that feeds it)";
+
+        /// <summary><c>kva</c> of a transformer.</summary>
+        public const string Kva = " (the rating in kVA)";
+
+        /// <summary><c>secondary</c> of a transformer.</summary>
+        public const string Secondary = " (the secondary system, e.g. 208Y/120)";
+
+        /// <summary><c>impedance_percent</c> of a transformer.</summary>
+        public const string Impedance = " (the nameplate %Z)";
+
+        /// <summary><c>x_r</c> of a transformer.</summary>
+        public const string XOverR = " (the X/R ratio)";
+
+        /// <summary><c>poles</c> of a circuit.</summary>
+        public const string Poles = " (1, 2 or 3)";
+
+        /// <summary><c>run</c> of a circuit.</summary>
+        public const string Run = " (its length and size)";
+
+        /// <summary><c>at</c> of a point.</summary>
+        public const string At = " (its distance along the run)";
+
+        /// <summary><c>size</c> of a run.</summary>
+        public const string Size = " (e.g. 12 AWG, 250 kcmil or 95 mm2)";
+
+        /// <summary>
+        /// <c>kind</c> of equipment: the kinds, " (switchboard, panelboard, transformer or splitter)".
+        /// </summary>
+        public static readonly string Kind =
+            $" ({string.Join(", ", Words.EquipmentKind.Words.SkipLast(1))} or {Words.EquipmentKind.Words[^1]})";
+    }
+}

@@ -1,0 +1,164 @@
+using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
+using DistTree.Vocabulary;
+
+namespace DistTree.ProjectFiles.Sections;
+
+/// <summary>
+/// Reads the sections of a project file into drafts, reporting every unknown, missing, duplicate or wrongly
+/// typed value: the top of the file (format version, <c>project</c>, <c>service</c>, <c>include</c>) here, and each
+/// other section with a reader of its own (<see cref="RulesReader"/>, <see cref="SizingReader"/>,
+/// <see cref="EquipmentReader"/>, <see cref="CircuitReader"/>, <see cref="LoadReader"/>, <see cref="RunReader"/>).
+/// The tree checks (ids, sources, cycles, systems) come after, in <see cref="FeedChecker"/>.
+/// </summary>
+internal sealed class ProjectReader
+{
+    private readonly SectionContext _context;
+    private readonly RulesReader _rules;
+    private readonly SizingReader _sizing;
+    private readonly EquipmentReader _equipment;
+
+    /// <summary>A reader for one project (its main file and the files it includes), reporting to <paramref name="bag"/>.</summary>
+    public ProjectReader(DiagnosticBag bag)
+    {
+        _context = new SectionContext(bag);
+        _rules = new RulesReader(_context);
+        _sizing = new SizingReader(_context);
+        var runs = new RunReader(_context);
+        _equipment = new EquipmentReader(_context, runs, new CircuitReader(_context, runs, new LoadReader(_context)));
+    }
+
+    private DiagnosticBag Bag => _context.Bag;
+
+    private ValueReader Values => _context.Values;
+
+    /// <summary>Reads the whole document; the draft holds what could be read.</summary>
+    public ProjectDraft Read(SourceNode root)
+    {
+        var draft = _context.Draft = new ProjectDraft();
+        if (root is not SourceMapping mapping)
+        {
+            Bag.Error(root.Location, ProjectMessages.NotAProject(root));
+            return draft;
+        }
+
+        var top = new MappingReader(mapping, "the project file", ProjectKeys.Top, Bag);
+        ReadVersion(top.Required("disttree", ProjectMessages.KeyHints.FormatVersion));
+        ReadProject(_context.Map(top.Required("project"), "'project'", "the project section", ProjectKeys.Project));
+        _rules.ReadRules(_context.Map(top.Optional("rules"), "'rules'", "the rules", ProjectKeys.Rules));
+        _rules.ReadDefaults(_context.Map(top.Optional("defaults"), "'defaults'", "the defaults", ProjectKeys.Defaults));
+        _sizing.Read(_context.Map(top.Optional("sizing"), "'sizing'", "the sizing section", ProjectKeys.Sizing));
+        ReadService(top.Required("service"));
+        draft.Includes.AddRange(ReadIncludes(top.Optional("include")));
+        _equipment.ReadList(top.Has("include") ? top.Optional("equipment") : top.Required("equipment"));
+        return draft;
+    }
+
+    /// <summary>
+    /// Reads an included file (<c>include</c> and <c>equipment</c> only) into the same draft: its equipment is
+    /// added after what was read before. Returns the files it includes in turn.
+    /// </summary>
+    public IReadOnlyList<IncludeEntry> ReadIncluded(SourceNode root)
+    {
+        if (root is not SourceMapping mapping)
+        {
+            Bag.Error(root.Location, ProjectMessages.NotAnIncludedFile(root));
+            return [];
+        }
+
+        var top = new MappingReader(mapping, "the included file", ProjectKeys.Included, Bag);
+        var includes = ReadIncludes(top.Optional("include"));
+        _equipment.ReadList(top.Has("include") ? top.Optional("equipment") : top.Required("equipment", ProjectMessages.KeyHints.IncludedEquipment));
+        return includes;
+    }
+
+    private List<IncludeEntry> ReadIncludes(SourceNode? node)
+    {
+        var entries = new List<IncludeEntry>();
+        if (node is null)
+        {
+            return entries;
+        }
+
+        if (node is not SourceSequence sequence)
+        {
+            if (!node.IsInvalid)
+            {
+                Bag.Error(node.Location, ProjectMessages.IncludeNotSequence(node));
+            }
+
+            return entries;
+        }
+
+        foreach (var item in sequence.Items)
+        {
+            if (Values.Text(item, "an 'include' path") is { } path)
+            {
+                entries.Add(new IncludeEntry(path.Trim(), item.Location));
+            }
+        }
+
+        return entries;
+    }
+
+    private void ReadVersion(SourceNode? node)
+    {
+        if (node is not null && Values.Integer(node, "'disttree' (the format version)") is { } version && version != 1)
+        {
+            Bag.Error(node.Location, ProjectMessages.UnsupportedVersion(version));
+        }
+    }
+
+    private void ReadProject(MappingReader? section)
+    {
+        if (section is not { } m)
+        {
+            return;
+        }
+
+        if (m.Required("name") is { } name)
+        {
+            _context.Draft.Name = Values.Text(name, "'name' of the project");
+        }
+
+        if (m.Optional("units") is { } units && Values.Choice(units, "'units'", "unit system", Words.Units.Pairs) is { } u)
+        {
+            _context.Draft.Units = u;
+        }
+
+        if (m.Optional("description") is { } description)
+        {
+            Values.Text(description, "'description'");
+        }
+    }
+
+    private void ReadService(SourceNode? node)
+    {
+        if (node is SourceSequence sequence)
+        {
+            if (sequence.Items.Count > 1)
+            {
+                Bag.Error(sequence.Items[1].Location, ProjectMessages.ServiceCount(sequence.Items.Count));
+            }
+            else
+            {
+                Bag.Error(node.Location, ProjectMessages.ServiceIsSequence());
+            }
+
+            return;
+        }
+
+        if (_context.Map(node, "'service'", "the service", ProjectKeys.Service) is not { } m)
+        {
+            return;
+        }
+
+        var id = m.Required("id") is { } idNode ? _context.Id(idNode, "'id' of the service") : null;
+        var system = m.Required("system", ProjectMessages.KeyHints.System) is { } systemNode ? Values.SystemOf(systemNode, "'system' of the service") : null;
+        var frequency = m.Optional("frequency_hz") is { } hz ? Values.Positive(hz, "'frequency_hz'") : 60;
+        if (id is not null && system is not null && frequency is not null)
+        {
+            _context.Draft.Service = new Service(id, system, frequency.Value, m.Node.Location);
+        }
+    }
+}

@@ -1,0 +1,131 @@
+using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
+using DistTree.Vocabulary;
+
+namespace DistTree.ProjectFiles.Sections;
+
+/// <summary>Reads <c>rules</c> (the limits and how the tree is solved) and <c>defaults</c> (what every run inherits) into the draft.</summary>
+internal sealed class RulesReader(SectionContext context)
+{
+    private ValueReader Values => context.Values;
+
+    /// <summary>Reads the <c>rules</c> section, when given; every rule it does not state keeps its default.</summary>
+    public void ReadRules(MappingReader? section)
+    {
+        if (section is not { } m)
+        {
+            return;
+        }
+
+        var rules = Rules.Default;
+        if (context.Positive(m, "feeder_limit_percent") is { } feeder)
+        {
+            rules = rules with { FeederLimitPercent = feeder };
+        }
+
+        if (context.Positive(m, "branch_limit_percent") is { } branch)
+        {
+            rules = rules with { BranchLimitPercent = branch };
+        }
+
+        if (context.Positive(m, "total_limit_percent") is { } total)
+        {
+            rules = rules with { TotalLimitPercent = total };
+        }
+
+        if (m.Optional("branch_current") is { } basisNode && Values.Choice(basisNode, "'branch_current'", "branch_current", Words.BranchCurrent.Pairs) is { } basis)
+        {
+            rules = rules with { BranchCurrent = basis };
+        }
+
+        if (m.Optional("conductor_temperature") is { } temperature)
+        {
+            rules = ReadTemperature(temperature, rules);
+        }
+
+        context.Draft.Rules = ReadSolving(m, rules);
+    }
+
+    /// <summary>Reads the <c>defaults</c> section, when given; every default it does not state stays the standard one.</summary>
+    public void ReadDefaults(MappingReader? section)
+    {
+        if (section is not { } m)
+        {
+            return;
+        }
+
+        var defaults = ConductorDefaults.Standard;
+        if (m.Optional("material") is { } materialNode && Values.Choice(materialNode, "'material'", "material", Words.Material.Pairs) is { } material)
+        {
+            defaults = defaults with { Material = material };
+        }
+
+        if (m.Optional("insulation_c") is { } insulationNode && Values.IntegerOf(insulationNode, "'insulation_c'", SectionContext.TemperatureRatings) is { } insulation)
+        {
+            defaults = defaults with { InsulationC = insulation };
+        }
+
+        if (m.Optional("raceway") is { } racewayNode && Values.Choice(racewayNode, "'raceway'", "raceway", Words.Raceway.Pairs) is { } raceway)
+        {
+            defaults = defaults with { Raceway = raceway };
+        }
+
+        context.Draft.Defaults = defaults;
+    }
+
+    // The rules of how the tree is solved: the transformers' drop, the temperatures, the method, the motor-start limit.
+    private Rules ReadSolving(in MappingReader m, Rules rules)
+    {
+        if (m.Optional("transformer_drop") is { } dropNode && Values.Choice(dropNode, "'transformer_drop'", "transformer_drop", Words.TransformerDrop.Pairs) is { } drop)
+        {
+            rules = rules with { TransformerDrop = drop };
+        }
+
+        if (m.Optional("ambient_c") is { } ambientNode && Values.Number(ambientNode, "'ambient_c'") is { } ambient)
+        {
+            rules = rules with { AmbientC = ambient };
+        }
+
+        if (m.Optional("terminal_c") is { } terminalNode && Values.IntegerOf(terminalNode, "'terminal_c'", SectionContext.TemperatureRatings) is { } terminal)
+        {
+            rules = rules with { TerminalC = terminal };
+        }
+
+        if (m.Optional("method") is { } methodNode && Values.Choice(methodNode, "'method'", "method", Words.Method.Pairs) is { } method)
+        {
+            rules = rules with { Method = method };
+        }
+
+        if (context.Positive(m, "motor_start_limit_percent") is { } motorStart)
+        {
+            rules = rules with { MotorStartLimitPercent = motorStart };
+        }
+
+        return rules;
+    }
+
+    // A number in °C fixes the temperature; a word chooses how it is found.
+    private Rules ReadTemperature(SourceNode node, Rules rules)
+    {
+        if (node is SourceScalar { IsPlain: true } scalar && ValueReader.IsNumberText(scalar.Value))
+        {
+            return Values.Positive(node, "'conductor_temperature'") is { } c
+                ? rules with { Temperature = TemperatureMode.Fixed, FixedTemperatureC = c }
+                : rules;
+        }
+
+        var text = Values.Text(node, "'conductor_temperature'");
+        if (text is null)
+        {
+            return rules;
+        }
+
+        if (Words.Temperature.TryRead(text, out var mode))
+        {
+            return rules with { Temperature = mode };
+        }
+
+        context.Bag.Error(node.Location, ProjectMessages.UnknownTemperature(text, Suggestions.Closest(text, Words.Temperature.Words)));
+        return rules;
+    }
+}

@@ -1,0 +1,119 @@
+using System.Globalization;
+using DistTree.Conductors;
+using DistTree.Diagnostics;
+using DistTree.Model;
+using DistTree.ProjectFiles.Yaml;
+using DistTree.Vocabulary;
+
+namespace DistTree.ProjectFiles.Sections;
+
+/// <summary>Reads a feeder's or a branch circuit's run: its length, size, sets, conductor, device, limit and whether it is fixed.</summary>
+internal sealed class RunReader(SectionContext context)
+{
+    /// <summary>Branch runs longer than this are probably a typo (2000 ft, common practice as a sanity bound).</summary>
+    public const double LongBranchM = 2000 * UnitFactors.MetresPerFoot;
+
+    // Each size text parsed, with its result: a file names a few sizes many times.
+    private readonly Dictionary<string, (bool Ok, ConductorSize Size, string Error)> _sizes = new(StringComparer.Ordinal);
+
+    private DiagnosticBag Bag => context.Bag;
+
+    private ValueReader Values => context.Values;
+
+    /// <summary>
+    /// Reads a feeder or branch run. <paramref name="circuitOcpdA"/> (the circuit's own 'ocpd') becomes the run's
+    /// device when the run states none; <paramref name="ocpdLocation"/> is set when the run states one.
+    /// </summary>
+    public Run? Read(SourceNode node, Subject subject, bool branch, out SourceLocation? ocpdLocation, double? circuitOcpdA = null)
+    {
+        ocpdLocation = null;
+        if (context.Map(node, subject, subject, ProjectKeys.Run) is not { } m)
+        {
+            return null;
+        }
+
+        var lengthNode = m.Required("length");
+        var length = lengthNode is null ? null : Values.LengthM(lengthNode, subject.Of("'length' of "), context.Draft.Units);
+        if (branch && length > LongBranchM)
+        {
+            Bag.Warning(lengthNode!.Location, ProjectMessages.LongBranch(subject, length.Value.ToString("0.##", CultureInfo.InvariantCulture)));
+        }
+
+        var sizeNode = m.Required("size", ProjectMessages.KeyHints.Size);
+        var size = sizeNode is null ? null : Size(sizeNode, subject);
+        var sets = Sets(m, subject);
+        var defaults = context.Draft.Defaults;
+        var material = m.Optional("material") is { } materialNode ? Values.Choice(materialNode, subject.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
+        var insulation = m.Optional("insulation_c") is { } insulationNode ? Values.IntegerOf(insulationNode, subject.Of("'insulation_c' of "), SectionContext.TemperatureRatings) : defaults.InsulationC;
+        var raceway = m.Optional("raceway") is { } racewayNode ? Values.Choice(racewayNode, subject.Of("'raceway' of "), "raceway", Words.Raceway.Pairs) : defaults.Raceway;
+        double? ocpd = null;
+        if (m.Optional("ocpd") is { } ocpdNode)
+        {
+            ocpd = Values.Positive(ocpdNode, subject.Of("'ocpd' of "));
+            ocpdLocation = m.KeyLocation("ocpd");
+        }
+
+        var limit = m.Optional("limit_percent") is { } limitNode ? Values.Positive(limitNode, subject.Of("'limit_percent' of ")) : null;
+        var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
+        if (length is null || size is null || sets < 1 || material is null || insulation is null || raceway is null
+            || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
+        {
+            return null;
+        }
+
+        return new Run
+        {
+            LengthM = length.Value,
+            Size = size.Value,
+            Sets = sets,
+            Material = material.Value,
+            InsulationC = insulation.Value,
+            Raceway = raceway.Value,
+            OcpdA = ocpd ?? circuitOcpdA,
+            LimitPercent = limit,
+            Fixed = isFixed,
+            Location = m.Node.Location,
+            SizeLocation = sizeNode!.Location,
+        };
+    }
+
+    // The conductor size, parsed once per distinct text.
+    private ConductorSize? Size(SourceNode node, Subject subject)
+    {
+        if (Values.Text(node, subject.Of("'size' of ")) is not { } text)
+        {
+            return null;
+        }
+
+        if (!_sizes.TryGetValue(text, out var parsed))
+        {
+            parsed.Ok = ConductorSize.TryParse(text, out parsed.Size, out parsed.Error);
+            _sizes.Add(text, parsed);
+        }
+
+        if (parsed.Ok)
+        {
+            return parsed.Size;
+        }
+
+        Bag.Error(node.Location, parsed.Error);
+        return null;
+    }
+
+    // The parallel sets: 1 unless stated; below 1 is reported (and the run then not made).
+    private int Sets(in MappingReader m, Subject subject)
+    {
+        var sets = 1;
+        if (m.Optional("sets") is { } setsNode && Values.Integer(setsNode, subject.Of("'sets' of ")) is { } s)
+        {
+            if (s < 1)
+            {
+                Bag.Error(setsNode.Location, ProjectMessages.SetsBelowOne(subject, s));
+            }
+
+            sets = s;
+        }
+
+        return sets;
+    }
+}
