@@ -15,9 +15,14 @@ namespace DistTree.Solving;
 public sealed class DropSolver
 {
     private readonly ConductorCatalog _catalog;
+    private readonly ProtectionRules _protection;
 
     /// <summary>Creates a solver that takes conductor data from <paramref name="catalog"/>.</summary>
-    public DropSolver(ConductorCatalog catalog) => _catalog = catalog;
+    public DropSolver(ConductorCatalog catalog)
+    {
+        _catalog = catalog;
+        _protection = new ProtectionRules(catalog);
+    }
 
     /// <summary>A solver on the embedded catalogue.</summary>
     public static DropSolver Standard { get; } = new(ConductorCatalog.Standard);
@@ -254,8 +259,7 @@ public sealed class DropSolver
         var points = run.Target.Circuit?.Points ?? [];
         var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(lineA, conductors.OcpdA, rules.BranchCurrent) : lineA;
 
-        // Design current: 125 % of the continuous part plus the rest, as a phasor sum: S + 0.25·S_continuous.
-        var designA = LoadPower.CurrentA((carried + (continuousPart * 0.25)).VoltAmperes, supply);
+        var designA = _protection.DesignCurrentA(carried, continuousPart, supply);
         var figures = RunElectrics.Compute(_catalog, rules, conductors, conductors.Size, conductors.Sets, frequencyHz, currentA, bases.Of(conductors));
         var ownLines = run.Kind == RunKind.Branch ? (int)phases.Assigned[index] : 0;
         double ownDrop;
@@ -434,43 +438,7 @@ public sealed class DropSolver
                 conductors.Location));
         }
 
-        if (r.AmpacityA is { } ampacity)
-        {
-            if (r.DesignCurrentA > ampacity + 1e-9)
-            {
-                (findings ??= []).Add(Finding.Written(
-                    FindingKind.Ampacity,
-                    run.Id,
-                    r.DesignCurrentA,
-                    ampacity,
-                    $"{what} {run.Id}: design current {r.DesignCurrentA:0.0} A (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A",
-                    conductors.Location));
-            }
-
-            if (conductors.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity))
-            {
-                (findings ??= []).Add(Finding.Written(
-                    FindingKind.OcpdAboveAmpacity,
-                    run.Id,
-                    ocpd,
-                    ampacity,
-                    $"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)",
-                    conductors.Location));
-            }
-        }
-
-        if (conductors.OcpdA is { } device && _catalog.SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && device > (smallMax * sets) + 1e-9)
-        {
-            (findings ??= []).Add(Finding.Written(
-                FindingKind.OcpdAboveAmpacity,
-                run.Id,
-                device,
-                smallMax,
-                $"{what} {run.Id}: a {size} {ConductorWords.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
-                conductors.Location));
-        }
-
-        return findings;
+        return _protection.AddFindings(findings, run, r.DesignCurrentA, r.AmpacityA);
     }
 
     // Regulation ≈ (%R·cos θ + %X·sin θ)·(S/S_rated) − tap, %R = %Z/√(1 + (X/R)²), %X = %R·X/R (common practice).
