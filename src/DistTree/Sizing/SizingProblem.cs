@@ -2,6 +2,7 @@ using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
+using DistTree.Solving.Passes;
 
 namespace DistTree.Sizing;
 
@@ -171,7 +172,7 @@ internal sealed class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
+                var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, conductors, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }
