@@ -168,7 +168,11 @@ public sealed class ConductorCatalog
         return terminal is null ? thermal : Math.Min(thermal.Value, terminal.Value);
     }
 
-    /// <summary>The largest overcurrent device a small conductor may have (NEC 240.4(D)), amperes, or null.</summary>
+    /// <summary>
+    /// The largest overcurrent device for one small conductor, amperes, from the catalogue's <c>ocpd_cu</c> and
+    /// <c>ocpd_al</c> columns, or null where they have none. The rule that applies it is the solver's
+    /// <c>ProtectionRules</c>.
+    /// </summary>
     public double? SmallConductorMaxOcpdA(ConductorSize size, Material material)
     {
         var row = Row(size);

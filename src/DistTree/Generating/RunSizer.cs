@@ -19,6 +19,7 @@ internal static class RunSizer
     private const int MaxSets = 40;
 
     private static readonly ConductorCatalog Catalog = ConductorCatalog.Standard;
+    private static readonly ProtectionRules Protection = new(Catalog);
 
     /// <summary>Copper sizes a designer reaches for, 14 AWG to 500 kcmil (500 kcmil is the usual paralleled size).</summary>
     private static readonly ConductorSize[] Sizes =
@@ -31,7 +32,7 @@ internal static class RunSizer
     /// <summary>The standard device rating at or above <paramref name="designA"/> and at least <paramref name="minimumA"/>; null above 6000 A.</summary>
     public static double? Ocpd(double designA, double minimumA)
     {
-        foreach (var rating in OcpdRatings.All)
+        foreach (var rating in Protection.StandardRatingsA)
         {
             if (rating >= minimumA && rating >= designA - 1e-9)
             {
@@ -56,8 +57,7 @@ internal static class RunSizer
                 }
 
                 var ampacity = Ampacity(size) * sets;
-                var smallMax = Catalog.SmallConductorMaxOcpdA(size, Material.Copper);
-                if (ampacity >= needA - 1e-9 && (ocpdA is null || smallMax is null || smallMax * sets >= ocpdA.Value))
+                if (ampacity >= needA - 1e-9 && (ocpdA is null || Protection.SmallConductorPermits(ocpdA.Value, size, Material.Copper, sets)))
                 {
                     return (size, sets);
                 }

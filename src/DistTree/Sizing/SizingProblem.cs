@@ -2,6 +2,7 @@ using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
+using DistTree.Solving.Passes;
 
 namespace DistTree.Sizing;
 
@@ -70,6 +71,7 @@ internal sealed class SizingProblem
         var options = new RunOption[]?[nodes.Count];
         var transformerSteps = new int[nodes.Count];
         var unresolvable = new List<UnresolvableLimit>();
+        var protection = new ProtectionRules(catalog);
         foreach (var row in solution.Runs)
         {
             if (row.Kind == RunResultKind.Transformer)
@@ -80,7 +82,7 @@ internal sealed class SizingProblem
 
             var run = nodes[row.NodeIndex].Incoming!;
             var factor = dropFactors?.GetValueOrDefault(row.NodeIndex, 1.0) ?? 1.0;
-            var all = Candidates(run, row, project, catalog, maxSteps, factor).ToArray();
+            var all = Candidates(run, row, project, catalog, protection, maxSteps, factor).ToArray();
             var fitting = all.Where(o => o.MeetsRunLimits).ToArray();
             if (fitting.Length == 0)
             {
@@ -135,7 +137,8 @@ internal sealed class SizingProblem
         return NewOrigin ? 0 : stepsAtInputAfterRun + TransformerSteps[node];
     }
 
-    private static IEnumerable<RunOption> Candidates(NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, int? maxSteps, double dropFactor)
+    private static IEnumerable<RunOption> Candidates(
+        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, ProtectionRules protection, int? maxSteps, double dropFactor)
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
@@ -169,14 +172,15 @@ internal sealed class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = DropSolver.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
-                var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(catalog, conductors, s, sets, row, figures.AmpacityA);
+                var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
+                var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, conductors, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }
         }
     }
 
-    private static bool MeetsCurrentRules(ConductorCatalog catalog, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
+    // The run's current and device rules at a choice (see ProtectionRules).
+    private static bool MeetsCurrentRules(ProtectionRules protection, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
     {
         if (ampacityA is not { } ampacity)
         {
@@ -184,12 +188,7 @@ internal sealed class SizingProblem
             return size == conductors.Size && sets == conductors.Sets;
         }
 
-        if (row.DesignCurrentA > ampacity + 1e-9 || (row.OcpdA is { } ocpd && !OcpdRatings.Permits(ocpd, ampacity)))
-        {
-            return false;
-        }
-
-        return row.OcpdA is not { } device || catalog.SmallConductorMaxOcpdA(size, conductors.Material) is not { } smallMax || device <= (smallMax * sets) + 1e-9;
+        return protection.Meets(row.DesignCurrentA, row.OcpdA, size, conductors.Material, sets, ampacity);
     }
 
     // Material: area × length × current-carrying conductors × sets (mm²·m); with a price table, price × length × conductors × sets.

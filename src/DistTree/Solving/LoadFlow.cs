@@ -124,9 +124,6 @@ public static class LoadFlow
         // Fills the arrays of nodes start … end − 1 from the tree, the loads and the runs' impedances.
         public void Prepare(NetworkNode[] nodes, int[] parents, ComplexPower[] loads, Complex[] runImpedanceOhm, int start, int end)
         {
-            // The arrays in locals, read once: the loops then index them without going through this object.
-            var (link, zPu, s0, demand, ratio, zTransformer) = (_link, _zPu, _s0, _demand, _ratio, _zTransformer);
-
             // The sweeps start from the nominal voltage everywhere and no current.
             _bus.AsSpan(start, end - start).Fill(Complex.One);
             _transformerInput.AsSpan(start, end - start).Fill(Complex.One);
@@ -135,6 +132,37 @@ public static class LoadFlow
             // First a loop of reads only: the processor then has the reads of many nodes under way at once
             // (objects of a large tree are rarely in cache). The arithmetic follows.
             var supply = Scratch.RentToFill<CircuitSupply>(end - start);
+            Read(nodes, parents, supply, start, end);
+
+            // The arrays in locals, read once: the loop then indexes them without going through this object.
+            var (link, zPu, s0) = (_link, _zPu, _s0);
+            for (var i = start; i < end; i++)
+            {
+                zPu[i] = Complex.Zero;
+                if (link[i].HasRun)
+                {
+                    // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
+                    var feed = supply[i - start];
+                    var loop = feed.Phases == 3 ? 1.0 : 2.0;
+                    zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (feed.VoltageV * feed.VoltageV);
+                }
+
+                s0[i] = Complex.Zero;
+                if (link[i].Role >= Role.ConstantPower)
+                {
+                    s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
+                }
+            }
+
+            Scratch.Return(supply, end - start);
+        }
+
+        // Prepare's reads: each node's role, parent, demand factor and transformer, and its run's supply into
+        // supply[i − start].
+        private void Read(NetworkNode[] nodes, int[] parents, CircuitSupply[] supply, int start, int end)
+        {
+            // The arrays in locals, read once: the loop then indexes them without going through this object.
+            var (link, demand, ratio, zTransformer) = (_link, _demand, _ratio, _zTransformer);
             for (var i = start; i < end; i++)
             {
                 var node = nodes[i];
@@ -163,26 +191,6 @@ public static class LoadFlow
                     ratio[i] = 1.0 + (t.TapPercent / 100.0);
                 }
             }
-
-            for (var i = start; i < end; i++)
-            {
-                zPu[i] = Complex.Zero;
-                if (link[i].HasRun)
-                {
-                    // Loop impedance: both conductors for single-phase (×2), one phase against V_LL for three-phase.
-                    var feed = supply[i - start];
-                    var loop = feed.Phases == 3 ? 1.0 : 2.0;
-                    zPu[i] = runImpedanceOhm[i] * loop * BaseVa / (feed.VoltageV * feed.VoltageV);
-                }
-
-                s0[i] = Complex.Zero;
-                if (link[i].Role >= Role.ConstantPower)
-                {
-                    s0[i] = new Complex(loads[i].Watts, loads[i].Vars) / BaseVa;
-                }
-            }
-
-            Scratch.Return(supply, end - start);
         }
 
         // Each end point draws I = conj(S(V)/V); every other node the sum of its children's currents. A node pulls

@@ -1,6 +1,7 @@
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
+using DistTree.Solving.Passes;
 using DistTree.Vocabulary;
 
 namespace DistTree.Solving;
@@ -161,7 +162,7 @@ public readonly struct RunResult : IEquatable<RunResult>
     {
         if (Run is { } run)
         {
-            DropSolver.UnitDrops(run, _rows.Phases, Row.CurrentA, _rows.Phases.MaxLineCurrentA(NodeIndex), unitR, unitX);
+            RunDrops.UnitDrops(run, _rows.Phases, Row.CurrentA, _rows.Phases.MaxLineCurrentA(NodeIndex), unitR, unitX);
         }
         else
         {

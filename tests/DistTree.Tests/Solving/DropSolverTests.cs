@@ -120,29 +120,6 @@ public sealed class DropSolverTests
         Assert.Contains(s.AllFindings, f => f.Code == "ocpd_above_ampacity");
     }
 
-    [Theory]
-    [InlineData("connected", 10)]
-    [InlineData("ocpd_80", 16)]
-    [InlineData("lesser", 10)]
-    public void Solve_BranchCurrentBasis_ChoosesTheCurrent(string basis, double expectedA)
-    {
-        var s = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
-            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 10 }, run: { length: 50, size: 12 AWG } }", $"branch_current: {basis}"));
-        Assert.Equal(expectedA, s.Branch().CurrentA, 6);
-    }
-
-    // Reach: drop is proportional to length at a fixed temperature, so the run's own limit is met up to
-    // L × limit / drop (common practice).
-    [Fact]
-    public void Solve_Reach_IsLengthScaledToTheLimit()
-    {
-        var s = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
-            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 50, size: 12 AWG } }"));
-        var run = s.Branch();
-        Assert.Equal(run.LengthM * 3 / run.DropPercent, run.MaxLengthM!.Value, 6);
-        Assert.Equal(run.LengthM * 5 / run.DropPercent, run.MaxLengthTotalM!.Value, 6);
-    }
-
     [Fact]
     public void Solve_Motor_TakesFullLoadCurrentFromTable()
     {

@@ -54,23 +54,6 @@ public sealed class PhaseFlowTests
         Assert.Equal(2 * 10 * 0.01 * run.ResistanceOhmPerKm!.Value / 120 * 100, run.DropPercent, 9);
     }
 
-    // Automatic balancing: largest first onto the least-loaded line.
-    [Fact]
-    public void Solve_UnnumberedCircuits_AreBalancedLargestFirst()
-    {
-        var yaml = SolverHarness.OneCircuit("208Y/120", "metric",
-            "{ id: \"L1\", poles: 1, load: { va: 3000 }, run: { length: 10, size: 12 AWG } }")
-            + "\n      - { id: \"L2\", poles: 1, load: { va: 2000 }, run: { length: 10, size: 12 AWG } }"
-            + "\n      - { id: \"L3\", poles: 1, load: { va: 1500 }, run: { length: 10, size: 12 AWG } }"
-            + "\n      - { id: \"L4\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }\n";
-        var s = SolverHarness.Solve(yaml);
-        var lines = s.Runs.Where(r => r.Kind == DistTree.Solving.RunResultKind.Branch).ToDictionary(r => r.Id, r => r.Lines);
-        Assert.Equal("A", lines["P/L1"]);
-        Assert.Equal("B", lines["P/L2"]);
-        Assert.Equal("C", lines["P/L3"]);
-        Assert.Equal("C", lines["P/L4"]);
-    }
-
     [Fact]
     public void Load_StatedPhase_WrongForThePoles_IsAnError()
     {

@@ -1,24 +1,11 @@
-using DistTree.Model;
 using DistTree.Solving;
 
-namespace DistTree.Tests.Solving;
+namespace DistTree.Tests.Solving.Passes;
 
-public sealed class MotorStartTests
+public sealed class MotorStartCheckTests
 {
     private static string Motor(string load, double lengthM = 60, string rules = "conductor_temperature: rated") => SolverHarness.OneCircuit("480Y/277", "metric",
         $"{{ id: \"1\", poles: 3, ocpd: 40, load: {load}, run: {{ length: {lengthM}, size: 8 AWG }} }}", rules);
-
-    // NEC Table 430.7(B) (memory): code letter G is 5.6 to 6.29 kVA per hp; DistTree takes the upper end.
-    [Fact]
-    public void LockedRotor_CodeLetter_UpperEndOfItsRange()
-    {
-        var load = new Load(LoadKind.Hp, 10, 0.85) { Start = new MotorStart("G", null, 0.3) };
-        Assert.Equal(62_900, MotorStarting.LockedRotor(load, ComplexPower.FromApparent(11_000, 0.85)).VoltAmperes, 6);
-    }
-
-    [Fact]
-    public void LockedRotor_Default_SixTimesRunning() =>
-        Assert.Equal(6 * 11_000, MotorStarting.LockedRotor(new Load(LoadKind.Fla, 14, 0.85), ComplexPower.FromApparent(11_000, 0.85)).VoltAmperes, 6);
 
     // Superposition (common practice): the dip at the terminals is the steady drop plus the drop of the extra
     // power S_LR − S_run: 100·(ΔP·R + ΔQ·X)/V² on a three-phase run, computed here by hand from the figures.

@@ -1,8 +1,11 @@
+using DistTree.Network;
+using DistTree.ProjectFiles;
 using DistTree.Solving;
+using DistTree.Solving.Passes;
 
-namespace DistTree.Tests.Solving;
+namespace DistTree.Tests.Solving.Passes;
 
-public sealed class TransformerTests
+public sealed class TransformerRegulationTests
 {
     private static string Project(string rules, double loadKva, double tap = 0) => $$"""
         disttree: 1
@@ -56,5 +59,15 @@ public sealed class TransformerTests
     {
         var s = SolverHarness.Solve(Project("transformer_drop: count", 90));
         Assert.Contains(s.AllFindings, f => f.Code == "transformer_overload");
+    }
+
+    // %R = %Z/√(1 + (X/R)²), %X = %R·X/R: %Z 5, X/R 4 gives 5/√17 = 1.2127 and 4.8507 (as above).
+    [Fact]
+    public void PercentRx_FromImpedanceAndXOverR()
+    {
+        var network = NetworkBuilder.Build(ProjectLoader.Parse(Project("", 10), "test.yaml"));
+        var (r, x) = TransformerRegulation.PercentRx(network.NodeArray.Single(n => n.Id == "T1").Equipment!.Transformer!);
+        Assert.Equal(5 / Math.Sqrt(17), r, 12);
+        Assert.Equal(4 * 5 / Math.Sqrt(17), x, 12);
     }
 }

@@ -1,10 +1,12 @@
+using DistTree.Model;
+using DistTree.Solving.Passes;
 using FsCheck;
 using FsCheck.Fluent;
 using FsCheck.Xunit;
 
-namespace DistTree.Tests.Solving;
+namespace DistTree.Tests.Solving.Passes;
 
-public sealed class LoadPointsTests
+public sealed class RunDropsTests
 {
     private static string Circuit(string loadOrPoints, double lengthM = 40) => SolverHarness.OneCircuit("480Y/277", "metric",
         $"{{ id: \"1\", poles: 1, ocpd: 20, {loadOrPoints}, run: {{ length: {lengthM}, size: 12 AWG }} }}");
@@ -32,4 +34,28 @@ public sealed class LoadPointsTests
             return Math.Abs(lumped.Branch().DropPercent - points.Branch().DropPercent) < 1e-9
                 && Math.Abs(lumped.EndPoints[0].TotalDropPercent - points.EndPoints[0].TotalDropPercent) < 1e-9;
         });
+
+    // The current a branch circuit's drop is figured at, by the rules' basis: connected load, 80 % of the device
+    // rating, or the lesser of the two.
+    [Theory]
+    [InlineData("connected", 10)]
+    [InlineData("ocpd_80", 16)]
+    [InlineData("lesser", 10)]
+    public void Solve_BranchCurrentBasis_ChoosesTheCurrent(string basis, double expectedA)
+    {
+        var s = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 10 }, run: { length: 50, size: 12 AWG } }", $"branch_current: {basis}"));
+        Assert.Equal(expectedA, s.Branch().CurrentA, 6);
+    }
+
+    // A branch circuit's own drop is the one on its own lines; a feeder's, the worst that any set of lines below sees.
+    [Theory]
+    [InlineData((int)Phases.B, 2 * 0.5 + 3 * 0.25)]
+    [InlineData(0, 2 * 0.9 + 3 * 0.1)]
+    public void OwnDrop_BranchOnItsLines_FeederTheWorst(int ownLines, double expected)
+    {
+        double[] unitR = [0, 0.2, 0.5, 0.9, 0.1, 0.3, 0.4, 0.6];
+        double[] unitX = [0, 0.1, 0.25, 0.1, 0.2, 0.2, 0.3, 0.3];
+        Assert.Equal(expected, RunDrops.OwnDrop(unitR, unitX, 2, 3, ownLines), 12);
+    }
 }

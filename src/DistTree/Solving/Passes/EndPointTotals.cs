@@ -1,0 +1,213 @@
+using DistTree.Model;
+using DistTree.Network;
+
+namespace DistTree.Solving.Passes;
+
+/// <summary>
+/// The end points' pass: every end point's total, walking up from it, the sum of the counted rows' drops on its own
+/// lines (the load flow's drops on the load flow); its findings (total drop, motor start; see
+/// <see cref="MotorStartCheck"/>); the counted runs of its path and each one's share (see <see cref="SolvedRows"/>);
+/// and the worst end point. End points are independent: the pass runs on every core.
+/// </summary>
+internal sealed class EndPointTotals
+{
+    private readonly DistributionNetwork _network;
+    private readonly NetworkNode[] _nodes;
+    private readonly int[] _parents;
+    private readonly PowerSums _sums;
+    private readonly PhaseFlow _phases;
+    private readonly RunRows _runs;
+    private readonly LoadFlowResult _flow;
+    private readonly bool _newOrigin;
+    private readonly bool _onLoadFlow;
+    private readonly double _limitPercent;
+
+    // Per node, its depth (the service is 1); per end point, its node and the start of its path (see Number).
+    private readonly int[] _depth;
+    private readonly int[] _endPointNode;
+    private readonly int[] _pathStart;
+    private int _count;
+
+    // What the pass gives: a row, findings and motor-start check per end point, the paths, the worst end point (−1
+    // without any) and the number of findings, merged under the gate.
+    private EndPointRow[] _endPoints = [];
+    private IReadOnlyList<Finding>?[] _findings = [];
+    private MotorStartResult?[] _motorStarts = [];
+    private int[] _pathRuns = [];
+    private double[] _pathShares = [];
+    private int _worst = -1;
+    private int _findingCount;
+    private readonly Lock _gate = new();
+
+    private EndPointTotals(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow)
+    {
+        var rules = network.Project.Rules;
+        _network = network;
+        _nodes = network.NodeArray;
+        _parents = network.ParentIndices;
+        _sums = sums;
+        _phases = phases;
+        _runs = runs;
+        _flow = flow;
+        _newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
+        _onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
+        _limitPercent = rules.TotalLimitPercent;
+        _depth = Scratch.RentToFill<int>(_nodes.Length);
+        _endPointNode = Scratch.RentToFill<int>(_nodes.Length);
+        _pathStart = Scratch.RentToFill<int>(_nodes.Length + 1);
+    }
+
+    /// <summary>Solves every end point of <paramref name="network"/>; gives the end points, the worst (−1 without any) and the number of findings.</summary>
+    public static (SolvedEndPoints EndPoints, int Worst, int Findings) Solve(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow)
+    {
+        var pass = new EndPointTotals(network, sums, phases, runs, flow);
+        pass.Number();
+        ParallelRanges.For(pass._count, pass.SolveRange);
+        var n = pass._nodes.Length;
+        Scratch.Return(pass._depth, n);
+        Scratch.Return(pass._endPointNode, n);
+        Scratch.Return(pass._pathStart, n + 1);
+        return (new SolvedEndPoints(pass._endPoints, pass._findings, pass._motorStarts, pass._pathRuns, pass._pathShares), pass._worst, pass._findingCount);
+    }
+
+    // Top-down: the depth of every node, and how many rows a walk up from below a node counts from it to the
+    // service: its transformer's and its incoming run's, unless the transformer is a new origin, where the counting
+    // stops. An end point's counted rows are its own run's and those above its panel; they take the next places in
+    // the path arrays, which are made here.
+    private void Number()
+    {
+        var (n, parents, depth, incomingRow, transformerRow, has) = (_nodes.Length, _parents, _depth, _runs.IncomingRow, _runs.TransformerRow, _sums.Has);
+        var counted = Scratch.RentToFill<int>(n);
+        var used = 0;
+        for (var i = 0; i < n; i++)
+        {
+            var above = i == 0 ? 0 : counted[parents[i]];
+            depth[i] = i == 0 ? 1 : depth[parents[i]] + 1;
+            counted[i] = _newOrigin && transformerRow[i] >= 0 ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
+            if ((has[i] & Has.Circuit) != 0)
+            {
+                _endPointNode[_count] = i;
+                _pathStart[_count++] = used;
+                used += (incomingRow[i] >= 0 ? 1 : 0) + above;
+            }
+        }
+
+        _pathStart[_count] = used;
+        Scratch.Return(counted, n);
+        _endPoints = GC.AllocateUninitializedArray<EndPointRow>(_count);
+        _findings = new IReadOnlyList<Finding>?[_count];
+        _motorStarts = new MotorStartResult?[_count];
+        _pathRuns = GC.AllocateUninitializedArray<int>(used);
+        _pathShares = GC.AllocateUninitializedArray<double>(used);
+    }
+
+    // The end points start … end − 1. The worst of the range and its findings are merged into the whole under the
+    // gate: the worst-first order is total (ties go by id), so the merge order does not matter.
+    private void SolveRange(int start, int end)
+    {
+        var worstHere = -1;
+        var found = 0;
+        for (var e = start; e < end; e++)
+        {
+            found += SolveEndPoint(e);
+            worstHere = worstHere < 0 || WorseThan(e, worstHere) ? e : worstHere;
+        }
+
+        lock (_gate)
+        {
+            _findingCount += found;
+            _worst = worstHere >= 0 && (_worst < 0 || WorseThan(worstHere, _worst)) ? worstHere : _worst;
+        }
+    }
+
+    private bool WorseThan(int a, int b) =>
+        Solution.WorstFirst(_endPoints[a].TotalDropPercent, _nodes[_endPoints[a].Node].Id, _endPoints[b].TotalDropPercent, _nodes[_endPoints[b].Node].Id) < 0;
+
+    // Fills end point e's row, findings and motor-start check; gives the number of its findings.
+    private int SolveEndPoint(int e)
+    {
+        var (rows, lineDrops, pathRuns, pathShares, parents) = (_runs.Rows, _runs.LineDrops, _pathRuns, _pathShares, _parents);
+        var (incomingRow, transformerRow) = (_runs.IncomingRow, _runs.TransformerRow);
+        var index = _endPointNode[e];
+        var (first, pathCount) = (_pathStart[e], _pathStart[e + 1] - _pathStart[e]);
+        double percentSum = 0, loadFlow = 0;
+
+        // Walking up from the end point: its own lines, until a transformer between systems of different line
+        // counts, above which the worst line counts (the safe side). Each transformer's row before its primary
+        // feeder's; the rows are stored service side first.
+        var set = (int)_phases.Assigned[index];
+        var at = first + pathCount;
+        for (var i = index; at > first; i = parents[i])
+        {
+            // The node's transformer's row (an end point has none), then its incoming run's.
+            for (var k = 0; k < 2; k++)
+            {
+                var r = k == 0 ? transformerRow[i] : incomingRow[i];
+                if (r < 0)
+                {
+                    continue;
+                }
+
+                ref var row = ref rows[r];
+                pathRuns[--at] = r;
+                pathShares[at] = _onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
+                percentSum += lineDrops[(r * 8) + set];
+                loadFlow += row.LoadFlowDropPercent ?? 0;
+                if (row.WidensToAllLines)
+                {
+                    set = (int)Phases.ABC;
+                }
+            }
+        }
+
+        var total = _onLoadFlow ? loadFlow : percentSum;
+        var start = (_sums.Has[index] & Has.Motor) != 0 ? MotorStartCheck.Of(_network, _runs, index, _sums.Power[index], _sums.LockedRotor[index]) : null;
+        var found = Findings(index, total, pathCount, start);
+        _endPoints[e] = new EndPointRow
+        {
+            Node = index,
+            PathStart = first,
+            PathCount = pathCount,
+            TotalDropPercent = total,
+            PercentSumTotalDropPercent = percentSum,
+            LoadFlowTotalDropPercent = _flow.Converged ? loadFlow : null,
+            LoadFlowEndVoltageV = _flow.Converged ? _flow.InputPu[index] * rows[incomingRow[index]].VoltageV : null,
+        };
+        _motorStarts[e] = start;
+        _findings[e] = found;
+        return found?.Count ?? 0;
+    }
+
+    // The end point's findings, or null for none: its total over the limit, and a motor's dip over its limit. The
+    // end point's objects are read only for a finding (see Has).
+    private List<Finding>? Findings(int index, double total, int pathCount, MotorStartResult? start)
+    {
+        List<Finding>? found = null;
+        var limit = _limitPercent;
+        if (total > limit + 1e-9)
+        {
+            var circuit = _nodes[index].Circuit!;
+            (found ??= []).Add(Finding.Written(
+                FindingKind.TotalDrop,
+                circuit.FullId,
+                total,
+                limit,
+                $"end point {circuit.FullId}: total drop {total:0.00} % from {(_newOrigin && pathCount < _depth[index] - 1 ? "its origin" : "the service")} exceeds the {limit:0.##} % limit",
+                circuit.Location));
+        }
+
+        if (start is not null && start.TerminalDipPercent > start.LimitPercent + 1e-9)
+        {
+            var circuit = _nodes[index].Circuit!;
+            (found ??= []).Add(Finding.Written(
+                FindingKind.MotorStart,
+                circuit.FullId,
+                start.TerminalDipPercent,
+                start.LimitPercent,
+                $"motor {circuit.FullId}: while starting ({start.LockedRotorVa / 1000:0.#} kVA locked-rotor) its terminals dip {start.TerminalDipPercent:0.0} % and its panel {start.PanelDipPercent:0.0} %, over the {start.LimitPercent:0.##} % limit",
+                circuit.Location));
+        }
+
+        return found;
+    }
+}

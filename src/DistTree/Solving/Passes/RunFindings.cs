@@ -1,0 +1,56 @@
+using DistTree.Network;
+
+namespace DistTree.Solving.Passes;
+
+/// <summary>
+/// A run's findings: its drop over its own limit, and the current and device rules of <see cref="ProtectionRules"/>.
+/// On the percent sum they are found in the runs' pass (see <see cref="RunDrops"/>); on the load flow, whose drops
+/// count then, in a pass of their own once it is solved (see <see cref="OnLoadFlow"/>).
+/// </summary>
+internal static class RunFindings
+{
+    /// <summary>The findings of <paramref name="run"/>, whose figures are <paramref name="r"/>, or null for none.</summary>
+    public static List<Finding>? Of(ref RunRow r, NetworkRun run, ProtectionRules protection)
+    {
+        List<Finding>? findings = null;
+        var conductors = run.Conductors;
+        var branch = run.Kind == RunKind.Branch;
+        var what = branch ? "branch circuit" : "feeder";
+        var size = conductors.Size.Text;
+        var limit = run.LimitPercent;
+        if (r.DropPercent > limit + 1e-9)
+        {
+            (findings ??= []).Add(Finding.Written(
+                branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
+                run.Id,
+                r.DropPercent,
+                limit,
+                $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit",
+                conductors.Location));
+        }
+
+        return protection.AddFindings(findings, run, r.DesignCurrentA, r.AmpacityA);
+    }
+
+    /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>
+    public static int OnLoadFlow(NetworkNode[] nodes, RunRows runs, ProtectionRules protection)
+    {
+        var (rows, findings) = (runs.Rows, runs.Findings);
+        var count = 0;
+        ParallelRanges.For(runs.Count, (start, end) =>
+        {
+            var found = 0;
+            for (var r = start; r < end; r++)
+            {
+                ref var row = ref rows[r];
+                if (!row.IsTransformer)
+                {
+                    found += (findings[r] = Of(ref row, nodes[row.Node].Incoming!, protection))?.Count ?? 0;
+                }
+            }
+
+            Interlocked.Add(ref count, found);
+        });
+        return count;
+    }
+}

@@ -1,0 +1,135 @@
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
+using DistTree.ProjectFiles;
+using DistTree.Solving;
+
+namespace DistTree.Tests.Solving;
+
+public sealed class ProtectionRulesTests
+{
+    private static readonly ProtectionRules Rules = new(ConductorCatalog.Standard);
+
+    // NEC 240.6(A) (memory; verify against the edition in force): the standard ratings of fuses and inverse-time
+    // circuit breakers start 15, 20, 25 … in steps of 5 to 50, then 10 to 110, and end at 6000 A. Checked by their
+    // shape, not transcribed: ascending, and the ratings the next-size-up rows below rely on are there.
+    [Fact]
+    public void StandardRatingsA_AscendingFrom15To6000()
+    {
+        var ratings = Rules.StandardRatingsA;
+        Assert.Equal(15, ratings[0]);
+        Assert.Equal(6000, ratings[^1]);
+        Assert.True(ratings.Zip(ratings.Skip(1)).All(p => p.First < p.Second));
+        Assert.Equal([15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110], ratings.TakeWhile(r => r <= 110));
+        Assert.Contains(800.0, ratings);
+        Assert.DoesNotContain(900.0, ratings);
+    }
+
+    // NEC 240.4(B) (memory): a device of 800 A or less may take the next standard rating (240.6(A)) above the
+    // conductors' ampacity when the ampacity is not itself a standard rating; above 800 A it may not exceed it
+    // (240.4(C)). Rows are worked by hand from those two clauses.
+    [Theory]
+    [InlineData(20, 20, true)] // at the ampacity
+    [InlineData(15, 20, true)] // below it
+    [InlineData(25, 23, true)] // 25 A is the next standard rating above 23 A
+    [InlineData(30, 23, false)] // the one after is not
+    [InlineData(110, 100, false)] // 100 A is itself a standard rating: no step up
+    [InlineData(125, 115, true)] // 110 is below 115, so the next is 125
+    [InlineData(150, 115, false)]
+    [InlineData(400, 380, true)]
+    [InlineData(800, 760, true)] // 800 A is the largest device the rule covers
+    [InlineData(1000, 820, false)] // above 800 A: not above the ampacity
+    [InlineData(1000, 1000, true)]
+    [InlineData(6000, 6500, true)]
+    public void DevicePermits_NextSizeUpRule(double ocpdA, double ampacityA, bool expected) =>
+        Assert.Equal(expected, Rules.DevicePermits(ocpdA, ampacityA));
+
+    [Fact]
+    public void DevicePermits_WithinTolerance_IsAtTheAmpacity() => Assert.True(Rules.DevicePermits(30 + 1e-10, 30));
+
+    // NEC 240.4(D) (read; the catalogue's ocpd columns): 14 AWG copper 15 A, 12 AWG copper 20 A, 10 AWG copper 30 A,
+    // 12 AWG aluminium 15 A, 10 AWG aluminium 25 A; parallel sets share the device, so the limit scales with them;
+    // 8 AWG and larger have no such limit.
+    [Theory]
+    [InlineData("14 AWG", Material.Copper, 1, 15, true)]
+    [InlineData("14 AWG", Material.Copper, 1, 20, false)]
+    [InlineData("12 AWG", Material.Copper, 1, 20, true)]
+    [InlineData("12 AWG", Material.Copper, 1, 25, false)]
+    [InlineData("10 AWG", Material.Copper, 1, 30, true)]
+    [InlineData("10 AWG", Material.Copper, 1, 35, false)]
+    [InlineData("12 AWG", Material.Aluminum, 1, 15, true)]
+    [InlineData("12 AWG", Material.Aluminum, 1, 20, false)]
+    [InlineData("10 AWG", Material.Aluminum, 1, 25, true)]
+    [InlineData("10 AWG", Material.Aluminum, 1, 30, false)]
+    [InlineData("12 AWG", Material.Copper, 2, 40, true)]
+    [InlineData("12 AWG", Material.Copper, 2, 45, false)]
+    [InlineData("8 AWG", Material.Copper, 1, 100, true)]
+    public void SmallConductorPermits_SmallConductorRule(string size, Material material, int sets, double ocpdA, bool expected) =>
+        Assert.Equal(expected, Rules.SmallConductorPermits(ocpdA, ConductorSize.Parse(size), material, sets));
+
+    // 125 % of the continuous part plus the rest (NEC 210.19(A)(1), 215.2(A)(1); memory): at 120 V, 1200 VA
+    // continuous and 1200 VA not is (1.25 × 1200 + 1200) / 120 = 22.5 A.
+    [Fact]
+    public void DesignCurrentA_ContinuousPart_IsTakenAt125Percent()
+    {
+        var supply = new CircuitSupply(120, 1);
+        var continuous = new ComplexPower(1200, 0);
+        Assert.Equal(22.5, Rules.DesignCurrentA(new ComplexPower(2400, 0), continuous, supply), 9);
+        Assert.Equal(20, Rules.DesignCurrentA(new ComplexPower(2400, 0), ComplexPower.Zero, supply), 9);
+    }
+
+    [Theory]
+    [InlineData(25, 25, true)]
+    [InlineData(25.01, 25, false)]
+    [InlineData(double.NaN, 25, true)] // an overflowing load is not held against the conductors (as the solver always did)
+    public void Carries_DesignCurrentAgainstAmpacity(double designA, double ampacityA, bool expected) =>
+        Assert.Equal(expected, Rules.Carries(designA, ampacityA));
+
+    // Meets is what the sizer asks and AddFindings what the solver reports: they agree on every row. 12 AWG copper at
+    // 75 °C terminals: 25 A (NEC Table 310.16, read).
+    [Theory]
+    [InlineData("12 AWG", 1, 20.0, 18, 25, true, new string[0])]
+    [InlineData("12 AWG", 1, null, 24, 25, true, new string[0])]
+    [InlineData("12 AWG", 1, 20.0, 26, 25, false, new[] { "ampacity" })]
+    [InlineData("12 AWG", 1, 25.0, 18, 25, false, new[] { "ocpd_above_ampacity" })]
+    [InlineData("12 AWG", 1, 35.0, 30, 25, false, new[] { "ampacity", "ocpd_above_ampacity", "ocpd_above_ampacity" })]
+    [InlineData("12 AWG", 2, 40.0, 30, 50, true, new string[0])]
+    [InlineData("6 AWG", 1, 70.0, 60, 65, true, new string[0])]
+    [InlineData("6 AWG", 1, 80.0, 60, 65, false, new[] { "ocpd_above_ampacity" })]
+    public void Meets_AgreesWithAddFindings(string size, int sets, double? ocpdA, double designA, double ampacityA, bool meets, string[] codes)
+    {
+        var run = RunOf(size, sets, ocpdA);
+        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA));
+        var findings = Rules.AddFindings(null, run, designA, ampacityA);
+        Assert.Equal(codes, findings?.Select(f => f.Code) ?? []);
+        Assert.Equal(meets, findings is null);
+    }
+
+    // Without a tabulated ampacity (large metric sizes) only the small-conductor rule can be checked.
+    [Fact]
+    public void AddFindings_NoAmpacity_ChecksTheSmallConductorRuleOnly()
+    {
+        var found = Assert.Single(Rules.AddFindings(null, RunOf("12 AWG", 1, 30), 40, null)!);
+        Assert.Equal(FindingKind.OcpdAboveAmpacity, found.Kind);
+        Assert.Equal(20, found.Limit);
+        Assert.Equal("branch circuit P/1: a 12 AWG cu conductor may be protected at 20 A at most (small-conductor rule), not 30 A", found.Message);
+        Assert.Null(Rules.AddFindings(null, RunOf("12 AWG", 1, 20), 40, null));
+    }
+
+    [Fact]
+    public void AddFindings_GivenAList_AddsToIt()
+    {
+        var earlier = new Finding(FindingKind.BranchDrop, "P/1", 4, 3, "earlier", Diagnostics.SourceLocation.None);
+        var findings = Rules.AddFindings([earlier], RunOf("12 AWG", 1, 20), 26, 25)!;
+        Assert.Equal([FindingKind.BranchDrop, FindingKind.Ampacity], findings.Select(f => f.Kind));
+    }
+
+    // The run of a one-circuit project, copper, of the given size, sets and device.
+    private static NetworkRun RunOf(string size, int sets, double? ocpdA)
+    {
+        var ocpd = ocpdA is { } a ? FormattableString.Invariant($", ocpd: {a}") : "";
+        var yaml = SolverHarness.OneCircuit("120/240", "imperial",
+            $"{{ id: \"1\", poles: 1, load: {{ amps: 10 }}, run: {{ length: 10, size: {size}, sets: {sets}{ocpd} }} }}");
+        return NetworkBuilder.Build(ProjectLoader.Parse(yaml, "test.yaml")).NodeArray[^1].Incoming!;
+    }
+}
