@@ -1,6 +1,5 @@
 using DistTree.Generating;
 using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Solving;
 
 namespace DistTree.Tests.Solving;
@@ -13,11 +12,11 @@ public sealed class SolutionTests
 {
     // The invented demo building: feeders, branch circuits and five transformers.
     private static readonly Lazy<Solution> Demo = new(() =>
-        DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Load(Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml")))));
+        Analysis.Run(Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml")).Solution);
 
     // Invented generated data (disttree generate), large enough to hold every kind of node many times.
     private static readonly Lazy<Solution> Generated = new(() =>
-        DropSolver.Standard.Solve(NetworkBuilder.Build(ProjectLoader.Parse(ProjectGenerator.Generate(5_000, 4, 3), "generated.yaml"))));
+        Analysis.Parse(ProjectGenerator.Generate(5_000, 4, 3), "generated.yaml").Solution);
 
     public static TheoryData<string> Solutions => new() { "demo", "generated" };
 
