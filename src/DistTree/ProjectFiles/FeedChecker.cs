@@ -40,11 +40,11 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             if (project.Service is { } service && service.Id == id)
             {
-                bag.Error(draft.IdLocation, $"duplicate id '{id}': it is the service's id ({Where(service.Location, draft.IdLocation)})");
+                bag.Error(draft.IdLocation, ProjectMessages.ServiceIdTaken(id, Where(service.Location, draft.IdLocation)));
             }
             else if (byId.TryGetValue(id, out var first))
             {
-                bag.Error(draft.IdLocation, $"duplicate equipment id '{id}' (first given at {Where(first.IdLocation, draft.IdLocation)})");
+                bag.Error(draft.IdLocation, ProjectMessages.DuplicateEquipment(id, Where(first.IdLocation, draft.IdLocation)));
             }
             else
             {
@@ -77,9 +77,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             if (draft.From is { } from && draft.Id is { } id && from != serviceId && !byId.ContainsKey(from))
             {
-                var near = Suggestions.Closest(from, known);
-                var hint = near is null ? "" : $"; did you mean '{near}'?";
-                bag.Error(draft.FromLocation, $"'{id}' is fed from '{from}', which is not defined{hint}");
+                bag.Error(draft.FromLocation, ProjectMessages.UndefinedSource(id, from, Suggestions.Closest(from, known)));
             }
         }
     }
@@ -123,7 +121,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
     {
         if (draft.Kind == EquipmentKind.Transformer && draft.Primary is { } primary && !ReferenceEquals(primary, system) && primary.Name != system.Name)
         {
-            bag.Error(draft.PrimaryLocation, $"the primary of '{draft.Id}' is {primary.Name}, but it is fed from '{sourceId}', which gives {system.Name}");
+            bag.Error(draft.PrimaryLocation, ProjectMessages.PrimaryMismatch(draft.Id, primary, sourceId, system));
         }
 
         if (draft.OutputSystem is not { } panelSystem)
@@ -135,8 +133,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         {
             if (circuit.Poles is { } p && panelSystem.CircuitFor(p) is not null && circuit.StatedPhases is { } phases && !PhaseRules.Fits(phases, p, PhaseRules.Lines(panelSystem)))
             {
-                var lines = PhaseRules.Lines(panelSystem) switch { 3 => "A, B and C", 2 => "A and B", _ => "one line, A" };
-                bag.Error(circuit.PhaseLocation, $"circuit '{draft.Id}/{circuit.Id}' has {p} pole{(p == 1 ? "" : "s")} and cannot be on {PhaseRules.Text(phases)}; '{draft.Id}' is on {panelSystem.Name}, with {lines}");
+                bag.Error(circuit.PhaseLocation, ProjectMessages.PhasesDoNotFit(draft.Id, circuit.Id, p, phases, panelSystem));
             }
 
             if (circuit.Poles is not { } poles || panelSystem.CircuitFor(poles) is not null)
@@ -145,13 +142,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
             }
 
             var name = circuit.Id is null ? $"the circuit at line {circuit.Location.Line}" : $"circuit '{draft.Id}/{circuit.Id}'";
-            var why = poles switch
-            {
-                1 => $"has 1 pole, which needs a neutral; '{draft.Id}' is on {panelSystem.Name}, which has none",
-                2 => $"has 2 poles, which need two lines; '{draft.Id}' is on {panelSystem.Name}, which has one line and a neutral",
-                _ => $"has 3 poles, which need a three-phase system; '{draft.Id}' is on {panelSystem.Name}, which is single-phase",
-            };
-            bag.Error(circuit.PolesLocation, $"{name} {why}");
+            bag.Error(circuit.PolesLocation, ProjectMessages.PolesNotGiven(name, poles, draft.Id, panelSystem));
         }
     }
 
@@ -206,7 +197,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             // Everything on the walk before the cycle leads into it: not reached from the service.
             cycleOf[member] = entry;
-            bag.Error(member.FromLocation, $"'{member.Id}' is not reached from the service '{serviceId}': following 'from' leads into the feed cycle at '{entry.Id}'");
+            bag.Error(member.FromLocation, ProjectMessages.LeadsIntoCycle(member.Id, serviceId, entry.Id));
         };
         search.Compute();
     }
@@ -219,11 +210,10 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         var ordered = cycle.Skip(start).Concat(cycle.Take(start)).ToList();
         if (ordered.Count == 1)
         {
-            bag.Error(first.FromLocation, $"'{first.Id}' is fed from itself: a feed cycle that the service does not reach");
+            bag.Error(first.FromLocation, ProjectMessages.FedFromItself(first.Id));
             return;
         }
 
-        var chain = string.Join(", which is fed from ", ordered.Skip(1).Append(first).Select(d => $"'{d.Id}'"));
-        bag.Error(first.FromLocation, $"feed cycle: '{first.Id}' is fed from {chain}; the service reaches none of them");
+        bag.Error(first.FromLocation, ProjectMessages.FeedCycle(first.Id, ordered.Skip(1).Append(first).Select(d => d.Id)));
     }
 }

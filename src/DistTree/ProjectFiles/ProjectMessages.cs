@@ -5,9 +5,10 @@ namespace DistTree.ProjectFiles;
 
 /// <summary>
 /// The loader's diagnostic messages, each made by a named factory, so that every text a user reads about a
-/// project file is found in one place (the tree checks' messages are still in <see cref="FeedChecker"/>). This
-/// file holds the messages about files, the YAML, keys and values; <c>ProjectMessages.Sections.cs</c> those about
-/// what a section says. The bad-file corpus (<c>tests/DistTree.Tests/Cases/bad</c>) pins the texts.
+/// project file is found in one place. This file holds the messages about files, the YAML, keys and values;
+/// <c>ProjectMessages.Sections.cs</c> those about what a section says; <c>ProjectMessages.Tree.cs</c> the tree
+/// checks' (ids, sources, systems, poles, feed cycles). The bad-file corpus (<c>tests/DistTree.Tests/Cases/bad</c>)
+/// pins the texts.
 /// </summary>
 internal static partial class ProjectMessages
 {

@@ -73,4 +73,27 @@ public sealed class ProjectMessagesTests
         var found = new SourceSequence("a.yaml", 1, 1);
         Assert.Equal("'rules' must be a mapping of keys; found a sequence", ProjectMessages.NotAMapping("'rules'", found));
     }
+
+    [Fact]
+    public void FeedCycle_ThreeMembers_FollowsFromBackToTheFirst()
+    {
+        Assert.Equal(
+            "feed cycle: 'P1' is fed from 'P2', which is fed from 'P3', which is fed from 'P1'; the service reaches none of them",
+            ProjectMessages.FeedCycle("P1", ["P2", "P3", "P1"]));
+    }
+
+    [Fact]
+    public void UndefinedSource_WithNearId_AsksDidYouMean()
+    {
+        Assert.Equal("'LP2' is fed from 'MSB9', which is not defined; did you mean 'MSB'?", ProjectMessages.UndefinedSource("LP2", "MSB9", "MSB"));
+        Assert.Equal("'LP2' is fed from 'X', which is not defined", ProjectMessages.UndefinedSource("LP2", "X", null));
+    }
+
+    [Theory]
+    [InlineData(1, "480D", "circuit 'LP1/4' has 1 pole, which needs a neutral; 'LP1' is on 480D, which has none")]
+    [InlineData(3, "120/240", "circuit 'LP1/4' has 3 poles, which need a three-phase system; 'LP1' is on 120/240, which is single-phase")]
+    public void PolesNotGiven_ByPoles_SaysWhatTheSystemLacks(int poles, string system, string expected)
+    {
+        Assert.Equal(expected, ProjectMessages.PolesNotGiven("circuit 'LP1/4'", poles, "LP1", DistTree.Model.ElectricalSystem.Find(system)!));
+    }
 }
