@@ -185,7 +185,11 @@ try
         Demo(results, savings, htmlBytes);
     }
 
-    Summarise(results, solveRunsPerSecond, savings, htmlBytes);
+    if (results.Count > 0)
+    {
+        Summarise(results, solveRunsPerSecond, savings, htmlBytes);
+    }
+
     foreach (var line in freshAnalyze.Concat(panelWidth))
     {
         Console.WriteLine(line);
