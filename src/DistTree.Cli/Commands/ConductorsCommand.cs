@@ -13,10 +13,10 @@ internal static class ConductorsCommand
 
     public static Command Create(CliContext context)
     {
-        var material = new Option<string>("--material") { Description = "cu or al", DefaultValueFactory = _ => "cu" };
+        var material = new Option<string>("--material") { Description = Words.Listed(Words.Material, "or"), DefaultValueFactory = _ => Words.Material.Of(Material.Copper) };
         material.AcceptOnlyFromAmong([.. Words.Material.Words]);
         var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
-        var raceway = new Option<string>("--raceway") { Description = "pvc, aluminum or steel", DefaultValueFactory = _ => "pvc" };
+        var raceway = new Option<string>("--raceway") { Description = Words.Listed(Words.Raceway, "or"), DefaultValueFactory = _ => Words.Raceway.Of(Raceway.Pvc) };
         raceway.AcceptOnlyFromAmong([.. Words.Raceway.Words]);
         var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
         var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };

@@ -3,6 +3,7 @@ using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
 using DistTree.Solving.Passes;
+using DistTree.Vocabulary;
 
 namespace DistTree.Sizing;
 
@@ -223,7 +224,7 @@ internal sealed class SizingProblem
 
     private static string UnfixableRun(RunResult row, NetworkRun run, RunOption[] all)
     {
-        var what = row.Kind == RunResultKind.Branch ? "branch circuit" : "feeder";
+        var what = Words.Noun(run.Kind);
         if (run.Conductors.Fixed)
         {
             return $"{what} {row.Id}: pinned (fixed: true) and over its limits at {row.Size}; unpin it, shorten it, or move the load";

@@ -112,7 +112,7 @@ public sealed class ProtectionRules
     internal List<Finding>? AddFindings(List<Finding>? findings, NetworkRun run, double designCurrentA, double? ampacityA)
     {
         var conductors = run.Conductors;
-        var what = run.Kind == RunKind.Branch ? "branch circuit" : "feeder";
+        var what = Words.Noun(run.Kind);
         var size = conductors.Size.Text;
         var sets = conductors.Sets;
         if (ampacityA is { } ampacity)

@@ -73,6 +73,25 @@ public static class Words
             ("newly_passing", StatusChange.NewlyPassing), ("findings_changed", StatusChange.FindingsChanged),
         ]);
 
+    /// <summary>What a run is called in a sentence for people: <c>feeder</c> or <c>branch circuit</c>.</summary>
+    public static string Noun(Network.RunKind kind) => kind switch
+    {
+        Network.RunKind.Feeder => "feeder",
+        Network.RunKind.Branch => "branch circuit",
+    };
+
+    /// <summary>
+    /// The words of <paramref name="table"/> as a sentence lists them: <c>cu or al</c>, <c>pvc, aluminum or steel</c>
+    /// (<paramref name="conjunction"/> before the last).
+    /// </summary>
+    public static string Listed<T>(WordTable<T> table, string conjunction)
+        where T : struct, Enum
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        var words = table.Words;
+        return words.Count == 1 ? words[0] : $"{string.Join(", ", words.Take(words.Count - 1))} {conjunction} {words[^1]}";
+    }
+
     /// <summary>The <c>conductor_temperature</c> value of <paramref name="rules"/> as a project file writes it: a word, or the fixed temperature in °C.</summary>
     public static string TemperatureOf(Rules rules) => rules.Temperature == TemperatureMode.Fixed
         ? (rules.FixedTemperatureC ?? 0).ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)

@@ -101,6 +101,21 @@ public sealed class WordsTests
         Assert.Equal("62.5", Words.TemperatureOf(rules));
     }
 
+    [Theory]
+    [InlineData(DistTree.Network.RunKind.Feeder, "feeder")]
+    [InlineData(DistTree.Network.RunKind.Branch, "branch circuit")]
+    public void Noun_EveryRunKind_IsTheTradesName(DistTree.Network.RunKind kind, string expected)
+    {
+        Assert.Equal(expected, Words.Noun(kind));
+    }
+
+    [Fact]
+    public void Listed_TwoAndThreeWords_JoinsTheLastWithTheConjunction()
+    {
+        Assert.Equal("cu or al", Words.Listed(Words.Material, "or"));
+        Assert.Equal("pvc, aluminum or steel", Words.Listed(Words.Raceway, "or"));
+    }
+
     [Fact]
     public void MetresPerFoot_IsTheInternationalFoot()
     {

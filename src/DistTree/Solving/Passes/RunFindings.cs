@@ -1,4 +1,5 @@
 using DistTree.Network;
+using DistTree.Vocabulary;
 
 namespace DistTree.Solving.Passes;
 
@@ -15,7 +16,7 @@ internal static class RunFindings
         List<Finding>? findings = null;
         var conductors = run.Conductors;
         var branch = run.Kind == RunKind.Branch;
-        var what = branch ? "branch circuit" : "feeder";
+        var what = Words.Noun(run.Kind);
         var size = conductors.Size.Text;
         var limit = run.LimitPercent;
         if (r.DropPercent > limit + 1e-9)
