@@ -26,7 +26,7 @@ public enum TransformerDropMode
 /// <summary>How the conductor temperature used for resistance is chosen.</summary>
 public enum TemperatureMode
 {
-    /// <summary>From loading: T = Ta + (Tr − Ta)·(I/Iz)², clamped to [Ta, Tr].</summary>
+    /// <summary>From loading: T = Ta + (Tr − Ta)·(I/Iz)², never below Ta, above Tr past the ampacity.</summary>
     Estimated,
 
     /// <summary>The insulation's rated temperature.</summary>

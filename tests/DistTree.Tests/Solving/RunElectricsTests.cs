@@ -60,4 +60,20 @@ public sealed class RunElectricsTests
         Assert.True(rated.ResistanceOhmPerKm > idle.ResistanceOhmPerKm);
         Assert.Equal(Catalog.AcResistanceOhmPerKm(size, Material.Copper, Raceway.Pvc, 75, 60), rated.ResistanceOhmPerKm);
     }
+
+    // Past its ampacity the conductor runs hotter than its rating (issue 17): 30 A on 12 AWG copper, 75 °C, 25 A
+    // (NEC Table 310.16, REFERENCES.md, read) is 120 % of the ampacity, so T = 30 + 45 · 1.2² = 94.8 °C, and its
+    // resistance is the catalogue's at 94.8 °C, about 6 % above the rated figure (copper, α20 = 0.00393 /°C).
+    [Fact]
+    public void Compute_PastTheAmpacity_TemperatureAndResistanceAboveTheRating()
+    {
+        var run = TwelveAwgCopper(75);
+        var size = ConductorSize.Parse("12 AWG");
+
+        var overloaded = RunElectrics.Compute(Catalog, new Rules { AmbientC = 30 }, run, size, 1, 60, 30);
+
+        Assert.Equal(94.8, overloaded.TemperatureC, 9);
+        Assert.Equal(Catalog.AcResistanceOhmPerKm(size, Material.Copper, Raceway.Pvc, 94.8, 60), overloaded.ResistanceOhmPerKm, 12);
+        Assert.InRange(overloaded.ResistanceOhmPerKm / Catalog.AcResistanceOhmPerKm(size, Material.Copper, Raceway.Pvc, 75, 60), 1.06, 1.07);
+    }
 }
