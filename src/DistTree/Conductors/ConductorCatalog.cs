@@ -73,7 +73,7 @@ public sealed class ConductorCatalog
     /// <summary>
     /// AC resistance at <paramref name="temperatureC"/>, ohm/km per conductor: DC resistance × (1 + ys + yp)
     /// (IEC 60287-1-1, conductors touching in a triangle) × the raceway's extra loss (NEC Chapter 9
-    /// Table 9's steel-to-PVC ratio; aluminium conduit takes the steel ratio as an upper bound).
+    /// Table 9's steel-to-PVC or aluminium-conduit-to-PVC ratio; PVC takes none).
     /// </summary>
     public double AcResistanceOhmPerKm(ConductorSize size, Material material, Raceway raceway, double temperatureC, double frequencyHz)
     {
@@ -101,7 +101,13 @@ public sealed class ConductorCatalog
         var rdc = ConductorPhysics.AtTemperature(material == Material.Copper ? row.Rdc20CuOhmPerKm : row.Rdc20AlOhmPerKm, material, temperatureC);
         var dc = row.StrandedDiameterMm;
         var acOverDc = ConductorPhysics.AcOverDc(rdc, frequencyHz, dc, row.AxialSpacingMm);
-        var racewayFactor = raceway == Raceway.Pvc ? 1.0 : (material == Material.Copper ? row.SteelRatioCu : row.SteelRatioAl);
+        var copper = material == Material.Copper;
+        var racewayFactor = raceway switch
+        {
+            Raceway.Pvc => 1.0,
+            Raceway.Steel => copper ? row.SteelRatioCu : row.SteelRatioAl,
+            Raceway.Aluminum => copper ? row.AluminumRatioCu : row.AluminumRatioAl,
+        };
         return rdc * acOverDc * racewayFactor;
     }
 
@@ -221,14 +227,16 @@ public sealed class ConductorCatalog
     }
 
     // Fills blank reactance cells by log-area interpolation between neighbours of the same series (held
-    // beyond the last), and turns the Table 9 resistance pairs into steel ratios (1 below the first pair,
-    // interpolated between pairs, held above the last; metric sizes interpolate at equal area).
+    // beyond the last), and turns the Table 9 resistance pairs into steel and aluminium-conduit ratios (1 below
+    // the first pair, interpolated between pairs, held above the last; metric sizes interpolate at equal area).
     private static CatalogRow?[] Interpolate(RawRow?[] raw)
     {
         var rows = new CatalogRow?[raw.Length];
         var northAmerican = ConductorSize.InSeries(SizeSeries.NorthAmerican).Where(s => raw[s.Index] is not null).ToArray();
         var cuPairs = Points(northAmerican, raw, r => r.RsteelCu / r.RpvcCu);
         var alPairs = Points(northAmerican, raw, r => r.RsteelAl / r.RpvcAl);
+        var cuInAluminum = Points(northAmerican, raw, r => r.RalCu / r.RpvcCu);
+        var alInAluminum = Points(northAmerican, raw, r => r.RalAl / r.RpvcAl);
         foreach (var series in new[] { SizeSeries.NorthAmerican, SizeSeries.Metric })
         {
             var present = ConductorSize.InSeries(series).Where(s => raw[s.Index] is not null).ToArray();
@@ -244,6 +252,8 @@ public sealed class ConductorCatalog
                     ToOhmPerKm(r.XSteel ?? LogInterpolate(xSteel, size.AreaMm2, belowFirst: null), r.PerKft),
                     LogInterpolate(cuPairs, size.AreaMm2, belowFirst: 1.0),
                     LogInterpolate(alPairs, size.AreaMm2, belowFirst: 1.0),
+                    LogInterpolate(cuInAluminum, size.AreaMm2, belowFirst: 1.0),
+                    LogInterpolate(alInAluminum, size.AreaMm2, belowFirst: 1.0),
                     r.R20Cu ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, Material.Copper),
                     r.R20Al ?? ConductorPhysics.DcResistance20OhmPerKm(size.AreaMm2, Material.Aluminum),
                     r.R20Cu is not null,
@@ -301,13 +311,14 @@ public sealed class ConductorCatalog
 
     internal sealed record RawRow(
         bool PerKft, double? XPvc, double? XSteel, double? RpvcCu, double? RsteelCu, double? RpvcAl, double? RsteelAl,
-        double? R20Cu, double? R20Al, double? Cu60, double? Cu75, double? Cu90, double? Al60, double? Al75, double? Al90,
+        double? RalCu, double? RalAl, double? R20Cu, double? R20Al, double? Cu60, double? Cu75, double? Cu90, double? Al60, double? Al75, double? Al90,
         double InsulationMm, double? OcpdCu, double? OcpdAl);
 
     // Per size, the figures that do not depend on a run: reactances in ohm/km at the data's frequency, 20 °C
     // resistances (tabulated or from the area), the stranded diameter and the axial spacing of touching conductors.
     private sealed record CatalogRow(
-        bool PerKft, double XPvcOhmPerKm, double XSteelOhmPerKm, double SteelRatioCu, double SteelRatioAl, double Rdc20CuOhmPerKm, double Rdc20AlOhmPerKm,
+        bool PerKft, double XPvcOhmPerKm, double XSteelOhmPerKm, double SteelRatioCu, double SteelRatioAl, double AluminumRatioCu, double AluminumRatioAl,
+        double Rdc20CuOhmPerKm, double Rdc20AlOhmPerKm,
         bool R20CuTabulated, bool R20AlTabulated, double?[] AmpacityCu, double?[] AmpacityAl, double StrandedDiameterMm, double AxialSpacingMm,
         double? MaxOcpdCuA, double? MaxOcpdAlA);
 
@@ -315,9 +326,12 @@ public sealed class ConductorCatalog
     {
         private static readonly string[] Columns =
         [
-            "size", "per", "x_pvc", "x_steel", "rpvc_cu", "rsteel_cu", "rpvc_al", "rsteel_al", "r20_cu", "r20_al",
+            "size", "per", "x_pvc", "x_steel", "rpvc_cu", "rsteel_cu", "rpvc_al", "rsteel_al", "ral_cu", "ral_al", "r20_cu", "r20_al",
             "cu60", "cu75", "cu90", "al60", "al75", "al90", "ins_mm", "ocpd_cu", "ocpd_al",
         ];
+
+        // The earlier layout, before the aluminium-conduit columns: refused with a hint, not read with a guess.
+        private static readonly string[] EarlierColumns = [.. Columns.Where(c => c is not ("ral_cu" or "ral_al"))];
 
         public static ConductorCatalog Read(TextReader reader, string sourceName, Func<IReadOnlyList<string>, RawRow?[], ConductorCatalog> make)
         {
@@ -344,7 +358,10 @@ public sealed class ConductorCatalog
                 {
                     if (!cells.SequenceEqual(Columns))
                     {
-                        throw new FormatException($"{sourceName}:{lineNumber}: expected the columns {string.Join(", ", Columns)}");
+                        var hint = cells.SequenceEqual(EarlierColumns)
+                            ? "; this is the earlier layout: add the aluminium-conduit columns ral_cu and ral_al after rsteel_al (see the embedded catalogue's header)"
+                            : "";
+                        throw new FormatException($"{sourceName}:{lineNumber}: expected the columns {string.Join(", ", Columns)}{hint}");
                     }
 
                     sawColumns = true;
@@ -388,8 +405,8 @@ public sealed class ConductorCatalog
                 _ => throw new FormatException($"{sourceName}:{lineNumber}: column per: expected kft or km, found '{c[1]}'"),
             };
             return new RawRow(
-                perKft, N(2), N(3), N(4), N(5), N(6), N(7), N(8), N(9), N(10), N(11), N(12), N(13), N(14), N(15),
-                N(16) ?? throw new FormatException($"{sourceName}:{lineNumber}: column ins_mm is required"), N(17), N(18));
+                perKft, N(2), N(3), N(4), N(5), N(6), N(7), N(8), N(9), N(10), N(11), N(12), N(13), N(14), N(15), N(16), N(17),
+                N(18) ?? throw new FormatException($"{sourceName}:{lineNumber}: column ins_mm is required"), N(19), N(20));
         }
     }
 }
