@@ -30,6 +30,26 @@ public sealed class ConductorsCommandTests
     }
 
     [Fact]
+    public void Conductors_AluminumRaceway_GivesTheAluminumConduitColumn()
+    {
+        static double Rac1000(string raceway)
+        {
+            var result = CliRunner.Run("conductors", "--raceway", raceway, "--json");
+            Assert.Equal(0, result.ExitCode);
+            using var doc = JsonDocument.Parse(result.Out);
+            return doc.RootElement.GetProperty("conductors").EnumerateArray()
+                .Single(r => r.GetProperty("size").GetString() == "1000 kcmil").GetProperty("resistance_ac_ohm_per_km").GetDouble();
+        }
+
+        var aluminum = Rac1000("aluminum");
+
+        // NEC Chapter 9 Table 9: copper, 1000 kcmil, aluminium conduit 0.019 ohm/kft (REFERENCES.md, memory: verify
+        // before relying), above steel conduit's 0.018 (read).
+        Assert.InRange(aluminum * 0.3048, 0.019 * 0.95, 0.019 * 1.05);
+        Assert.True(aluminum > Rac1000("steel"));
+    }
+
+    [Fact]
     public void Conductors_UnknownMaterial_ExitsTwo()
     {
         var result = CliRunner.Run("conductors", "--material", "gold");
