@@ -74,6 +74,9 @@ internal static partial class ProjectMessages
     public static string InvalidYaml(string detail) =>
         detail.Length == 0 ? "the YAML cannot be read here" : "invalid YAML: " + char.ToLowerInvariant(detail[0]) + detail[1..];
 
+    /// <summary>A "\U" escape whose code is no Unicode character (0x80000000 or more), in YamlDotNet's own words for the smaller ones.</summary>
+    public static string InvalidEscape() => InvalidYaml("while scanning a quoted scalar, found invalid Unicode character escape code.");
+
     /// <summary>YamlDotNet stopped without a position of its own.</summary>
     public static string UnclosedFlow() => "invalid YAML after this point: an unclosed '[', '{' or quote?";
 

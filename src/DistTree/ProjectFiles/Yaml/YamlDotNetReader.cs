@@ -36,6 +36,12 @@ internal static partial class YamlDotNetReader
             bag.Error(At(file, e.Start), ProjectMessages.InvalidYaml(MarkPrefix().Replace(e.Message, "").Trim()));
             return null;
         }
+        catch (ArgumentOutOfRangeException) when (HugeEscape(text, file) is { } escape)
+        {
+            // YamlDotNet reads "\U80000000" and above as a negative code and throws without a mark.
+            bag.Error(escape, ProjectMessages.InvalidEscape());
+            return null;
+        }
         catch (InvalidOperationException)
         {
             // YamlDotNet's scanner throws this (without a mark) for some unclosed flow collections.
@@ -74,6 +80,41 @@ internal static partial class YamlDotNetReader
 
             line++;
             start = end + 1;
+        }
+
+        return null;
+    }
+
+    /// <summary>
+    /// The opening quote of the first double-quoted scalar holding a "\U" escape of 0x80000000 or more (a backslash
+    /// preceded by an even number of backslashes), or null when there is none.
+    /// </summary>
+    private static SourceLocation? HugeEscape(string text, string file)
+    {
+        for (var at = text.IndexOf("\\U", StringComparison.Ordinal); at >= 0; at = text.IndexOf("\\U", at + 1, StringComparison.Ordinal))
+        {
+            var backslashes = 0;
+            while (at - backslashes - 1 >= 0 && text[at - backslashes - 1] == '\\')
+            {
+                backslashes++;
+            }
+
+            if (backslashes % 2 == 1 || at + 10 > text.Length
+                || !uint.TryParse(text.AsSpan(at + 2, 8), System.Globalization.NumberStyles.AllowHexSpecifier, System.Globalization.CultureInfo.InvariantCulture, out var code)
+                || code < 0x80000000)
+            {
+                continue;
+            }
+
+            var lineStart = text.LastIndexOf('\n', at) + 1;
+            var quote = at;
+            while (quote > lineStart && !(text[quote] == '"' && text[quote - 1] != '\\'))
+            {
+                quote--;
+            }
+
+            var line = 1 + text.AsSpan(0, lineStart).Count('\n');
+            return new SourceLocation(file, line, quote - lineStart + 1);
         }
 
         return null;
