@@ -101,7 +101,12 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(full);
+            (bytes, var size) = ProjectLoader.ReadBounded(full);
+            if (size > ProjectLimits.MaxFileBytes)
+            {
+                bag.Error(entry.Location, ProjectMessages.IncludeTooLarge(shown, size));
+                return null;
+            }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

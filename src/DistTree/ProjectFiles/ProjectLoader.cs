@@ -23,16 +23,10 @@ public static class ProjectLoader
     /// <exception cref="IOException">The file cannot be read.</exception>
     public static Project Load(string path)
     {
-        var size = new FileInfo(path).Length;
+        var (bytes, size) = ReadBounded(path);
         if (size > ProjectLimits.MaxFileBytes)
         {
             throw TooLarge(path, size, "bytes");
-        }
-
-        var bytes = File.ReadAllBytes(path);
-        if (bytes.Length > ProjectLimits.MaxFileBytes)
-        {
-            throw TooLarge(path, bytes.Length, "bytes");
         }
 
         string text;
@@ -170,6 +164,58 @@ public static class ProjectLoader
     // in the order read (the main file, then depth first in list order), so a change to any file changes it.
     private static string Sha256Of(List<byte[]> hashes) =>
         Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
+
+    /// <summary>
+    /// The bytes of the regular file at <paramref name="path"/>, read in one bounded stream: at most
+    /// <see cref="ProjectLimits.MaxFileBytes"/> + 1 bytes, so a device or a file growing without end cannot exhaust
+    /// memory. <c>Size</c> is the file's size in bytes; over the limit, <c>Bytes</c> is empty (the file is not read,
+    /// or not kept).
+    /// </summary>
+    /// <exception cref="IOException">The path is a folder, a device or a pipe, or cannot be read.</exception>
+    internal static (byte[] Bytes, long Size) ReadBounded(string path)
+    {
+        if (Directory.Exists(path))
+        {
+            throw new IOException(ProjectMessages.IsAFolder());
+        }
+
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, 1, FileOptions.SequentialScan);
+        if (!stream.CanSeek)
+        {
+            throw new IOException(ProjectMessages.NotARegularFile());
+        }
+
+        var stated = stream.Length;
+        if (stated > ProjectLimits.MaxFileBytes)
+        {
+            return ([], stated);
+        }
+
+        // A device (/dev/zero) states no size and never ends: reading one byte more than stated tells it apart.
+        var bytes = new byte[stated + 1];
+        var read = stream.ReadAtLeast(bytes, bytes.Length, throwOnEndOfStream: false);
+        if (read > stated)
+        {
+            if (stated == 0)
+            {
+                throw new IOException(ProjectMessages.NotARegularFile());
+            }
+
+            using var rest = new MemoryStream();
+            rest.Write(bytes, 0, read);
+            var more = new byte[81920];
+            int chunk;
+            while (rest.Length <= ProjectLimits.MaxFileBytes && (chunk = stream.Read(more, 0, (int)Math.Min(more.Length, ProjectLimits.MaxFileBytes + 1 - rest.Length))) > 0)
+            {
+                rest.Write(more, 0, chunk);
+            }
+
+            return rest.Length > ProjectLimits.MaxFileBytes ? ([], rest.Length) : (rest.ToArray(), rest.Length);
+        }
+
+        Array.Resize(ref bytes, read);
+        return (bytes, read);
+    }
 
     private static ProjectException TooLarge(string file, long size, string unit) =>
         ProjectException.At(new SourceLocation(file, 1, 1), ProjectMessages.TooLarge(size, unit));

@@ -56,6 +56,17 @@ internal static partial class ProjectMessages
     /// <summary>An included file that cannot be read, and why.</summary>
     public static string CannotReadInclude(string shown, string why) => $"cannot read the included file '{shown}': {why}";
 
+    /// <summary>Why a folder named as a file cannot be read.</summary>
+    public static string IsAFolder() => "it is a folder, not a file";
+
+    /// <summary>Why a device, a pipe or a socket named as a file is not read.</summary>
+    public static string NotARegularFile() => "it is not a regular file (a device or a pipe?); a project file is read from a regular file";
+
+    /// <summary>An included file over <see cref="ProjectLimits.MaxFileBytes"/>.</summary>
+    public static string IncludeTooLarge(string shown, long size) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"the included file '{shown}' has {size:N0} bytes; a project file may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)");
+
     /// <summary>A second YAML document in one file.</summary>
     public static string SecondDocument() => "a project file holds one YAML document; a second one starts here";
 

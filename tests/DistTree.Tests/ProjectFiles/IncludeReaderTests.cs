@@ -147,6 +147,38 @@ public sealed class IncludeReaderTests : IDisposable
         Assert.Contains($"first given at {main}:7", error.Message, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Load_IncludeLinkedToDevZero_RefusedAsNotARegularFileWithoutReadingIt()
+    {
+        var main = Write("main.yaml", Main);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "b"));
+        File.CreateSymbolicLink(Path.Combine(_folder.FullName, "b", "one.yaml"), "/dev/zero");
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal((main, 5, 5), (error.Location.File, error.Location.Line, error.Location.Column));
+        Assert.EndsWith("it is not a regular file (a device or a pipe?); a project file is read from a regular file", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Load_MainFileDevZero_IOExceptionNotARegularFile()
+    {
+        var e = Assert.Throws<IOException>(() => ProjectLoader.Load("/dev/zero"));
+
+        Assert.StartsWith("it is not a regular file", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Load_IncludeIsAFolder_SaysItIsAFolder()
+    {
+        var main = Write("main.yaml", Main);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "b", "one.yaml"));
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal("cannot read the included file 'b/one.yaml': it is a folder, not a file", error.Message.Replace(_folder.FullName + "/", "", StringComparison.Ordinal));
+    }
+
     private string Write(string relative, string text)
     {
         var path = Path.Combine(_folder.FullName, relative);
