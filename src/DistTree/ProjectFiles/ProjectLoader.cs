@@ -223,13 +223,20 @@ public static class ProjectLoader
     /// <summary>The error for bytes that are not UTF-8, located at the first bad byte: its line, and its column counted in characters.</summary>
     private static ProjectException NotUtf8(string file, byte[] bytes)
     {
+        var (location, message) = Utf8Error(file, bytes);
+        return ProjectException.At(location, message);
+    }
+
+    /// <summary>Where bytes that are not UTF-8 first fail to decode (line, and column in characters) and the message saying so, with the byte's offset.</summary>
+    internal static (SourceLocation Location, string Message) Utf8Error(string file, byte[] bytes)
+    {
         var chars = new char[bytes.Length];
         System.Text.Unicode.Utf8.ToUtf16(bytes, chars, out var offset, out _, replaceInvalidSequences: false);
         var lineStart = Array.LastIndexOf(bytes, (byte)'\n', Math.Max(offset - 1, 0)) + 1;
         var line = 1 + bytes.AsSpan(0, lineStart).Count((byte)'\n');
         var column = 1 + StrictUtf8.GetCharCount(bytes, lineStart, offset - lineStart);
         var hint = bytes is [0xFF, 0xFE, ..] or [0xFE, 0xFF, ..] ? " (it looks like UTF-16)" : "";
-        return ProjectException.At(new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
+        return (new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
     }
 
     private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));

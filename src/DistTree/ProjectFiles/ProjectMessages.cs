@@ -22,9 +22,6 @@ internal static partial class ProjectMessages
         CultureInfo.InvariantCulture,
         $"the file is not UTF-8 text{hint}: the byte 0x{value:X2} at offset {offset:N0} does not decode; save the file as UTF-8");
 
-    /// <summary>An included file that is not UTF-8.</summary>
-    public static string IncludedNotUtf8() => "the file is not UTF-8 text";
-
     /// <summary>A main file with no document, or an empty one.</summary>
     public static string NoProject() => "the file holds no project; it starts with 'disttree: 1' (see docs/project-file.md)";
 
@@ -46,6 +43,10 @@ internal static partial class ProjectMessages
     /// <summary>An include path that leaves the main file's folder.</summary>
     public static string IncludeOutside(string path) =>
         $"'{path}' is outside the project's folder; an included file must be in the main file's folder or below it";
+
+    /// <summary>An include whose path stays inside the project's folder but leads, through a symbolic link, outside it.</summary>
+    public static string IncludeLinksOutside(string path) =>
+        $"'{path}' leads through a symbolic link to outside the project's folder; an included file must be in the main file's folder or below it";
 
     /// <summary>A file that includes itself, directly or through others; <paramref name="names"/> are the files of the cycle, quoted.</summary>
     public static string IncludeCycle(IEnumerable<string> names) => $"include cycle: {string.Join(" includes ", names)}";

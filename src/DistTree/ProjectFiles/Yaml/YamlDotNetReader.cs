@@ -20,7 +20,7 @@ internal static partial class YamlDotNetReader
     /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
     public static SourceNode? Read(string text, string file, DiagnosticBag bag)
     {
-        var events = new EventReader(file, bag);
+        var events = new EventReader(text, file, bag);
         try
         {
             return events.ReadAll(new Parser(new StringReader(text)));
@@ -120,8 +120,9 @@ internal static partial class YamlDotNetReader
         return null;
     }
 
-    private static SourceScalar MakeScalar(Scalar scalar, string file, DiagnosticBag bag)
+    private static SourceScalar MakeScalar(Scalar scalar, string text, string file, DiagnosticBag bag)
     {
+        var firstLine = FirstLineLength(scalar, text);
         var location = At(file, scalar.Start);
         var plain = scalar.Style == ScalarStyle.Plain;
         if (scalar.Value.Length > ProjectLimits.MaxScalarLength)
@@ -139,11 +140,24 @@ internal static partial class YamlDotNetReader
             else
             {
                 bag.Error(location, ProjectMessages.TagNotSupported(scalar.Tag.Value));
-                return new SourceScalar(location, scalar.Value, plain) { IsInvalid = true };
+                return new SourceScalar(location, scalar.Value, plain) { IsInvalid = true, FirstLineLength = firstLine };
             }
         }
 
-        return new SourceScalar(location, scalar.Value, plain);
+        return new SourceScalar(location, scalar.Value, plain) { FirstLineLength = firstLine };
+    }
+
+    /// <summary>How many characters of a scalar spanning several lines stand on its first line (its quote or indicator not counted); null for one line.</summary>
+    private static int? FirstLineLength(Scalar scalar, string text)
+    {
+        if (scalar.End.Line == scalar.Start.Line || scalar.Start.Index >= text.Length)
+        {
+            return null;
+        }
+
+        var start = (int)scalar.Start.Index + (scalar.Style == ScalarStyle.Plain ? 0 : 1);
+        var end = text.IndexOfAny(['\n', '\r'], Math.Min(start, text.Length));
+        return end < 0 ? null : text.AsSpan(start, end - start).TrimEnd(' ').Length;
     }
 
     private static void CheckTag(NodeEvent node, string file, DiagnosticBag bag)
@@ -159,7 +173,7 @@ internal static partial class YamlDotNetReader
     private static partial Regex MarkPrefix();
 
     /// <summary>Builds the tree from the parser's events; the parser's exceptions are left to the caller.</summary>
-    private sealed class EventReader(string file, DiagnosticBag bag)
+    private sealed class EventReader(string text, string file, DiagnosticBag bag)
     {
         private readonly Stack<Frame> _stack = new();
 
@@ -188,7 +202,7 @@ internal static partial class YamlDotNetReader
 
                         continue;
                     case Scalar scalar:
-                        completed = MakeScalar(scalar, file, bag);
+                        completed = MakeScalar(scalar, text, file, bag);
                         break;
                     case SequenceStart or MappingStart when _stack.Count >= ProjectLimits.MaxDepth:
                         bag.Error(At(file, current.Start), ProjectMessages.TooDeep());
