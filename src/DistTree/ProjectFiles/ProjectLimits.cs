@@ -24,6 +24,9 @@ public static class ProjectLimits
     /// </summary>
     public const int MaxEchoedLength = 40;
 
+    /// <summary>How many members of a feed cycle its error names (10); the rest are counted.</summary>
+    public const int MaxCycleNames = 10;
+
     /// <summary>
     /// How many errors, and separately how many warnings, are reported (200 each); the rest are counted
     /// in one closing diagnostic.
