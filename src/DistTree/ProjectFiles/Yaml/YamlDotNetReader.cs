@@ -20,7 +20,8 @@ internal static partial class YamlDotNetReader
     /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
     public static SourceNode? Read(string text, string file, DiagnosticBag bag)
     {
-        var events = new EventReader(text, file, bag);
+        (text, var guard) = LineBreakGuard.Protect(text);
+        var events = new EventReader(text, file, bag, guard);
         try
         {
             return events.ReadAll(new Parser(new StringReader(text)));
@@ -120,15 +121,16 @@ internal static partial class YamlDotNetReader
         return null;
     }
 
-    private static SourceScalar MakeScalar(Scalar scalar, string text, string file, DiagnosticBag bag)
+    private static SourceScalar MakeScalar(Scalar scalar, string text, string file, DiagnosticBag bag, LineBreakGuard? guard)
     {
         var firstLine = FirstLineLength(scalar, text);
+        var value = guard is null ? scalar.Value : guard.Restore(scalar.Value);
         var location = At(file, scalar.Start);
         var plain = scalar.Style == ScalarStyle.Plain;
-        if (scalar.Value.Length > ProjectLimits.MaxScalarLength)
+        if (value.Length > ProjectLimits.MaxScalarLength)
         {
-            bag.Error(location, ProjectMessages.ScalarTooLong(scalar.Value.Length));
-            return new SourceScalar(location, scalar.Value[..16] + "...", plain) { IsInvalid = true };
+            bag.Error(location, ProjectMessages.ScalarTooLong(value.Length));
+            return new SourceScalar(location, value[..16] + "...", plain) { IsInvalid = true };
         }
 
         if (!scalar.Tag.IsEmpty)
@@ -140,11 +142,11 @@ internal static partial class YamlDotNetReader
             else
             {
                 bag.Error(location, ProjectMessages.TagNotSupported(scalar.Tag.Value));
-                return new SourceScalar(location, scalar.Value, plain) { IsInvalid = true, FirstLineLength = firstLine };
+                return new SourceScalar(location, value, plain) { IsInvalid = true, FirstLineLength = firstLine };
             }
         }
 
-        return new SourceScalar(location, scalar.Value, plain) { FirstLineLength = firstLine };
+        return new SourceScalar(location, value, plain) { FirstLineLength = firstLine };
     }
 
     /// <summary>How many characters of a scalar spanning several lines stand on its first line (its quote or indicator not counted); null for one line.</summary>
@@ -173,7 +175,7 @@ internal static partial class YamlDotNetReader
     private static partial Regex MarkPrefix();
 
     /// <summary>Builds the tree from the parser's events; the parser's exceptions are left to the caller.</summary>
-    private sealed class EventReader(string text, string file, DiagnosticBag bag)
+    private sealed class EventReader(string text, string file, DiagnosticBag bag, LineBreakGuard? guard)
     {
         private readonly Stack<Frame> _stack = new();
 
@@ -202,7 +204,7 @@ internal static partial class YamlDotNetReader
 
                         continue;
                     case Scalar scalar:
-                        completed = MakeScalar(scalar, text, file, bag);
+                        completed = MakeScalar(scalar, text, file, bag, guard);
                         break;
                     case SequenceStart or MappingStart when _stack.Count >= ProjectLimits.MaxDepth:
                         bag.Error(At(file, current.Start), ProjectMessages.TooDeep());

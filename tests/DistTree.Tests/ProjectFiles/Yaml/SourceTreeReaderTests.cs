@@ -107,4 +107,37 @@ public sealed class SourceTreeReaderTests
         Assert.Null(SourceTreeComparer.Difference(forced!, fast!));
         Assert.Equal(value, ((SourceScalar)((SourceMapping)fast!).Entries[0].Value).Value);
     }
+
+    [Theory]
+    [InlineData(false, '\u2028')]
+    [InlineData(false, '\u2029')]
+    [InlineData(false, '\u0085')]
+    [InlineData(true, '\u2028')]
+    [InlineData(true, '\u2029')]
+    [InlineData(true, '\u0085')]
+    public void Read_UnicodeLineSeparators_NoLineBreakAndKeptInValues(bool yamlDotNet, char separator)
+    {
+        var text = $"# a comment {separator} with it\nname: A {separator} B\nquoted: \"C {separator} D\"\nlast: *x\n";
+        var bag = new DiagnosticBag();
+
+        var root = (SourceMapping)SourceTreeReader.Read(text, "a.yaml", bag, yamlDotNet ? YamlPath.YamlDotNet : YamlPath.Fast, out _)!;
+
+        Assert.Equal($"A {separator} B", ((SourceScalar)root.Entries[0].Value).Value);
+        Assert.Equal($"C {separator} D", ((SourceScalar)root.Entries[1].Value).Value);
+        Assert.Equal(new SourceLocation("a.yaml", 4, 7), Assert.Single(bag.Sorted()).Location);
+    }
+
+    [Theory]
+    [InlineData('\u2028')]
+    [InlineData('\u0085')]
+    public void Read_UnicodeLineSeparatorsNextToPrivateUseEscapes_SameTreeOnBothPaths(char separator)
+    {
+        var text = $"name: \"{separator} \\uE000 \\U0000E001 \\uE002 \uE003\"\nother: x{separator}y\n";
+        var fast = SourceTreeReader.Read(text, "a.yaml", new DiagnosticBag(), YamlPath.Fast, out var readBy);
+        var forced = SourceTreeReader.Read(text, "a.yaml", new DiagnosticBag(), YamlPath.YamlDotNet, out _);
+
+        Assert.Equal(YamlPath.Fast, readBy);
+        Assert.Null(SourceTreeComparer.Difference(forced!, fast!));
+        Assert.Equal($"{separator} \uE000 \uE001 \uE002 \uE003", ((SourceScalar)((SourceMapping)forced!).Entries[0].Value).Value);
+    }
 }
