@@ -27,8 +27,8 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             return;
         }
 
-        var folder = Path.GetFullPath(Path.GetDirectoryName(mainFile) is { Length: > 0 } d ? d : ".");
-        var mainFull = Path.GetFullPath(mainFile);
+        var folder = RealPath(Path.GetFullPath(Path.GetDirectoryName(mainFile) is { Length: > 0 } d ? d : ".")) ?? "";
+        var mainFull = RealPath(Path.GetFullPath(mainFile)) ?? Path.GetFullPath(mainFile);
         var chain = new List<Frame> { new(mainFile, mainFull, includes) };
         var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal) { [mainFull] = new SourceLocation(mainFile, 1, 1) };
         while (chain.Count > 0)
@@ -86,6 +86,16 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             return null;
         }
 
+        // The path as written stays inside; so must the file it names, every symbolic link on the way followed.
+        var real = RealPath(full);
+        if (real is null || !real.StartsWith(folder + Path.DirectorySeparatorChar, StringComparison.Ordinal))
+        {
+            bag.Error(entry.Location, ProjectMessages.IncludeLinksOutside(entry.Path));
+            return null;
+        }
+
+        full = real;
+
         var shownFolder = Path.GetDirectoryName(from.Shown);
         var shown = Path.GetRelativePath(".", Path.Combine(string.IsNullOrEmpty(shownFolder) ? "." : shownFolder, entry.Path));
         if (Path.IsPathRooted(from.Shown))
@@ -96,12 +106,71 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         return (shown.Replace('\\', '/'), full);
     }
 
+    /// <summary>
+    /// <paramref name="full"/> (an absolute path) with every symbolic link on it followed, component by component,
+    /// as the system opens it; a part that does not exist is kept as written. Null past 40 links (a loop).
+    /// </summary>
+    internal static string? RealPath(string full)
+    {
+        const int MaxLinks = 40;
+        var root = Path.GetPathRoot(full) ?? "/";
+        var remaining = new Stack<string>(Parts(full).Reverse());
+        var current = root;
+        var links = 0;
+        while (remaining.Count > 0)
+        {
+            var part = remaining.Pop();
+            if (part == ".")
+            {
+                continue;
+            }
+
+            if (part == "..")
+            {
+                current = Path.GetDirectoryName(current) ?? root;
+                continue;
+            }
+
+            var next = Path.Combine(current, part);
+            if (new FileInfo(next).LinkTarget is not { } target)
+            {
+                current = next;
+                continue;
+            }
+
+            if (++links > MaxLinks)
+            {
+                return null;
+            }
+
+            foreach (var step in Parts(target).Reverse())
+            {
+                remaining.Push(step);
+            }
+
+            if (Path.IsPathRooted(target))
+            {
+                current = Path.GetPathRoot(target) ?? root;
+            }
+        }
+
+        return current;
+
+        static string[] Parts(string path) =>
+            path[(Path.GetPathRoot(path)?.Length ?? 0)..].Split(Path.DirectorySeparatorChar, StringSplitOptions.RemoveEmptyEntries);
+    }
+
     private IReadOnlyList<IncludeEntry>? ReadFile(IncludeEntry entry, string shown, string full)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(full);
+            (bytes, var size) = ProjectLoader.ReadBounded(full);
+            if (size > ProjectLimits.MaxFileBytes)
+            {
+                bag.Error(entry.Location, ProjectMessages.IncludeTooLarge(shown, size));
+                return null;
+            }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -118,15 +187,18 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         }
         catch (DecoderFallbackException)
         {
-            bag.Error(new SourceLocation(shown, 1, 1), ProjectMessages.IncludedNotUtf8());
+            var (location, message) = ProjectLoader.Utf8Error(shown, bytes);
+            bag.Error(location, message);
             return null;
         }
 
         Hashes.Add(Hash(bytes));
-        var root = SourceTreeReader.Read(text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text, shown, bag);
+        text = text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text;
+        var root = SourceTreeReader.Read(text, shown, bag);
         if (root is null || root is SourceScalar { IsNull: true })
         {
-            if (root is not null)
+            // An empty or comment-only file holds no document: no reader reports it, so it is reported here.
+            if (root is not null || HoldsNoDocument(text))
             {
                 bag.Error(new SourceLocation(shown, 1, 1), ProjectMessages.IncludedHoldsNothing());
             }
@@ -135,6 +207,21 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         }
 
         return reader.ReadIncluded(root);
+    }
+
+    /// <summary>True when every line is blank, a comment, or a document marker ('---', '...').</summary>
+    private static bool HoldsNoDocument(string text)
+    {
+        foreach (var line in text.AsSpan().EnumerateLines())
+        {
+            var trimmed = line.Trim();
+            if (!(trimmed.IsEmpty || trimmed[0] == '#' || trimmed is "---" or "..."))
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 
     private sealed class Frame(string shown, string full, IReadOnlyList<IncludeEntry> includes)

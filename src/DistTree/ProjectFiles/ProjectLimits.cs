@@ -19,6 +19,15 @@ public static class ProjectLimits
     public const int MaxScalarLength = 65_536;
 
     /// <summary>
+    /// The most characters of a value a message repeats (40), from the value's first line only: a message shows
+    /// where the file is wrong, never the file itself (a key file included by mistake, say).
+    /// </summary>
+    public const int MaxEchoedLength = 40;
+
+    /// <summary>How many members of a feed cycle its error names (10); the rest are counted.</summary>
+    public const int MaxCycleNames = 10;
+
+    /// <summary>
     /// How many errors, and separately how many warnings, are reported (200 each); the rest are counted
     /// in one closing diagnostic.
     /// </summary>

@@ -23,16 +23,10 @@ public static class ProjectLoader
     /// <exception cref="IOException">The file cannot be read.</exception>
     public static Project Load(string path)
     {
-        var size = new FileInfo(path).Length;
+        var (bytes, size) = ReadBounded(path);
         if (size > ProjectLimits.MaxFileBytes)
         {
             throw TooLarge(path, size, "bytes");
-        }
-
-        var bytes = File.ReadAllBytes(path);
-        if (bytes.Length > ProjectLimits.MaxFileBytes)
-        {
-            throw TooLarge(path, bytes.Length, "bytes");
         }
 
         string text;
@@ -171,11 +165,70 @@ public static class ProjectLoader
     private static string Sha256Of(List<byte[]> hashes) =>
         Convert.ToHexStringLower(hashes.Count == 1 ? hashes[0] : SHA256.HashData(hashes.SelectMany(h => h).ToArray()));
 
+    /// <summary>
+    /// The bytes of the regular file at <paramref name="path"/>, read in one bounded stream: at most
+    /// <see cref="ProjectLimits.MaxFileBytes"/> + 1 bytes, so a device or a file growing without end cannot exhaust
+    /// memory. <c>Size</c> is the file's size in bytes; over the limit, <c>Bytes</c> is empty (the file is not read,
+    /// or not kept).
+    /// </summary>
+    /// <exception cref="IOException">The path is a folder, a device or a pipe, or cannot be read.</exception>
+    internal static (byte[] Bytes, long Size) ReadBounded(string path)
+    {
+        if (Directory.Exists(path))
+        {
+            throw new IOException(ProjectMessages.IsAFolder());
+        }
+
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, 1, FileOptions.SequentialScan);
+        if (!stream.CanSeek)
+        {
+            throw new IOException(ProjectMessages.NotARegularFile());
+        }
+
+        var stated = stream.Length;
+        if (stated > ProjectLimits.MaxFileBytes)
+        {
+            return ([], stated);
+        }
+
+        // A device (/dev/zero) states no size and never ends: reading one byte more than stated tells it apart.
+        var bytes = new byte[stated + 1];
+        var read = stream.ReadAtLeast(bytes, bytes.Length, throwOnEndOfStream: false);
+        if (read > stated)
+        {
+            if (stated == 0)
+            {
+                throw new IOException(ProjectMessages.NotARegularFile());
+            }
+
+            using var rest = new MemoryStream();
+            rest.Write(bytes, 0, read);
+            var more = new byte[81920];
+            int chunk;
+            while (rest.Length <= ProjectLimits.MaxFileBytes && (chunk = stream.Read(more, 0, (int)Math.Min(more.Length, ProjectLimits.MaxFileBytes + 1 - rest.Length))) > 0)
+            {
+                rest.Write(more, 0, chunk);
+            }
+
+            return rest.Length > ProjectLimits.MaxFileBytes ? ([], rest.Length) : (rest.ToArray(), rest.Length);
+        }
+
+        Array.Resize(ref bytes, read);
+        return (bytes, read);
+    }
+
     private static ProjectException TooLarge(string file, long size, string unit) =>
         ProjectException.At(new SourceLocation(file, 1, 1), ProjectMessages.TooLarge(size, unit));
 
     /// <summary>The error for bytes that are not UTF-8, located at the first bad byte: its line, and its column counted in characters.</summary>
     private static ProjectException NotUtf8(string file, byte[] bytes)
+    {
+        var (location, message) = Utf8Error(file, bytes);
+        return ProjectException.At(location, message);
+    }
+
+    /// <summary>Where bytes that are not UTF-8 first fail to decode (line, and column in characters) and the message saying so, with the byte's offset.</summary>
+    internal static (SourceLocation Location, string Message) Utf8Error(string file, byte[] bytes)
     {
         var chars = new char[bytes.Length];
         System.Text.Unicode.Utf8.ToUtf16(bytes, chars, out var offset, out _, replaceInvalidSequences: false);
@@ -183,7 +236,7 @@ public static class ProjectLoader
         var line = 1 + bytes.AsSpan(0, lineStart).Count((byte)'\n');
         var column = 1 + StrictUtf8.GetCharCount(bytes, lineStart, offset - lineStart);
         var hint = bytes is [0xFF, 0xFE, ..] or [0xFE, 0xFF, ..] ? " (it looks like UTF-16)" : "";
-        return ProjectException.At(new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
+        return (new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
     }
 
     private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));

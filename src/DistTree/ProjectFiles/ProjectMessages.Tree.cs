@@ -1,3 +1,4 @@
+using System.Globalization;
 using DistTree.Model;
 
 namespace DistTree.ProjectFiles;
@@ -41,7 +42,21 @@ internal static partial class ProjectMessages
     /// <summary>Equipment fed from itself.</summary>
     public static string FedFromItself(string? id) => $"'{id}' is fed from itself: a feed cycle that the service does not reach";
 
-    /// <summary>A feed cycle of two or more: <paramref name="first"/> is fed from the rest in order, the last from <paramref name="first"/>.</summary>
-    public static string FeedCycle(string? first, IEnumerable<string?> rest) =>
-        $"feed cycle: '{first}' is fed from {string.Join(", which is fed from ", rest.Select(id => $"'{id}'"))}; the service reaches none of them";
+    /// <summary>
+    /// A feed cycle of two or more: <paramref name="first"/> is fed from the rest in order, the last from <paramref name="first"/>
+    /// (the last of <paramref name="rest"/>). Past <see cref="ProjectLimits.MaxCycleNames"/> members, the rest are counted.
+    /// </summary>
+    public static string FeedCycle(string? first, IEnumerable<string?> rest)
+    {
+        var all = rest.ToList();
+        if (all.Count <= ProjectLimits.MaxCycleNames + 1)
+        {
+            return $"feed cycle: '{first}' is fed from {string.Join(", which is fed from ", all.Select(id => $"'{id}'"))}; the service reaches none of them";
+        }
+
+        var named = string.Join(", which is fed from ", all.Take(ProjectLimits.MaxCycleNames).Select(id => $"'{id}'"));
+        return string.Create(
+            CultureInfo.InvariantCulture,
+            $"feed cycle: '{first}' is fed from {named}, and so on through {all.Count - 1 - ProjectLimits.MaxCycleNames:N0} more back to '{all[^1]}' ({all.Count:N0} in all); the service reaches none of them");
+    }
 }

@@ -22,9 +22,6 @@ internal static partial class ProjectMessages
         CultureInfo.InvariantCulture,
         $"the file is not UTF-8 text{hint}: the byte 0x{value:X2} at offset {offset:N0} does not decode; save the file as UTF-8");
 
-    /// <summary>An included file that is not UTF-8.</summary>
-    public static string IncludedNotUtf8() => "the file is not UTF-8 text";
-
     /// <summary>A main file with no document, or an empty one.</summary>
     public static string NoProject() => "the file holds no project; it starts with 'disttree: 1' (see docs/project-file.md)";
 
@@ -47,6 +44,10 @@ internal static partial class ProjectMessages
     public static string IncludeOutside(string path) =>
         $"'{path}' is outside the project's folder; an included file must be in the main file's folder or below it";
 
+    /// <summary>An include whose path stays inside the project's folder but leads, through a symbolic link, outside it.</summary>
+    public static string IncludeLinksOutside(string path) =>
+        $"'{path}' leads through a symbolic link to outside the project's folder; an included file must be in the main file's folder or below it";
+
     /// <summary>A file that includes itself, directly or through others; <paramref name="names"/> are the files of the cycle, quoted.</summary>
     public static string IncludeCycle(IEnumerable<string> names) => $"include cycle: {string.Join(" includes ", names)}";
 
@@ -55,6 +56,17 @@ internal static partial class ProjectMessages
 
     /// <summary>An included file that cannot be read, and why.</summary>
     public static string CannotReadInclude(string shown, string why) => $"cannot read the included file '{shown}': {why}";
+
+    /// <summary>Why a folder named as a file cannot be read.</summary>
+    public static string IsAFolder() => "it is a folder, not a file";
+
+    /// <summary>Why a device, a pipe or a socket named as a file is not read.</summary>
+    public static string NotARegularFile() => "it is not a regular file (a device or a pipe?); a project file is read from a regular file";
+
+    /// <summary>An included file over <see cref="ProjectLimits.MaxFileBytes"/>.</summary>
+    public static string IncludeTooLarge(string shown, long size) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"the included file '{shown}' has {size:N0} bytes; a project file may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)");
 
     /// <summary>A second YAML document in one file.</summary>
     public static string SecondDocument() => "a project file holds one YAML document; a second one starts here";
@@ -73,6 +85,9 @@ internal static partial class ProjectMessages
     /// <summary>YamlDotNet's own message, its position prefix taken off (<paramref name="detail"/> may be empty).</summary>
     public static string InvalidYaml(string detail) =>
         detail.Length == 0 ? "the YAML cannot be read here" : "invalid YAML: " + char.ToLowerInvariant(detail[0]) + detail[1..];
+
+    /// <summary>A "\U" escape whose code is no Unicode character (0x80000000 or more), in YamlDotNet's own words for the smaller ones.</summary>
+    public static string InvalidEscape() => InvalidYaml("while scanning a quoted scalar, found invalid Unicode character escape code.");
 
     /// <summary>YamlDotNet stopped without a position of its own.</summary>
     public static string UnclosedFlow() => "invalid YAML after this point: an unclosed '[', '{' or quote?";

@@ -147,6 +147,143 @@ public sealed class IncludeReaderTests : IDisposable
         Assert.Contains($"first given at {main}:7", error.Message, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Load_IncludeLinkedToDevZero_RefusedWithoutReadingIt()
+    {
+        var main = Write("main.yaml", Main);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "b"));
+        File.CreateSymbolicLink(Path.Combine(_folder.FullName, "b", "one.yaml"), "/dev/zero");
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal((main, 5, 5), (error.Location.File, error.Location.Line, error.Location.Column));
+        Assert.Equal(ProjectMessages.IncludeLinksOutside("b/one.yaml"), error.Message);
+    }
+
+    [Theory]
+    [InlineData("file")]
+    [InlineData("folder")]
+    [InlineData("relative")]
+    public void Load_IncludeLinkLeavingTheFolder_LocatedErrorShowingNothingOfTheTarget(string how)
+    {
+        var outside = Directory.CreateTempSubdirectory("disttree-outside-");
+        try
+        {
+            var secret = Path.Combine(outside.FullName, "one.yaml");
+            File.WriteAllText(secret, "root:x:0:0:root:/root:/bin/bash\nsecond secret line\n");
+            var main = Write("p/main.yaml", Main);
+            var link = Path.Combine(_folder.FullName, "p", "b");
+            switch (how)
+            {
+                case "file":
+                    Directory.CreateDirectory(link);
+                    File.CreateSymbolicLink(Path.Combine(link, "one.yaml"), secret);
+                    break;
+                case "folder":
+                    Directory.CreateSymbolicLink(link, outside.FullName);
+                    break;
+                default:
+                    Directory.CreateDirectory(link);
+                    File.CreateSymbolicLink(Path.Combine(link, "one.yaml"), Path.GetRelativePath(link, secret));
+                    break;
+            }
+
+            var error = Assert.Single(Errors(main));
+
+            Assert.Equal((main, 5, 5), (error.Location.File, error.Location.Line, error.Location.Column));
+            Assert.Equal(ProjectMessages.IncludeLinksOutside("b/one.yaml"), error.Message);
+        }
+        finally
+        {
+            outside.Delete(recursive: true);
+        }
+    }
+
+    [Fact]
+    public void Load_IncludeLinkInsideTheFolder_Read()
+    {
+        var main = Write("main.yaml", Main.Replace("b/one.yaml", "c/link.yaml", StringComparison.Ordinal));
+        Write("b/one.yaml", One);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "c"));
+        File.CreateSymbolicLink(Path.Combine(_folder.FullName, "c", "link.yaml"), "../b/one.yaml");
+
+        var project = ProjectLoader.Load(main);
+
+        Assert.Contains(project.Equipment, e => e.Id == "LP1");
+    }
+
+    [Fact]
+    public void Load_IncludedFileOfPlainText_ErrorShowsItsFirstLineCut()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", "root:x:0:0:root:/root:/bin/bash:with:a:long:first:line\nsecond secret line\nthird\n");
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal("an included file is a mapping holding 'equipment:' (and 'include:'); found 'root:x:0:0:root:/root:/bin/bash:with:a:l...'", error.Message);
+    }
+
+    [Fact]
+    public void Load_MainFileDevZero_IOExceptionNotARegularFile()
+    {
+        var e = Assert.Throws<IOException>(() => ProjectLoader.Load("/dev/zero"));
+
+        Assert.StartsWith("it is not a regular file", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Load_IncludeIsAFolder_SaysItIsAFolder()
+    {
+        var main = Write("main.yaml", Main);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "b", "one.yaml"));
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal("cannot read the included file 'b/one.yaml': it is a folder, not a file", error.Message.Replace(_folder.FullName + "/", "", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Load_IncludedFileOfShortLines_ErrorShowsTheFirstLineOnly()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", "short\nsecond secret line\n");
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.EndsWith("found 'short...'", error.Message, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("")]
+    [InlineData("\n\n")]
+    [InlineData("# only a comment\n  # and another\n")]
+    [InlineData("---\n# nothing\n...\n")]
+    public void Load_IncludedFileEmptyOrCommentsOnly_ErrorInThatFile(string text)
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", text);
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal(ProjectMessages.IncludedHoldsNothing(), error.Message);
+        Assert.Equal((1, 1), (error.Location.Line, error.Location.Column));
+        Assert.EndsWith("b/one.yaml", error.Location.File, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Load_IncludedFileNotUtf8_LocatedAtTheByteWithItsOffset()
+    {
+        var main = Write("main.yaml", Main);
+        Write("b/one.yaml", One);
+        var one = Path.Combine(_folder.FullName, "b", "one.yaml");
+        File.WriteAllBytes(one, [.. "equipment:\n  - id: L\u00e9"u8, 0xFF, .. "\n"u8]);
+
+        var error = Assert.Single(Errors(main));
+
+        Assert.Equal((2, 11), (error.Location.Line, error.Location.Column));
+        Assert.Equal("the file is not UTF-8 text: the byte 0xFF at offset 22 does not decode; save the file as UTF-8", error.Message);
+    }
+
     private string Write(string relative, string text)
     {
         var path = Path.Combine(_folder.FullName, relative);

@@ -255,6 +255,21 @@ public sealed class ProjectLoaderHostileInputTests(ITestOutputHelper output)
         Assert.Equal(message, diagnostic.Message);
     }
 
+    [Theory]
+    [InlineData("\\U80000000")]
+    [InlineData("\\UFFFFFFFF")]
+    [InlineData("\\uDC00")]
+    [InlineData("\\U7FFFFFFF")]
+    public void Parse_EscapeNotAUnicodeCharacter_LocatedError(string escape)
+    {
+        var text = ProjectText.Minimal().Replace("name: Test", "name: \"Test " + escape + "\"", StringComparison.Ordinal);
+
+        var diagnostic = Assert.Single(Refused(text, maxMiB: 16).Diagnostics);
+
+        Assert.Equal(new SourceLocation("bomb.yaml", 3, 9), diagnostic.Location);
+        Assert.StartsWith("invalid YAML: while scanning a quoted scalar, found invalid Unicode", diagnostic.Message, StringComparison.Ordinal);
+    }
+
     private ProjectException Refused(string text, long maxMiB)
     {
         var result = Bounded.Run(() => ProjectLoader.Parse(text, "bomb.yaml"));

@@ -83,6 +83,26 @@ public sealed class ProjectMessagesTests
     }
 
     [Fact]
+    public void FeedCycle_ElevenMembers_NamesEveryOne()
+    {
+        var rest = Enumerable.Range(2, 10).Select(i => $"P{i}").Append("P1").ToArray();
+
+        var message = ProjectMessages.FeedCycle("P1", rest);
+
+        Assert.EndsWith("which is fed from 'P11', which is fed from 'P1'; the service reaches none of them", message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void FeedCycle_TwelveMembers_NamesTenAndCountsTheRest()
+    {
+        var rest = Enumerable.Range(2, 11).Select(i => $"P{i}").Append("P1").ToArray();
+
+        var message = ProjectMessages.FeedCycle("P1", rest);
+
+        Assert.EndsWith("which is fed from 'P11', and so on through 1 more back to 'P1' (12 in all); the service reaches none of them", message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void UndefinedSource_WithNearId_AsksDidYouMean()
     {
         Assert.Equal("'LP2' is fed from 'MSB9', which is not defined; did you mean 'MSB'?", ProjectMessages.UndefinedSource("LP2", "MSB9", "MSB"));

@@ -170,15 +170,16 @@ internal sealed partial class FastYamlReader
             default: Fail(); break;
         }
 
-        var code = 0;
+        // Parsed unsigned: "\U80000000" and above read as negative in an int. Anything not a Unicode scalar
+        // value (a surrogate, above 0x10FFFF) is declined, and YamlDotNet's path reports it.
+        var code = 0u;
         if (_pos + length > _text.Length
-            || !int.TryParse(_text.AsSpan(_pos + 2, length - 2), System.Globalization.NumberStyles.AllowHexSpecifier, System.Globalization.CultureInfo.InvariantCulture, out code)
-            || code > 0x10FFFF
-            || code is >= 0xD800 and <= 0xDFFF)
+            || !uint.TryParse(_text.AsSpan(_pos + 2, length - 2), System.Globalization.NumberStyles.AllowHexSpecifier, System.Globalization.CultureInfo.InvariantCulture, out code)
+            || !System.Text.Rune.IsValid(code))
         {
             Fail();
         }
 
-        return char.ConvertFromUtf32(code);
+        return char.ConvertFromUtf32((int)code);
     }
 }

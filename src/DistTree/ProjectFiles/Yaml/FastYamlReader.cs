@@ -68,7 +68,7 @@ internal sealed partial class FastYamlReader
 
     /// <summary>
     /// True when the text holds no tab, lone carriage return, byte-order mark, control character,
-    /// surrogate or YAML line break other than LF and CR LF: these the fast path leaves to YamlDotNet.
+    /// or surrogate: these the fast path leaves to YamlDotNet.
     /// </summary>
     private static bool OnlySimpleCharacters(string text)
     {
@@ -80,9 +80,10 @@ internal sealed partial class FastYamlReader
                 continue;
             }
 
+            // NEL, LS and PS are characters like any other (YAML 1.2 breaks lines at LF and CR LF only).
             var allowed = c == '\n'
                 || (c == '\r' && i + 1 < text.Length && text[i + 1] == '\n')
-                || (c >= '\u00a0' && c < '\ud800' && c is not '\u2028' and not '\u2029')
+                || (c >= '\u00a0' && c < '\ud800') || c == '\u0085'
                 || (c >= '\ue000' && c < '\ufffe' && c != '\ufeff');
             if (!allowed)
             {

@@ -74,7 +74,39 @@ internal sealed class SourceScalar : SourceNode
             return "nothing";
         }
 
-        return IsPlain ? $"'{Value}'" : $"the quoted text '{Value}'";
+        return IsPlain ? $"'{Echo()}'" : $"the quoted text '{Echo()}'";
+    }
+
+    /// <summary>
+    /// How many characters of <see cref="Value"/> stand on the scalar's first line in the file, when it spans several
+    /// (a folded value joins its lines with spaces); null when it stands on one line.
+    /// </summary>
+    public int? FirstLineLength { get; init; }
+
+    /// <summary>
+    /// The value as a message shows it: its first line in the file only, and at most
+    /// <see cref="ProjectLimits.MaxEchoedLength"/> characters of it, "..." marking a cut; so no message prints
+    /// more of a file (an unintended one, say) than the line it is about.
+    /// </summary>
+    public string Echo()
+    {
+        var shown = Value.AsSpan();
+        if (FirstLineLength is { } first && first < shown.Length)
+        {
+            shown = shown[..Math.Max(first, 0)];
+        }
+
+        if (shown.IndexOfAny('\n', '\r') is var end and >= 0)
+        {
+            shown = shown[..end];
+        }
+
+        if (shown.Length > ProjectLimits.MaxEchoedLength)
+        {
+            shown = shown[..ProjectLimits.MaxEchoedLength];
+        }
+
+        return shown.Length == Value.Length ? Value : string.Concat(shown.TrimEnd(' '), "...");
     }
 }
 

@@ -20,7 +20,8 @@ internal static partial class YamlDotNetReader
     /// <summary>The document's root node, or null when the text holds none or cannot be parsed (reported).</summary>
     public static SourceNode? Read(string text, string file, DiagnosticBag bag)
     {
-        var events = new EventReader(file, bag);
+        (text, var guard) = LineBreakGuard.Protect(text);
+        var events = new EventReader(text, file, bag, guard);
         try
         {
             return events.ReadAll(new Parser(new StringReader(text)));
@@ -34,6 +35,12 @@ internal static partial class YamlDotNetReader
         catch (YamlException e)
         {
             bag.Error(At(file, e.Start), ProjectMessages.InvalidYaml(MarkPrefix().Replace(e.Message, "").Trim()));
+            return null;
+        }
+        catch (ArgumentOutOfRangeException) when (HugeEscape(text, file) is { } escape)
+        {
+            // YamlDotNet reads "\U80000000" and above as a negative code and throws without a mark.
+            bag.Error(escape, ProjectMessages.InvalidEscape());
             return null;
         }
         catch (InvalidOperationException)
@@ -79,14 +86,51 @@ internal static partial class YamlDotNetReader
         return null;
     }
 
-    private static SourceScalar MakeScalar(Scalar scalar, string file, DiagnosticBag bag)
+    /// <summary>
+    /// The opening quote of the first double-quoted scalar holding a "\U" escape of 0x80000000 or more (a backslash
+    /// preceded by an even number of backslashes), or null when there is none.
+    /// </summary>
+    private static SourceLocation? HugeEscape(string text, string file)
     {
+        for (var at = text.IndexOf("\\U", StringComparison.Ordinal); at >= 0; at = text.IndexOf("\\U", at + 1, StringComparison.Ordinal))
+        {
+            var backslashes = 0;
+            while (at - backslashes - 1 >= 0 && text[at - backslashes - 1] == '\\')
+            {
+                backslashes++;
+            }
+
+            if (backslashes % 2 == 1 || at + 10 > text.Length
+                || !uint.TryParse(text.AsSpan(at + 2, 8), System.Globalization.NumberStyles.AllowHexSpecifier, System.Globalization.CultureInfo.InvariantCulture, out var code)
+                || code < 0x80000000)
+            {
+                continue;
+            }
+
+            var lineStart = text.LastIndexOf('\n', at) + 1;
+            var quote = at;
+            while (quote > lineStart && !(text[quote] == '"' && text[quote - 1] != '\\'))
+            {
+                quote--;
+            }
+
+            var line = 1 + text.AsSpan(0, lineStart).Count('\n');
+            return new SourceLocation(file, line, quote - lineStart + 1);
+        }
+
+        return null;
+    }
+
+    private static SourceScalar MakeScalar(Scalar scalar, string text, string file, DiagnosticBag bag, LineBreakGuard? guard)
+    {
+        var firstLine = FirstLineLength(scalar, text);
+        var value = guard is null ? scalar.Value : guard.Restore(scalar.Value);
         var location = At(file, scalar.Start);
         var plain = scalar.Style == ScalarStyle.Plain;
-        if (scalar.Value.Length > ProjectLimits.MaxScalarLength)
+        if (value.Length > ProjectLimits.MaxScalarLength)
         {
-            bag.Error(location, ProjectMessages.ScalarTooLong(scalar.Value.Length));
-            return new SourceScalar(location, scalar.Value[..16] + "...", plain) { IsInvalid = true };
+            bag.Error(location, ProjectMessages.ScalarTooLong(value.Length));
+            return new SourceScalar(location, value[..16] + "...", plain) { IsInvalid = true };
         }
 
         if (!scalar.Tag.IsEmpty)
@@ -98,11 +142,24 @@ internal static partial class YamlDotNetReader
             else
             {
                 bag.Error(location, ProjectMessages.TagNotSupported(scalar.Tag.Value));
-                return new SourceScalar(location, scalar.Value, plain) { IsInvalid = true };
+                return new SourceScalar(location, value, plain) { IsInvalid = true, FirstLineLength = firstLine };
             }
         }
 
-        return new SourceScalar(location, scalar.Value, plain);
+        return new SourceScalar(location, value, plain) { FirstLineLength = firstLine };
+    }
+
+    /// <summary>How many characters of a scalar spanning several lines stand on its first line (its quote or indicator not counted); null for one line.</summary>
+    private static int? FirstLineLength(Scalar scalar, string text)
+    {
+        if (scalar.End.Line == scalar.Start.Line || scalar.Start.Index >= text.Length)
+        {
+            return null;
+        }
+
+        var start = (int)scalar.Start.Index + (scalar.Style == ScalarStyle.Plain ? 0 : 1);
+        var end = text.IndexOfAny(['\n', '\r'], Math.Min(start, text.Length));
+        return end < 0 ? null : text.AsSpan(start, end - start).TrimEnd(' ').Length;
     }
 
     private static void CheckTag(NodeEvent node, string file, DiagnosticBag bag)
@@ -118,7 +175,7 @@ internal static partial class YamlDotNetReader
     private static partial Regex MarkPrefix();
 
     /// <summary>Builds the tree from the parser's events; the parser's exceptions are left to the caller.</summary>
-    private sealed class EventReader(string file, DiagnosticBag bag)
+    private sealed class EventReader(string text, string file, DiagnosticBag bag, LineBreakGuard? guard)
     {
         private readonly Stack<Frame> _stack = new();
 
@@ -147,7 +204,7 @@ internal static partial class YamlDotNetReader
 
                         continue;
                     case Scalar scalar:
-                        completed = MakeScalar(scalar, file, bag);
+                        completed = MakeScalar(scalar, text, file, bag, guard);
                         break;
                     case SequenceStart or MappingStart when _stack.Count >= ProjectLimits.MaxDepth:
                         bag.Error(At(file, current.Start), ProjectMessages.TooDeep());
