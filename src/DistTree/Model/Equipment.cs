@@ -23,8 +23,18 @@ public enum EquipmentKind
 /// <param name="Secondary">The secondary system.</param>
 /// <param name="ImpedancePercent">Percent impedance %Z.</param>
 /// <param name="XOverR">Reactance-to-resistance ratio.</param>
-/// <param name="TapPercent">Tap setting in percent: positive raises the secondary voltage.</param>
-public sealed record TransformerData(double Kva, ElectricalSystem Secondary, double ImpedancePercent, double XOverR, double TapPercent);
+/// <param name="TapPercent">
+/// The primary tap as the nameplate gives it, percent of the primary's rated voltage: +2.5 adds 2.5 % to the
+/// primary turns, so the secondary stands 1/1.025 of its rating at rated primary voltage (a tap for a high supply).
+/// </param>
+public sealed record TransformerData(double Kva, ElectricalSystem Secondary, double ImpedancePercent, double XOverR, double TapPercent)
+{
+    /// <summary>
+    /// The primary lines a single-phase transformer on a three-phase primary is connected across: AB (the
+    /// default), BC or CA. Not read for a three-phase transformer or a single-phase primary.
+    /// </summary>
+    public Phases PrimaryPhases { get; init; } = Phases.AB;
+}
 
 /// <summary>A switchboard, panelboard, transformer or splitter, fed from its source by an optional feeder.</summary>
 public sealed record Equipment

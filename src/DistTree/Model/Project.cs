@@ -17,7 +17,17 @@ public enum UnitSystem
 /// <param name="System">The utility supply system.</param>
 /// <param name="FrequencyHz">Supply frequency in hertz.</param>
 /// <param name="Location">Where it is in the project file.</param>
-public sealed record Service(string Id, ElectricalSystem System, double FrequencyHz, SourceLocation Location);
+public sealed record Service(string Id, ElectricalSystem System, double FrequencyHz, SourceLocation Location)
+{
+    /// <summary>
+    /// The utility's available three-phase fault current at the service, kA, or null for a stiff source (no
+    /// impedance ahead of the service).
+    /// </summary>
+    public double? AvailableFaultCurrentKa { get; init; }
+
+    /// <summary>The X/R ratio of the utility's source impedance; read with <see cref="AvailableFaultCurrentKa"/>.</summary>
+    public double? FaultXOverR { get; init; }
+}
 
 /// <summary>A loaded, validated project: the model every later stage reads.</summary>
 public sealed record Project

@@ -14,6 +14,12 @@ public sealed record Run
     /// <summary>The conductor size of each phase conductor.</summary>
     public required ConductorSize Size { get; init; }
 
+    /// <summary>
+    /// The size of the neutral of each set, where the circuit has one and it differs from the lines; null for a
+    /// neutral the size of the lines.
+    /// </summary>
+    public ConductorSize? NeutralSize { get; init; }
+
     /// <summary>Number of parallel sets (1 or more).</summary>
     public int Sets { get; init; } = 1;
 
