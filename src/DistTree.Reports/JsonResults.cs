@@ -51,7 +51,15 @@ public static class JsonResults
             w.WriteBoolean("converged", solution.LoadFlow.Converged);
             w.WriteNumber("iterations", solution.LoadFlow.Iterations);
             w.WriteNumber("tolerance_pu", LoadFlow.TolerancePu);
-            w.WriteNumber("base_kva", LoadFlow.BaseVa / 1000.0);
+            if (solution.LoadFlow.WeakestId is { } weakest)
+            {
+                w.WriteString("weakest", weakest);
+            }
+            else
+            {
+                w.WriteNull("weakest");
+            }
+
             w.WriteEndObject();
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)

@@ -144,9 +144,9 @@ internal sealed class SizingProblem
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
         var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
-        var unitR = new double[8];
-        var unitX = new double[8];
-        row.UnitDrops(unitR, unitX);
+        var unitR = new double[Slots.Count];
+        var unitX = new double[Slots.Count];
+        var own = row.UnitDrops(unitR, unitX);
         var steps = 0;
         for (ConductorSize? size = conductors.Size; size is { } s; size = conductors.Fixed ? null : s.NextLarger, steps++)
         {
@@ -173,7 +173,7 @@ internal sealed class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, row.OwnLines) * dropFactor;
+                var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, conductors, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }

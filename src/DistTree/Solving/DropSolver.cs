@@ -37,23 +37,23 @@ public sealed class DropSolver
         using var sums = new PowerSums(network);
         var assigned = new Phases[n];
         PhaseAssignment.Assign(network, sums.Power, assigned);
-        var phases = PhaseCurrents.Solve(network, sums.Power, assigned);
+        var phases = PhaseCurrents.Solve(network, PhaseFrame.Of(network), sums.Power, assigned);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same
         // impedances, whose drops are recorded beside the percent sum's. A run's findings follow from its drop: on
         // the percent sum they are found with its figures; on the load flow, once it is solved.
         using var runs = new RunRows(sums.Has, n);
-        var (z, findings) = RunDrops.Solve(_catalog, _protection, network, sums, phases, runs);
-        var flow = LoadFlow.Solve(network, sums.Power, z);
-        Scratch.Return(z, n);
-        LoadFlowDrops.Record(network, runs, flow);
+        var findings = RunDrops.Solve(_catalog, _protection, network, sums, phases, runs);
+        var (flow, voltagesTaken) = LoadFlow.Solve(network, phases, sums.Power, runs);
+        using var voltages = voltagesTaken;
+        LoadFlowDrops.Record(network, phases, runs, flow, voltages);
         if (network.Project.Rules.Method != SolutionMethod.PercentSum)
         {
             findings += RunFindings.OnLoadFlow(network.NodeArray, runs, _protection);
         }
 
         // The end points' totals, findings and motor starts; then each run's reach from them.
-        var points = EndPointTotals.Solve(network, sums, phases, runs, flow);
+        var points = EndPointTotals.Solve(network, sums, phases, runs, flow, voltages);
         Reach.Add(network, runs, points.EndPoints.Rows);
         var solved = new SolvedRows(network, phases, sums.Power, new SolvedRuns(runs.Rows, runs.Findings), points.EndPoints);
         return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow);

@@ -5,11 +5,10 @@ using DistTree.Network;
 namespace DistTree.Solving;
 
 /// <summary>
-/// Per-phase currents and drops (common practice for unbalanced radial feeders): the lines of every circuit (see
-/// <c>PhaseAssignment</c>) and the phasor line currents of every node (see <c>PhaseCurrents</c>), and from them
-/// the drops. The neutral carries Ia + Ib + Ic (a neutral the size of the phase conductors). A line's drop is
-/// ΔV = (I_line + I_neutral)·Z, and its percent is the part of ΔV in phase with the line's voltage (the
-/// effective-impedance approximation, line by line).
+/// The currents of the phase frame at nominal voltage (see <c>PhaseCurrents</c>): the lines of every circuit (see
+/// <c>PhaseAssignment</c>), the line currents every node draws from its parent and each transformer's secondary
+/// currents. A run's neutral carries the return of its lines, −(I_A + I_B + I_C). Conductor temperatures, ampacity,
+/// the percent sum and the motor starts read them.
 /// </summary>
 internal sealed class PhaseFlow
 {
@@ -17,84 +16,25 @@ internal sealed class PhaseFlow
     private readonly Dictionary<int, Complex[]> _secondaryCurrents;
 
     /// <summary>The lines and currents the passes worked out (see <c>PhaseCurrents.Solve</c>).</summary>
-    public PhaseFlow(Phases[] assigned, Complex[] currents, Dictionary<int, Complex[]> secondaryCurrents)
+    public PhaseFlow(PhaseFrame frame, Phases[] assigned, Complex[] currents, Dictionary<int, Complex[]> secondaryCurrents)
     {
+        Frame = frame;
         Assigned = assigned;
         Currents = currents;
         _secondaryCurrents = secondaryCurrents;
     }
 
+    /// <summary>The tree's phase frame: nominal voltages and transformer models.</summary>
+    public PhaseFrame Frame { get; }
+
     /// <summary>Per node, the lines its circuit is on (end points only).</summary>
     public Phases[] Assigned { get; }
 
-    /// <summary>Per node × 3, the line currents (A) it draws from its parent, at its incoming run's voltage.</summary>
+    /// <summary>Per node × 3, the line currents (A) it draws from its parent, at nominal voltage.</summary>
     public Complex[] Currents { get; }
 
-    /// <summary>
-    /// The unit drops of the run into <paramref name="node"/> on <paramref name="system"/>: into
-    /// <paramref name="unitR"/>[set] and <paramref name="unitX"/>[set], for each set of lines 1 … 7, the figures of
-    /// <see cref="UnitDropsOn"/>; [0] is left as it is.
-    /// </summary>
-    public void UnitDrops(int node, double km, ElectricalSystem system, double scale, Span<double> unitR, Span<double> unitX)
-    {
-        for (var set = 1; set < 8; set++)
-        {
-            (unitR[set], unitX[set]) = UnitDropsOn(node, km, system, scale, set);
-        }
-    }
-
-    /// <summary>
-    /// The drop in percent that a circuit on the set of lines <paramref name="set"/> ((int)<see cref="Phases"/>, 1 = A …
-    /// 7 = ABC) sees on the run into <paramref name="node"/> on <paramref name="system"/>, per ohm/km of resistance
-    /// (from ΔV = (I_line + I_neutral)·(km + j0)·scale on each line) and of reactance (from ΔV = (I_line +
-    /// I_neutral)·(0 + j·km)·scale): on one line, the part of its ΔV in phase with its voltage to neutral; on two,
-    /// their line-to-line drop; on three, the worst line; a set with none of the system's lines takes line A's.
-    /// </summary>
-    public (double UnitR, double UnitX) UnitDropsOn(int node, double km, ElectricalSystem system, double scale, int set)
-    {
-        var voltages = LineVoltages.Of(system);
-        var lines = voltages.Lines;
-        var on = set & ((1 << lines) - 1);
-        var i = Currents.AsSpan(node * 3, 3);
-        var neutral = voltages.HasNeutral ? i[0] + i[1] + i[2] : Complex.Zero;
-        var (resistive, reactive) = (new Complex(km, 0), new Complex(0, km));
-        switch (BitOperations.PopCount((uint)on))
-        {
-            case 0:
-            case 1:
-                {
-                    // One line; a set with none of the system's lines takes line A's, to the neutral.
-                    var (x, v) = on == 0 ? (0, voltages.PerLineV) : (BitOperations.TrailingZeroCount(on), voltages.SingleV);
-                    var flowing = i[x] + neutral;
-                    var unit = LineVoltages.UnitConjugate[(lines * 3) + x];
-                    return ((flowing * resistive * scale * unit).Real / v * 100.0, (flowing * reactive * scale * unit).Real / v * 100.0);
-                }
-
-            case 2:
-                {
-                    var (a, b) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-                    var (flowingA, flowingB) = (i[a] + neutral, i[b] + neutral);
-                    var (pair, magnitude) = (LineVoltages.PairConjugate[(lines * 8) + on], LineVoltages.PairMagnitude[(lines * 8) + on]);
-                    return (
-                        (((flowingA * resistive * scale) - (flowingB * resistive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0,
-                        (((flowingA * reactive * scale) - (flowingB * reactive * scale)) * pair).Real / magnitude / voltages.PairV * 100.0);
-                }
-
-            default:
-                {
-                    var (worstR, worstX) = (double.NegativeInfinity, double.NegativeInfinity);
-                    for (var x = 0; x < 3; x++)
-                    {
-                        var flowing = i[x] + neutral;
-                        var unit = LineVoltages.UnitConjugate[(lines * 3) + x];
-                        worstR = Math.Max(worstR, (flowing * resistive * scale * unit).Real / voltages.PerLineV * 100.0);
-                        worstX = Math.Max(worstX, (flowing * reactive * scale * unit).Real / voltages.PerLineV * 100.0);
-                    }
-
-                    return (worstR, worstX);
-                }
-        }
-    }
+    /// <summary>The secondary line currents (A) of the transformer at <paramref name="node"/>.</summary>
+    public ReadOnlySpan<Complex> SecondaryCurrents(int node) => _secondaryCurrents[node];
 
     /// <summary>The phase loads of a panel (a node with circuits): VA per line, the neutral, and the imbalance.</summary>
     public PanelResult Panel(NetworkNode node)
@@ -139,18 +79,12 @@ internal sealed class PhaseFlow
         return (i[0] + i[1] + i[2]).Magnitude;
     }
 
-    /// <summary>A transformer's regulation per secondary line, percent: (%R·P_x + %X·Q_x)/(S_rated/lines) − tap.</summary>
-    public void TransformerRegulation(int node, TransformerData data, double percentR, double percentX, Span<double> into)
+    /// <summary>The functional of slot <paramref name="slot"/> (see <see cref="Slots"/>) on the bus of <paramref name="node"/>.</summary>
+    public Functional SlotOn(NetworkNode node, int slot)
     {
-        var lines = PhaseRules.Lines(data.Secondary);
-        var vln = LineVoltages.LineToNeutralV(data.Secondary);
-        var perLine = data.Kva * 1000.0 / lines;
-        var secondary = _secondaryCurrents[node];
-        for (var x = 0; x < 3; x++)
-        {
-            var s = x < lines ? vln * LineVoltages.Unit(x, lines) * Complex.Conjugate(secondary[x]) : Complex.Zero;
-            into[x] = x < lines ? (((percentR * s.Real) + (percentX * s.Imaginary)) / perLine) - data.TapPercent : double.NegativeInfinity;
-        }
+        Span<Complex> nominal = stackalloc Complex[4];
+        Frame.Nominal(node, nominal);
+        return Slots.Functional(slot, nominal);
     }
 
     // |c|, without the call for no current (a line a circuit does not take): the magnitude of zero is zero.

@@ -149,26 +149,23 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>The limits this run exceeds.</summary>
     public IReadOnlyList<Finding> Findings => _rows.RunFindings[_index] ?? [];
 
-    /// <summary>The set of lines whose drop is the run's own (a branch circuit's lines), or 0 for the worst of all (a feeder).</summary>
-    internal int OwnLines => Row.OwnLines;
-
     /// <summary>
-    /// Per set of lines ((int)Phases, 1 = A … 7 = ABC), the drop in percent that a circuit on those lines sees
-    /// on this run per ohm/km of resistance (into <paramref name="unitR"/>) and per ohm/km of reactance (into
-    /// <paramref name="unitX"/>), at the run's present length and sets: the drop is linear in R and X, so the
-    /// sizer can price any size without solving the tree again. Worked out when asked, as the solve did; zero for a transformer.
+    /// Per voltage of its bus (see <c>Slots</c>), the drop in percent this run makes in it per ohm/km of resistance
+    /// (into <paramref name="unitR"/>) and per ohm/km of reactance (into <paramref name="unitX"/>), at the run's
+    /// present length and sets and the currents it carries: the drop is linear in R and X, so the sizer can price any
+    /// size without solving the tree again. Gives the voltages (bits) its own drop is the worst of; none for a
+    /// transformer. Worked out when asked, as the solve did.
     /// </summary>
-    internal void UnitDrops(Span<double> unitR, Span<double> unitX)
+    internal int UnitDrops(Span<double> unitR, Span<double> unitX)
     {
         if (Run is { } run)
         {
-            RunDrops.UnitDrops(run, _rows.Phases, Row.CurrentA, _rows.Phases.MaxLineCurrentA(NodeIndex), unitR, unitX);
+            return RunDrops.UnitDrops(run, _rows.Phases, Row.CurrentA, _rows.Phases.MaxLineCurrentA(NodeIndex), unitR, unitX);
         }
-        else
-        {
-            unitR.Clear();
-            unitX.Clear();
-        }
+
+        unitR.Clear();
+        unitX.Clear();
+        return 0;
     }
 
     /// <summary>Where the run is in the project file.</summary>

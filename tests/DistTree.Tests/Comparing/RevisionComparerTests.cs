@@ -28,8 +28,8 @@ public sealed class RevisionComparerTests
         var deltaI = 12000 / (Math.Sqrt(3) * 208);
         var cos = 0.9;
         var sin = Math.Sqrt(1 - (cos * cos));
-        // The rise in volts line to neutral; in percent of the circuit's own voltage to neutral: 120 V for a
-        // 1-pole circuit, 208/√3 V per line for the 3-pole one.
+        // The rise in volts line to neutral; in percent of the line-to-neutral base of the phase frame, 208/√3 V,
+        // for the 1-pole circuits and per line for the 3-pole one (the source a balanced set at 208 V).
         double FeederRiseV(string id)
         {
             var run = after.Runs.Single(r => r.Id == id && r.Kind == RunResultKind.Feeder);
@@ -43,12 +43,12 @@ public sealed class RevisionComparerTests
         var msb = FeederRiseV("MSB");
         var lp1 = FeederRiseV("LP1");
         Assert.True(msb > 0.01 && lp1 > 0.01, "the sub-panel's load must move the shared feeders measurably");
-        foreach (var (id, volts) in new[] { ("LP1/1", 120.0), ("LP1/2", 120.0), ("LP1/3", 208 / Math.Sqrt(3)) })
+        foreach (var (id, volts) in new[] { ("LP1/1", 208 / Math.Sqrt(3)), ("LP1/2", 208 / Math.Sqrt(3)), ("LP1/3", 208 / Math.Sqrt(3)) })
         {
             Assert.Equal((msb + lp1) / volts * 100, c.EndPoints.Single(e => e.Id == id).TotalDropPercent.Change, 9);
         }
 
-        Assert.Equal(msb / 120 * 100, c.EndPoints.Single(e => e.Id == "LP2/1").TotalDropPercent.Change, 9);
+        Assert.Equal(msb / (208 / Math.Sqrt(3)) * 100, c.EndPoints.Single(e => e.Id == "LP2/1").TotalDropPercent.Change, 9);
         Assert.True(c.UpstreamRuns.Single(r => r.Id == "MSB").DropPercent.Change > 0);
         Assert.Equal(-deltaI, c.UpstreamRuns.Single(r => r.Id == "LP1").MarginA!.Value.Change, 9);
         Assert.Equal(["LP1", "MSB"], c.UpstreamRuns.Select(r => r.Id).Order(StringComparer.Ordinal));

@@ -41,17 +41,19 @@ public sealed class PhaseFlowTests
     }
 
     // One 1-pole load alone: its current returns through the neutral, so the neutral carries the line current,
-    // and the branch drop is the single-phase 2·I·Z (k = 2, NEC Chapter 9 Table 9 note 2).
+    // and the branch drop is the single-phase 2·I·Z (k = 2, NEC Chapter 9 Table 9 note 2). The phase frame's
+    // line-to-neutral base is 208/√3 V (the source a balanced set at 208 V), so 1200 VA draw 1200/(208/√3) A.
     [Fact]
     public void Solve_OneLoadAlone_NeutralCarriesItAndImbalanceIsTwoHundredPercent()
     {
         var s = SolverHarness.Solve(SolverHarness.OneCircuit("208Y/120", "metric",
             "{ id: \"1\", poles: 1, load: { va: 1200, pf: 1.0 }, run: { length: 10, size: 12 AWG } }"));
         var panel = Assert.Single(s.Panels);
-        Assert.Equal(10, panel.NeutralCurrentA!.Value, 9);
+        var vln = 208 / Math.Sqrt(3);
+        Assert.Equal(1200 / vln, panel.NeutralCurrentA!.Value, 9);
         Assert.Equal(200, panel.ImbalancePercent, 9);
         var run = s.Branch();
-        Assert.Equal(2 * 10 * 0.01 * run.ResistanceOhmPerKm!.Value / 120 * 100, run.DropPercent, 9);
+        Assert.Equal(2 * (1200 / vln) * 0.01 * run.ResistanceOhmPerKm!.Value / vln * 100, run.DropPercent, 9);
     }
 
     [Fact]

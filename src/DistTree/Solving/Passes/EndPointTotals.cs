@@ -1,11 +1,13 @@
+using System.Buffers;
+using System.Numerics;
 using DistTree.Model;
 using DistTree.Network;
 
 namespace DistTree.Solving.Passes;
 
 /// <summary>
-/// The end points' pass: every end point's total, walking up from it, the sum of the counted rows' drops on its own
-/// lines (the load flow's drops on the load flow); its findings (total drop, motor start; see
+/// The end points' pass: every end point's total, walking up from it, the sum of the counted rows' shares in its own
+/// voltage (see <see cref="PathShares"/>; the load flow's on the load flow); its findings (total drop, motor start; see
 /// <see cref="MotorStartCheck"/>); the counted runs of its path and each one's share (see <see cref="SolvedRows"/>);
 /// and the worst end point. End points are independent: the pass runs on every core.
 /// </summary>
@@ -17,7 +19,9 @@ internal sealed class EndPointTotals
     private readonly PowerSums _sums;
     private readonly PhaseFlow _phases;
     private readonly RunRows _runs;
-    private readonly LoadFlowResult _flow;
+    private readonly PhaseVoltages? _voltages;
+    private readonly PathShares _shares;
+    private readonly MotorStartCheck _motors;
     private readonly bool _newOrigin;
     private readonly bool _onLoadFlow;
     private readonly double _limitPercent;
@@ -39,7 +43,7 @@ internal sealed class EndPointTotals
     private int _findingCount;
     private readonly Lock _gate = new();
 
-    private EndPointTotals(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow)
+    private EndPointTotals(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages)
     {
         var rules = network.Project.Rules;
         _network = network;
@@ -48,9 +52,11 @@ internal sealed class EndPointTotals
         _sums = sums;
         _phases = phases;
         _runs = runs;
-        _flow = flow;
-        _newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
+        _voltages = flow.Converged ? voltages : null;
+        _shares = new PathShares(network, phases, runs, _voltages);
         _onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
+        _motors = new MotorStartCheck(network, phases, runs, _shares, _onLoadFlow);
+        _newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
         _limitPercent = rules.TotalLimitPercent;
         _depth = Scratch.RentToFill<int>(_nodes.Length);
         _endPointNode = Scratch.RentToFill<int>(_nodes.Length);
@@ -58,9 +64,10 @@ internal sealed class EndPointTotals
     }
 
     /// <summary>Solves every end point of <paramref name="network"/>; gives the end points, the worst (−1 without any) and the number of findings.</summary>
-    public static (SolvedEndPoints EndPoints, int Worst, int Findings) Solve(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow)
+    public static (SolvedEndPoints EndPoints, int Worst, int Findings) Solve(
+        DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages)
     {
-        var pass = new EndPointTotals(network, sums, phases, runs, flow);
+        var pass = new EndPointTotals(network, sums, phases, runs, flow, voltages);
         pass.Number();
         ParallelRanges.For(pass._count, pass.SolveRange);
         var n = pass._nodes.Length;
@@ -123,55 +130,62 @@ internal sealed class EndPointTotals
     private bool WorseThan(int a, int b) =>
         Solution.WorstFirst(_endPoints[a].TotalDropPercent, _nodes[_endPoints[a].Node].Id, _endPoints[b].TotalDropPercent, _nodes[_endPoints[b].Node].Id) < 0;
 
-    // Fills end point e's row, findings and motor-start check; gives the number of its findings.
+    // Fills end point e's row, findings and motor-start check; gives the number of its findings. Its voltage: a
+    // 1-pole load's line to neutral, a 2-pole load's line to line, a 3-pole load's worst line pair (by each method
+    // on its own); each row's share in it (see PathShares), service side first.
     private int SolveEndPoint(int e)
     {
-        var (rows, lineDrops, pathRuns, pathShares, parents) = (_runs.Rows, _runs.LineDrops, _pathRuns, _pathShares, _parents);
-        var (incomingRow, transformerRow) = (_runs.IncomingRow, _runs.TransformerRow);
         var index = _endPointNode[e];
         var (first, pathCount) = (_pathStart[e], _pathStart[e + 1] - _pathStart[e]);
-        double percentSum = 0, loadFlow = 0;
-
-        // Walking up from the end point: its own lines, until a transformer between systems of different line
-        // counts, above which the worst line counts (the safe side). Each transformer's row before its primary
-        // feeder's; the rows are stored service side first.
-        var set = (int)_phases.Assigned[index];
-        var at = first + pathCount;
-        for (var i = index; at > first; i = parents[i])
+        var panel = _nodes[_parents[index]];
+        var system = PhaseFrame.BusSystem(panel);
+        var lines = PhaseRules.Lines(system);
+        var slots = Slots.OfCircuit((int)_phases.Assigned[index] & ((1 << lines) - 1)) & Slots.Of(lines, system.HasNeutral);
+        var buffer = ArrayPool<double>.Shared.Rent(pathCount * 2);
+        var rowsBuffer = ArrayPool<int>.Shared.Rent(pathCount);
+        var ps = buffer.AsSpan(0, pathCount);
+        var lf = buffer.AsSpan(pathCount, pathCount);
+        var (worstPs, worstLf, slotPs, slotLf) = (double.NegativeInfinity, double.NegativeInfinity, -1, -1);
+        for (var slot = 0; slot < Slots.Count; slot++)
         {
-            // The node's transformer's row (an end point has none), then its incoming run's.
-            for (var k = 0; k < 2; k++)
+            if ((slots & (1 << slot)) != 0)
             {
-                var r = k == 0 ? transformerRow[i] : incomingRow[i];
-                if (r < 0)
-                {
-                    continue;
-                }
-
-                ref var row = ref rows[r];
-                pathRuns[--at] = r;
-                pathShares[at] = _onLoadFlow ? row.LoadFlowDropPercent!.Value : lineDrops[(r * 8) + set];
-                percentSum += lineDrops[(r * 8) + set];
-                loadFlow += row.LoadFlowDropPercent ?? 0;
-                if (row.WidensToAllLines)
-                {
-                    set = (int)Phases.ABC;
-                }
+                var (percentSum, loadFlow) = _shares.Walk(index, _phases.SlotOn(panel, slot), pathCount, ps, lf, rowsBuffer);
+                (worstPs, slotPs) = percentSum > worstPs || slotPs < 0 ? (percentSum, slot) : (worstPs, slotPs);
+                (worstLf, slotLf) = loadFlow > worstLf || slotLf < 0 ? (loadFlow, slot) : (worstLf, slotLf);
             }
         }
 
-        var total = _onLoadFlow ? loadFlow : percentSum;
-        var start = (_sums.Has[index] & Has.Motor) != 0 ? MotorStartCheck.Of(_network, _runs, index, _sums.Power[index], _sums.LockedRotor[index]) : null;
+        // The shares of the voltage that counts, in the path arrays, service side first (walked again where a
+        // 3-pole load's worst pair was not the last walked).
+        var counted = _onLoadFlow ? slotLf : slotPs;
+        if (counted != 31 - BitOperations.LeadingZeroCount((uint)slots))
+        {
+            _shares.Walk(index, _phases.SlotOn(panel, counted), pathCount, ps, lf, rowsBuffer);
+        }
+
+        for (var k = 0; k < pathCount; k++)
+        {
+            _pathRuns[first + pathCount - 1 - k] = rowsBuffer[k];
+            _pathShares[first + pathCount - 1 - k] = _onLoadFlow ? lf[k] : ps[k];
+        }
+
+        ArrayPool<double>.Shared.Return(buffer);
+        ArrayPool<int>.Shared.Return(rowsBuffer);
+
+        var total = _onLoadFlow ? worstLf : worstPs;
+        var start = (_sums.Has[index] & Has.Motor) != 0 ? _motors.Of(index, slots, _sums.Power[index], _sums.LockedRotor[index]) : null;
         var found = Findings(index, total, pathCount, start);
+        var nominal = _phases.SlotOn(panel, slotLf);
         _endPoints[e] = new EndPointRow
         {
             Node = index,
             PathStart = first,
             PathCount = pathCount,
             TotalDropPercent = total,
-            PercentSumTotalDropPercent = percentSum,
-            LoadFlowTotalDropPercent = _flow.Converged ? loadFlow : null,
-            LoadFlowEndVoltageV = _flow.Converged ? _flow.InputPu[index] * rows[incomingRow[index]].VoltageV : null,
+            PercentSumTotalDropPercent = worstPs,
+            LoadFlowTotalDropPercent = _voltages is null ? null : worstLf,
+            LoadFlowEndVoltageV = _voltages is null ? null : nominal.Of(_voltages.Bus(index)).Magnitude * Slots.NominalV(nominal, slotLf),
         };
         _motorStarts[e] = start;
         _findings[e] = found;

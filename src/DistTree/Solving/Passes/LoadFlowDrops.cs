@@ -6,30 +6,32 @@ using DistTree.Network;
 namespace DistTree.Solving.Passes;
 
 /// <summary>
-/// The load flow's drops beside the percent sum's: a run's is the fall of the per-unit voltage along it,
-/// (V_bus,parent − V_in)·100; a transformer's the fall through it, (V_in − V_bus)·100. With
-/// <c>rules: method: load_flow</c> they are the ones that count, and a load flow that did not converge is then a
-/// located error.
+/// The load flow's drops beside the percent sum's: a run's is the fall of each of its own voltages along it (see
+/// <see cref="RunDrops.OwnSlots"/>), |f(V_from)| − |f(V_to)| in percent of nominal, the worst of them; a
+/// transformer's the fall from its primary terminals, read through its connection at the principal tap, to its
+/// secondary, the worst of its secondary's voltages. With <c>rules: method: load_flow</c> they are the ones that
+/// count, and a load flow that did not converge is then a located error.
 /// </summary>
 internal static class LoadFlowDrops
 {
-    /// <summary>Records <paramref name="flow"/>'s drops in <paramref name="runs"/>' rows, on every core.</summary>
-    public static void Record(DistributionNetwork network, RunRows runs, LoadFlowResult flow)
+    /// <summary>Records the drops of the load flow <paramref name="flow"/>, whose voltages are <paramref name="voltages"/>, in <paramref name="runs"/>' rows, on every core.</summary>
+    public static void Record(DistributionNetwork network, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages)
     {
         var rules = network.Project.Rules;
         if (!flow.Converged)
         {
             if (rules.Method == SolutionMethod.LoadFlow)
             {
-                throw ProjectException.At(network.Project.Service.Location, string.Create(
+                var weakest = network.NodeArray.First(n => n.Id == flow.WeakestId);
+                throw ProjectException.At(weakest.Circuit?.Location ?? weakest.Equipment?.Location ?? network.Project.Service.Location, string.Create(
                     CultureInfo.InvariantCulture,
-                    $"the load flow did not converge in {flow.Iterations} sweeps: the loads are too heavy for the conductors and transformers (a voltage collapse); fix the worst runs, or use 'method: percent_sum' to see them"));
+                    $"the load flow did not converge in {flow.Iterations} sweeps: the voltage collapses at {weakest.Id} (the loads are too heavy for the conductors and transformers that feed it); fix the worst runs, or use 'method: percent_sum' to see them"));
             }
 
             return;
         }
 
-        var (parents, rows, incomingRow, transformerRow) = (network.ParentIndices, runs.Rows, runs.IncomingRow, runs.TransformerRow);
+        var (nodes, rows, incomingRow, transformerRow) = (network.NodeArray, runs.Rows, runs.IncomingRow, runs.TransformerRow);
         var counts = rules.Method == SolutionMethod.LoadFlow;
         void Record(ref RunRow r, double drop)
         {
@@ -40,20 +42,46 @@ internal static class LoadFlowDrops
             }
         }
 
-        ParallelRanges.For(parents.Length, (start, end) =>
+        ParallelRanges.For(nodes.Length, (start, end) =>
         {
             for (var i = Math.Max(start, 1); i < end; i++)
             {
-                if (incomingRow[i] >= 0)
+                var node = nodes[i];
+                if (node.Incoming is { } run)
                 {
-                    Record(ref rows[incomingRow[i]], (flow.BusPu[parents[i]] - flow.InputPu[i]) * 100.0);
+                    var own = RunDrops.OwnSlots(run, phases);
+                    Record(ref rows[incomingRow[i]], Worst(own, slot =>
+                    {
+                        var f = phases.SlotOn(run.Source, slot);
+                        return f.Of(voltages.Bus(run.Source.Index)).Magnitude - f.Of(voltages.Input(i)).Magnitude;
+                    }));
                 }
 
-                if (transformerRow[i] >= 0)
+                if (phases.Frame.Models[i] is { } model)
                 {
-                    Record(ref rows[transformerRow[i]], (flow.InputPu[i] - flow.BusPu[i]) * 100.0);
+                    var secondary = PhaseFrame.BusSystem(node);
+                    Record(ref rows[transformerRow[i]], Worst(Slots.Of(PhaseRules.Lines(secondary), secondary.HasNeutral), slot =>
+                    {
+                        var f = phases.SlotOn(node, slot);
+                        return model.MapUp(f).Of(voltages.Input(i)).Magnitude - f.Of(voltages.Bus(i)).Magnitude;
+                    }));
                 }
             }
         });
+    }
+
+    // The worst of a figure over the slots, in percent.
+    private static double Worst(int slots, Func<int, double> fall)
+    {
+        var worst = double.NegativeInfinity;
+        for (var slot = 0; slot < Slots.Count; slot++)
+        {
+            if ((slots & (1 << slot)) != 0)
+            {
+                worst = Math.Max(worst, fall(slot) * 100.0);
+            }
+        }
+
+        return worst;
     }
 }

@@ -1,49 +1,88 @@
+using System.Buffers;
+using System.Numerics;
 using DistTree.Network;
 
 namespace DistTree.Solving.Passes;
 
 /// <summary>
-/// A motor's dip while it starts: the extra drop of ΔS = S_locked-rotor − S_running on each run,
-/// 100·(ΔP·R_loop + ΔQ·X_loop)/V², R_loop and X_loop the run's impedance (both conductors for single-phase), and on
-/// a transformer (%R·ΔP + %X·ΔQ)/S_rated, superposed on the steady drops of the whole path (a new origin does not
-/// stop a physical dip). Asked by the end points' pass for each motor (see <see cref="EndPointTotals"/>).
+/// A motor's dip while it starts (common practice): the running drop of everything (every row's share to the
+/// service, see <see cref="PathShares"/>; a new origin does not stop a physical dip) plus the start, superposed: the
+/// extra current ΔI of ΔS = S_locked-rotor − S_running on the motor's own lines (and its neutral, for a 1-pole motor),
+/// carried up the path through each transformer's connection, and on each row the linearised drop it makes in the
+/// motor's own voltage, Re f(ΔV) (see <see cref="Functional.OfRun"/>, <see cref="TransformerModel.WindingDrop"/>).
+/// At the terminals, and at its panel (the same less the motor's own run). A 3-pole motor's worst line pair counts.
 /// </summary>
-internal static class MotorStartCheck
+internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow phases, RunRows runs, PathShares shares, bool onLoadFlow)
 {
-    /// <summary>The check of the motor at node <paramref name="motor"/>, running at <paramref name="running"/> and starting at <paramref name="lockedRotor"/>.</summary>
-    public static MotorStartResult Of(DistributionNetwork network, RunRows runs, int motor, ComplexPower running, ComplexPower lockedRotor)
+    private readonly double _limitPercent = network.Project.Rules.MotorStartLimitPercent;
+
+    /// <summary>The check of the motor at node <paramref name="motor"/> whose voltages are <paramref name="slots"/>, running at <paramref name="running"/> and starting at <paramref name="lockedRotor"/>.</summary>
+    public MotorStartResult Of(int motor, int slots, ComplexPower running, ComplexPower lockedRotor)
     {
-        var (nodes, parents) = (network.NodeArray, network.ParentIndices);
-        var (rows, loopKm, incomingRow, transformerRow) = (runs.Rows, runs.LoopKm, runs.IncomingRow, runs.TransformerRow);
-        var delta = lockedRotor + (running * -1.0);
-        double terminal = 0, panel = 0;
-        for (var i = motor; i > 0; i = parents[i])
+        var nodes = network.NodeArray;
+        var panel = nodes[network.ParentIndices[motor]];
+        var count = shares.AllRows(motor);
+        var buffer = ArrayPool<double>.Shared.Rent(count * 2);
+        var rows = ArrayPool<int>.Shared.Rent(count);
+        var ps = buffer.AsSpan(0, count);
+        var lf = buffer.AsSpan(count, count);
+        var (terminal, atPanel) = (double.NegativeInfinity, double.NegativeInfinity);
+        for (var slot = 0; slot < Slots.Count; slot++)
         {
-            var extraHere = 0.0;
-            var steadyHere = 0.0;
-            if (incomingRow[i] >= 0)
+            if ((slots & (1 << slot)) != 0)
             {
-                ref var r = ref rows[incomingRow[i]];
-                var km = loopKm[incomingRow[i]];
-                extraHere += 100.0 * ((delta.Watts * r.ResistanceOhmPerKm * km) + (delta.Vars * r.ReactanceOhmPerKm * km)) / (r.VoltageV * r.VoltageV);
-                steadyHere += r.DropPercent;
-            }
-
-            if (transformerRow[i] >= 0 && i != motor)
-            {
-                var t = nodes[i].Equipment!.Transformer!;
-                var (percentR, percentX) = TransformerRegulation.PercentRx(t);
-                extraHere += ((percentR * delta.Watts) + (percentX * delta.Vars)) / (t.Kva * 1000.0);
-                steadyHere += rows[transformerRow[i]].DropPercent;
-            }
-
-            terminal += extraHere + steadyHere;
-            if (i != motor)
-            {
-                panel += extraHere + steadyHere;
+                var f = phases.SlotOn(panel, slot);
+                var (percentSum, loadFlow) = shares.Walk(motor, f, count, ps, lf, rows);
+                var (extra, ownExtra) = Extra(motor, f, lockedRotor + (running * -1.0));
+                var steady = onLoadFlow ? loadFlow : percentSum;
+                var own = (onLoadFlow ? lf[0] : ps[0]) + ownExtra;
+                if (steady + extra > terminal)
+                {
+                    (terminal, atPanel) = (steady + extra, steady + extra - own);
+                }
             }
         }
 
-        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, panel, network.Project.Rules.MotorStartLimitPercent);
+        ArrayPool<double>.Shared.Return(buffer);
+        ArrayPool<int>.Shared.Return(rows);
+        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, atPanel, _limitPercent);
+    }
+
+    // The start's extra drop in f, percent, on the whole path and on the motor's own run.
+    private (double Extra, double Own) Extra(int motor, Functional f, ComplexPower delta)
+    {
+        var (nodes, parents) = (network.NodeArray, network.ParentIndices);
+        Span<Complex> current = stackalloc Complex[3];
+        Span<Complex> secondary = stackalloc Complex[3];
+        Span<Complex> m = stackalloc Complex[3];
+        var panel = parents[motor];
+        PhaseCurrents.LoadCurrents(delta, phases.Assigned[motor], PhaseFrame.BusSystem(nodes[panel]), phases.Frame.Rotation[panel], current);
+        double extra = 0, own = 0;
+        for (var i = motor; i > 0; i = parents[i])
+        {
+            if (phases.Frame.Models[i] is { } model)
+            {
+                extra += model.WindingDrop(f, current).Real * 100.0;
+                f = model.MapUp(f);
+                current.CopyTo(secondary);
+                model.PrimaryCurrents(secondary, current);
+            }
+
+            if (nodes[i].Incoming is { } run)
+            {
+                ref var row = ref runs.Rows[runs.IncomingRow[i]];
+                var km = run.Conductors.LengthM / 1000.0 / run.Conductors.Sets;
+                for (var x = 0; x < 3; x++)
+                {
+                    m[x] = current[x] * km;
+                }
+
+                var here = f.DropPercent(m, row.ResistanceOhmPerKm, row.ReactanceOhmPerKm);
+                extra += here;
+                own = i == motor ? here : own;
+            }
+        }
+
+        return (extra, own);
     }
 }

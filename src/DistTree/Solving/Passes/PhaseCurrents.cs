@@ -5,17 +5,17 @@ using DistTree.Network;
 namespace DistTree.Solving.Passes;
 
 /// <summary>
-/// The currents pass, bottom-up a level at a time (see <see cref="TreeLevels"/>): each end point's load becomes
-/// phasor currents on its lines, I = conj(S/V) (a 1-pole load returns through the neutral, a 2-pole load flows
-/// line to line, a 3-pole load is balanced); a node's currents are the phasor sums of its children's times its
-/// demand factor. Through a transformer, the secondary's phase currents pass phase for phase at the turns ratio
-/// without their zero-sequence part (a delta winding traps it); a single-phase secondary draws line to line (A-B)
-/// on a three-phase primary. The 30° shift of a delta-wye transformer is left out: it turns every phase alike and
-/// changes no magnitude (common practice).
+/// The currents pass, bottom-up a level at a time (see <see cref="TreeLevels"/>): each end point's load becomes line
+/// currents at the nominal voltages of the phase frame (see <see cref="PhaseLoads"/>, <see cref="PhaseFrame"/>); a
+/// node's currents are the phasor sums of its children's times its demand factor; a transformer draws on its primary
+/// what its connection makes of its secondary's (see <see cref="TransformerModel.PrimaryCurrents"/>). The neutral of
+/// a run carries the return of its lines, −(I_A + I_B + I_C). Conductor temperatures, ampacity and the percent sum
+/// all read these currents.
 /// </summary>
 internal sealed class PhaseCurrents
 {
     private readonly DistributionNetwork _network;
+    private readonly PhaseFrame _frame;
     private readonly ComplexPower[] _power;
     private readonly Phases[] _assigned;
     private readonly Complex[] _currents;
@@ -23,61 +23,37 @@ internal sealed class PhaseCurrents
     // Per transformer node, the secondary's line currents (A) on its bus.
     private readonly Dictionary<int, Complex[]> _secondary = [];
 
-    private PhaseCurrents(DistributionNetwork network, ComplexPower[] power, Phases[] assigned)
+    private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned)
     {
         _network = network;
+        _frame = frame;
         _power = power;
         _assigned = assigned;
         _currents = GC.AllocateUninitializedArray<Complex>(network.NodeArray.Length * 3);
     }
 
     /// <summary>
-    /// The line currents of <paramref name="network"/>, whose loads are <paramref name="power"/> on the lines
-    /// <paramref name="assigned"/> (see <see cref="PhaseAssignment"/>).
+    /// The line currents of <paramref name="network"/> in <paramref name="frame"/>, whose loads are
+    /// <paramref name="power"/> on the lines <paramref name="assigned"/> (see <see cref="PhaseAssignment"/>).
     /// </summary>
-    public static PhaseFlow Solve(DistributionNetwork network, ComplexPower[] power, Phases[] assigned)
+    public static PhaseFlow Solve(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned)
     {
-        var pass = new PhaseCurrents(network, power, assigned);
+        var pass = new PhaseCurrents(network, frame, power, assigned);
         pass.Accumulate();
-        return new PhaseFlow(assigned, pass._currents, pass._secondary);
+        return new PhaseFlow(frame, assigned, pass._currents, pass._secondary);
     }
 
-    /// <summary>Adds to <paramref name="into"/> the line currents (A) of a load <paramref name="s"/> on the lines <paramref name="phases"/> of <paramref name="system"/>, at the circuit's nominal voltage.</summary>
-    public static void LoadCurrents(ComplexPower s, Phases phases, SystemVoltages system, Span<Complex> into)
+    /// <summary>
+    /// Adds into <paramref name="into"/> (three lines) the currents of a load of <paramref name="s"/> on the lines
+    /// <paramref name="phases"/> of a bus of <paramref name="system"/> turned by <paramref name="rotation"/>, at nominal voltage.
+    /// </summary>
+    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Complex rotation, Span<Complex> into)
     {
-        var lines = system.Lines;
-        var power = new Complex(s.Watts, s.Vars);
-        var on = (int)phases & ((1 << lines) - 1);
-        var count = BitOperations.PopCount((uint)on);
-        var v = count switch
-        {
-            1 => system.SingleV,
-            2 => system.PairV,
-            _ => system.PerLineV,
-        };
-        if (count == 1)
-        {
-            var x = BitOperations.TrailingZeroCount(on);
-            into[x] += Complex.Conjugate(power / (v * LineVoltages.Unit(x, lines)));
-        }
-        else if (count == 2)
-        {
-            var (x, y) = (BitOperations.TrailingZeroCount(on), 31 - BitOperations.LeadingZeroCount((uint)on));
-            var u = LineVoltages.Unit(x, lines) - LineVoltages.Unit(y, lines);
-            var i = Complex.Conjugate(power / (v * u / LineVoltages.PairMagnitude[(lines * 8) + on]));
-            into[x] += i;
-            into[y] -= i;
-        }
-        else
-        {
-            for (var x = 0; x < lines; x++)
-            {
-                if ((on & (1 << x)) != 0)
-                {
-                    into[x] += Complex.Conjugate(power / count / (v * LineVoltages.Unit(x, lines)));
-                }
-            }
-        }
+        Span<Complex> nominal = stackalloc Complex[4];
+        PhaseFrame.Nominal(system, rotation, nominal);
+        var (single, pair) = PhaseFrame.LoadBases(system);
+        var on = (int)phases & ((1 << PhaseRules.Lines(system)) - 1);
+        PhaseLoads.Add(new Complex(s.Watts, s.Vars), LoadModel.ConstantPower, on, nominal, single, pair, into);
     }
 
     // Each node works out its own currents; a node that is not an end point pulls its children's (a level below,
@@ -93,6 +69,7 @@ internal sealed class PhaseCurrents
     private void Accumulate(int start, int end)
     {
         var nodes = _network.NodeArray;
+        var rotation = _frame.Rotation;
         Span<Complex> bus = stackalloc Complex[3];
         for (var i = end - 1; i >= start; i--)
         {
@@ -101,7 +78,8 @@ internal sealed class PhaseCurrents
             mine.Clear();
             if (node.Circuit is not null)
             {
-                LoadCurrents(_power[i], _assigned[i], LineVoltages.Of(nodes[node.ParentIndex].System), mine);
+                var parent = node.ParentIndex;
+                LoadCurrents(_power[i], _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], mine);
                 continue;
             }
 
@@ -112,7 +90,7 @@ internal sealed class PhaseCurrents
                 mine[x] *= factor;
             }
 
-            if (node.Equipment?.Transformer is { } t)
+            if (_frame.Models[i] is { } model)
             {
                 // Few nodes are transformers; the lock keeps the dictionary whole when two write at once.
                 lock (_secondary)
@@ -121,7 +99,7 @@ internal sealed class PhaseCurrents
                 }
 
                 mine.CopyTo(bus);
-                ToPrimary(bus, t.Secondary, node.Equipment.System, mine);
+                model.PrimaryCurrents(bus, mine);
             }
         }
     }
@@ -138,34 +116,5 @@ internal sealed class PhaseCurrents
                 into[x] += currents[(child * 3) + x];
             }
         }
-    }
-
-    // A transformer's primary currents from its secondary's.
-    private static void ToPrimary(ReadOnlySpan<Complex> secondary, ElectricalSystem from, ElectricalSystem to, Span<Complex> primary)
-    {
-        var sLines = PhaseRules.Lines(from);
-        var pLines = PhaseRules.Lines(to);
-        primary.Clear();
-        if (sLines == 3 && pLines == 3)
-        {
-            var ratio = LineVoltages.LineToNeutralV(from) / LineVoltages.LineToNeutralV(to);
-            var zero = (secondary[0] + secondary[1] + secondary[2]) / 3;
-            for (var x = 0; x < 3; x++)
-            {
-                primary[x] = (secondary[x] - zero) * ratio;
-            }
-
-            return;
-        }
-
-        // Any other pairing: the secondary's total power, drawn line to line on the primary (or on its one line).
-        var s = Complex.Zero;
-        var vs = LineVoltages.LineToNeutralV(from);
-        for (var x = 0; x < sLines; x++)
-        {
-            s += vs * LineVoltages.Unit(x, sLines) * Complex.Conjugate(secondary[x]);
-        }
-
-        LoadCurrents(new ComplexPower(s.Real, s.Imaginary), pLines == 1 ? Phases.A : Phases.AB, LineVoltages.Voltages(to), primary);
     }
 }

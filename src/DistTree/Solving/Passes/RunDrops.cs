@@ -7,8 +7,8 @@ namespace DistTree.Solving.Passes;
 
 /// <summary>
 /// The runs' pass: each run's figures at the current it carries (temperature, R and X, ampacity; see
-/// <see cref="RunElectrics"/>) and its drop on every set of lines below it, drop = R·unitR + X·unitX with the unit
-/// drops of <see cref="PhaseFlow.UnitDropsOn"/>; in the same sweep each transformer's regulation (see
+/// <see cref="RunElectrics"/>), its current-lengths (see <see cref="Moments"/>) from which every end point's share
+/// follows (see <see cref="Functional.OfRun"/>), and its own drop, the worst of its own voltages; in the same sweep each transformer's regulation (see
 /// <see cref="TransformerRegulation"/>), and on the percent sum each row's findings (see <see cref="RunFindings"/>),
 /// known as soon as the row is, while the run's objects are at hand. Runs are independent: the pass runs on every
 /// core, each node writing its own rows.
@@ -25,7 +25,6 @@ internal sealed class RunDrops
     private readonly PhaseFlow _phases;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
-    private readonly Complex[] _z;
     private int _findings;
 
     private RunDrops(ConductorCatalog catalog, ProtectionRules protection, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
@@ -40,65 +39,106 @@ internal sealed class RunDrops
         _phases = phases;
         _runs = runs;
         _findingsWithRuns = _rules.Method == SolutionMethod.PercentSum;
-        _z = Scratch.RentToFill<Complex>(_nodes.Length); // read only where a run comes in, and written there
     }
 
     /// <summary>
-    /// Fills <paramref name="runs"/>' rows, line drops and run figures, and on the percent sum their findings. Gives
-    /// each node's incoming run impedance in ohms (its whole length, sets in parallel: the load flow's; a scratch
-    /// array, to give back) and the number of findings.
+    /// Fills <paramref name="runs"/>' rows and current-lengths, and on the percent sum their findings; gives the number
+    /// of findings.
     /// </summary>
-    public static (Complex[] ImpedanceOhm, int Findings) Solve(
+    public static int Solve(
         ConductorCatalog catalog, ProtectionRules protection, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
     {
         var pass = new RunDrops(catalog, protection, network, sums, phases, runs);
         ParallelRanges.For(pass._nodes.Length, pass.SolveRange);
-        return (pass._z, pass._findings);
+        return pass._findings;
     }
 
     /// <summary>
-    /// A run's unit drops (see <see cref="RunResult.UnitDrops"/>) at the current it carries and the largest of its
-    /// line currents: loads along the run span by span, else the phase currents of what it feeds.
+    /// A run's current-lengths per set (A·km, three lines; see <see cref="Functional.OfRun"/>) at the current it is
+    /// figured at, <paramref name="scale"/> times its phase currents: loads along the run span by span (each point's
+    /// current flows from the head to its point), else the phase currents of what it feeds over its length.
     /// </summary>
-    internal static void UnitDrops(NetworkRun run, PhaseFlow phases, double currentA, double lineA, Span<double> unitR, Span<double> unitX)
+    internal static void Moments(NetworkRun run, PhaseFlow phases, double scale, Span<Complex> m)
     {
-        var supply = run.Supply;
         var conductors = run.Conductors;
         var points = run.Target.Circuit?.Points ?? [];
-        if (points.Count > 0)
+        m[..3].Clear();
+        if (points.Count == 0)
         {
-            unitR.Fill(SpanDropV(points, supply, conductors, 1, 0) / supply.VoltageV * 100.0);
-            unitX.Fill(SpanDropV(points, supply, conductors, 0, 1) / supply.VoltageV * 100.0);
+            var km = PerSetKm(conductors) * scale;
+            var i = phases.Currents.AsSpan(run.Target.Index * 3, 3);
+            for (var x = 0; x < 3; x++)
+            {
+                m[x] = i[x] * km;
+            }
+
+            return;
         }
-        else
+
+        var parent = run.Source;
+        var set = phases.Assigned[run.Target.Index];
+        Span<Complex> point = stackalloc Complex[3];
+        foreach (var p in points)
         {
-            phases.UnitDrops(run.Target.Index, PerSetKm(conductors), run.Source.System, LineScale(currentA, lineA), unitR, unitX);
+            point.Clear();
+            PhaseCurrents.LoadCurrents(LoadPower.Of(p.Load, run.Supply), set, PhaseFrame.BusSystem(parent), phases.Frame.Rotation[parent.Index], point);
+            var km = p.AtM / 1000.0 / conductors.Sets;
+            for (var x = 0; x < 3; x++)
+            {
+                m[x] += point[x] * km;
+            }
         }
     }
 
-    /// <summary>A run's own drop: on a branch circuit's lines, or for a feeder the worst that any circuit below sees.</summary>
-    internal static double OwnDrop(ReadOnlySpan<double> unitR, ReadOnlySpan<double> unitX, double r, double x, int ownLines)
+    /// <summary>
+    /// A run's unit drops: into <paramref name="unitR"/>[slot] and <paramref name="unitX"/>[slot] (see
+    /// <see cref="Slots"/>), the drop in percent of each voltage of its bus per Ω/km of resistance and of reactance
+    /// of its conductors, at its present length and sets (the drop is linear in R and X, so the sizer prices any size
+    /// with them). Gives the slots its own drop is the worst of.
+    /// </summary>
+    internal static int UnitDrops(NetworkRun run, PhaseFlow phases, double currentA, double lineA, Span<double> unitR, Span<double> unitX)
     {
-        if (ownLines > 0)
+        Span<Complex> m = stackalloc Complex[3];
+        Moments(run, phases, LineScale(currentA, lineA), m);
+        var own = OwnSlots(run, phases);
+        for (var slot = 0; slot < Slots.Count; slot++)
         {
-            return (r * unitR[ownLines]) + (x * unitX[ownLines]);
+            var perOhm = (own & (1 << slot)) != 0 ? phases.SlotOn(run.Source, slot).PerOhm(m) * 100.0 : Complex.Zero;
+            (unitR[slot], unitX[slot]) = (perOhm.Real, -perOhm.Imaginary);
         }
 
+        return own;
+    }
+
+    /// <summary>A run's own drop: the worst of its own slots' drops R·unitR + X·unitX.</summary>
+    internal static double OwnDrop(ReadOnlySpan<double> unitR, ReadOnlySpan<double> unitX, double r, double x, int own)
+    {
         var worst = double.NegativeInfinity;
-        for (var set = 1; set < 8; set++)
+        for (var slot = 0; slot < Slots.Count; slot++)
         {
-            worst = Math.Max(worst, (r * unitR[set]) + (x * unitX[set]));
+            if ((own & (1 << slot)) != 0)
+            {
+                worst = Math.Max(worst, (r * unitR[slot]) + (x * unitX[slot]));
+            }
         }
 
         return worst;
     }
 
+    /// <summary>The slots a run's own drop is the worst of: a branch circuit's own voltages, a feeder's every voltage of its system.</summary>
+    internal static int OwnSlots(NetworkRun run, PhaseFlow phases)
+    {
+        var system = PhaseFrame.BusSystem(run.Source);
+        var all = Slots.Of(PhaseRules.Lines(system), system.HasNeutral);
+        return run.Kind == RunKind.Branch ? all & Slots.OfCircuit((int)phases.Assigned[run.Target.Index] & ((1 << PhaseRules.Lines(system)) - 1)) : all;
+    }
+
     // The nodes start … end − 1: each one's incoming run and transformer.
     private void SolveRange(int start, int end)
     {
-        var (nodes, rows, lineDrops, findings) = (_nodes, _runs.Rows, _runs.LineDrops, _runs.Findings);
+        var (nodes, rows, moments, findings) = (_nodes, _runs.Rows, _runs.Moments, _runs.Findings);
         var (incomingRow, transformerRow, power, continuous) = (_runs.IncomingRow, _runs.TransformerRow, _sums.Power, _sums.Continuous);
-        var (z, loopKm, lengthM, limitPercent) = (_z, _runs.LoopKm, _runs.LengthM, _runs.LimitPercent);
+        var (lengthM, limitPercent) = (_runs.LengthM, _runs.LimitPercent);
         var found = 0;
         for (var i = start; i < end; i++)
         {
@@ -107,19 +147,12 @@ internal sealed class RunDrops
             {
                 var r = incomingRow[i];
                 ref var row = ref rows[r];
-                var drops = lineDrops.AsSpan(r * 8, 8);
-                drops.Clear();
-                SolveRun(ref row, run, continuous[i], drops);
+                SolveRun(ref row, run, continuous[i], moments.AsSpan(r * 3, 3));
                 if (_findingsWithRuns)
                 {
                     found += (findings[r] = RunFindings.Of(ref row, run, _protection))?.Count ?? 0;
                 }
 
-                // The load flow's impedance of the run: its whole length, sets in parallel. Its loop, for the
-                // motor-start check: both conductors for single-phase.
-                var km = PerSetKm(run.Conductors);
-                z[i] = new Complex(row.ResistanceOhmPerKm * km, row.ReactanceOhmPerKm * km);
-                loopKm[r] = km * (run.Supply.Phases == 3 ? 1.0 : 2.0);
                 lengthM[r] = run.Conductors.LengthM;
                 limitPercent[r] = run.LimitPercent;
             }
@@ -127,18 +160,15 @@ internal sealed class RunDrops
             if (node.Equipment?.Transformer is { } transformer)
             {
                 var r = transformerRow[i];
-                var drops = lineDrops.AsSpan(r * 8, 8);
-                drops.Clear();
-                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, drops))?.Count ?? 0;
+                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases))?.Count ?? 0;
             }
         }
 
         Interlocked.Add(ref _findings, found);
     }
 
-    // A run's figures, and into lineDrops the drop in percent that each kind of circuit below sees on it (see
-    // RunRows.LineDrops).
-    private void SolveRun(ref RunRow row, NetworkRun run, ComplexPower continuousPart, Span<double> lineDrops)
+    // A run's figures, and into m its current-lengths (see Moments).
+    private void SolveRun(ref RunRow row, NetworkRun run, ComplexPower continuousPart, Span<Complex> m)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -148,25 +178,16 @@ internal sealed class RunDrops
         var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(lineA, conductors.OcpdA, _rules.BranchCurrent) : lineA;
         var designA = _protection.DesignCurrentA(_sums.Power[index], continuousPart, supply);
         var figures = RunElectrics.Compute(_catalog, _rules, conductors, conductors.Size, conductors.Sets, _frequencyHz, currentA, _bases.Of(conductors));
-        var ownLines = run.Kind == RunKind.Branch ? (int)_phases.Assigned[index] : 0;
-        double ownDrop;
-        if (ownLines > 0 && points.Count == 0)
+        Moments(run, _phases, LineScale(currentA, lineA), m);
+
+        // Its own drop: the worst of its own voltages' (see OwnSlots), each Re f(ΔV) of the drops along it.
+        var own = OwnSlots(run, _phases);
+        var ownDrop = double.NegativeInfinity;
+        for (var slot = 0; slot < Slots.Count; slot++)
         {
-            // A branch circuit's row is read on its own lines only, by the one end point it feeds: that set alone
-            // is worked out (the others stay zero), by the same arithmetic as all of them.
-            var (unitR, unitX) = _phases.UnitDropsOn(index, PerSetKm(conductors), run.Source.System, LineScale(currentA, lineA), ownLines);
-            ownDrop = (figures.ResistanceOhmPerKm * unitR) + (figures.ReactanceOhmPerKm * unitX);
-            lineDrops[ownLines] = ownDrop;
-        }
-        else
-        {
-            Span<double> unitR = stackalloc double[8];
-            Span<double> unitX = stackalloc double[8];
-            UnitDrops(run, _phases, currentA, lineA, unitR, unitX);
-            ownDrop = OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, ownLines);
-            for (var set = 0; set < 8; set++)
+            if ((own & (1 << slot)) != 0)
             {
-                lineDrops[set] = (figures.ResistanceOhmPerKm * unitR[set]) + (figures.ReactanceOhmPerKm * unitX[set]);
+                ownDrop = Math.Max(ownDrop, _phases.SlotOn(run.Source, slot).DropPercent(m, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm));
             }
         }
 
@@ -179,7 +200,7 @@ internal sealed class RunDrops
             ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
             ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
             AmpacityA = figures.AmpacityA,
-            OwnLines = ownLines,
+            OwnLines = (int)_phases.Assigned[index],
             DropPercent = ownDrop,
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
@@ -200,30 +221,4 @@ internal sealed class RunDrops
         (BranchCurrentBasis.Lesser, { } ocpd) => Math.Min(connectedA, 0.8 * ocpd),
         _ => connectedA,
     };
-
-    // Loads along a run: span by span, each span carrying the phasor sum of the loads beyond it, at the
-    // resistance and reactance of the whole run (temperature from the head current, the safe side).
-    private static double SpanDropV(IReadOnlyList<LoadPoint> points, CircuitSupply supply, Run conductors, double resistanceOhmPerKm, double reactanceOhmPerKm)
-    {
-        var k = supply.Phases == 3 ? Math.Sqrt(3) : 2.0;
-        var beyond = new ComplexPower[points.Count];
-        var sum = ComplexPower.Zero;
-        for (var j = points.Count - 1; j >= 0; j--)
-        {
-            sum += LoadPower.Of(points[j].Load, supply);
-            beyond[j] = sum;
-        }
-
-        var dropV = 0.0;
-        var from = 0.0;
-        for (var j = 0; j < points.Count; j++)
-        {
-            var spanKm = (points[j].AtM - from) / 1000.0;
-            var currentA = LoadPower.CurrentA(beyond[j].VoltAmperes, supply);
-            dropV += k * currentA * spanKm * ((resistanceOhmPerKm * beyond[j].PowerFactor) + (reactanceOhmPerKm * beyond[j].SinTheta)) / conductors.Sets;
-            from = points[j].AtM;
-        }
-
-        return dropV;
-    }
 }

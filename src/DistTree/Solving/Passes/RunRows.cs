@@ -26,8 +26,7 @@ internal sealed class RunRows : IDisposable
         Count = count;
         Rows = GC.AllocateUninitializedArray<RunRow>(count);
         Findings = new IReadOnlyList<Finding>?[count];
-        LineDrops = Scratch.RentToFill<double>(count * 8);
-        LoopKm = Scratch.RentToFill<double>(count);
+        Moments = Scratch.RentToFill<System.Numerics.Complex>(count * 3);
         LengthM = Scratch.RentToFill<double>(count);
         LimitPercent = Scratch.RentToFill<double>(count);
     }
@@ -48,15 +47,12 @@ internal sealed class RunRows : IDisposable
     public IReadOnlyList<Finding>?[] Findings { get; }
 
     /// <summary>
-    /// Per row × 8, the drop in percent that a circuit on each set of lines ((int)<see cref="Model.Phases"/>) sees on
-    /// it. A branch circuit's row holds its own set only: the one end point it feeds reads no other.
+    /// Per row × 3, a run's current-lengths per set (A·km, lines A, B, C; see <see cref="RunDrops.Moments"/>): the
+    /// drops along it are z·M on each line and z_N·(−ΣM) on the neutral. A transformer's row holds none.
     /// </summary>
-    public double[] LineDrops { get; }
+    public System.Numerics.Complex[] Moments { get; }
 
     // What later passes read of a run, kept by its row: they read only a run's rows, and the runs' pass writes them.
-
-    /// <summary>Per run's row, the length of its loop in km, for the motor-start check: both conductors for single-phase.</summary>
-    public double[] LoopKm { get; }
 
     /// <summary>Per run's row, its length in metres, for the reach.</summary>
     public double[] LengthM { get; }
@@ -67,8 +63,7 @@ internal sealed class RunRows : IDisposable
     /// <summary>Gives back the scratch arrays.</summary>
     public void Dispose()
     {
-        Scratch.Return(LineDrops, Count * 8);
-        Scratch.Return(LoopKm, Count);
+        Scratch.Return(Moments, Count * 3);
         Scratch.Return(LengthM, Count);
         Scratch.Return(LimitPercent, Count);
         Scratch.Return(IncomingRow, _n);

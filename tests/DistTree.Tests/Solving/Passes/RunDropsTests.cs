@@ -1,4 +1,3 @@
-using DistTree.Model;
 using DistTree.Solving.Passes;
 using FsCheck;
 using FsCheck.Fluent;
@@ -48,14 +47,16 @@ public sealed class RunDropsTests
         Assert.Equal(expectedA, s.Branch().CurrentA, 6);
     }
 
-    // A branch circuit's own drop is the one on its own lines; a feeder's, the worst that any set of lines below sees.
+    // A run's own drop is the worst of its own voltages (bits of Slots): one for a 1-pole branch circuit, three line
+    // pairs for a 3-pole one, all its system's for a feeder; the others do not count.
     [Theory]
-    [InlineData((int)Phases.B, 2 * 0.5 + 3 * 0.25)]
-    [InlineData(0, 2 * 0.9 + 3 * 0.1)]
-    public void OwnDrop_BranchOnItsLines_FeederTheWorst(int ownLines, double expected)
+    [InlineData(0b000010, 2 * 0.5 + 3 * 0.25)]
+    [InlineData(0b111000, 2 * 0.1 + 3 * 0.3)]
+    [InlineData(0b111111, 2 * 0.9 + 3 * 0.1)]
+    public void OwnDrop_TheWorstOfItsOwnVoltages(int own, double expected)
     {
-        double[] unitR = [0, 0.2, 0.5, 0.9, 0.1, 0.3, 0.4, 0.6];
-        double[] unitX = [0, 0.1, 0.25, 0.1, 0.2, 0.2, 0.3, 0.3];
-        Assert.Equal(expected, RunDrops.OwnDrop(unitR, unitX, 2, 3, ownLines), 12);
+        double[] unitR = [0.2, 0.5, 0.9, 0.1, 0.05, 0.1];
+        double[] unitX = [0.1, 0.25, 0.1, 0.2, 0.2, 0.3];
+        Assert.Equal(expected, RunDrops.OwnDrop(unitR, unitX, 2, 3, own), 12);
     }
 }

@@ -1,7 +1,4 @@
-using DistTree.Network;
-using DistTree.ProjectFiles;
 using DistTree.Solving;
-using DistTree.Solving.Passes;
 
 namespace DistTree.Tests.Solving.Passes;
 
@@ -47,11 +44,16 @@ public sealed class TransformerRegulationTests
         Assert.Equal(s.Branch().DropPercent, s.EndPoints.Single().TotalDropPercent, 9);
     }
 
-    [Fact]
-    public void Solve_TapBoost_LowersTheDrop()
+    // The nameplate's primary tap: −2.5 % takes 2.5 % of the primary turns off, so the secondary stands 1/0.975 of
+    // its rating at rated primary voltage, a rise of 2.5/0.975 = 2.564 %; +2.5 % lowers it by 2.5/1.025 = 2.439 %.
+    [Theory]
+    [InlineData(-2.5, -2.5 / 0.975)]
+    [InlineData(2.5, 2.5 / 1.025)]
+    public void Solve_Tap_IsThePrimaryTapOfTheNameplate(double tapPercent, double expectedShift)
     {
-        var s = SolverHarness.Solve(Project("transformer_drop: count", 75, 2.5));
-        Assert.Equal(3.8806 - 2.5, s.Runs.Single(r => r.Kind == RunResultKind.Transformer).DropPercent, 3);
+        var plain = SolverHarness.Solve(Project("transformer_drop: count", 75)).Runs.Single(r => r.Kind == RunResultKind.Transformer).DropPercent;
+        var tapped = SolverHarness.Solve(Project("transformer_drop: count", 75, tapPercent)).Runs.Single(r => r.Kind == RunResultKind.Transformer).DropPercent;
+        Assert.Equal(plain + expectedShift, tapped, 9);
     }
 
     [Fact]
@@ -59,15 +61,5 @@ public sealed class TransformerRegulationTests
     {
         var s = SolverHarness.Solve(Project("transformer_drop: count", 90));
         Assert.Contains(s.AllFindings, f => f.Code == "transformer_overload");
-    }
-
-    // %R = %Z/√(1 + (X/R)²), %X = %R·X/R: %Z 5, X/R 4 gives 5/√17 = 1.2127 and 4.8507 (as above).
-    [Fact]
-    public void PercentRx_FromImpedanceAndXOverR()
-    {
-        var network = NetworkBuilder.Build(ProjectLoader.Parse(Project("", 10), "test.yaml"));
-        var (r, x) = TransformerRegulation.PercentRx(network.NodeArray.Single(n => n.Id == "T1").Equipment!.Transformer!);
-        Assert.Equal(5 / Math.Sqrt(17), r, 12);
-        Assert.Equal(4 * 5 / Math.Sqrt(17), x, 12);
     }
 }

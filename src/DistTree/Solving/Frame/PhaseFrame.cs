@@ -1,0 +1,78 @@
+using System.Numerics;
+using DistTree.Model;
+using DistTree.Network;
+
+namespace DistTree.Solving;
+
+/// <summary>
+/// The phase frame of a tree: every bus's nominal conductor voltages and every transformer's model (see
+/// <see cref="TransformerModel"/>). The service is a balanced set at nominal line-to-line voltage, line A at 0°, the
+/// line-to-neutral base V_LL/√3 (a two-line system: ±V_LL/2; one line: its nominal); each transformer turns the
+/// set below it by its connection (Dyn1: −30°). The neutral is grounded at the service and at each transformer's
+/// secondary, nowhere else.
+/// </summary>
+internal sealed class PhaseFrame
+{
+    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, bool anyTransformer)
+    {
+        Models = models;
+        Rotation = rotation;
+        AnyTransformer = anyTransformer;
+    }
+
+    /// <summary>Per node, its transformer's model, or null.</summary>
+    public TransformerModel?[] Models { get; }
+
+    /// <summary>Per node, the turn of its bus's nominal voltages from the service's.</summary>
+    public Complex[] Rotation { get; }
+
+    /// <summary>Whether the tree has a transformer.</summary>
+    public bool AnyTransformer { get; }
+
+    /// <summary>The frame of <paramref name="network"/>: a model per transformer and each bus's turn, top-down.</summary>
+    public static PhaseFrame Of(DistributionNetwork network)
+    {
+        var (nodes, parents) = (network.NodeArray, network.ParentIndices);
+        var models = new TransformerModel?[nodes.Length];
+        var rotation = GC.AllocateUninitializedArray<Complex>(nodes.Length);
+        var any = false;
+        rotation[0] = Complex.One;
+        for (var i = 1; i < nodes.Length; i++)
+        {
+            rotation[i] = rotation[parents[i]];
+            if (nodes[i].Equipment?.Transformer is { } t)
+            {
+                var model = TransformerModel.Of(nodes[i], t, BusSystem(nodes[parents[i]]));
+                models[i] = model;
+                rotation[i] *= model.Rotation;
+                any = true;
+            }
+        }
+
+        return new PhaseFrame(models, rotation, any);
+    }
+
+    /// <summary>The system on a node's bus: a transformer's secondary, else the node's own.</summary>
+    public static ElectricalSystem BusSystem(NetworkNode node) => node.Equipment?.OutputSystem ?? node.System;
+
+    /// <summary>Into <paramref name="v"/> (four conductors), the nominal voltages of a bus of <paramref name="system"/> turned by <paramref name="rotation"/>.</summary>
+    public static void Nominal(ElectricalSystem system, Complex rotation, Span<Complex> v)
+    {
+        var lines = PhaseRules.Lines(system);
+        var vln = LineVoltages.LineToNeutralV(system);
+        for (var x = 0; x < 4; x++)
+        {
+            v[x] = x < lines ? vln * LineVoltages.Unit(x, lines) * rotation : Complex.Zero;
+        }
+    }
+
+    /// <summary>A load's nominal voltages on <paramref name="system"/>: line to neutral (V_LL/√3 on three lines) and between two lines.</summary>
+    public static (double SingleV, double PairV) LoadBases(ElectricalSystem system)
+    {
+        var single = LineVoltages.LineToNeutralV(system);
+        return (single, system.LineToLineV ?? single);
+    }
+
+    /// <summary>Into <paramref name="v"/> (four conductors), the nominal voltages of node <paramref name="node"/>'s bus.</summary>
+    public void Nominal(NetworkNode node, Span<Complex> v) => Nominal(BusSystem(node), Rotation[node.Index], v);
+}
