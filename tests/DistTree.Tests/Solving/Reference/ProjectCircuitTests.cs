@@ -99,6 +99,45 @@ public sealed class ProjectCircuitTests
     }
 
     [Fact]
+    public void EndPointDrops_LoadsAtTwoPoints_IsTheLadderDivider()
+    {
+        // Loads at 10 m and 30 m of a 1-pole run: a ladder. The loop impedance of each span is 2·Z per length; the
+        // first load is in parallel with the second span and load, so I = V/(Z₁ + Z_L1 ∥ (Z₂ + Z_L2)),
+        // V₁ = V − I·Z₁ and V₂ = V₁·Z_L2/(Z₂ + Z_L2) (series and parallel impedances, Kirchhoff's laws).
+        var points = "      - { id: \"1\", poles: 1, phase: A, points: [ { at: 10, load: { va: 600, pf: 0.9, model: impedance } }, "
+            + "{ at: 30, load: { va: 900, pf: 1, model: impedance } } ], run: { length: 30, size: 12 AWG } }";
+        var a = ReferenceHarness.Analyse(Project("120/240", "", points));
+        var (z1, z2) = (2 * Z(a, "P/1", 0.010), 2 * Z(a, "P/1", 0.020));
+        var (zl1, zl2) = (LoadImpedance(120, 600, 0.9), LoadImpedance(120, 900, 1));
+        var far = z2 + zl2;
+        var i = 120 / (z1 + (zl1 * far / (zl1 + far)));
+        var v1 = 120 - (i * z1);
+
+        Assert.Equal(DropPercent(120, v1 * zl2 / far), Drop(a, "P/1"), PointsTolerance);
+    }
+
+    [Theory]
+    [MemberData(nameof(PhaseFrameNodalTests.Cases), MemberType = typeof(PhaseFrameNodalTests))]
+    public void Circuit_EveryPhaseFrameCase_SourcePowerIsLossesPlusLoads(string name)
+    {
+        // Conservation of complex power (Tellegen's theorem) on each comparison case's circuit, and every load of
+        // constant power takes its stated S: the translation loses no element and the iteration has converged.
+        var c = PhaseFrameCases.All[name];
+        var circuit = ProjectCircuit.Of(ReferenceHarness.Analyse(c.Yaml, c.Edit)).Circuit;
+        var s = circuit.Solve();
+
+        var given = s.TotalSourcePowerVa;
+        Assert.True((given - s.TotalLossVa - s.TotalLoadPowerVa).Magnitude <= 1e-9 * given.Magnitude, $"{given} against {s.TotalLossVa} + {s.TotalLoadPowerVa}");
+        for (var k = 0; k < circuit.Loads.Count; k++)
+        {
+            if (circuit.Loads[k].Model == DistTree.Model.LoadModel.ConstantPower)
+            {
+                Assert.True((s.LoadPowerVa(k) - circuit.Loads[k].PowerVa).Magnitude <= 1e-9 * circuit.Loads[k].PowerVa.Magnitude);
+            }
+        }
+    }
+
+    [Fact]
     public void Of_DemandFactorOtherThanOne_Throws()
     {
         var a = ReferenceHarness.Analyse(Project("208Y/120", "", Circuit(1, "A", "va: 100, pf: 1", "10, size: 12 AWG")), p => p.WithEquipment("P", e => e with { DemandFactor = 0.8 }));
