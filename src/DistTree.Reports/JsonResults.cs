@@ -64,7 +64,7 @@ public static class JsonResults
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
-                WriteRun(w, run);
+                WriteRun(w, run, NeutralSize(solution, run));
                 FlushEvery(w);
             }
 
@@ -261,6 +261,13 @@ public static class JsonResults
         w.WriteNumber("terminal_c", r.TerminalC);
         w.WriteNumber("motor_start_limit_percent", r.MotorStartLimitPercent);
         w.WriteNumber("frequency_hz", s.Project.Service.FrequencyHz);
+        if (s.Project.Service is { AvailableFaultCurrentKa: { } faultKa, FaultXOverR: { } faultXOverR })
+        {
+            // The service's source, only when stated (the loader takes both or neither).
+            w.WriteNumber("available_fault_current_ka", faultKa);
+            w.WriteNumber("fault_x_r", faultXOverR);
+        }
+
         w.WriteEndObject();
     }
 
@@ -283,7 +290,11 @@ public static class JsonResults
         w.WriteEndObject();
     }
 
-    private static void WriteRun(Utf8JsonWriter w, RunResult r)
+    // A feeder's or branch circuit's neutral size, when the project file states one.
+    private static string? NeutralSize(Solution s, RunResult r) =>
+        r.Kind == RunResultKind.Transformer ? null : s.Network.Nodes[r.NodeIndex].Incoming?.Conductors.NeutralSize?.Text;
+
+    private static void WriteRun(Utf8JsonWriter w, RunResult r, string? neutralSize)
     {
         w.WriteStartObject();
         w.WriteString("id"u8, r.Id);
@@ -296,6 +307,11 @@ public static class JsonResults
         Number(w, "design_current_a"u8, r.DesignCurrentA, 3);
         Number(w, "power_factor"u8, r.PowerFactor, 4);
         NullableString(w, "size"u8, r.Size);
+        if (neutralSize is not null)
+        {
+            w.WriteString("neutral_size"u8, neutralSize);
+        }
+
         NullableString(w, "material"u8, r.Material);
         NullableString(w, "raceway"u8, r.Raceway);
         w.WriteNumber("sets"u8, r.Sets);

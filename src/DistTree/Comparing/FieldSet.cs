@@ -28,6 +28,8 @@ internal sealed class FieldSet
             .Text("service.id", p.Service.Id)
             .Text("service.system", p.Service.System.Name)
             .Number("service.frequency_hz", p.Service.FrequencyHz)
+            .Number("service.available_fault_current_ka", p.Service.AvailableFaultCurrentKa)
+            .Number("service.fault_x_r", p.Service.FaultXOverR)
             .Text("defaults.material", Words.Material.Of(p.Defaults.Material))
             .Number("defaults.insulation_c", p.Defaults.InsulationC)
             .Text("defaults.raceway", Words.Raceway.Of(p.Defaults.Raceway));
@@ -54,6 +56,11 @@ internal sealed class FieldSet
                 .Number("transformer.impedance_percent", t.ImpedancePercent)
                 .Number("transformer.x_r", t.XOverR)
                 .Number("transformer.tap_percent", t.TapPercent);
+            if (t.Secondary.Phases == 1 && e.System.Phases == 3)
+            {
+                // Where 'phase' applies: a single-phase transformer on a three-phase primary.
+                set.Text("transformer.phase", PhaseRules.Text(t.PrimaryPhases));
+            }
         }
 
         return set.Number("circuits", e.Circuits.Count);
@@ -91,7 +98,7 @@ internal sealed class FieldSet
         a is null || b is null
             ? a is null && b is null
             : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
-              a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
+              Nullable.Equals(a.NeutralSize, b.NeutralSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
               Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed;
 
     /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
@@ -165,7 +172,14 @@ internal sealed class FieldSet
     {
         _fields.Add(new Field($"{prefix}.length_m", null, run.LengthM, units == UnitSystem.Imperial));
         this
-            .Text($"{prefix}.size", run.Size.Text)
+            .Text($"{prefix}.size", run.Size.Text);
+        if (run.NeutralSize is { } neutral)
+        {
+            // Only when stated, so that an element added or removed lists the fields it always did.
+            Text($"{prefix}.neutral_size", neutral.Text);
+        }
+
+        this
             .Number($"{prefix}.sets", run.Sets)
             .Text($"{prefix}.material", Words.Material.Of(run.Material))
             .Number($"{prefix}.insulation_c", run.InsulationC)

@@ -59,6 +59,7 @@ internal sealed class PlannedEquipment(string id, PlannedKind kind, ElectricalSy
 
     public double XOverR { get; set; }
 
+    /// <summary>The nameplate's primary tap, percent: negative raises the secondary.</summary>
     public double TapPercent { get; set; }
 
     /// <summary>Estimated drop from the service to this item's output, percent.</summary>

@@ -233,11 +233,19 @@ public static class ProjectGenerator
             {
                 var percentR = item.ImpedancePercent / Math.Sqrt(1 + (item.XOverR * item.XOverR));
                 var regulation = ((percentR * item.Power.PowerFactor) + (percentR * item.XOverR * item.Power.SinTheta)) * item.Power.VoltAmperes / (item.Kva * 1000);
-                item.TapPercent = regulation > 1.5 ? 2.5 : 0;
-                item.UpstreamPercent += regulation - item.TapPercent;
+                // A heavily loaded transformer is boosted by its nameplate primary tap: -2.5 % takes turns off the
+                // primary, so the secondary stands 1/0.975 of its rating, about 2.56 % up.
+                item.TapPercent = regulation > 1.5 ? -2.5 : 0;
+                item.UpstreamPercent += regulation - TapBoostPercent(item.TapPercent);
             }
         }
     }
+
+    /// <summary>
+    /// How far a primary tap raises the secondary, percent of its rating: the turns ratio grows by 1 + tap/100, so the
+    /// secondary stands 1/(1 + tap/100) of its rating (a negative tap raises it).
+    /// </summary>
+    internal static double TapBoostPercent(double tapPercent) => 100 * ((1 / (1 + (tapPercent / 100))) - 1);
 
     private static void SizeCircuits(List<PlannedEquipment> items)
     {

@@ -47,6 +47,9 @@ internal sealed class EquipmentDraft(SourceLocation location)
 
     public Run? Feeder { get; set; }
 
+    /// <summary>Where the feeder states its 'neutral_size' (the key), or null when it states none.</summary>
+    public SourceLocation? FeederNeutralLocation { get; set; }
+
     public double DemandFactor { get; set; } = 1.0;
 
     /// <summary>Transformer data; null when not a transformer or when it could not be read.</summary>
@@ -55,6 +58,12 @@ internal sealed class EquipmentDraft(SourceLocation location)
     public ElectricalSystem? Primary { get; set; }
 
     public SourceLocation PrimaryLocation { get; set; } = location;
+
+    /// <summary>Where a transformer states its 'secondary' (the key).</summary>
+    public SourceLocation SecondaryLocation { get; set; } = location;
+
+    /// <summary>Where a transformer states its primary lines, 'phase' (the key), or null when it states none.</summary>
+    public SourceLocation? PrimaryPhasesLocation { get; set; }
 
     public List<CircuitDraft> Circuits { get; } = [];
 

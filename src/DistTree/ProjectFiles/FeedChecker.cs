@@ -124,6 +124,17 @@ internal sealed class FeedChecker(DiagnosticBag bag)
             bag.Error(draft.PrimaryLocation, ProjectMessages.PrimaryMismatch(draft.Id, primary, sourceId, system));
         }
 
+        // A feeder carries its source's system (a transformer's feeder, its primary): a neutral needs one there.
+        if (draft.FeederNeutralLocation is { } neutralAt && !system.HasNeutral)
+        {
+            bag.Error(neutralAt, ProjectMessages.NeutralWithoutNeutral(draft.Id, sourceId, system));
+        }
+
+        if (draft.Kind == EquipmentKind.Transformer)
+        {
+            CheckPrimary(draft, sourceId, system);
+        }
+
         if (draft.OutputSystem is not { } panelSystem)
         {
             return;
@@ -143,6 +154,21 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             var name = circuit.Id is null ? $"the circuit at line {circuit.Location.Line}" : $"circuit '{draft.Id}/{circuit.Id}'";
             bag.Error(circuit.PolesLocation, ProjectMessages.PolesNotGiven(name, poles, draft.Id, panelSystem));
+        }
+    }
+
+    // A transformer's lines against its primary: the two lines a single-phase one is across are lines of a
+    // three-phase primary, and a three-phase secondary needs a three-phase primary.
+    private void CheckPrimary(EquipmentDraft transformer, string sourceId, ElectricalSystem primary)
+    {
+        if (transformer.PrimaryPhasesLocation is { } phaseAt && primary.Phases != 3)
+        {
+            bag.Error(phaseAt, ProjectMessages.TransformerPhaseOnSinglePhase(transformer.Id, sourceId, primary));
+        }
+
+        if (transformer.Transformer?.Secondary is { Phases: 3 } secondary && PhaseRules.Lines(primary) < 3)
+        {
+            bag.Error(transformer.SecondaryLocation, ProjectMessages.ThreePhaseSecondaryOnSinglePhase(transformer.Id, secondary, sourceId, primary));
         }
     }
 

@@ -23,15 +23,15 @@ internal static class ProjectKeys
 
     public static readonly string[] Sizing = ["max_sets", "prices", "currency", "resolution_percent"];
 
-    public static readonly string[] Service = ["id", "system", "frequency_hz"];
+    public static readonly string[] Service = ["id", "system", "frequency_hz", "available_fault_current_ka", "fault_x_r"];
 
-    public static readonly string[] TransformerOnly = ["kva", "primary", "secondary", "impedance_percent", "x_r", "tap_percent"];
+    public static readonly string[] TransformerOnly = ["kva", "primary", "secondary", "impedance_percent", "x_r", "tap_percent", "phase"];
 
     public static readonly string[] Equipment =
         ["id", "kind", "from", "feeder", "demand_factor", "circuits", .. TransformerOnly];
 
     public static readonly string[] Run =
-        ["length", "size", "sets", "material", "insulation_c", "raceway", "ocpd", "limit_percent", "fixed"];
+        ["length", "size", "neutral_size", "sets", "material", "insulation_c", "raceway", "ocpd", "limit_percent", "fixed"];
 
     public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "load", "points", "continuous", "run"];
 

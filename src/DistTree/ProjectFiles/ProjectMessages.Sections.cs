@@ -53,6 +53,14 @@ internal static partial class ProjectMessages
     /// <summary>A service written as a sequence of one.</summary>
     public static string ServiceIsSequence() => "'service' must be a mapping of keys, not a sequence";
 
+    /// <summary>A service figure above the most it may be (<paramref name="most"/>, in the key's unit).</summary>
+    public static string ServiceValueAbove(string key, double most, double value) =>
+        $"'{key}' of the service must be at most {Format(most)}; found {Format(value)}";
+
+    /// <summary>One of the utility's fault current and X/R without the other.</summary>
+    public static string FaultKeyAlone(string given, string missing) =>
+        $"'{given}' of the service needs '{missing}' with it: the utility's source is given by its fault current and its X/R ratio together";
+
     /// <summary>An id holding '/', which joins a panel's id and a circuit's.</summary>
     public static string IdWithSlash(string id) => $"the id '{id}' must not contain '/' (it joins a panel's id and a circuit's: LP1/3)";
 
@@ -76,6 +84,14 @@ internal static partial class ProjectMessages
     /// <summary>A tap between the 2.5 % steps.</summary>
     public static string TapNotAStep(string name, double tap) =>
         $"'tap_percent' of '{name}' is {Format(tap)}; taps come in 2.5 % steps: -5, -2.5, 0, 2.5 or 5";
+
+    /// <summary>A transformer's <c>phase</c> that is not two lines.</summary>
+    public static string TransformerPhaseNotTwoLines(string name, string text) =>
+        $"'phase' of '{name}' is '{text}'; a single-phase transformer's primary is across two lines: AB, BC or CA";
+
+    /// <summary>A transformer's <c>phase</c> with a three-phase secondary.</summary>
+    public static string TransformerPhaseThreePhase(string name, ElectricalSystem secondary) =>
+        $"'phase' of '{name}' chooses the two primary lines of a single-phase transformer; its secondary {secondary.Name} is three-phase and takes all three";
 
     /// <summary>Circuits on a transformer or a splitter.</summary>
     public static string CircuitsNotOnPanel(string panel, EquipmentKind kind) =>
@@ -153,6 +169,14 @@ internal static partial class ProjectMessages
     /// <summary>A branch run longer than is likely (a warning); <paramref name="lengthText"/> is the length in metres as written.</summary>
     public static string LongBranch(Subject run, string lengthText) =>
         $"{run} is {lengthText} m long, more than 609.6 m (2000 ft); check the length";
+
+    /// <summary>A neutral size of the other series than the lines' size (mm² against AWG or kcmil).</summary>
+    public static string NeutralSeries(Subject run, Conductors.ConductorSize neutral, Conductors.ConductorSize lines) =>
+        $"'neutral_size' of {run} is {neutral}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
+
+    /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
+    public static string NeutralOnLineToLine(Subject circuit, int poles) =>
+        $"'neutral_size' of the run of {circuit}: a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)";
 
     /// <summary>A run's <c>sets</c> below 1.</summary>
     public static string SetsBelowOne(Subject run, int sets) => $"'sets' of {run} must be 1 or more; found {sets}";

@@ -20,6 +20,18 @@ internal static partial class ProjectMessages
     public static string PrimaryMismatch(string? id, ElectricalSystem primary, string sourceId, ElectricalSystem given) =>
         $"the primary of '{id}' is {primary.Name}, but it is fed from '{sourceId}', which gives {given.Name}";
 
+    /// <summary>A feeder that states a neutral size on a system with no neutral.</summary>
+    public static string NeutralWithoutNeutral(string? id, string sourceId, ElectricalSystem system) =>
+        $"'neutral_size' of the feeder of '{id}': it is fed from '{sourceId}', which gives {system.Name}, a system with no neutral";
+
+    /// <summary>A transformer's <c>phase</c> on a primary that is not three-phase.</summary>
+    public static string TransformerPhaseOnSinglePhase(string? id, string sourceId, ElectricalSystem system) =>
+        $"'phase' of '{id}' chooses two lines of a three-phase primary, but it is fed from '{sourceId}', which gives {system.Name}, single-phase";
+
+    /// <summary>A transformer with a three-phase secondary on a primary of fewer than three lines.</summary>
+    public static string ThreePhaseSecondaryOnSinglePhase(string? id, ElectricalSystem secondary, string sourceId, ElectricalSystem system) =>
+        $"the secondary of '{id}' is {secondary.Name}, three-phase, but it is fed from '{sourceId}', which gives {system.Name}, single-phase: a three-phase secondary needs a three-phase primary";
+
     /// <summary>A circuit whose stated phases do not fit its poles on its panel's system.</summary>
     public static string PhasesDoNotFit(string? panel, string? circuit, int poles, Phases phases, ElectricalSystem system)
     {

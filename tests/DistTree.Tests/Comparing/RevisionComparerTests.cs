@@ -183,4 +183,80 @@ public sealed class RevisionComparerTests
         Assert.All(c.EndPoints, e => Assert.Equal(-1, e.LimitPercent.Change, 12));
         Assert.Equal(4, c.EndPoints.Count);
     }
+
+    // A single-phase transformer across two lines of a three-phase primary (invented).
+    private const string SinglePhaseTransformer = """
+        disttree: 1
+        project: { name: Single-phase transformer }
+        service: { id: SVC, system: 480Y/277 }
+        equipment:
+          - { id: T1, kind: transformer, from: SVC, kva: 25, secondary: 120/240, impedance_percent: 3, x_r: 2, phase: BC,
+              feeder: { length: 20, size: 8 AWG, ocpd: 60 } }
+          - id: LP1
+            kind: panelboard
+            from: T1
+            feeder: { length: 3, size: 1/0 AWG, ocpd: 125 }
+            circuits:
+              - { id: "1", poles: 1, ocpd: 20, load: { va: 1000 }, run: { length: 20, size: 12 AWG } }
+        """;
+
+    [Fact]
+    public void Compare_NeutralSizeStated_ListsTheRunFieldFromNone()
+    {
+        var after = ComparisonProjects.Shared().Replace("length: 18, size: 12 AWG", "length: 18, size: 12 AWG, neutral_size: 10 AWG", StringComparison.Ordinal);
+
+        var c = Compare(ComparisonProjects.Shared(), after);
+
+        var change = Assert.Single(c.Circuits);
+        Assert.Equal(("LP1/2", ChangeKind.Changed), (change.Id, change.Change));
+        Assert.Equal([new FieldChange("run.neutral_size", null, "10 AWG")], change.Fields);
+    }
+
+    [Fact]
+    public void Compare_FeederNeutralSizeChanged_ListsTheFeederField()
+    {
+        var before = ComparisonProjects.Shared().Replace("size: 1/0 AWG, ocpd: 150", "size: 1/0 AWG, neutral_size: 2 AWG, ocpd: 150", StringComparison.Ordinal);
+        var after = before.Replace("neutral_size: 2 AWG", "neutral_size: 1/0 AWG", StringComparison.Ordinal);
+
+        var c = Compare(before, after);
+
+        Assert.Equal([new FieldChange("feeder.neutral_size", "2 AWG", "1/0 AWG")], Assert.Single(c.Equipment).Fields);
+    }
+
+    [Fact]
+    public void Compare_TransformerPhaseChanged_ListsTheField()
+    {
+        var after = SinglePhaseTransformer.Replace("phase: BC", "phase: CA", StringComparison.Ordinal);
+
+        var c = Compare(SinglePhaseTransformer, after);
+
+        Assert.Equal([new FieldChange("transformer.phase", "BC", "CA")], Assert.Single(c.Equipment).Fields);
+    }
+
+    // The fields an element always had: a run without a neutral size and a three-phase transformer add none.
+    [Fact]
+    public void Compare_AddedWithoutTheNewKeys_ListsNoNeutralSizeOrPhase()
+    {
+        var renamed = ComparisonProjects.Ordered.Replace("  - id: T1\n", "  - id: T9\n", StringComparison.Ordinal).Replace("from: T1", "from: T9", StringComparison.Ordinal);
+
+        var c = Compare(ComparisonProjects.Ordered, renamed);
+
+        var added = c.Equipment.Single(e => e.Change == ChangeKind.Added);
+        Assert.Contains(added.Fields, f => f.Field == "transformer.tap_percent");
+        Assert.DoesNotContain(added.Fields, f => f.Field is "transformer.phase" or "feeder.neutral_size");
+    }
+
+    [Fact]
+    public void Compare_ServiceSourceStated_ListsBothProjectFields()
+    {
+        var after = ComparisonProjects.Ordered.Replace("  system: 480Y/277\n", "  system: 480Y/277\n  available_fault_current_ka: 35\n  fault_x_r: 8\n", StringComparison.Ordinal);
+        Assert.NotEqual(ComparisonProjects.Ordered, after);
+
+        var c = Compare(ComparisonProjects.Ordered, after);
+
+        Assert.Equal(
+            [new FieldChange("service.available_fault_current_ka", "none", "35"), new FieldChange("service.fault_x_r", "none", "8")],
+            c.ProjectChanges);
+        Assert.Empty(c.Equipment);
+    }
 }

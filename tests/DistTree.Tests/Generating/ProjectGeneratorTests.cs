@@ -57,6 +57,29 @@ public sealed class ProjectGeneratorTests
         Assert.Contains("describes no real site", text, StringComparison.Ordinal);
     }
 
+    // tap_percent is the nameplate's primary tap: a boosted transformer has a negative one, and none a positive one.
+    [Fact]
+    public void Generate_BoostedTransformers_HaveNegativeTaps()
+    {
+        var text = ProjectGenerator.Generate(3000, 3, 7);
+
+        Assert.Contains("tap_percent: -2.5\n", text, StringComparison.Ordinal);
+        Assert.DoesNotContain("tap_percent: 2.5", text, StringComparison.Ordinal);
+        Assert.DoesNotContain("tap_percent: 5", text, StringComparison.Ordinal);
+    }
+
+    // An ideal transformer: V2 = V1·N2/N1. A primary tap t adds t % to N1, so V2 is 1/(1 + t/100) of its rating:
+    // -2.5 % gives 1/0.975 = 1.025641…, +2.5 % gives 1/1.025 = 0.975609….
+    [Theory]
+    [InlineData(-2.5, 2.564102564102564)]
+    [InlineData(-5, 5.263157894736842)]
+    [InlineData(0, 0)]
+    [InlineData(2.5, -2.439024390243902)]
+    public void TapBoostPercent_PrimaryTap_RaisesTheSecondaryByTheTurnsRatio(double tapPercent, double expectedPercent)
+    {
+        Assert.Equal(expectedPercent, ProjectGenerator.TapBoostPercent(tapPercent), 12);
+    }
+
     [Theory]
     [InlineData(0, 3)]
     [InlineData(ProjectGenerator.MaxEndPoints + 1, 3)]

@@ -62,6 +62,40 @@ public sealed class ProjectSchemaTests
         Assert.False(Evaluate(good.Replace(original, replacement, StringComparison.Ordinal)).IsValid);
     }
 
+    // The keys of the phase-frame model: valid where the loader reads them, invalid where the schema can tell.
+    [Theory]
+    [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  available_fault_current_ka: 25\n  fault_x_r: 6\n", true)]
+    [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  available_fault_current_ka: 25\n", false)]
+    [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  fault_x_r: 6\n", false)]
+    [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  available_fault_current_ka: 301\n  fault_x_r: 6\n", false)]
+    [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  available_fault_current_ka: 25\n  fault_x_r: 0\n", false)]
+    [InlineData("size: 12 AWG }", "size: 12 AWG, neutral_size: 10 AWG }", true)]
+    [InlineData("size: 12 AWG }", "size: 12 AWG, neutral_size: 10 kg }", false)]
+    [InlineData("    kind: panelboard\n", "    kind: panelboard\n    phase: AB\n", false)]
+    public void Evaluate_ElectricalKeys_ValidWhereTheLoaderReadsThem(string original, string replacement, bool valid)
+    {
+        var good = File.ReadAllText(Path.Combine(TestPaths.Cases, "good", "minimal.yaml"));
+        Assert.Contains(original, good, StringComparison.Ordinal);
+        var text = good.Replace(original, replacement, StringComparison.Ordinal);
+
+        Assert.Equal(valid, Evaluate(text).IsValid);
+        if (valid)
+        {
+            ProjectLoader.Parse(text, "minimal.yaml");
+        }
+    }
+
+    [Fact]
+    public void Evaluate_SinglePhaseTransformerWithPhase_IsValid()
+    {
+        var text = "disttree: 1\nproject: { name: T }\nservice: { id: SVC, system: 480Y/277 }\nequipment:\n"
+            + "  - { id: T1, kind: transformer, from: SVC, kva: 25, secondary: 120/240, impedance_percent: 3, x_r: 2, phase: CA, tap_percent: -2.5 }\n";
+
+        Assert.True(Evaluate(text).IsValid);
+        Assert.Equal(DistTree.Model.Phases.CA, ProjectLoader.Parse(text, "t.yaml").Equipment[0].Transformer!.PrimaryPhases);
+        Assert.False(Evaluate(text.Replace("phase: CA", "phase: ABC", StringComparison.Ordinal)).IsValid);
+    }
+
     [Fact]
     public void Schema_Keys_MatchTheLoader()
     {

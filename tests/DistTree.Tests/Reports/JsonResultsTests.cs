@@ -78,6 +78,40 @@ public sealed class JsonResultsTests
         Assert.Equal(JsonValueKind.Null, doc.RootElement.GetProperty("end_points")[0].GetProperty("total_drop_percent_load_flow").ValueKind);
     }
 
+    // A neutral size is written on its run only where the project states one, so results of a project without
+    // one keep their bytes; the document still passes the results schema.
+    [Fact]
+    public void Write_NeutralSizeStated_WrittenOnThatRunOnly()
+    {
+        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+            "{ id: \"1\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG, neutral_size: 10 AWG } }\n"
+            + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }");
+
+        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
+
+        var runs = doc.RootElement.GetProperty("runs").EnumerateArray().ToDictionary(r => r.GetProperty("id").GetString()!);
+        Assert.Equal("10 AWG", runs["P/1"].GetProperty("neutral_size").GetString());
+        Assert.False(runs["P/2"].TryGetProperty("neutral_size", out _));
+        AssertValid(doc);
+    }
+
+    [Fact]
+    public void Write_ServiceSource_WrittenBesideTheFrequencyOnlyWhenStated()
+    {
+        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric", "{ id: \"1\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }");
+        var stated = yaml.Replace("  frequency_hz: 60\n", "  frequency_hz: 60\n  available_fault_current_ka: 22.5\n  fault_x_r: 6\n", StringComparison.Ordinal);
+        Assert.NotEqual(yaml, stated);
+
+        using var without = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
+        using var with = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(stated)));
+
+        Assert.False(without.RootElement.GetProperty("rules").TryGetProperty("available_fault_current_ka", out _));
+        Assert.False(without.RootElement.GetProperty("rules").TryGetProperty("fault_x_r", out _));
+        var rules = with.RootElement.GetProperty("rules");
+        Assert.Equal((22.5, 6.0), (rules.GetProperty("available_fault_current_ka").GetDouble(), rules.GetProperty("fault_x_r").GetDouble()));
+        AssertValid(with);
+    }
+
     // The fast number text against System.Text.Json's own: the writer's text for the rounded double is the reference.
     [Property(MaxTest = 20_000)]
     public Property TryFormatRounded_MatchesTheWritersText(NormalFloat value, PositiveInt exponent, byte decimals)
@@ -116,6 +150,13 @@ public sealed class JsonResultsTests
     [InlineData(1e16, 0)]
     public void TryFormatRounded_OutsideItsRange_LeavesItToTheWriter(double value, int decimals) =>
         Assert.Null(Fast(value, decimals));
+
+    private static void AssertValid(JsonDocument doc)
+    {
+        var result = Schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
+        Assert.True(result.IsValid, string.Join("\n", (result.Details ?? []).Where(d => d.Errors is not null)
+            .SelectMany(d => d.Errors!.Select(e => $"{d.InstanceLocation}: {e.Key}: {e.Value}")).Take(20)));
+    }
 
     private static string Reference(double value, int decimals)
     {

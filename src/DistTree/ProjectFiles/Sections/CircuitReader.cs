@@ -134,10 +134,17 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
     {
         if (m.Required("run", ProjectMessages.KeyHints.Run) is { } runNode)
         {
-            var run = runs.Read(runNode, full.Of("the run of "), true, out var runOcpdLocation, ocpd);
+            var run = runs.Read(runNode, full.Of("the run of "), true, out var runOcpdLocation, out var neutralLocation, ocpd);
             if (run is not null && ocpd is not null && runOcpdLocation is not null)
             {
                 Bag.Error(runOcpdLocation, ProjectMessages.OcpdTwice(full));
+                run = null;
+            }
+
+            // Only a 1-pole circuit has a neutral (line to neutral); 2 and 3 poles are line to line.
+            if (run is not null && neutralLocation is not null && draft.Poles is { } poles and not 1)
+            {
+                Bag.Error(neutralLocation, ProjectMessages.NeutralOnLineToLine(full, poles));
                 run = null;
             }
 

@@ -76,7 +76,8 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
 
         if (m.Optional("feeder") is { } feederNode)
         {
-            draft.Feeder = runs.Read(feederNode, quoted.Of("the feeder of "), false, out _);
+            draft.Feeder = runs.Read(feederNode, quoted.Of("the feeder of "), false, out _, out var neutralLocation);
+            draft.FeederNeutralLocation = neutralLocation;
             draft.FeederOk = draft.Feeder is not null;
         }
 
@@ -116,6 +117,7 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
 
         var kva = m.Required("kva", ProjectMessages.KeyHints.Kva) is { } kvaNode ? Values.Positive(kvaNode, $"'kva' of '{name}'") : null;
         var secondary = m.Required("secondary", ProjectMessages.KeyHints.Secondary) is { } secondaryNode ? Values.SystemOf(secondaryNode, $"'secondary' of '{name}'") : null;
+        draft.SecondaryLocation = m.KeyLocation("secondary");
         var impedance = m.Required("impedance_percent", ProjectMessages.KeyHints.Impedance) is { } zNode ? Values.Positive(zNode, $"'impedance_percent' of '{name}'") : null;
         var xr = m.Required("x_r", ProjectMessages.KeyHints.XOverR) is { } xrNode ? Values.Positive(xrNode, $"'x_r' of '{name}'") : null;
         var tap = m.Optional("tap_percent") is { } tapNode ? Values.Number(tapNode, $"'tap_percent' of '{name}'") : 0;
@@ -131,9 +133,41 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             draft.PrimaryLocation = primaryNode.Location;
         }
 
-        if (kva is not null && secondary is not null && impedance is not null && xr is not null && tap is not null)
+        var primaryPhases = ReadPrimaryPhases(m, draft, name, secondary);
+        if (kva is not null && secondary is not null && impedance is not null && xr is not null && tap is not null && primaryPhases is not null)
         {
-            draft.Transformer = new TransformerData(kva.Value, secondary, impedance.Value, xr.Value, tap.Value);
+            draft.Transformer = new TransformerData(kva.Value, secondary, impedance.Value, xr.Value, tap.Value) { PrimaryPhases = primaryPhases.Value };
         }
+    }
+
+    // The two primary lines a single-phase transformer is across ('phase': AB, BC or CA; AB unless stated). Only a
+    // single-phase secondary takes it; that the primary is three-phase is a tree check (FeedChecker), as the primary
+    // is known only once the transformer's source is.
+    private Phases? ReadPrimaryPhases(in MappingReader m, EquipmentDraft draft, string name, ElectricalSystem? secondary)
+    {
+        if (m.Optional("phase") is not { } phaseNode)
+        {
+            return Phases.AB;
+        }
+
+        if (Values.Text(phaseNode, $"'phase' of '{name}'") is not { } text)
+        {
+            return null;
+        }
+
+        if (PhaseRules.Parse(text) is not { } phases || PhaseRules.Count(phases) != 2)
+        {
+            Bag.Error(phaseNode.Location, ProjectMessages.TransformerPhaseNotTwoLines(name, text));
+            return null;
+        }
+
+        if (secondary is { Phases: not 1 })
+        {
+            Bag.Error(m.KeyLocation("phase"), ProjectMessages.TransformerPhaseThreePhase(name, secondary));
+            return null;
+        }
+
+        draft.PrimaryPhasesLocation = m.KeyLocation("phase");
+        return phases;
     }
 }

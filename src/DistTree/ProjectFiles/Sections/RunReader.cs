@@ -7,7 +7,10 @@ using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles.Sections;
 
-/// <summary>Reads a feeder's or a branch circuit's run: its length, size, sets, conductor, device, limit and whether it is fixed.</summary>
+/// <summary>
+/// Reads a feeder's or a branch circuit's run: its length, size, neutral size, sets, conductor, device, limit and
+/// whether it is fixed.
+/// </summary>
 internal sealed class RunReader(SectionContext context)
 {
     /// <summary>Branch runs longer than this are probably a typo (2000 ft, common practice as a sanity bound).</summary>
@@ -22,11 +25,14 @@ internal sealed class RunReader(SectionContext context)
 
     /// <summary>
     /// Reads a feeder or branch run. <paramref name="circuitOcpdA"/> (the circuit's own 'ocpd') becomes the run's
-    /// device when the run states none; <paramref name="ocpdLocation"/> is set when the run states one.
+    /// device when the run states none; <paramref name="ocpdLocation"/> is set when the run states one, and
+    /// <paramref name="neutralLocation"/> (the key's place) when it states a neutral size, which only the caller
+    /// can tell is allowed (a 1-pole branch circuit, a feeder whose system has a neutral).
     /// </summary>
-    public Run? Read(SourceNode node, Subject subject, bool branch, out SourceLocation? ocpdLocation, double? circuitOcpdA = null)
+    public Run? Read(SourceNode node, Subject subject, bool branch, out SourceLocation? ocpdLocation, out SourceLocation? neutralLocation, double? circuitOcpdA = null)
     {
         ocpdLocation = null;
+        neutralLocation = null;
         if (context.Map(node, subject, subject, ProjectKeys.Run) is not { } m)
         {
             return null;
@@ -40,7 +46,14 @@ internal sealed class RunReader(SectionContext context)
         }
 
         var sizeNode = m.Required("size", ProjectMessages.KeyHints.Size);
-        var size = sizeNode is null ? null : Size(sizeNode, subject);
+        var size = sizeNode is null ? null : Size(sizeNode, subject.Of("'size' of "));
+        var neutralNode = m.Optional("neutral_size");
+        var neutral = neutralNode is null ? null : NeutralSize(neutralNode, subject, size);
+        if (neutralNode is not null)
+        {
+            neutralLocation = m.KeyLocation("neutral_size");
+        }
+
         var sets = Sets(m, subject);
         var defaults = context.Draft.Defaults;
         var material = m.Optional("material") is { } materialNode ? Values.Choice(materialNode, subject.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
@@ -55,7 +68,7 @@ internal sealed class RunReader(SectionContext context)
 
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.Positive(limitNode, subject.Of("'limit_percent' of ")) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
-        if (length is null || size is null || sets < 1 || material is null || insulation is null || raceway is null
+        if (length is null || size is null || (neutralNode is not null && neutral is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
             return null;
@@ -65,6 +78,7 @@ internal sealed class RunReader(SectionContext context)
         {
             LengthM = length.Value,
             Size = size.Value,
+            NeutralSize = neutral,
             Sets = sets,
             Material = material.Value,
             InsulationC = insulation.Value,
@@ -77,10 +91,23 @@ internal sealed class RunReader(SectionContext context)
         };
     }
 
-    // The conductor size, parsed once per distinct text.
-    private ConductorSize? Size(SourceNode node, Subject subject)
+    // The neutral's size: read as the size is, and in the same series (AWG and kcmil, or mm²) as the lines.
+    private ConductorSize? NeutralSize(SourceNode node, Subject subject, ConductorSize? lines)
     {
-        if (Values.Text(node, subject.Of("'size' of ")) is not { } text)
+        var neutral = Size(node, subject.Of("'neutral_size' of "));
+        if (neutral is { } n && lines is { } l && n.Series != l.Series)
+        {
+            Bag.Error(node.Location, ProjectMessages.NeutralSeries(subject, n, l));
+            return null;
+        }
+
+        return neutral;
+    }
+
+    // A conductor size, parsed once per distinct text; 'what' names the key in messages.
+    private ConductorSize? Size(SourceNode node, Subject what)
+    {
+        if (Values.Text(node, what) is not { } text)
         {
             return null;
         }
