@@ -85,7 +85,7 @@ public static class JsonResults
             w.WriteStartArray("end_points"u8);
             foreach (var e in solution.EndPoints)
             {
-                WriteEndPoint(w, e);
+                WriteEndPoint(w, e, solution.Project.Service.AvailableFaultCurrentKa is not null);
                 FlushEvery(w);
             }
 
@@ -336,7 +336,7 @@ public static class JsonResults
         w.WriteEndObject();
     }
 
-    private static void WriteEndPoint(Utf8JsonWriter w, EndPointResult e)
+    private static void WriteEndPoint(Utf8JsonWriter w, EndPointResult e, bool withSource)
     {
         w.WriteStartObject();
         w.WriteString("id"u8, e.Id);
@@ -355,6 +355,11 @@ public static class JsonResults
         Number(w, "total_drop_percent_percent_sum"u8, e.PercentSumTotalDropPercent, 4);
         Number(w, "total_drop_percent_load_flow"u8, e.LoadFlowTotalDropPercent, 4);
         Number(w, "end_voltage_v_load_flow"u8, e.LoadFlowEndVoltageV, 3);
+        if (withSource)
+        {
+            Number(w, "source_drop_percent"u8, e.SourceDropPercent, 4);
+        }
+
         if (e.MotorStart is { } m)
         {
             w.WriteStartObject("motor_start"u8);

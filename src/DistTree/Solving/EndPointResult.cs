@@ -59,6 +59,12 @@ public readonly struct EndPointResult : IEquatable<EndPointResult>
     /// <summary>Indices into <see cref="Solution.Runs"/> of the runs along the path that count in the total, service side first.</summary>
     public IReadOnlyList<int> RunIndices => new ArraySegment<int>(_rows.PathRuns, Row.PathStart, Row.PathCount);
 
+    /// <summary>
+    /// The utility's share of <see cref="TotalDropPercent"/>, percent: the drop in its impedance ahead of the service,
+    /// where the project gives its available fault current (else 0); the rest is <see cref="RunSharesPercent"/>.
+    /// </summary>
+    public double SourceDropPercent => Row.SourceSharePercent;
+
     /// <summary>Each counted run's share of <see cref="TotalDropPercent"/>, percent, aligned with <see cref="RunIndices"/>: the drop on the end point's own lines.</summary>
     public IReadOnlyList<double> RunSharesPercent => new ArraySegment<double>(_rows.PathShares, Row.PathStart, Row.PathCount);
 

@@ -16,7 +16,8 @@ public sealed record LoadFlowResult(bool Converged, int Iterations, string? Weak
 /// each conductor R(T) + jX per length, sets in parallel, no mutual coupling; loads are line to neutral, line to
 /// line or across the three pairs (see <see cref="PhaseLoads"/>), at constant power, current or impedance, points
 /// along a run span by span; transformers by their connection (see <see cref="TransformerModel"/>); the neutral is
-/// grounded at the service and at each secondary. Backward: the loads' currents at the present voltages, summed up
+/// grounded at the service and at each secondary; the service is a stiff source, or stands behind the utility's
+/// impedance where the project gives its available fault current (see <see cref="PhaseFrame.SourceImpedance"/>). Backward: the loads' currents at the present voltages, summed up
 /// the tree times each node's demand factor, through each transformer's connection. Forward: V_child = V_parent − I·Z
 /// on each line and the neutral, each secondary from its primary. Repeats until no conductor voltage moves by more
 /// than the tolerance (per unit of its bus's line-to-neutral base); a voltage that stops being a number, or no
@@ -42,6 +43,7 @@ public static class LoadFlow
             ParallelRanges.BottomUp(levels.Steps, backward);
             sweeps.MovedSquared = 0.0;
             sweeps.Finite = true;
+            sweeps.Source();
             ParallelRanges.TopDown(levels.Steps, forward);
             if (!sweeps.Finite)
             {

@@ -86,6 +86,8 @@ internal struct RunRow
     public double TemperatureC;
     public double ResistanceOhmPerKm;
     public double ReactanceOhmPerKm;
+    public double NeutralResistanceOhmPerKm;
+    public double NeutralReactanceOhmPerKm;
     public double? AmpacityA;
     public double RatedA;
     public double VoltageV;
@@ -112,6 +114,7 @@ internal struct EndPointRow
     public double PercentSumTotalDropPercent;
     public double? LoadFlowTotalDropPercent;
     public double? LoadFlowEndVoltageV;
+    public double SourceSharePercent;
 }
 
 /// <summary>A solution's runs or end points as a list of views: the view of an index is made when it is read.</summary>

@@ -36,6 +36,15 @@ internal readonly record struct Functional(Complex A, Complex B, Complex C, Comp
         return (r * p.Real) + (x * -p.Imaginary);
     }
 
+    /// <summary>
+    /// The linearised drop in percent along a run of current-lengths <paramref name="m"/> whose lines are
+    /// <paramref name="r"/> + j<paramref name="x"/> Ω/km and whose neutral is <paramref name="rN"/> +
+    /// j<paramref name="xN"/> Ω/km: Re f(ΔV)·100 (see <see cref="OfRun"/>); a neutral like the lines by
+    /// <see cref="DropPercent(ReadOnlySpan{Complex}, double, double)"/>, to the bit.
+    /// </summary>
+    public double DropPercent(ReadOnlySpan<Complex> m, double r, double x, double rN, double xN) =>
+        r == rN && x == xN ? DropPercent(m, r, x) : OfRun(m, new Complex(r, x), new Complex(rN, xN)).Real * 100.0;
+
     /// <summary>The sum of the line coefficients' products with <paramref name="m"/> and the neutral's with −ΣM: f(M) per ohm of the run, for unit drops.</summary>
     public Complex PerOhm(ReadOnlySpan<Complex> m) => (A * m[0]) + (B * m[1]) + (C * m[2]) - (N * (m[0] + m[1] + m[2]));
 

@@ -13,12 +13,19 @@ namespace DistTree.Solving;
 /// </summary>
 internal sealed class PhaseFrame
 {
-    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, bool anyTransformer)
+    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, bool anyTransformer, Complex sourceImpedance)
     {
+        SourceImpedance = sourceImpedance;
         Models = models;
         Rotation = rotation;
         AnyTransformer = anyTransformer;
     }
+
+    /// <summary>
+    /// The utility's impedance in each line ahead of the service (Ω), from its available fault current and X/R: three
+    /// phases V_LL/(√3·I_sc); single-phase the loop V/I_sc, split between two lines; zero for a stiff source.
+    /// </summary>
+    public Complex SourceImpedance { get; }
 
     /// <summary>Per node, its transformer's model, or null.</summary>
     public TransformerModel?[] Models { get; }
@@ -49,7 +56,26 @@ internal sealed class PhaseFrame
             }
         }
 
-        return new PhaseFrame(models, rotation, any);
+        return new PhaseFrame(models, rotation, any, Source(network.Project.Service));
+    }
+
+    // The utility's impedance per line (see SourceImpedance).
+    private static Complex Source(Service service)
+    {
+        if (service is not { AvailableFaultCurrentKa: { } ka, FaultXOverR: { } xOverR })
+        {
+            return Complex.Zero;
+        }
+
+        var system = service.System;
+        var amperes = ka * 1000.0;
+        var ohms = PhaseRules.Lines(system) switch
+        {
+            3 => system.LineToLineV!.Value / (Math.Sqrt(3) * amperes),
+            2 => system.NominalV / amperes / 2,
+            _ => system.NominalV / amperes,
+        };
+        return Complex.FromPolarCoordinates(ohms, Math.Atan(xOverR));
     }
 
     /// <summary>The system on a node's bus: a transformer's secondary, else the node's own.</summary>

@@ -29,6 +29,8 @@ internal sealed class PhaseSweeps : IDisposable
     private readonly Dictionary<int, Complex[]> _secondaryCurrent = [];
     private readonly Dictionary<int, LoadSpans> _spans = [];
     private readonly Lock _gate = new();
+    private readonly Complex _source;
+    private readonly Complex[] _emf = new Complex[4];
     private bool _taken;
 
     public PhaseSweeps(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, RunRows runs)
@@ -46,6 +48,8 @@ internal sealed class PhaseSweeps : IDisposable
         _demand = Scratch.RentToFill<double>(n);
         _base = Scratch.RentToFill<double>(n);
         ParallelRanges.For(n, (start, end) => Prepare(phases, power, runs, start, end));
+        _source = phases.Frame.SourceImpedance;
+        _bus.AsSpan(0, 4).CopyTo(_emf);
         for (var i = 0; i < n; i++)
         {
             if (_nodes[i].Circuit is { Points.Count: > 0 } circuit)
@@ -115,6 +119,38 @@ internal sealed class PhaseSweeps : IDisposable
                 model.PrimaryCurrents(secondary, mine);
             }
         }
+    }
+
+    /// <summary>
+    /// The service's bus behind the utility's impedance: V = E − Z_s·I on each line, I the sum of what the service's
+    /// children draw (after a backward sweep); its change is counted with the forward sweep's.
+    /// </summary>
+    public void Source()
+    {
+        if (_source == Complex.Zero)
+        {
+            return;
+        }
+
+        Span<Complex> drawn = stackalloc Complex[3];
+        for (var child = _childStarts[1] - 1; child >= _childStarts[0]; child--)
+        {
+            drawn[0] += _current[child * 3];
+            drawn[1] += _current[(child * 3) + 1];
+            drawn[2] += _current[(child * 3) + 2];
+        }
+
+        var moved = 0.0;
+        for (var x = 0; x < 3; x++)
+        {
+            var v = _emf[x] - (_source * drawn[x]);
+            var change = (v - _bus[x]) / _base[0];
+            moved = Math.Max(moved, (change.Real * change.Real) + (change.Imaginary * change.Imaginary));
+            _bus[x] = v;
+        }
+
+        MovedSquared = moved;
+        Finite = double.IsFinite(_bus[0].Real + _bus[0].Imaginary + _bus[1].Real + _bus[1].Imaginary + _bus[2].Real + _bus[2].Imaginary);
     }
 
     /// <summary>
@@ -243,9 +279,9 @@ internal sealed class PhaseSweeps : IDisposable
             if (node.Incoming is { } run)
             {
                 ref var row = ref rows[incomingRow[i]];
-                var perKm = new Complex(row.ResistanceOhmPerKm, row.ReactanceOhmPerKm) / run.Conductors.Sets;
-                var z = node.Circuit is { Points.Count: > 0 } ? perKm : perKm * run.Conductors.LengthM / 1000.0;
-                (_zLine[i], _zNeutral[i]) = (z, z);
+                var km = node.Circuit is { Points.Count: > 0 } ? 1.0 : run.Conductors.LengthM / 1000.0;
+                _zLine[i] = new Complex(row.ResistanceOhmPerKm, row.ReactanceOhmPerKm) * km / run.Conductors.Sets;
+                _zNeutral[i] = new Complex(row.NeutralResistanceOhmPerKm, row.NeutralReactanceOhmPerKm) * km / run.Conductors.Sets;
             }
         }
     }

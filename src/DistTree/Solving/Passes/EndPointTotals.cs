@@ -145,14 +145,15 @@ internal sealed class EndPointTotals
         var rowsBuffer = ArrayPool<int>.Shared.Rent(pathCount);
         var ps = buffer.AsSpan(0, pathCount);
         var lf = buffer.AsSpan(pathCount, pathCount);
-        var (worstPs, worstLf, slotPs, slotLf) = (double.NegativeInfinity, double.NegativeInfinity, -1, -1);
+        var withSource = !_newOrigin || pathCount == _shares.AllRows(index);
+        var (worstPs, worstLf, slotPs, slotLf) = (default(PathTotals), default(PathTotals), -1, -1);
         for (var slot = 0; slot < Slots.Count; slot++)
         {
             if ((slots & (1 << slot)) != 0)
             {
-                var (percentSum, loadFlow) = _shares.Walk(index, _phases.SlotOn(panel, slot), pathCount, ps, lf, rowsBuffer);
-                (worstPs, slotPs) = percentSum > worstPs || slotPs < 0 ? (percentSum, slot) : (worstPs, slotPs);
-                (worstLf, slotLf) = loadFlow > worstLf || slotLf < 0 ? (loadFlow, slot) : (worstLf, slotLf);
+                var totals = _shares.Walk(index, _phases.SlotOn(panel, slot), pathCount, ps, lf, rowsBuffer, withSource);
+                (worstPs, slotPs) = slotPs < 0 || totals.PercentSum > worstPs.PercentSum ? (totals, slot) : (worstPs, slotPs);
+                (worstLf, slotLf) = slotLf < 0 || totals.LoadFlow > worstLf.LoadFlow ? (totals, slot) : (worstLf, slotLf);
             }
         }
 
@@ -161,7 +162,7 @@ internal sealed class EndPointTotals
         var counted = _onLoadFlow ? slotLf : slotPs;
         if (counted != 31 - BitOperations.LeadingZeroCount((uint)slots))
         {
-            _shares.Walk(index, _phases.SlotOn(panel, counted), pathCount, ps, lf, rowsBuffer);
+            _shares.Walk(index, _phases.SlotOn(panel, counted), pathCount, ps, lf, rowsBuffer, withSource);
         }
 
         for (var k = 0; k < pathCount; k++)
@@ -173,7 +174,7 @@ internal sealed class EndPointTotals
         ArrayPool<double>.Shared.Return(buffer);
         ArrayPool<int>.Shared.Return(rowsBuffer);
 
-        var total = _onLoadFlow ? worstLf : worstPs;
+        var total = _onLoadFlow ? worstLf.LoadFlow : worstPs.PercentSum;
         var start = (_sums.Has[index] & Has.Motor) != 0 ? _motors.Of(index, slots, _sums.Power[index], _sums.LockedRotor[index]) : null;
         var found = Findings(index, total, pathCount, start);
         var nominal = _phases.SlotOn(panel, slotLf);
@@ -183,8 +184,9 @@ internal sealed class EndPointTotals
             PathStart = first,
             PathCount = pathCount,
             TotalDropPercent = total,
-            PercentSumTotalDropPercent = worstPs,
-            LoadFlowTotalDropPercent = _voltages is null ? null : worstLf,
+            PercentSumTotalDropPercent = worstPs.PercentSum,
+            LoadFlowTotalDropPercent = _voltages is null ? null : worstLf.LoadFlow,
+            SourceSharePercent = _onLoadFlow ? worstLf.SourceLoadFlow : worstPs.SourcePercentSum,
             LoadFlowEndVoltageV = _voltages is null ? null : nominal.Of(_voltages.Bus(index)).Magnitude * Slots.NominalV(nominal, slotLf),
         };
         _motorStarts[e] = start;

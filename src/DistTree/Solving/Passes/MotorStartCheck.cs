@@ -32,7 +32,7 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
             if ((slots & (1 << slot)) != 0)
             {
                 var f = phases.SlotOn(panel, slot);
-                var (percentSum, loadFlow) = shares.Walk(motor, f, count, ps, lf, rows);
+                var (percentSum, loadFlow, _, _) = shares.Walk(motor, f, count, ps, lf, rows, true);
                 var (extra, ownExtra) = Extra(motor, f, lockedRotor + (running * -1.0));
                 var steady = onLoadFlow ? loadFlow : percentSum;
                 var own = (onLoadFlow ? lf[0] : ps[0]) + ownExtra;
@@ -77,12 +77,14 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
                     m[x] = current[x] * km;
                 }
 
-                var here = f.DropPercent(m, row.ResistanceOhmPerKm, row.ReactanceOhmPerKm);
+                var here = f.DropPercent(m, row.ResistanceOhmPerKm, row.ReactanceOhmPerKm, row.NeutralResistanceOhmPerKm, row.NeutralReactanceOhmPerKm);
                 extra += here;
                 own = i == motor ? here : own;
             }
         }
 
-        return (extra, own);
+        // The utility's impedance ahead of the service, where the project gives it.
+        var source = ((f.A * current[0]) + (f.B * current[1]) + (f.C * current[2])) * phases.Frame.SourceImpedance * 100.0;
+        return (extra + source.Real, own);
     }
 }

@@ -1,3 +1,4 @@
+using System.Numerics;
 using DistTree.Network;
 
 namespace DistTree.Solving.Passes;
@@ -31,9 +32,11 @@ internal sealed class PathShares(DistributionNetwork network, PhaseFlow phases, 
     /// <summary>
     /// Walks <paramref name="count"/> rows up from end point <paramref name="index"/> reading <paramref name="f"/>:
     /// into <paramref name="ps"/>, <paramref name="lf"/> (without a converged load flow: zeros) and
-    /// <paramref name="rows"/> each row's shares and row, the end point's own first; gives the totals.
+    /// <paramref name="rows"/> each row's shares and row, the end point's own first; with
+    /// <paramref name="withSource"/> (the rows reach the service) the utility's share too, Re f(Z_s·I) and the fall
+    /// from its no-load voltage. Gives the totals, the utility's share in them.
     /// </summary>
-    public (double PercentSum, double LoadFlow) Walk(int index, Functional f, int count, Span<double> ps, Span<double> lf, Span<int> rows)
+    public PathTotals Walk(int index, Functional f, int count, Span<double> ps, Span<double> lf, Span<int> rows, bool withSource)
     {
         var (parents, incomingRow, transformerRow, moments, runRows) = (_parents, runs.IncomingRow, runs.TransformerRow, runs.Moments, runs.Rows);
         var models = phases.Frame.Models;
@@ -60,14 +63,15 @@ internal sealed class PathShares(DistributionNetwork network, PhaseFlow phases, 
                 var r = incomingRow[i];
                 ref var row = ref runRows[r];
                 (rows[at], tap[at]) = (r, 0.0);
-                ps[at] = f.DropPercent(moments.AsSpan(r * 3, 3), row.ResistanceOhmPerKm, row.ReactanceOhmPerKm);
+                ps[at] = f.DropPercent(moments.AsSpan(r * 3, 3), row.ResistanceOhmPerKm, row.ReactanceOhmPerKm, row.NeutralResistanceOhmPerKm, row.NeutralReactanceOhmPerKm);
                 lf[at] = voltages is null ? 0.0 : (f.Of(voltages.Bus(parents[i])).Magnitude - f.Of(voltages.Input(i)).Magnitude) * 100.0;
                 at++;
             }
         }
 
-        // The taps act on the voltage that reaches them: from the top down.
-        double percentSum = 0, loadFlow = 0;
+        // The utility's share at the top; the taps act on the voltage that reaches them: from the top down.
+        var (sourcePs, sourceLf) = withSource ? Source(f) : (0.0, 0.0);
+        double percentSum = sourcePs, loadFlow = sourceLf;
         for (var k = count - 1; k >= 0; k--)
         {
             ps[k] += (100.0 - percentSum) * tap[k];
@@ -75,6 +79,30 @@ internal sealed class PathShares(DistributionNetwork network, PhaseFlow phases, 
             loadFlow += lf[k];
         }
 
-        return (percentSum, loadFlow);
+        return new PathTotals(percentSum, loadFlow, sourcePs, sourceLf);
+    }
+
+    // The utility's share in f, read on the service's bus: by the percent sum and by the load flow.
+    private (double PercentSum, double LoadFlow) Source(Functional f)
+    {
+        var z = phases.Frame.SourceImpedance;
+        if (z == Complex.Zero)
+        {
+            return (0.0, 0.0);
+        }
+
+        var i = phases.Currents.AsSpan(0, 3);
+        var percentSum = ((f.A * i[0]) + (f.B * i[1]) + (f.C * i[2])) * z * 100.0;
+        if (voltages is null)
+        {
+            return (percentSum.Real, 0.0);
+        }
+
+        Span<Complex> emf = stackalloc Complex[4];
+        phases.Frame.Nominal(network.NodeArray[0], emf);
+        return (percentSum.Real, (f.Of(emf).Magnitude - f.Of(voltages.Bus(0)).Magnitude) * 100.0);
     }
 }
+
+/// <summary>An end point's totals in one voltage, by each method, and the utility's share in each.</summary>
+internal readonly record struct PathTotals(double PercentSum, double LoadFlow, double SourcePercentSum, double SourceLoadFlow);

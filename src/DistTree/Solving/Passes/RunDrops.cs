@@ -180,6 +180,14 @@ internal sealed class RunDrops
         var figures = RunElectrics.Compute(_catalog, _rules, conductors, conductors.Size, conductors.Sets, _frequencyHz, currentA, _bases.Of(conductors));
         Moments(run, _phases, LineScale(currentA, lineA), m);
 
+        // Its neutral: the lines' figures, or its own size's at the lines' temperature.
+        var (rN, xN) = (figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm);
+        if (conductors.NeutralSize is { } neutral)
+        {
+            rN = _catalog.AcResistanceOhmPerKm(neutral, conductors.Material, conductors.Raceway, figures.TemperatureC, _frequencyHz);
+            xN = _catalog.ReactanceOhmPerKm(neutral, conductors.Raceway, _frequencyHz);
+        }
+
         // Its own drop: the worst of its own voltages' (see OwnSlots), each Re f(ΔV) of the drops along it.
         var own = OwnSlots(run, _phases);
         var ownDrop = double.NegativeInfinity;
@@ -187,7 +195,7 @@ internal sealed class RunDrops
         {
             if ((own & (1 << slot)) != 0)
             {
-                ownDrop = Math.Max(ownDrop, _phases.SlotOn(run.Source, slot).DropPercent(m, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm));
+                ownDrop = Math.Max(ownDrop, _phases.SlotOn(run.Source, slot).DropPercent(m, figures.ResistanceOhmPerKm, figures.ReactanceOhmPerKm, rN, xN));
             }
         }
 
@@ -199,6 +207,8 @@ internal sealed class RunDrops
             TemperatureC = figures.TemperatureC,
             ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
             ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
+            NeutralResistanceOhmPerKm = rN,
+            NeutralReactanceOhmPerKm = xN,
             AmpacityA = figures.AmpacityA,
             OwnLines = (int)_phases.Assigned[index],
             DropPercent = ownDrop,
