@@ -61,7 +61,6 @@ internal static class OutputTarget
             case FileKind.Missing when link:
                 throw new UsageException($"'{path}' is a symbolic link to nothing; DistTree writes a regular file, or a new one");
             case FileKind.Missing:
-            case FileKind.Unknown:
                 return full;
             case FileKind.Folder:
                 throw new UsageException($"'{path}' is a folder; give the output a file name");
@@ -70,6 +69,7 @@ internal static class OutputTarget
             case FileKind.Socket:
                 throw new UsageException($"'{path}' is {Described(kind)}, not a regular file; DistTree replaces only regular files (give '-' to write to standard output)");
             case FileKind.Regular:
+            case FileKind.Unknown: // not examined (no permission on the way, say): the write will tell; inputs checked by path
                 break;
         }
 
@@ -78,9 +78,14 @@ internal static class OutputTarget
             throw new UsageException($"'{path}' is an input file; DistTree never overwrites its input");
         }
 
-        if (!link)
+        if (!link || kind == FileKind.Unknown)
         {
             return full;
+        }
+
+        if (ThroughOpenFiles(full))
+        {
+            throw new UsageException($"'{path}' names a file the process has open (its standard output, say), not a file to replace; give '-' to write to standard output");
         }
 
         // Written in place of the file the links lead to, so the links stay; a link the system resolves its own way
@@ -102,16 +107,30 @@ internal static class OutputTarget
         FileKind.Missing or FileKind.Regular or FileKind.Folder or FileKind.Unknown => "not a regular file",
     };
 
-    // The same file as one read: by identity where the system gives one, else by the path with every link followed.
+    // The same file as one read: by identity where the system gives both, else by the path with every link followed.
     private static bool IsInput(string path, FileIdentity? identity, IReadOnlyList<SourceFile> inputs)
     {
-        if (identity is not null)
+        var full = Resolved(path);
+        return inputs.Any(i => identity is not null && i.Identity is not null
+            ? i.Identity == identity
+            : string.Equals(Resolved(i.FullPath), full, StringComparison.Ordinal));
+    }
+
+    // True when a link on the way is one of the system's names for a process's open files (/proc/self/fd/1,
+    // /dev/fd/1): what it leads to is whatever the process has open there, not a file to replace.
+    private static bool ThroughOpenFiles(string path)
+    {
+        var current = path;
+        for (var step = 0; step < 40 && new FileInfo(current).LinkTarget is { } target; step++)
         {
-            return inputs.Any(i => i.Identity == identity);
+            current = Path.GetFullPath(target, Path.GetDirectoryName(current)!);
+            if (current.StartsWith("/proc/", StringComparison.Ordinal) || current.StartsWith("/dev/fd/", StringComparison.Ordinal))
+            {
+                return true;
+            }
         }
 
-        var full = Resolved(path);
-        return inputs.Any(i => string.Equals(Resolved(i.FullPath), full, StringComparison.Ordinal));
+        return false;
     }
 
     private static string Resolved(string path)

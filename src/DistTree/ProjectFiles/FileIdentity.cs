@@ -118,7 +118,8 @@ public readonly record struct FileIdentity(ulong Device, ulong Inode)
                 if (Statx(folder, path, flags, BasicStats, buffer) != 0)
                 {
                     var error = Marshal.GetLastPInvokeError();
-                    return error == 38 ? Unavailable() : error; // ENOSYS: a kernel without statx
+                    // ENOSYS: a kernel without statx; EPERM: a sandbox that forbids it (stat itself never says EPERM).
+                    return error is 38 or 1 ? Unavailable() : error;
                 }
             }
             catch (Exception e) when (e is DllNotFoundException or EntryPointNotFoundException)

@@ -218,6 +218,24 @@ public sealed class OutputFileTests
         Assert.Equal(FileKind.Device, FileIdentity.Of("/dev/null").Kind);
     }
 
+    [Theory]
+    [InlineData("/dev/stdout")]
+    [InlineData("/proc/self/fd/1")]
+    public void Write_OntoANameOfAnOpenFile_RefusedWhateverItLeadsTo(string path)
+    {
+        using var folder = new TempFolder();
+        var input = folder.CopyProject("small-office.yaml");
+        var kind = FileIdentity.Of(path).Kind;
+
+        // Standard output of the test host: a pipe, a terminal or a log file; none is replaced.
+        var result = CliRunner.Run("analyze", input, "--json", path);
+
+        Assert.Equal(2, result.ExitCode);
+        Assert.Contains($"'{path}' ", result.Error, StringComparison.Ordinal);
+        Assert.Equal(kind, FileIdentity.Of(path).Kind);
+        Assert.NotNull(new FileInfo(path).LinkTarget);
+    }
+
     [Fact]
     public void Write_OntoASocket_Refused()
     {
