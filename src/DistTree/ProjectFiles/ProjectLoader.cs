@@ -85,6 +85,7 @@ public static class ProjectLoader
     {
         // Hashed first, so that the bytes are not kept while the tree is read.
         var hash = IncludeReader.Hash(bytes);
+        var length = bytes.LongLength;
         var file = main.Name;
         var bag = new DiagnosticBag();
         bag.AddFile(file);
@@ -102,7 +103,7 @@ public static class ProjectLoader
         var reader = new ProjectReader(bag);
         var draft = reader.Read(root);
         var includes = new IncludeReader(bag, reader, main.Source);
-        includes.Add(new SourceFile(file, main.FullPath, main.Identity, bytes.LongLength, Convert.ToHexStringLower(hash), Path.GetFileName(main.FullPath)), hash);
+        includes.Add(new SourceFile(file, main.FullPath, main.Identity, length, Convert.ToHexStringLower(hash), Path.GetFileName(main.FullPath)), hash);
         includes.ReadAll(file, main.FullPath, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
