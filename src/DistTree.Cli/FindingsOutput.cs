@@ -14,7 +14,7 @@ internal static class FindingsOutput
     {
         if (sarifPath is not null)
         {
-            OutputFile.Write(context, sarifPath, SarifResults.Write(solution, ArtifactUri(projectPath)), projectPath);
+            OutputFile.Write(context, sarifPath, SarifResults.Write(solution, ArtifactUri(projectPath)), solution.Project.Files);
         }
     }
 

@@ -1,23 +1,34 @@
 using System.ComponentModel;
 using System.Diagnostics;
+using System.Globalization;
 using System.Text;
-using DistTree.Diagnostics;
+using DistTree.ProjectFiles;
 
 namespace DistTree.Cli;
 
 /// <summary>
-/// Reads a file as it was at a git revision: <c>git show REV:path</c>, run in the file's directory, with the
-/// path relative to the top of the repository (<c>git rev-parse --show-prefix</c>). git is started as a
-/// process with an argument list (no shell); the repository is only read.
+/// A project's files as they were at a git revision: the project file and every file it includes, each read with
+/// <c>git cat-file</c> from the revision's tree (never from the working tree), and named <c>REV:path</c> with the
+/// path from the top of the repository. git is started as a process with an argument list (no shell), in the
+/// project file's folder; the repository is only read. A symbolic link, a folder or a submodule at the revision is
+/// not read as a file.
 /// </summary>
-internal static class GitRevision
+internal sealed class GitRevision : IProjectFileSource
 {
-    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+    private readonly string _folder;
+    private readonly string _prefix;
+    private readonly string _revision;
 
-    /// <summary>The text of <paramref name="file"/> at <paramref name="revision"/> and the name it goes by, <c>REV:path</c>.</summary>
+    private GitRevision(string folder, string prefix, string revision)
+    {
+        _folder = folder;
+        _prefix = prefix;
+        _revision = revision;
+    }
+
+    /// <summary>The revision <paramref name="revision"/> of the repository that holds <paramref name="file"/>, which must be in it.</summary>
     /// <exception cref="UsageException">Outside a git checkout, an unknown revision, the file absent at the revision, or git missing.</exception>
-    /// <exception cref="ProjectException">The old file is not UTF-8 text.</exception>
-    public static (string Text, string Name) Read(string file, string revision)
+    public static GitRevision Open(string file, string revision)
     {
         if (revision.Length == 0 || revision.StartsWith('-') || revision.Any(char.IsControl))
         {
@@ -25,43 +36,68 @@ internal static class GitRevision
         }
 
         var full = Path.GetFullPath(file);
-        var directory = Path.GetDirectoryName(full)!;
-        var prefix = Run(directory, "rev-parse", "--show-prefix");
+        var folder = Path.GetDirectoryName(full)!;
+        var prefix = Run(folder, "rev-parse", "--show-prefix");
         if (prefix.ExitCode != 0)
         {
             throw new UsageException($"--against needs a git checkout, and '{file}' is not in one");
         }
 
-        var path = Text(prefix.Output).Trim() + Path.GetFileName(full);
-        if (Run(directory, "rev-parse", "--verify", "--quiet", "--end-of-options", revision + "^{commit}").ExitCode != 0)
+        if (Run(folder, "rev-parse", "--verify", "--quiet", "--end-of-options", revision + "^{commit}").ExitCode != 0)
         {
             throw new UsageException($"unknown revision '{revision}' in the repository of '{file}'");
         }
 
-        var spec = $"{revision}:{path}";
-        if (Run(directory, "cat-file", "-e", "--end-of-options", spec).ExitCode != 0)
+        var opened = new GitRevision(folder, Text(prefix.Output).Trim(), revision);
+        var path = opened.PathOf(full);
+        if (Run(folder, "cat-file", "-e", "--end-of-options", $"{revision}:{path}").ExitCode != 0)
         {
             throw new UsageException($"'{path}' did not exist at revision '{revision}'");
         }
 
-        var shown = Run(directory, "show", "--end-of-options", spec);
-        if (shown.ExitCode != 0)
-        {
-            throw new UsageException($"git could not show '{spec}': {Text(shown.Error).Trim()}");
-        }
-
-        string text;
-        try
-        {
-            text = StrictUtf8.GetString(shown.Output);
-        }
-        catch (DecoderFallbackException)
-        {
-            throw ProjectException.At(new SourceLocation(spec, 1, 1), "the file is not UTF-8 text");
-        }
-
-        return (text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text, spec);
+        return opened;
     }
+
+    /// <inheritdoc />
+    public string NameOf(string fullPath) => $"{_revision}:{PathOf(fullPath)}";
+
+    /// <inheritdoc />
+    public byte[] Read(string fullPath)
+    {
+        var path = PathOf(fullPath);
+        var listed = Run(_folder, "ls-tree", "-z", "--full-tree", "--end-of-options", _revision, "--", path);
+        var entry = Text(listed.Output).TrimEnd('\0');
+        if (listed.ExitCode != 0 || entry.Length == 0)
+        {
+            throw new FileNotFoundException($"no such file at revision '{_revision}'");
+        }
+
+        // "MODE TYPE OBJECT\tPATH": a regular file is 100644 or 100755.
+        var fields = entry[..entry.IndexOf('\t', StringComparison.Ordinal)].Split(' ');
+        if (fields[0] is not ("100644" or "100755"))
+        {
+            var what = fields[0] switch
+            {
+                "120000" => "a symbolic link",
+                "040000" => "a folder",
+                _ => "not a file",
+            };
+            throw new IOException($"it is {what} at revision '{_revision}'; a project file is read from a regular file");
+        }
+
+        var size = Run(_folder, "cat-file", "-s", fields[2]);
+        if (long.TryParse(Text(size.Output).Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out var bytes) && bytes > ProjectLimits.MaxFileBytes)
+        {
+            throw new IOException(string.Create(CultureInfo.InvariantCulture, $"it has {bytes:N0} bytes at revision '{_revision}'; a project file may have at most {ProjectLimits.MaxFileBytes:N0}"));
+        }
+
+        var shown = Run(_folder, "cat-file", "blob", fields[2]);
+        return shown.ExitCode == 0 ? shown.Output : throw new IOException($"git could not read it: {Text(shown.Error).Trim()}");
+    }
+
+    // The path from the top of the repository of a file in or below the project file's folder, with forward slashes.
+    private string PathOf(string fullPath) =>
+        _prefix + Path.GetRelativePath(_folder, fullPath).Replace(Path.DirectorySeparatorChar, '/');
 
     private static string Text(byte[] bytes) => Encoding.UTF8.GetString(bytes);
 

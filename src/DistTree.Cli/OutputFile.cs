@@ -1,8 +1,12 @@
+using DistTree.Model;
+
 namespace DistTree.Cli;
 
 /// <summary>
-/// Writes an output file safely: to a temporary file beside it, then renamed into place, so a reader never
-/// sees half a file; and never over an input file unless the command was asked to.
+/// Writes an output file safely: first checked (<see cref="OutputTarget"/>: never an input file, never anything but a
+/// regular file or a new name), then written to a new temporary file beside it and renamed into place, so a reader
+/// never sees half a file and only a regular file is ever replaced. The temporary file is removed on every way out:
+/// an error, an exception, a termination signal (<see cref="TemporaryFiles"/>).
 /// </summary>
 internal static class OutputFile
 {
@@ -11,15 +15,15 @@ internal static class OutputFile
     /// <param name="path">The output path, or <c>-</c>.</param>
     /// <param name="content">The text.</param>
     /// <param name="inputs">Files the command read: the output may not be one of them.</param>
-    public static void Write(CliContext context, string path, string content, params string[] inputs) =>
+    public static void Write(CliContext context, string path, string content, IReadOnlyList<SourceFile> inputs) =>
         Write(context, path, content, replace: true, inputs);
 
     /// <summary>
-    /// Writes <paramref name="content"/> like <see cref="Write(CliContext, string, string, string[])"/>, but
-    /// only when nothing is at <paramref name="path"/> yet, unless <paramref name="replace"/>.
+    /// Writes <paramref name="content"/> like <see cref="Write(CliContext, string, string, IReadOnlyList{SourceFile})"/>,
+    /// but only when nothing is at <paramref name="path"/> yet, unless <paramref name="replace"/>.
     /// </summary>
     /// <exception cref="UsageException">A file is already there and <paramref name="replace"/> is false.</exception>
-    public static void Write(CliContext context, string path, string content, bool replace, params string[] inputs)
+    public static void Write(CliContext context, string path, string content, bool replace, IReadOnlyList<SourceFile> inputs)
     {
         if (path == "-")
         {
@@ -43,7 +47,7 @@ internal static class OutputFile
     /// <param name="path">The output path, or <c>-</c>.</param>
     /// <param name="write">Writes the content as UTF-8 bytes, without a byte-order mark.</param>
     /// <param name="inputs">Files the command read: the output may not be one of them.</param>
-    public static void Write(CliContext context, string path, Action<Stream> write, params string[] inputs)
+    public static void Write(CliContext context, string path, Action<Stream> write, IReadOnlyList<SourceFile> inputs)
     {
         if (path == "-")
         {
@@ -56,49 +60,40 @@ internal static class OutputFile
         WriteFile(path, write, replace: true, inputs);
     }
 
-    private static void WriteFile(string path, Action<Stream> write, bool replace, string[] inputs)
+    private static void WriteFile(string path, Action<Stream> write, bool replace, IReadOnlyList<SourceFile> inputs)
     {
-
-        var full = Path.GetFullPath(path);
-        if (inputs.Any(i => string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
-        {
-            throw new UsageException($"'{path}' is an input file; DistTree never overwrites its input");
-        }
-
-        var directory = Path.GetDirectoryName(full)!;
-        var temporary = Path.Combine(directory, $".{Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
+        var target = OutputTarget.Check(path, inputs);
+        var registry = TemporaryFiles.Process;
+        string? temporary = null;
         try
         {
-            Directory.CreateDirectory(directory);
-            using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16))
+            Directory.CreateDirectory(Path.GetDirectoryName(Path.GetFullPath(target))!);
+            (temporary, var stream) = registry.Create(target);
+            using (stream)
             {
                 write(stream);
             }
 
-            if (!replace && (File.Exists(full) || Directory.Exists(full)))
+            // Checked again at the last moment: what stands at the path may have changed while the output was made.
+            target = OutputTarget.Check(path, inputs);
+            if (!replace && Path.Exists(target))
             {
-                File.Delete(temporary);
                 throw new UsageException($"'{path}' already exists; DistTree replaces it only when asked");
             }
 
-            File.Move(temporary, full, overwrite: replace);
+            registry.Commit(temporary, target, replace);
+            temporary = null;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            DeleteQuietly(temporary);
             throw new UsageException($"cannot write '{path}': {e.Message}");
         }
-    }
-
-    private static void DeleteQuietly(string path)
-    {
-        try
+        finally
         {
-            File.Delete(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            // Nothing was written there, or it cannot be removed: the error already reported is the one that matters.
+            if (temporary is not null)
+            {
+                registry.Discard(temporary);
+            }
         }
     }
 }

@@ -36,23 +36,25 @@ internal static class AnalyzeCommand
             var jsonPath = parsed.GetValue(json);
             var sarifPath = parsed.GetValue(sarif);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
-            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--html", htmlPath), ("--sarif", sarifPath));
+            (string, string?)[] outputs = [("--json", jsonPath), ("--html", htmlPath), ("--sarif", sarifPath)];
+            OptionChecks.Outputs(outputs);
 
             Solving.Solution solution;
             using (var status = context.Status())
             {
                 solution = Pipeline.Solve(context, path, status);
+                OutputTarget.CheckAll(solution.Project.Files, outputs);
                 if (jsonPath is not null)
                 {
                     status.Report($"writing the results of {solution.Runs.Count:N0} runs");
-                    OutputFile.Write(context, jsonPath, stream => JsonResults.Write(solution, stream), path);
+                    OutputFile.Write(context, jsonPath, stream => JsonResults.Write(solution, stream), solution.Project.Files);
                 }
             }
 
             if (htmlPath is not null)
             {
                 var options = new HtmlReportOptions { Worst = count, Date = parsed.GetValue(date) };
-                OutputFile.Write(context, htmlPath, HtmlReport.Render(solution, options), path);
+                OutputFile.Write(context, htmlPath, HtmlReport.Render(solution, options), solution.Project.Files);
             }
 
             FindingsOutput.WriteSarif(context, sarifPath, solution, path);

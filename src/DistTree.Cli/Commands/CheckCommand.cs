@@ -19,7 +19,9 @@ internal static class CheckCommand
         {
             var path = parsed.GetValue(file)!;
             var sarifPath = parsed.GetValue(sarif);
+            OptionChecks.Outputs(("--sarif", sarifPath));
             var solution = Pipeline.Solve(context, path);
+            OutputTarget.CheckAll(solution.Project.Files, ("--sarif", sarifPath));
             FindingsOutput.WriteSarif(context, sarifPath, solution, path);
             if (sarifPath != "-")
             {

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using DistTree.Comparing;
+using DistTree.Model;
 using DistTree.ProjectFiles;
 using DistTree.Reports;
 using DistTree.Solving;
@@ -41,11 +42,14 @@ internal static class CompareCommand
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(paths[^1]);
             var count = OptionChecks.Positive(parsed.GetValue(rows), "--rows");
 
-            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath));
+            (string, string?)[] outputs = [("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath)];
+            OptionChecks.Outputs(outputs);
 
             var (before, after) = SolveBoth(context, paths, revision);
+            IReadOnlyList<SourceFile> inputs = [.. before.Project.Files, .. after.Project.Files];
+            OutputTarget.CheckAll(inputs, outputs);
             var comparison = RevisionComparer.Compare(before, after);
-            WriteOutputs(context, comparison, after, new Outputs(jsonPath, markdownPath, htmlPath, parsed.GetValue(date), count), paths);
+            WriteOutputs(context, comparison, after, new Outputs(jsonPath, markdownPath, htmlPath, parsed.GetValue(date), count), inputs);
             return comparison.HasNewFindings ? ExitCodes.LimitExceeded : ExitCodes.Ok;
         });
         return command;
@@ -62,8 +66,7 @@ internal static class CompareCommand
             }
 
             var after = Pipeline.Solve(context, paths[0]);
-            var (text, name) = GitRevision.Read(paths[0], revision);
-            return (SolveText(context, text, name), after);
+            return (SolveAtRevision(context, paths[0], GitRevision.Open(paths[0], revision)), after);
         }
 
         if (paths.Length != 2)
@@ -76,7 +79,7 @@ internal static class CompareCommand
     }
 
     // Every output asked for; the console's unless one of them is standard output.
-    private static void WriteOutputs(CliContext context, Comparison comparison, Solution after, Outputs o, string[] paths)
+    private static void WriteOutputs(CliContext context, Comparison comparison, Solution after, Outputs o, IReadOnlyList<SourceFile> paths)
     {
         if (o.Json is not null)
         {
@@ -104,9 +107,19 @@ internal static class CompareCommand
     internal static string DefaultHtmlPath(string newProjectPath) =>
         Path.Combine("reports", Path.GetFileNameWithoutExtension(newProjectPath) + "-compare.html");
 
-    private static Solution SolveText(CliContext context, string text, string name)
+    // The project as it was at a revision: the file and every file it includes, read from the revision.
+    private static Solution SolveAtRevision(CliContext context, string path, GitRevision revision)
     {
-        var project = ProjectLoader.Parse(text, name);
+        Project project;
+        try
+        {
+            project = ProjectLoader.Load(path, revision);
+        }
+        catch (IOException e)
+        {
+            throw new UsageException($"cannot read '{revision.NameOf(Path.GetFullPath(path))}': {e.Message}");
+        }
+
         foreach (var warning in project.Warnings)
         {
             context.Error.WriteLine(warning.ToString());

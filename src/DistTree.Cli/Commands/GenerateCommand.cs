@@ -35,12 +35,14 @@ internal static class GenerateCommand
                 throw new UsageException($"--depth takes a whole number from 1 to {ProjectGenerator.MaxDepth}");
             }
 
+            var path = parsed.GetValue(output)!;
+            OptionChecks.Outputs(("--output", path));
             string text;
             using (var status = context.Status())
             {
                 text = ProjectGenerator.Generate(count, levels, parsed.GetValue(seed), status.Share("generating"));
                 status.Report("writing");
-                OutputFile.Write(context, parsed.GetValue(output)!, text);
+                OutputFile.Write(context, path, text, []);
             }
 
             return ExitCodes.Ok;

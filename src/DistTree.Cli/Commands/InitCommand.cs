@@ -36,12 +36,13 @@ internal static class InitCommand
             var unitSystem = parsed.GetValue(units) is { } word && Words.Units.TryRead(word, out var chosen) ? chosen : StarterProject.DefaultUnits(found);
             var path = parsed.GetValue(output)!;
             var replace = parsed.GetValue(force);
+            OptionChecks.Outputs(("--output", path));
             if (path != "-" && !replace && (File.Exists(path) || Directory.Exists(path)))
             {
                 throw new UsageException($"'{path}' already exists; choose another --output, or give --force to replace it");
             }
 
-            OutputFile.Write(context, path, StarterProject.Write(unitSystem, found), replace);
+            OutputFile.Write(context, path, StarterProject.Write(unitSystem, found), replace, []);
             if (path != "-")
             {
                 context.Out.WriteLine($"wrote {path}: a starter project on {found.Name}, lengths in {(unitSystem == UnitSystem.Metric ? "metres" : "feet")}");

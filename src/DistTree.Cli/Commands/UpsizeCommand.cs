@@ -1,12 +1,11 @@
 using System.CommandLine;
-using DistTree.ProjectFiles.Writing;
 using DistTree.Reports;
 using DistTree.Sizing;
 
 namespace DistTree.Cli.Commands;
 
 /// <summary>
-/// <c>disttree upsize FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--apply OUT.yaml] [--max-sets N]</c>: the least-material set of
+/// <c>disttree upsize FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--apply OUT.yaml|OUT/] [--max-sets N]</c>: the least-material set of
 /// conductor upsizes that brings the tree within its limits, proved by re-solving; exit 0 when the plan
 /// clears every finding, 1 when some limit no size can fix remains, 2 bad input.
 /// </summary>
@@ -23,7 +22,7 @@ internal static class UpsizeCommand
             Arity = ArgumentArity.ZeroOrOne,
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
-        var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) values edited.", HelpName = "OUT.yaml" };
+        var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) values edited, to OUT.yaml; or to a folder (OUT/), a copy of every file of the project, each edited where its sizes are.", HelpName = "OUT.yaml|OUT/" };
         var maxSets = new Option<int?>("--max-sets") { Description = "Let feeders take up to N parallel sets (overrides sizing: max_sets).", HelpName = "N" };
         var command = new Command("upsize", "Find the least-material conductor upsizes that bring every run and end point within its limits.\n" +
             "Example: disttree upsize projects/quillfeather-medical.yaml --apply fixed.yaml")
@@ -35,27 +34,35 @@ internal static class UpsizeCommand
             var path = parsed.GetValue(file)!;
             var jsonPath = parsed.GetValue(json);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
-            OptionChecks.OneStandardOutput(("--json", jsonPath), ("--html", htmlPath));
+            var applyPath = parsed.GetValue(apply);
+            (string, string?)[] outputs = [("--json", jsonPath), ("--html", htmlPath)];
+            OptionChecks.Outputs([.. outputs, ("--apply", applyPath)]);
 
             var before = WithMaxSets(Pipeline.Solve(context, path), parsed.GetValue(maxSets));
+            var inputs = before.Project.Files;
+            OutputTarget.CheckAll(inputs, outputs);
             var plan = Upsizer.Standard.Plan(before);
+
+            // The copy is read, checked and edited before anything is written, so that a refusal writes nothing.
+            var applied = applyPath is null ? null : AppliedProject.Prepare(before.Project, plan.Changes, applyPath);
+            if (applied is not null)
+            {
+                OutputTarget.CheckAll(inputs, [.. outputs, .. applied.Targets]);
+            }
+
             if (jsonPath is not null)
             {
-                OutputFile.Write(context, jsonPath, stream => JsonResults.Write(before, stream, w => PlanReport.WriteJson(w, plan)), path);
+                OutputFile.Write(context, jsonPath, stream => JsonResults.Write(before, stream, w => PlanReport.WriteJson(w, plan)), inputs);
             }
 
-            if (parsed.GetValue(apply) is { } output)
-            {
-                WriteApplied(context, path, output, plan);
-            }
-
+            applied?.Write(context);
             if (htmlPath is not null)
             {
                 var options = new HtmlReportOptions { Plan = plan, Date = parsed.GetValue(date) };
-                OutputFile.Write(context, htmlPath, HtmlReport.Render(before, options), path);
+                OutputFile.Write(context, htmlPath, HtmlReport.Render(before, options), inputs);
             }
 
-            if (jsonPath != "-" && htmlPath != "-")
+            if (jsonPath != "-" && htmlPath != "-" && applyPath != "-")
             {
                 PlanReport.WriteConsole(context.Out, plan);
             }
@@ -79,18 +86,5 @@ internal static class UpsizeCommand
 
         var sets = OptionChecks.Positive(given, "--max-sets");
         return before with { Project = before.Project with { Sizing = before.Project.Sizing with { MaxSets = sets } } };
-    }
-
-    private static void WriteApplied(CliContext context, string path, string output, UpsizePlan plan)
-    {
-        var elsewhere = plan.Changes.FirstOrDefault(c => c.SizeLocation.File != plan.Before.Project.File);
-        if (elsewhere is not null)
-        {
-            throw new UsageException($"--apply edits one file; run {elsewhere.RunId} is in {elsewhere.SizeLocation.File}");
-        }
-
-        var text = File.ReadAllText(path);
-        OutputFile.Write(context, output, ProjectFileEditor.Apply(text, plan.Changes), path);
-        context.Error.WriteLine($"wrote {output}: {plan.Changes.Count} runs changed");
     }
 }

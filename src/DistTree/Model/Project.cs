@@ -44,6 +44,12 @@ public sealed record Project
     /// </summary>
     public required string Sha256 { get; init; }
 
+    /// <summary>
+    /// Every file read for the project, in the order read: the main file first, then the included files depth
+    /// first in list order. Empty for a project made in code.
+    /// </summary>
+    public IReadOnlyList<SourceFile> Files { get; init; } = [];
+
     /// <summary>The unit of bare lengths in the file (figures are always in metres in the model).</summary>
     public UnitSystem Units { get; init; } = UnitSystem.Metric;
 

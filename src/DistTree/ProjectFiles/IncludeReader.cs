@@ -10,26 +10,47 @@ namespace DistTree.ProjectFiles;
 /// Reads the files a project includes, depth first in list order, iteratively (an explicit stack). A path is
 /// relative to the including file and must stay inside the main file's folder; a file that includes itself,
 /// directly or through others, is an include cycle; a file included twice is an error. Each file read adds
-/// its SHA-256 to <see cref="Hashes"/>, in the order read, after the main file's.
+/// its SHA-256 to <see cref="Hashes"/> and itself to <see cref="Files"/>, in the order read, after the main file's.
+/// With a <paramref name="source"/>, files are read from it (a revision in version control) and paths are
+/// resolved as written, with no symbolic link followed.
 /// </summary>
-internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
+internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader, IProjectFileSource? source)
 {
     private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
 
     /// <summary>SHA-256 of every file read, the main file's first.</summary>
     public List<byte[]> Hashes { get; } = [];
 
-    /// <summary>Reads every file that <paramref name="mainFile"/> includes (its entries are <paramref name="includes"/>).</summary>
-    public void ReadAll(string mainFile, IReadOnlyList<IncludeEntry> includes)
+    /// <summary>Every file read, the main file's first.</summary>
+    public List<Model.SourceFile> Files { get; } = [];
+
+    /// <summary>Notes a file read (the main file, by the loader) and its SHA-256.</summary>
+    public void Add(Model.SourceFile file, byte[] hash)
+    {
+        Files.Add(file);
+        Hashes.Add(hash);
+    }
+
+    /// <summary>
+    /// Reads every file that <paramref name="mainFile"/> (named so in diagnostics, found at <paramref name="mainPath"/>)
+    /// includes (its entries are <paramref name="includes"/>).
+    /// </summary>
+    public void ReadAll(string mainFile, string mainPath, IReadOnlyList<IncludeEntry> includes)
     {
         if (includes.Count == 0)
         {
             return;
         }
 
-        var folder = RealPath(Path.GetFullPath(Path.GetDirectoryName(mainFile) is { Length: > 0 } d ? d : ".")) ?? "";
-        var mainFull = RealPath(Path.GetFullPath(mainFile)) ?? Path.GetFullPath(mainFile);
-        var chain = new List<Frame> { new(mainFile, mainFull, includes) };
+        var folder = Path.GetDirectoryName(mainPath)!;
+        var mainFull = mainPath;
+        if (source is null)
+        {
+            folder = RealPath(folder) ?? "";
+            mainFull = RealPath(mainPath) ?? mainPath;
+        }
+
+        var chain = new List<Frame> { new(mainFile, mainFull, Path.GetFileName(mainPath), includes) };
         var seen = new Dictionary<string, SourceLocation>(StringComparer.Ordinal) { [mainFull] = new SourceLocation(mainFile, 1, 1) };
         while (chain.Count > 0)
         {
@@ -61,9 +82,10 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             }
 
             seen.Add(full, entry.Location);
-            if (ReadFile(entry, shown, full) is { } next)
+            var inProject = InProject(frame.InProject, entry.Path);
+            if (ReadFile(entry, shown, full, inProject) is { } next)
             {
-                chain.Add(new Frame(shown, full, next));
+                chain.Add(new Frame(shown, full, inProject, next));
             }
         }
     }
@@ -84,6 +106,11 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         {
             bag.Error(entry.Location, ProjectMessages.IncludeOutside(entry.Path));
             return null;
+        }
+
+        if (source is not null)
+        {
+            return (source.NameOf(full), full);
         }
 
         // The path as written stays inside; so must the file it names, every symbolic link on the way followed.
@@ -160,12 +187,61 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             path[(Path.GetPathRoot(path)?.Length ?? 0)..].Split(Path.DirectorySeparatorChar, StringSplitOptions.RemoveEmptyEntries);
     }
 
-    private IReadOnlyList<IncludeEntry>? ReadFile(IncludeEntry entry, string shown, string full)
+    /// <summary>
+    /// The path of a file included as <paramref name="path"/> from the file at <paramref name="from"/>, both relative to
+    /// the main file's folder, with '.' and '..' worked out; null when it climbs above that folder (or from is null).
+    /// </summary>
+    internal static string? InProject(string? from, string path)
+    {
+        if (from is null)
+        {
+            return null;
+        }
+
+        var parts = new List<string>(from.Split('/')[..^1]);
+        foreach (var part in path.Split(Path.DirectorySeparatorChar, Path.AltDirectorySeparatorChar))
+        {
+            if (part is "" or ".")
+            {
+                continue;
+            }
+
+            if (part != "..")
+            {
+                parts.Add(part);
+            }
+            else if (parts.Count == 0)
+            {
+                return null;
+            }
+            else
+            {
+                parts.RemoveAt(parts.Count - 1);
+            }
+        }
+
+        return string.Join('/', parts);
+    }
+
+    private IReadOnlyList<IncludeEntry>? ReadFile(IncludeEntry entry, string shown, string full, string? inProject)
     {
         byte[] bytes;
+        Model.SourceFile file;
         try
         {
-            (bytes, var size) = ProjectLoader.ReadBounded(full);
+            FileIdentity? identity = null;
+            long size;
+            if (source is null)
+            {
+                (bytes, size, identity) = ProjectLoader.ReadBounded(full);
+            }
+            else
+            {
+                bytes = source.Read(full);
+                size = bytes.LongLength;
+            }
+
+            file = new Model.SourceFile(shown, full, identity, size, "", inProject);
             if (size > ProjectLimits.MaxFileBytes)
             {
                 bag.Error(entry.Location, ProjectMessages.IncludeTooLarge(shown, size));
@@ -192,7 +268,8 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
             return null;
         }
 
-        Hashes.Add(Hash(bytes));
+        var hash = Hash(bytes);
+        Add(file with { Sha256 = Convert.ToHexStringLower(hash) }, hash);
         text = text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text;
         var root = SourceTreeReader.Read(text, shown, bag);
         if (root is null || root is SourceScalar { IsNull: true })
@@ -224,8 +301,10 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader)
         return true;
     }
 
-    private sealed class Frame(string shown, string full, IReadOnlyList<IncludeEntry> includes)
+    private sealed class Frame(string shown, string full, string? inProject, IReadOnlyList<IncludeEntry> includes)
     {
+        public string? InProject { get; } = inProject;
+
         public string Shown { get; } = shown;
 
         public string Full { get; } = full;

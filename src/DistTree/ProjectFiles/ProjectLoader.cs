@@ -23,12 +23,30 @@ public static class ProjectLoader
     /// <exception cref="IOException">The file cannot be read.</exception>
     public static Project Load(string path)
     {
-        var (bytes, size) = ReadBounded(path);
-        if (size > ProjectLimits.MaxFileBytes)
-        {
-            throw TooLarge(path, size, "bytes");
-        }
+        var (bytes, size, identity) = ReadBounded(path);
+        var main = new MainFile(path, Path.GetFullPath(path), identity, null);
+        return size > ProjectLimits.MaxFileBytes ? throw TooLarge(path, size, "bytes") : Decode(bytes, main);
+    }
 
+    /// <summary>
+    /// Reads and validates the project file at <paramref name="path"/> and the files it includes from
+    /// <paramref name="source"/> (a revision in version control, say) rather than from the file system;
+    /// diagnostics name each file as the source does.
+    /// </summary>
+    /// <exception cref="ProjectException">The file is not a valid project; carries every error and warning.</exception>
+    /// <exception cref="IOException">The main file cannot be read from the source.</exception>
+    public static Project Load(string path, IProjectFileSource source)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        var full = Path.GetFullPath(path);
+        var name = source.NameOf(full);
+        var bytes = source.Read(full);
+        var main = new MainFile(name, full, null, source);
+        return bytes.LongLength > ProjectLimits.MaxFileBytes ? throw TooLarge(name, bytes.LongLength, "bytes") : Decode(bytes, main);
+    }
+
+    private static Project Decode(byte[] bytes, MainFile main)
+    {
         string text;
         try
         {
@@ -36,7 +54,7 @@ public static class ProjectLoader
         }
         catch (DecoderFallbackException)
         {
-            throw NotUtf8(path, bytes);
+            throw NotUtf8(main.Name, bytes);
         }
 
         if (text.Length > 0 && text[0] == '\uFEFF')
@@ -44,7 +62,7 @@ public static class ProjectLoader
             text = text[1..];
         }
 
-        return Parse(text, path, bytes);
+        return Parse(text, main, bytes);
     }
 
     /// <summary>
@@ -60,13 +78,15 @@ public static class ProjectLoader
             throw TooLarge(file, text.Length, "characters");
         }
 
-        return Parse(text, file, Encoding.UTF8.GetBytes(text));
+        return Parse(text, new MainFile(file, Path.GetFullPath(file), null, null), Encoding.UTF8.GetBytes(text));
     }
 
-    private static Project Parse(string text, string file, byte[] bytes)
+    private static Project Parse(string text, MainFile main, byte[] bytes)
     {
         // Hashed first, so that the bytes are not kept while the tree is read.
         var hash = IncludeReader.Hash(bytes);
+        var length = bytes.LongLength;
+        var file = main.Name;
         var bag = new DiagnosticBag();
         bag.AddFile(file);
         var root = SourceTreeReader.Read(text, file, bag);
@@ -82,9 +102,9 @@ public static class ProjectLoader
 
         var reader = new ProjectReader(bag);
         var draft = reader.Read(root);
-        var includes = new IncludeReader(bag, reader);
-        includes.Hashes.Add(hash);
-        includes.ReadAll(file, draft.Includes);
+        var includes = new IncludeReader(bag, reader, main.Source);
+        includes.Add(new SourceFile(file, main.FullPath, main.Identity, length, Convert.ToHexStringLower(hash), Path.GetFileName(main.FullPath)), hash);
+        includes.ReadAll(file, main.FullPath, draft.Includes);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
             bag.Error(root.Location, ProjectMessages.NoEquipmentWithIncludes());
@@ -96,7 +116,7 @@ public static class ProjectLoader
             throw ProjectException.FromDiagnostics(bag.Sorted());
         }
 
-        return Build(draft, file, Sha256Of(includes.Hashes), bag.Warnings());
+        return Build(draft, file, Sha256Of(includes.Hashes), bag.Warnings()) with { Files = includes.Files };
     }
 
     private static Project Build(ProjectDraft draft, string file, string sha256, IReadOnlyList<Diagnostic> warnings)
@@ -169,10 +189,11 @@ public static class ProjectLoader
     /// The bytes of the regular file at <paramref name="path"/>, read in one bounded stream: at most
     /// <see cref="ProjectLimits.MaxFileBytes"/> + 1 bytes, so a device or a file growing without end cannot exhaust
     /// memory. <c>Size</c> is the file's size in bytes; over the limit, <c>Bytes</c> is empty (the file is not read,
-    /// or not kept).
+    /// or not kept). <c>Identity</c> is the file's, taken from the open file (so it is the file read, whatever
+    /// happens to its name meanwhile).
     /// </summary>
     /// <exception cref="IOException">The path is a folder, a device or a pipe, or cannot be read.</exception>
-    internal static (byte[] Bytes, long Size) ReadBounded(string path)
+    internal static (byte[] Bytes, long Size, FileIdentity? Identity) ReadBounded(string path)
     {
         if (Directory.Exists(path))
         {
@@ -185,10 +206,11 @@ public static class ProjectLoader
             throw new IOException(ProjectMessages.NotARegularFile());
         }
 
+        var identity = FileIdentity.Of(stream.SafeFileHandle);
         var stated = stream.Length;
         if (stated > ProjectLimits.MaxFileBytes)
         {
-            return ([], stated);
+            return ([], stated, identity);
         }
 
         // A device (/dev/zero) states no size and never ends: reading one byte more than stated tells it apart.
@@ -210,11 +232,11 @@ public static class ProjectLoader
                 rest.Write(more, 0, chunk);
             }
 
-            return rest.Length > ProjectLimits.MaxFileBytes ? ([], rest.Length) : (rest.ToArray(), rest.Length);
+            return rest.Length > ProjectLimits.MaxFileBytes ? ([], rest.Length, identity) : (rest.ToArray(), rest.Length, identity);
         }
 
         Array.Resize(ref bytes, read);
-        return (bytes, read);
+        return (bytes, read, identity);
     }
 
     private static ProjectException TooLarge(string file, long size, string unit) =>
@@ -239,5 +261,6 @@ public static class ProjectLoader
         return (new SourceLocation(file, line, column), ProjectMessages.NotUtf8(hint, bytes[offset], offset));
     }
 
-    private static string Hash(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes));
+    // The main file: its name in diagnostics, where it is, which file it was, and the source of its includes (null: the file system).
+    private sealed record MainFile(string Name, string FullPath, FileIdentity? Identity, IProjectFileSource? Source);
 }

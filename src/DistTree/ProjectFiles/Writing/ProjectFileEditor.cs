@@ -1,126 +1,172 @@
+using System.Globalization;
+using System.Text;
+using DistTree.Conductors;
 using DistTree.Diagnostics;
+using DistTree.ProjectFiles.Yaml;
 using DistTree.Sizing;
 
 namespace DistTree.ProjectFiles.Writing;
 
 /// <summary>
-/// Applies an upsize plan to the text of a project file, editing only the values that change: each changed
-/// run's <c>size</c> scalar in place, and its <c>sets</c> value (replaced where written, else added right
-/// after the size). Comments, key order and the formatting of every other line stay as they were.
+/// Applies an upsize plan to one project file, editing only the values that change: each changed run's
+/// <c>size</c> scalar in place, in the form it is written in (plain, single- or double-quoted, after a tag),
+/// and its <c>sets</c> value (replaced where written, else added right after the size). Every other byte stays
+/// as it was: comments, key order, line endings (LF, CR LF or CR, mixed as they are), characters such as NEL
+/// inside a value, and a UTF-8 byte-order mark. The file is read as the loader reads it, so each size is found
+/// as the loader found it; a size the editor cannot rewrite (a block scalar, a value over several lines) is a
+/// located error, and nothing is edited.
 /// </summary>
-public static class ProjectFileEditor
+public static partial class ProjectFileEditor
 {
-    /// <summary>The edited text. Throws <see cref="InvalidOperationException"/> when a location does not hold the expected size.</summary>
-    public static string Apply(string text, IEnumerable<UpsizeChange> changes)
+    private const string SizeKey = "size";
+    private const string SetsKey = "sets";
+    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+
+    /// <summary>
+    /// The bytes of the file named <paramref name="file"/> (UTF-8, as read by the loader) with
+    /// <paramref name="changes"/> applied; each change's <see cref="UpsizeChange.SizeLocation"/> must be in it.
+    /// A byte-order mark is kept.
+    /// </summary>
+    /// <exception cref="ProjectException">A size is not where the plan says, or is written in a form that cannot be rewritten.</exception>
+    public static byte[] Apply(byte[] bytes, string file, IEnumerable<UpsizeChange> changes)
     {
-        var newline = text.Contains("\r\n", StringComparison.Ordinal) ? "\r\n" : "\n";
-        var lines = text.Split(newline).ToList();
-        // Edit from the bottom up so that an added line does not move the places still to edit.
-        foreach (var change in changes.OrderByDescending(c => c.SizeLocation.Line).ThenByDescending(c => c.SizeLocation.Column))
+        ArgumentNullException.ThrowIfNull(bytes);
+        var bom = bytes is [0xEF, 0xBB, 0xBF, ..];
+        string text;
+        try
         {
-            EditRun(lines, change);
+            text = StrictUtf8.GetString(bytes, bom ? 3 : 0, bytes.Length - (bom ? 3 : 0));
+        }
+        catch (DecoderFallbackException)
+        {
+            throw ProjectException.At(new SourceLocation(file, 1, 1), "the file is not UTF-8 text; nothing written");
         }
 
-        return string.Join(newline, lines);
+        var edited = Encoding.UTF8.GetBytes(Apply(text, file, changes));
+        return bom ? [0xEF, 0xBB, 0xBF, .. edited] : edited;
     }
 
-    private static void EditRun(List<string> lines, UpsizeChange change)
+    /// <summary>
+    /// The text of the file named <paramref name="file"/> (without a byte-order mark) with <paramref name="changes"/>
+    /// applied; each change's <see cref="UpsizeChange.SizeLocation"/> must be in it.
+    /// </summary>
+    /// <exception cref="ProjectException">A size is not where the plan says, or is written in a form that cannot be rewritten.</exception>
+    public static string Apply(string text, string file, IEnumerable<UpsizeChange> changes)
     {
-        var at = change.SizeLocation;
-        if (at.Line < 1 || at.Line > lines.Count)
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(changes);
+        var list = changes.ToList();
+        if (list.Find(c => c.SizeLocation.File != file) is { } other)
         {
-            throw new InvalidOperationException($"no size value at {at} for run {change.RunId}");
+            throw new ArgumentException($"the size of run {other.RunId} is in {other.SizeLocation.File}, not in {file}", nameof(changes));
         }
 
-        var line = lines[at.Line - 1];
-        var start = at.Column - 1;
-        var end = ScalarEnd(line, start);
-        var old = line[start..end];
-        if (!Conductors.ConductorSize.TryParse(old.Trim('"', '\''), out var size, out _) || size.Text != change.SizeBefore)
+        if (list.Count == 0)
         {
-            throw new InvalidOperationException($"{at}: expected the size {change.SizeBefore} of run {change.RunId}, found '{old}'");
+            return text;
         }
 
-        var quote = old.Length > 0 && old[0] is '"' or '\'' ? old[0].ToString() : "";
-        line = line[..start] + quote + change.SizeAfter + quote + line[end..];
-        lines[at.Line - 1] = line;
-        if (change.SetsAfter != change.SetsBefore)
+        var lines = LineStarts(text);
+        var sizes = SizeEntries(text, file, list);
+        var edits = new List<Edit>();
+        foreach (var change in list)
         {
-            EditSets(lines, at, start + quote.Length + change.SizeAfter.Length + quote.Length, change.SetsAfter);
+            if (!sizes.TryGetValue((change.SizeLocation.Line, change.SizeLocation.Column), out var entry))
+            {
+                throw ProjectException.At(change.SizeLocation, $"no size value of run '{change.RunId}' here; nothing written");
+            }
+
+            PlanRun(text, lines, change, entry, edits);
         }
+
+        var result = new StringBuilder(text);
+        foreach (var edit in edits.OrderByDescending(e => e.Position))
+        {
+            result.Remove(edit.Position, edit.Length).Insert(edit.Position, edit.Replacement);
+        }
+
+        return result.ToString();
     }
 
-    // A plain scalar ends at a flow indicator, a comment or the end of the line; a quoted one at its closing quote.
-    private static int ScalarEnd(string line, int start)
+    // The size's edit, and the sets' (replaced, added to a flow mapping, or added as a line below the size).
+    private static void PlanRun(string text, List<int> lines, UpsizeChange change, SizeEntry entry, List<Edit> edits)
     {
-        if (start < line.Length && line[start] is '"' or '\'')
+        var size = ScalarSpan(text, lines, entry.Value, change, SizeKey);
+        if (!ConductorSize.TryParse(entry.Value.Value, out var found, out _) || found.Text != change.SizeBefore)
         {
-            var close = line.IndexOf(line[start], start + 1);
-            return close < 0 ? line.Length : close + 1;
+            throw ProjectException.At(change.SizeLocation, $"expected the size {change.SizeBefore} of run '{change.RunId}' here, found '{entry.Value.Echo()}'; nothing written");
         }
 
-        var end = start;
-        while (end < line.Length && line[end] is not (',' or '}' or ']' or '#'))
+        edits.Add(new Edit(size.Start, size.End - size.Start, size.Quote + change.SizeAfter + size.Quote));
+        if (change.SetsAfter == change.SetsBefore)
         {
-            end++;
-        }
-
-        while (end > start && line[end - 1] == ' ')
-        {
-            end--;
-        }
-
-        return end;
-    }
-
-    private static void EditSets(List<string> lines, SourceLocation sizeAt, int afterSize, int sets)
-    {
-        var line = lines[sizeAt.Line - 1];
-        var flow = line.LastIndexOf('{', sizeAt.Column - 1) >= 0 && line.IndexOf('}', afterSize) >= 0;
-        if (flow)
-        {
-            var open = line.LastIndexOf('{', sizeAt.Column - 1);
-            var close = line.IndexOf('}', afterSize);
-            var inner = line[open..close];
-            var m = System.Text.RegularExpressions.Regex.Match(inner, @"\bsets:\s*(\d+)");
-            lines[sizeAt.Line - 1] = m.Success
-                ? line[..(open + m.Groups[1].Index)] + sets + line[(open + m.Groups[1].Index + m.Groups[1].Length)..]
-                : line[..afterSize] + $", sets: {sets}" + line[afterSize..];
             return;
         }
 
-        // Block style: the run's keys share the size key's indentation.
-        var indent = line.Length - line.TrimStart().Length;
-        for (var i = sizeAt.Line - 2; i >= 0 && Indent(lines[i]) >= indent; i--)
+        var sets = entry.Mapping.Entries.Find(e => e.Key.Value == SetsKey);
+        if (sets.Value is SourceScalar written)
         {
-            if (TryReplaceSets(lines, i, indent, sets))
-            {
-                return;
-            }
+            var span = ScalarSpan(text, lines, written, change, SetsKey);
+            edits.Add(new Edit(span.Start, span.End - span.Start, span.Quote + Number(change.SetsAfter) + span.Quote));
         }
-
-        for (var i = sizeAt.Line; i < lines.Count && (lines[i].Trim().Length == 0 || Indent(lines[i]) >= indent); i++)
+        else if (text[Position(lines, entry.Mapping.Line, entry.Mapping.Column)] == '{')
         {
-            if (TryReplaceSets(lines, i, indent, sets))
-            {
-                return;
-            }
+            edits.Add(new Edit(size.End, 0, $", {SetsKey}: {Number(change.SetsAfter)}"));
         }
-
-        lines.Insert(sizeAt.Line, new string(' ', indent) + $"sets: {sets}");
+        else
+        {
+            // A block mapping: a line of its own after the size's line, at the size key's indentation, ended as that line is.
+            var next = entry.Value.Line < lines.Count ? lines[entry.Value.Line] : text.Length;
+            var end = LineContentEnd(text, lines[entry.Value.Line - 1]);
+            var lineBreak = end < next ? text[end..next] : FirstLineBreak(text);
+            var added = new string(' ', entry.Key.Column - 1) + $"{SetsKey}: {Number(change.SetsAfter)}";
+            edits.Add(end < next ? new Edit(next, 0, added + lineBreak) : new Edit(next, 0, lineBreak + added));
+        }
     }
 
-    private static bool TryReplaceSets(List<string> lines, int i, int indent, int sets)
+    private static string Number(int value) => value.ToString(CultureInfo.InvariantCulture);
+
+    // Every mapping entry whose key is 'size' and whose value is a scalar at one of the changes' locations.
+    private static Dictionary<(int Line, int Column), SizeEntry> SizeEntries(string text, string file, List<UpsizeChange> changes)
     {
-        var m = System.Text.RegularExpressions.Regex.Match(lines[i], @"^(\s*)sets:\s*(\d+)");
-        if (!m.Success || m.Groups[1].Length != indent)
+        var wanted = changes.Select(c => (c.SizeLocation.Line, c.SizeLocation.Column)).ToHashSet();
+        var found = new Dictionary<(int Line, int Column), SizeEntry>();
+        var bag = new DiagnosticBag();
+        bag.AddFile(file);
+        var pending = new Stack<SourceNode>();
+        if (SourceTreeReader.Read(text, file, bag) is { } root)
         {
-            return false;
+            pending.Push(root);
         }
 
-        lines[i] = lines[i][..m.Groups[2].Index] + sets + lines[i][(m.Groups[2].Index + m.Groups[2].Length)..];
-        return true;
+        while (pending.Count > 0)
+        {
+            switch (pending.Pop())
+            {
+                case SourceMapping mapping:
+                    foreach (var (key, value) in mapping.Entries)
+                    {
+                        if (key.Value == SizeKey && value is SourceScalar scalar && wanted.Contains((scalar.Line, scalar.Column)))
+                        {
+                            found[(scalar.Line, scalar.Column)] = new SizeEntry(mapping, key, scalar);
+                        }
+
+                        pending.Push(value);
+                    }
+
+                    break;
+                case SourceSequence sequence:
+                    sequence.Items.ForEach(pending.Push);
+                    break;
+            }
+        }
+
+        return found;
     }
 
-    private static int Indent(string line) => line.Trim().Length == 0 ? int.MaxValue : line.Length - line.TrimStart().Length;
+    // A size value found: the run's mapping, the size key, and the value.
+    private sealed record SizeEntry(SourceMapping Mapping, SourceScalar Key, SourceScalar Value);
+
+    // Replace Length characters at Position with Replacement (Length 0: insert).
+    private sealed record Edit(int Position, int Length, string Replacement);
 }
