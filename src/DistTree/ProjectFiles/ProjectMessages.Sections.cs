@@ -38,9 +38,6 @@ internal static partial class ProjectMessages
         return $"unknown conductor_temperature '{text}'{hint} (expected {words} or a number in °C)";
     }
 
-    /// <summary><c>max_sets</c> below 1.</summary>
-    public static string MaxSetsBelowOne(int sets) => $"'max_sets' must be 1 or more; found {sets}";
-
     /// <summary><c>prices</c> that is not a mapping.</summary>
     public static string PricesNotMapping(SourceNode found) => $"'prices' must be a mapping of size to price per metre; found {found.Describe()}";
 
@@ -126,9 +123,6 @@ internal static partial class ProjectMessages
     public static string TwoQuantities(Subject load, string first, string second) =>
         $"{load} gives both '{first}' and '{second}'; give exactly one of {QuantityList}";
 
-    /// <summary>A power factor (running or starting) outside (0, 1].</summary>
-    public static string PowerFactorRange(double pf) => $"a power factor must be greater than 0 and at most 1; found {Format(pf)}";
-
     /// <summary>A motor load without <c>pf</c>.</summary>
     public static string MotorNeedsPowerFactor(Subject load) => $"missing key 'pf' in {load} (a motor load needs its power factor)";
 
@@ -143,19 +137,12 @@ internal static partial class ProjectMessages
     public static string CodeLetterWithFla(Subject load) =>
         $"a code letter gives kVA per horsepower: {load} needs 'hp' with it, or 'lrc_multiple' with 'fla'";
 
-    /// <summary>A locked-rotor multiple below 1.</summary>
-    public static string MultipleBelowOne(Subject load) =>
-        $"'lrc_multiple' of {load} is the locked-rotor current over the full-load current: at least 1";
-
     /// <summary>Both a code letter and a locked-rotor multiple.</summary>
     public static string CodeLetterAndMultiple(Subject load) => $"{load} gives both 'code_letter' and 'lrc_multiple'; give one";
 
     /// <summary>A branch run longer than is likely (a warning); <paramref name="lengthText"/> is the length in metres as written.</summary>
     public static string LongBranch(Subject run, string lengthText) =>
         $"{run} is {lengthText} m long, more than 609.6 m (2000 ft); check the length";
-
-    /// <summary>A run's <c>sets</c> below 1.</summary>
-    public static string SetsBelowOne(Subject run, int sets) => $"'sets' of {run} must be 1 or more; found {sets}";
 
     /// <summary>What a required key holds, added to the message when it is missing or empty.</summary>
     public static class KeyHints

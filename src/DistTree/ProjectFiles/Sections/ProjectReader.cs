@@ -155,7 +155,7 @@ internal sealed class ProjectReader
 
         var id = m.Required("id") is { } idNode ? _context.Id(idNode, "'id' of the service") : null;
         var system = m.Required("system", ProjectMessages.KeyHints.System) is { } systemNode ? Values.SystemOf(systemNode, "'system' of the service") : null;
-        var frequency = m.Optional("frequency_hz") is { } hz ? Values.Positive(hz, "'frequency_hz'") : 60;
+        var frequency = m.Optional("frequency_hz") is { } hz ? Values.InRange(hz, "'frequency_hz'", ValueRanges.FrequencyHz) : 60;
         if (id is not null && system is not null && frequency is not null)
         {
             _context.Draft.Service = new Service(id, system, frequency.Value, m.Node.Location);
