@@ -31,7 +31,7 @@ internal static class AnalyzeCommand
         command.SetAction(parsed =>
         {
             var path = parsed.GetValue(file)!;
-            var count = OptionChecks.Positive(parsed.GetValue(worst), "--worst");
+            var count = OptionChecks.Listed(parsed.GetValue(worst), "--worst");
 
             var jsonPath = parsed.GetValue(json);
             var sarifPath = parsed.GetValue(sarif);

@@ -39,7 +39,7 @@ internal static class CompareCommand
             var jsonPath = parsed.GetValue(json);
             var markdownPath = parsed.GetValue(markdown);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(paths[^1]);
-            var count = OptionChecks.Positive(parsed.GetValue(rows), "--rows");
+            var count = OptionChecks.Listed(parsed.GetValue(rows), "--rows");
 
             OptionChecks.OneStandardOutput(("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath));
 

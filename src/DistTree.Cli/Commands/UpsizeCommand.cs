@@ -77,7 +77,7 @@ internal static class UpsizeCommand
             return before;
         }
 
-        var sets = OptionChecks.Positive(given, "--max-sets");
+        var sets = (int)OptionChecks.InRange(given, ProjectFiles.ValueRanges.MaxSetsRange, "--max-sets");
         return before with { Project = before.Project with { Sizing = before.Project.Sizing with { MaxSets = sets } } };
     }
 

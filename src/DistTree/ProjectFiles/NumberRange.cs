@@ -12,7 +12,7 @@ namespace DistTree.ProjectFiles;
 /// <param name="MaxExclusive">True when <paramref name="Max"/> itself is not allowed.</param>
 /// <param name="Unit">The unit a message names after the ends ("°C", "%", "A"), or empty.</param>
 /// <param name="Whole">True when only whole numbers are allowed.</param>
-internal readonly record struct NumberRange(double Min, bool MinExclusive, double Max, bool MaxExclusive, string Unit, bool Whole = false)
+public readonly record struct NumberRange(double Min, bool MinExclusive, double Max, bool MaxExclusive, string Unit, bool Whole = false)
 {
     /// <summary>Both ends allowed: [min, max].</summary>
     public static NumberRange Closed(double min, double max, string unit) => new(min, false, max, false, unit);

@@ -10,7 +10,7 @@ namespace DistTree.ProjectFiles;
 /// a test keeps the three in step (<see cref="All"/>). Each range keeps the figures a valid project gives finite,
 /// and its ends are what buildings have, with room to spare; the reason is beside each.
 /// </summary>
-internal static class ValueRanges
+public static class ValueRanges
 {
     /// <summary>The longest run, and the farthest point along one: 100 km, in metres (no building feeder comes near).</summary>
     public const double MaxLengthM = 100_000;
