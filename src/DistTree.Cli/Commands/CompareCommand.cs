@@ -25,7 +25,7 @@ internal static class CompareCommand
             Arity = ArgumentArity.ZeroOrOne,
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
-        var rows = new Option<int>("--rows") { Description = "How many end points and runs to list on the console and in Markdown.", DefaultValueFactory = _ => 20 };
+        var rows = new Option<int>("--rows") { Description = "How many end points and runs to list on the console and in Markdown, 1 to 1,000.", DefaultValueFactory = _ => 20 };
         var command = new Command("compare", "Compare two revisions of a design: what changed, and what it does to every end point and run downstream.\n" +
             "Example: disttree compare projects/old.yaml projects/new.yaml\n" +
             "Example: disttree compare projects/quillfeather-medical.yaml --against HEAD --markdown -")

@@ -31,10 +31,11 @@ public static class ProjectLimits
     public const int MaxIdLength = 200;
 
     /// <summary>
-    /// The work the "did you mean" hints for sources that are not defined may do in all, in character comparisons
-    /// (50,000,000: about a tenth of a second); the errors past it carry no hint.
+    /// The work the "did you mean" hints for sources that are not defined may do in all: 20,000,000 cells of the
+    /// distances' tables (and characters compared for a shortened word), about a fifth of a second; the errors past it
+    /// carry no hint.
     /// </summary>
-    public const long MaxHintWork = 50_000_000;
+    public const long MaxHintWork = 20_000_000;
 
     /// <summary>How many members of a feed cycle its error names (10); the rest are counted.</summary>
     public const int MaxCycleNames = 10;

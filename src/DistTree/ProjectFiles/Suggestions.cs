@@ -19,7 +19,7 @@ internal static class Suggestions
 
     /// <summary>
     /// The closest candidate when it is near enough to be a likely typo, else null. <paramref name="budget"/> is the work
-    /// left (character comparisons, counted before each candidate is looked at); once it runs out the answer is null,
+    /// left (cells of the distance's table worked out); once it runs out the answer is null,
     /// whatever is left unlooked at, so that hints over many long ids cost a bounded time. A word longer than
     /// <see cref="ProjectLimits.MaxIdLength"/> (no key, word or id is) gets no hint.
     /// </summary>
@@ -43,13 +43,12 @@ internal static class Suggestions
                 continue;
             }
 
-            budget -= ((2 * MaxEdits) + 1) * (lower.Length + 1L);
-            if (budget < 0)
+            if (budget <= 0)
             {
                 return null;
             }
 
-            var distance = Distance(lower, candidate, MaxEdits, rows);
+            var distance = Distance(lower, candidate, MaxEdits, rows, ref budget);
             if (distance < bestDistance)
             {
                 best = candidate;
@@ -88,13 +87,16 @@ internal static class Suggestions
     /// Optimal string alignment distance (insertions, deletions, substitutions, swaps of neighbours), case ignored,
     /// when it is at most <paramref name="max"/>; <paramref name="max"/> + 1 when it is more.
     /// </summary>
-    public static int Distance(string a, string b, int max) =>
-        Distance(a.ToLowerInvariant(), b, max, new Rows(Math.Max(a.Length, b.Length) + 1));
+    public static int Distance(string a, string b, int max)
+    {
+        var unlimited = long.MaxValue;
+        return Distance(a.ToLowerInvariant(), b, max, new Rows(Math.Max(a.Length, b.Length) + 1), ref unlimited);
+    }
 
     // The distance in a band of |i − j| ≤ max around the diagonal, row by row over a (rows i − 2, i − 1 and i kept);
     // a cell outside the band reads as max + 1. Every row's least cell bounds all later rows' from below, so a row
-    // whose least cell is above max ends the work.
-    private static int Distance(string lower, string b, int max, Rows rows)
+    // whose least cell is above max ends the work. Each cell worked out is taken from the budget.
+    private static int Distance(string lower, string b, int max, Rows rows, ref long budget)
     {
         var far = max + 1;
         if (Math.Abs(lower.Length - b.Length) > max)
@@ -103,6 +105,8 @@ internal static class Suggestions
         }
 
         var n = b.Length;
+        var lowerB = rows.Text.AsSpan(0, n);
+        b.AsSpan().ToLowerInvariant(lowerB);
         var (before, previous, current) = (rows.A, rows.B, rows.C);
         for (var j = 0; j <= n; j++)
         {
@@ -113,15 +117,16 @@ internal static class Suggestions
         {
             var low = Math.Max(1, i - max);
             var high = Math.Min(n, i + max);
+            budget -= high - low + 1;
             current[0] = Math.Min(i, far);
             current[low - 1] = low > 1 ? far : current[0];
             var rowLeast = current[low - 1];
             var ai = lower[i - 1];
             for (var j = low; j <= high; j++)
             {
-                var bj = char.ToLowerInvariant(b[j - 1]);
+                var bj = lowerB[j - 1];
                 var d = Math.Min(Math.Min(previous[j] + 1, current[j - 1] + 1), previous[j - 1] + (ai == bj ? 0 : 1));
-                if (i > 1 && j > 1 && ai == char.ToLowerInvariant(b[j - 2]) && lower[i - 2] == bj)
+                if (i > 1 && j > 1 && ai == lowerB[j - 2] && lower[i - 2] == bj)
                 {
                     d = Math.Min(d, before[j - 2] + 1);
                 }
@@ -172,9 +177,12 @@ internal static class Suggestions
         return found;
     }
 
-    // The three rows of the distance's table, each of the given length, made once per word and reused for every candidate.
+    // The three rows of the distance's table and the candidate in lower case, each of the given length, made once per
+    // word and reused for every candidate.
     private sealed class Rows(int length)
     {
+        public char[] Text { get; } = new char[length];
+
         public int[] A { get; } = new int[length];
 
         public int[] B { get; } = new int[length];

@@ -67,7 +67,7 @@ public sealed class SuggestionsTests
     [Fact]
     public void Closest_BudgetSpent_HasNoHint()
     {
-        long budget = 10;
+        long budget = 0;
         Assert.Null(Suggestions.Closest("lenght", ["length"], ref budget));
 
         budget = 1_000;
