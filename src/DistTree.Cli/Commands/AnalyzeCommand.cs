@@ -22,7 +22,7 @@ internal static class AnalyzeCommand
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
         var sarif = new Option<string?>("--sarif") { Description = FindingsOutput.SarifDescription, HelpName = "PATH" };
-        var worst = new Option<int>("--worst") { Description = "How many worst paths to show (console and HTML).", DefaultValueFactory = _ => 10 };
+        var worst = new Option<int>("--worst") { Description = "How many worst paths to show (console and HTML), 1 to 1,000.", DefaultValueFactory = _ => 10 };
         var command = new Command("analyze", "Solve the voltage drop of every run and end point; print the worst paths and every finding.\n" +
             "Example: disttree analyze projects/quillfeather-medical.yaml --json reports/results.json --html")
         {
@@ -31,7 +31,7 @@ internal static class AnalyzeCommand
         command.SetAction(parsed =>
         {
             var path = parsed.GetValue(file)!;
-            var count = OptionChecks.Positive(parsed.GetValue(worst), "--worst");
+            var count = OptionChecks.Listed(parsed.GetValue(worst), "--worst");
 
             var jsonPath = parsed.GetValue(json);
             var sarifPath = parsed.GetValue(sarif);

@@ -26,7 +26,7 @@ internal static class CompareCommand
             Arity = ArgumentArity.ZeroOrOne,
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
-        var rows = new Option<int>("--rows") { Description = "How many end points and runs to list on the console and in Markdown.", DefaultValueFactory = _ => 20 };
+        var rows = new Option<int>("--rows") { Description = "How many end points and runs to list on the console and in Markdown, 1 to 1,000.", DefaultValueFactory = _ => 20 };
         var command = new Command("compare", "Compare two revisions of a design: what changed, and what it does to every end point and run downstream.\n" +
             "Example: disttree compare projects/old.yaml projects/new.yaml\n" +
             "Example: disttree compare projects/quillfeather-medical.yaml --against HEAD --markdown -")
@@ -40,7 +40,7 @@ internal static class CompareCommand
             var jsonPath = parsed.GetValue(json);
             var markdownPath = parsed.GetValue(markdown);
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(paths[^1]);
-            var count = OptionChecks.Positive(parsed.GetValue(rows), "--rows");
+            var count = OptionChecks.Listed(parsed.GetValue(rows), "--rows");
 
             (string, string?)[] outputs = [("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath)];
             OptionChecks.Outputs(outputs);

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
 using DistTree.Conductors;
+using DistTree.ProjectFiles;
 using DistTree.Vocabulary;
 
 namespace DistTree.Cli.Commands;
@@ -28,19 +29,23 @@ internal static class ConductorsCommand
         };
         command.SetAction(parse =>
         {
+            // The project file's ranges for the same figures (rules: conductor_temperature, service: frequency_hz, rules: ambient_c).
+            var temperatureC = OptionChecks.InRange(parse.GetValue(temperature), ValueRanges.ConductorTemperatureC, "--temperature");
+            var frequencyHz = OptionChecks.InRange(parse.GetValue(frequency), ValueRanges.FrequencyHz, "--frequency");
+            var ambientC = OptionChecks.InRange(parse.GetValue(ambient), ValueRanges.AmbientC, "--ambient");
             var rows = Rows(
                 Words.Material.TryRead(parse.GetValue(material)!, out var metal) ? metal : Material.Copper,
-                parse.GetValue(temperature),
+                temperatureC,
                 Words.Raceway.TryRead(parse.GetValue(raceway)!, out var kind) ? kind : Raceway.Pvc,
-                parse.GetValue(frequency),
-                parse.GetValue(ambient));
+                frequencyHz,
+                ambientC);
             if (parse.GetValue(json))
             {
-                WriteJson(context.Out, rows, parse.GetValue(temperature), parse.GetValue(frequency), parse.GetValue(ambient));
+                WriteJson(context.Out, rows, temperatureC, frequencyHz, ambientC);
             }
             else
             {
-                WriteTable(context.Out, rows, parse.GetValue(temperature), parse.GetValue(frequency), parse.GetValue(ambient));
+                WriteTable(context.Out, rows, temperatureC, frequencyHz, ambientC);
             }
 
             return ExitCodes.Ok;

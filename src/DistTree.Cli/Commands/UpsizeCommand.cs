@@ -23,7 +23,7 @@ internal static class UpsizeCommand
         };
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
         var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) values edited, to OUT.yaml; or to a folder (OUT/), a copy of every file of the project, each edited where its sizes are.", HelpName = "OUT.yaml|OUT/" };
-        var maxSets = new Option<int?>("--max-sets") { Description = "Let feeders take up to N parallel sets (overrides sizing: max_sets).", HelpName = "N" };
+        var maxSets = new Option<int?>("--max-sets") { Description = "Let feeders take up to N parallel sets, 1 to 40 (overrides sizing: max_sets).", HelpName = "N" };
         var command = new Command("upsize", "Find the least-material conductor upsizes that bring every run and end point within its limits.\n" +
             "Example: disttree upsize projects/quillfeather-medical.yaml --apply fixed.yaml")
         {
@@ -84,7 +84,7 @@ internal static class UpsizeCommand
             return before;
         }
 
-        var sets = OptionChecks.Positive(given, "--max-sets");
+        var sets = (int)OptionChecks.InRange(given, ProjectFiles.ValueRanges.MaxSetsRange, "--max-sets");
         return before with { Project = before.Project with { Sizing = before.Project.Sizing with { MaxSets = sets } } };
     }
 }

@@ -16,7 +16,7 @@ internal static class RunSizer
     /// <summary>The insulation rating of every generated conductor, °C (the project's default, written in its <c>defaults</c>).</summary>
     public const int InsulationC = 75;
 
-    private const int MaxSets = 40;
+    private const int MaxSets = ProjectFiles.ValueRanges.MaxSets;
 
     private static readonly ConductorCatalog Catalog = ConductorCatalog.Standard;
     private static readonly ProtectionRules Protection = new(Catalog);

@@ -67,6 +67,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         }
 
         var known = byId.Keys.Append(serviceId).ToArray();
+        var hintWork = ProjectLimits.MaxHintWork;
         foreach (var draft in project.Equipment)
         {
             if (bag.IsFull)
@@ -77,7 +78,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
             if (draft.From is { } from && draft.Id is { } id && from != serviceId && !byId.ContainsKey(from))
             {
-                bag.Error(draft.FromLocation, ProjectMessages.UndefinedSource(id, from, Suggestions.Closest(from, known)));
+                bag.Error(draft.FromLocation, ProjectMessages.UndefinedSource(id, from, Suggestions.Closest(from, known, ref hintWork)));
             }
         }
     }

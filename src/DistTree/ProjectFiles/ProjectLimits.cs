@@ -24,6 +24,19 @@ public static class ProjectLimits
     /// </summary>
     public const int MaxEchoedLength = 40;
 
+    /// <summary>
+    /// The longest id (of the service, of equipment, of a circuit, and in <c>from</c>), in characters (200). Ids are
+    /// compared with one another for "did you mean" hints and shown in every message about their entry.
+    /// </summary>
+    public const int MaxIdLength = 200;
+
+    /// <summary>
+    /// The work the "did you mean" hints for sources that are not defined may do in all: 20,000,000 cells of the
+    /// distances' tables (and characters compared for a shortened word), about a fifth of a second; the errors past it
+    /// carry no hint.
+    /// </summary>
+    public const long MaxHintWork = 20_000_000;
+
     /// <summary>How many members of a feed cycle its error names (10); the rest are counted.</summary>
     public const int MaxCycleNames = 10;
 

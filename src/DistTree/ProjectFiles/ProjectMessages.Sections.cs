@@ -38,9 +38,6 @@ internal static partial class ProjectMessages
         return $"unknown conductor_temperature '{text}'{hint} (expected {words} or a number in °C)";
     }
 
-    /// <summary><c>max_sets</c> below 1.</summary>
-    public static string MaxSetsBelowOne(int sets) => $"'max_sets' must be 1 or more; found {sets}";
-
     /// <summary><c>prices</c> that is not a mapping.</summary>
     public static string PricesNotMapping(SourceNode found) => $"'prices' must be a mapping of size to price per metre; found {found.Describe()}";
 
@@ -53,9 +50,6 @@ internal static partial class ProjectMessages
     /// <summary>A service written as a sequence of one.</summary>
     public static string ServiceIsSequence() => "'service' must be a mapping of keys, not a sequence";
 
-    /// <summary>A service figure above the most it may be (<paramref name="most"/>, in the key's unit).</summary>
-    public static string ServiceValueAbove(string key, double most, double value) =>
-        $"'{key}' of the service must be at most {Format(most)}; found {Format(value)}";
 
     /// <summary>One of the utility's fault current and X/R without the other.</summary>
     public static string FaultKeyAlone(string given, string missing) =>
@@ -142,9 +136,6 @@ internal static partial class ProjectMessages
     public static string TwoQuantities(Subject load, string first, string second) =>
         $"{load} gives both '{first}' and '{second}'; give exactly one of {QuantityList}";
 
-    /// <summary>A power factor (running or starting) outside (0, 1].</summary>
-    public static string PowerFactorRange(double pf) => $"a power factor must be greater than 0 and at most 1; found {Format(pf)}";
-
     /// <summary>A motor load without <c>pf</c>.</summary>
     public static string MotorNeedsPowerFactor(Subject load) => $"missing key 'pf' in {load} (a motor load needs its power factor)";
 
@@ -158,10 +149,6 @@ internal static partial class ProjectMessages
     /// <summary>A code letter on a load given in full-load amperes.</summary>
     public static string CodeLetterWithFla(Subject load) =>
         $"a code letter gives kVA per horsepower: {load} needs 'hp' with it, or 'lrc_multiple' with 'fla'";
-
-    /// <summary>A locked-rotor multiple below 1.</summary>
-    public static string MultipleBelowOne(Subject load) =>
-        $"'lrc_multiple' of {load} is the locked-rotor current over the full-load current: at least 1";
 
     /// <summary>Both a code letter and a locked-rotor multiple.</summary>
     public static string CodeLetterAndMultiple(Subject load) => $"{load} gives both 'code_letter' and 'lrc_multiple'; give one";
@@ -178,8 +165,6 @@ internal static partial class ProjectMessages
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>
         $"'neutral_size' of the run of {circuit}: a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)";
 
-    /// <summary>A run's <c>sets</c> below 1.</summary>
-    public static string SetsBelowOne(Subject run, int sets) => $"'sets' of {run} must be 1 or more; found {sets}";
 
     /// <summary>What a required key holds, added to the message when it is missing or empty.</summary>
     public static class KeyHints

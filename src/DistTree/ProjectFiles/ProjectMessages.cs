@@ -97,6 +97,11 @@ internal static partial class ProjectMessages
         CultureInfo.InvariantCulture,
         $"a value of {length:N0} characters; a value may have at most {ProjectLimits.MaxScalarLength:N0} (see docs/limits.md)");
 
+    /// <summary>An id longer than <see cref="ProjectLimits.MaxIdLength"/>.</summary>
+    public static string IdTooLong(Subject what, int length) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"{what} has {length:N0} characters; an id may have at most {ProjectLimits.MaxIdLength:N0} (see docs/limits.md)");
+
     /// <summary>A YAML tag other than the string tag.</summary>
     public static string TagNotSupported(string tag) => $"the tag '{tag}' is not supported; write the value without a tag";
 
@@ -121,14 +126,12 @@ internal static partial class ProjectMessages
     /// <summary>Not a number; <paramref name="hint"/> notes a quoted number.</summary>
     public static string NotANumber(Subject what, SourceNode found, string hint) => $"{what} must be a number; found {found.Describe()}{hint}";
 
-    /// <summary>Zero or less where a positive number belongs.</summary>
-    public static string NotPositive(Subject what, double value) => $"{what} must be greater than zero; found {Format(value)}";
+    /// <summary>A length of zero or less, or over 100 km, as written.</summary>
+    public static string LengthOutOfRange(Subject what, string written) =>
+        $"{what} must be {ValueRanges.LengthM} ({NumberRange.Text(ValueRanges.MaxLengthFt)} ft); found {written}";
 
-    /// <summary>A length of zero or less, as written.</summary>
-    public static string LengthNotPositive(Subject what, string written) => $"{what} must be greater than zero; found {written}";
-
-    /// <summary>A negative number.</summary>
-    public static string Negative(Subject what, double value) => $"{what} must not be negative; found {Format(value)}";
+    /// <summary>A number outside its key's range (<see cref="ValueRanges"/>), as written.</summary>
+    public static string OutOfRange(Subject what, NumberRange range, string written) => $"{what} must be {range}; found {written}";
 
     /// <summary>A fraction where a whole number belongs.</summary>
     public static string NotWhole(Subject what, double value) => $"{what} must be a whole number; found {Format(value)}";

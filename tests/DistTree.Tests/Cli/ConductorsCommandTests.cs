@@ -56,4 +56,18 @@ public sealed class ConductorsCommandTests
         Assert.Equal(2, result.ExitCode);
         Assert.Contains("gold", result.Error, StringComparison.Ordinal);
     }
+
+    // The figures take the project file's ranges: below about -234 °C copper's resistance by its temperature
+    // coefficient (0.00393 per K, IEC 60028) would be negative.
+    [Theory]
+    [InlineData("--temperature", "-300", "--temperature must be greater than 0 and at most 250 °C; found -300")]
+    [InlineData("--frequency", "1e6", "--frequency must be between 40 and 70 Hz; found 1,000,000")]
+    [InlineData("--ambient", "-300", "--ambient must be between -60 and 90 °C; found -300")]
+    public void Conductors_FigureOutOfRange_ExitsTwoNamingTheRange(string option, string value, string message)
+    {
+        var result = CliRunner.Run("conductors", option, value);
+        Assert.Equal(2, result.ExitCode);
+        Assert.Contains(message, result.Error, StringComparison.Ordinal);
+        Assert.Equal("", result.Out);
+    }
 }

@@ -1,4 +1,5 @@
 using DistTree.Cli;
+using DistTree.ProjectFiles;
 
 namespace DistTree.Tests.Cli;
 
@@ -8,19 +9,41 @@ public sealed class OptionChecksTests
     [Theory]
     [InlineData(1)]
     [InlineData(250)]
-    public void Positive_OneOrMore_IsTheValue(int value)
+    [InlineData(1000)]
+    public void Listed_OneToTheMost_IsTheValue(int value)
     {
-        Assert.Equal(value, OptionChecks.Positive(value, "--rows"));
+        Assert.Equal(value, OptionChecks.Listed(value, "--rows"));
     }
 
     [Theory]
     [InlineData(0)]
     [InlineData(-3)]
-    public void Positive_BelowOne_IsAUsageErrorNamingTheOption(int value)
+    [InlineData(1001)]
+    [InlineData(int.MaxValue)]
+    public void Listed_OutOfRange_IsAUsageErrorNamingTheOption(int value)
     {
-        var e = Assert.Throws<UsageException>(() => OptionChecks.Positive(value, "--worst"));
+        var e = Assert.Throws<UsageException>(() => OptionChecks.Listed(value, "--worst"));
 
-        Assert.Equal("--worst takes a whole number of 1 or more", e.Message);
+        Assert.Equal("--worst takes a whole number from 1 to 1,000", e.Message);
+    }
+
+    [Theory]
+    [InlineData(-60)]
+    [InlineData(37.5)]
+    [InlineData(90)]
+    public void InRange_Inside_IsTheValue(double value)
+    {
+        Assert.Equal(value, OptionChecks.InRange(value, ValueRanges.AmbientC, "--ambient"));
+    }
+
+    [Theory]
+    [InlineData(-300, "-300")]
+    [InlineData(90.5, "90.5")]
+    public void InRange_Outside_IsAUsageErrorNamingTheRange(double value, string shown)
+    {
+        var e = Assert.Throws<UsageException>(() => OptionChecks.InRange(value, ValueRanges.AmbientC, "--ambient"));
+
+        Assert.Equal($"--ambient must be between -60 and 90 °C; found {shown}", e.Message);
     }
 
     [Fact]

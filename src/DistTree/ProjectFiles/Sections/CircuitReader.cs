@@ -95,7 +95,7 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
             }
         }
 
-        var ocpd = m.Optional("ocpd") is { } ocpdNode ? Values.Positive(ocpdNode, full.Of("'ocpd' of ")) : null;
+        var ocpd = m.Optional("ocpd") is { } ocpdNode ? Values.InRange(ocpdNode, full.Of("'ocpd' of "), ValueRanges.OcpdA) : null;
         if (m.Optional("continuous") is { } continuousNode)
         {
             draft.Continuous = Values.Bool(continuousNode, full.Of("'continuous' of ")) ?? false;

@@ -70,7 +70,7 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
 
         if (m.Required("from", ProjectMessages.KeyHints.From) is { } fromNode)
         {
-            draft.From = Values.Text(fromNode, quoted.Of("'from' of "));
+            draft.From = context.IdReference(fromNode, quoted.Of("'from' of "));
             draft.FromLocation = fromNode.Location;
         }
 
@@ -81,7 +81,7 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             draft.FeederOk = draft.Feeder is not null;
         }
 
-        if (m.Optional("demand_factor") is { } demandNode && Values.Positive(demandNode, quoted.Of("'demand_factor' of ")) is { } demand)
+        if (m.Optional("demand_factor") is { } demandNode && Values.InRange(demandNode, quoted.Of("'demand_factor' of "), ValueRanges.DemandFactor) is { } demand)
         {
             draft.DemandFactor = demand;
             if (demand > 1)
@@ -115,12 +115,12 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             return;
         }
 
-        var kva = m.Required("kva", ProjectMessages.KeyHints.Kva) is { } kvaNode ? Values.Positive(kvaNode, $"'kva' of '{name}'") : null;
+        var kva = m.Required("kva", ProjectMessages.KeyHints.Kva) is { } kvaNode ? Values.InRange(kvaNode, $"'kva' of '{name}'", ValueRanges.Kva) : null;
         var secondary = m.Required("secondary", ProjectMessages.KeyHints.Secondary) is { } secondaryNode ? Values.SystemOf(secondaryNode, $"'secondary' of '{name}'") : null;
         draft.SecondaryLocation = m.KeyLocation("secondary");
-        var impedance = m.Required("impedance_percent", ProjectMessages.KeyHints.Impedance) is { } zNode ? Values.Positive(zNode, $"'impedance_percent' of '{name}'") : null;
-        var xr = m.Required("x_r", ProjectMessages.KeyHints.XOverR) is { } xrNode ? Values.Positive(xrNode, $"'x_r' of '{name}'") : null;
-        var tap = m.Optional("tap_percent") is { } tapNode ? Values.Number(tapNode, $"'tap_percent' of '{name}'") : 0;
+        var impedance = m.Required("impedance_percent", ProjectMessages.KeyHints.Impedance) is { } zNode ? Values.InRange(zNode, $"'impedance_percent' of '{name}'", ValueRanges.ImpedancePercent) : null;
+        var xr = m.Required("x_r", ProjectMessages.KeyHints.XOverR) is { } xrNode ? Values.InRange(xrNode, $"'x_r' of '{name}'", ValueRanges.XOverR) : null;
+        var tap = m.Optional("tap_percent") is { } tapNode ? Values.InRange(tapNode, $"'tap_percent' of '{name}'", ValueRanges.TapPercent) : 0;
         if (tap is { } t && !TapSteps.Contains(t))
         {
             Bag.Error(m.KeyLocation("tap_percent"), ProjectMessages.TapNotAStep(name, t));

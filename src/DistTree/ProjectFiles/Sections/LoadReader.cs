@@ -31,16 +31,11 @@ internal sealed class LoadReader(SectionContext context)
 
         var kind = Words.LoadQuantity.Pairs[quantity].Value;
         var motor = Load.IsMotorKind(kind);
-        var value = m.Required(Words.LoadQuantity.Words[quantity]) is { } valueNode ? Values.NotNegative(valueNode, subject.Of(QuantityPrefixes[quantity])) : null;
+        var value = m.Required(Words.LoadQuantity.Words[quantity]) is { } valueNode ? Values.InRange(valueNode, subject.Of(QuantityPrefixes[quantity]), ValueRanges.Of(kind)) : null;
         double? pf = 1.0;
         if (m.Optional("pf") is { } pfNode)
         {
-            pf = Values.Number(pfNode, subject.Of("'pf' of "));
-            if (pf is <= 0 or > 1)
-            {
-                Bag.Error(pfNode.Location, ProjectMessages.PowerFactorRange(pf.Value));
-                pf = null;
-            }
+            pf = Values.InRange(pfNode, subject.Of("'pf' of "), ValueRanges.PowerFactor);
         }
         else if (motor)
         {
@@ -126,15 +121,16 @@ internal sealed class LoadReader(SectionContext context)
         var letter = CodeLetter(m, subject, ref ok);
         var multiple = LockedRotorMultiple(m, subject, letter, ref ok);
         var startingPf = MotorStart.DefaultPowerFactor;
-        if (m.Optional("starting_pf") is { } spfNode && Values.Number(spfNode, subject.Of("'starting_pf' of ")) is { } spf)
+        if (m.Optional("starting_pf") is { } spfNode)
         {
-            if (spf is <= 0 or > 1)
+            if (Values.InRange(spfNode, subject.Of("'starting_pf' of "), ValueRanges.PowerFactor) is { } spf)
             {
-                Bag.Error(spfNode.Location, ProjectMessages.PowerFactorRange(spf));
+                startingPf = spf;
+            }
+            else
+            {
                 ok = false;
             }
-
-            startingPf = spf;
         }
 
         return new MotorStart(letter, multiple, startingPf);
@@ -167,10 +163,9 @@ internal sealed class LoadReader(SectionContext context)
         double? multiple = null;
         if (m.Optional("lrc_multiple") is { } multipleNode)
         {
-            multiple = Values.Positive(multipleNode, subject.Of("'lrc_multiple' of "));
-            if (multiple is < 1)
+            multiple = Values.InRange(multipleNode, subject.Of("'lrc_multiple' of "), ValueRanges.LockedRotorMultiple);
+            if (multiple is null)
             {
-                Bag.Error(multipleNode.Location, ProjectMessages.MultipleBelowOne(subject));
                 ok = false;
             }
 

@@ -13,12 +13,6 @@ namespace DistTree.ProjectFiles.Sections;
 /// </summary>
 internal sealed class ProjectReader
 {
-    /// <summary>The most a service's available fault current may be, kA: a bound on typing, well above any utility service.</summary>
-    public const double MaxFaultCurrentKa = 300;
-
-    /// <summary>The most a service's source X/R ratio may be: a bound on typing, well above any utility source.</summary>
-    public const double MaxFaultXOverR = 100;
-
     private readonly SectionContext _context;
     private readonly RulesReader _rules;
     private readonly SizingReader _sizing;
@@ -161,9 +155,9 @@ internal sealed class ProjectReader
 
         var id = m.Required("id") is { } idNode ? _context.Id(idNode, "'id' of the service") : null;
         var system = m.Required("system", ProjectMessages.KeyHints.System) is { } systemNode ? Values.SystemOf(systemNode, "'system' of the service") : null;
-        var frequency = m.Optional("frequency_hz") is { } hz ? Values.Positive(hz, "'frequency_hz'") : 60;
-        var faultKa = ServiceValue(m, "available_fault_current_ka", MaxFaultCurrentKa, out var faultKaOk);
-        var faultXr = ServiceValue(m, "fault_x_r", MaxFaultXOverR, out var faultXrOk);
+        var frequency = m.Optional("frequency_hz") is { } hz ? Values.InRange(hz, "'frequency_hz'", ValueRanges.FrequencyHz) : 60;
+        var faultKa = ServiceValue(m, "available_fault_current_ka", ValueRanges.AvailableFaultCurrentKa, out var faultKaOk);
+        var faultXr = ServiceValue(m, "fault_x_r", ValueRanges.FaultXOverR, out var faultXrOk);
         var paired = Paired(m, "available_fault_current_ka", "fault_x_r") && Paired(m, "fault_x_r", "available_fault_current_ka");
         if (id is not null && system is not null && frequency is not null && faultKaOk && faultXrOk && paired)
         {
@@ -175,8 +169,8 @@ internal sealed class ProjectReader
         }
     }
 
-    // An optional figure of the service: greater than zero and at most 'most'; ok is false when given and wrong.
-    private double? ServiceValue(in MappingReader m, string key, double most, out bool ok)
+    // An optional figure of the service, in its range; ok is false when given and wrong.
+    private double? ServiceValue(in MappingReader m, string key, NumberRange range, out bool ok)
     {
         ok = true;
         if (m.Optional(key) is not { } node)
@@ -184,13 +178,7 @@ internal sealed class ProjectReader
             return null;
         }
 
-        var value = Values.Positive(node, $"'{key}' of the service");
-        if (value > most)
-        {
-            Bag.Error(node.Location, ProjectMessages.ServiceValueAbove(key, most, value.Value));
-            value = null;
-        }
-
+        var value = Values.InRange(node, $"'{key}' of the service", range);
         ok = value is not null;
         return value;
     }

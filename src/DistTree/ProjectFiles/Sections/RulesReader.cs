@@ -18,17 +18,17 @@ internal sealed class RulesReader(SectionContext context)
         }
 
         var rules = Rules.Default;
-        if (context.Positive(m, "feeder_limit_percent") is { } feeder)
+        if (context.InRange(m, "feeder_limit_percent", ValueRanges.LimitPercent) is { } feeder)
         {
             rules = rules with { FeederLimitPercent = feeder };
         }
 
-        if (context.Positive(m, "branch_limit_percent") is { } branch)
+        if (context.InRange(m, "branch_limit_percent", ValueRanges.LimitPercent) is { } branch)
         {
             rules = rules with { BranchLimitPercent = branch };
         }
 
-        if (context.Positive(m, "total_limit_percent") is { } total)
+        if (context.InRange(m, "total_limit_percent", ValueRanges.LimitPercent) is { } total)
         {
             rules = rules with { TotalLimitPercent = total };
         }
@@ -81,7 +81,7 @@ internal sealed class RulesReader(SectionContext context)
             rules = rules with { TransformerDrop = drop };
         }
 
-        if (m.Optional("ambient_c") is { } ambientNode && Values.Number(ambientNode, "'ambient_c'") is { } ambient)
+        if (m.Optional("ambient_c") is { } ambientNode && Values.InRange(ambientNode, "'ambient_c'", ValueRanges.AmbientC) is { } ambient)
         {
             rules = rules with { AmbientC = ambient };
         }
@@ -96,7 +96,7 @@ internal sealed class RulesReader(SectionContext context)
             rules = rules with { Method = method };
         }
 
-        if (context.Positive(m, "motor_start_limit_percent") is { } motorStart)
+        if (context.InRange(m, "motor_start_limit_percent", ValueRanges.LimitPercent) is { } motorStart)
         {
             rules = rules with { MotorStartLimitPercent = motorStart };
         }
@@ -109,7 +109,7 @@ internal sealed class RulesReader(SectionContext context)
     {
         if (node is SourceScalar { IsPlain: true } scalar && ValueReader.IsNumberText(scalar.Value))
         {
-            return Values.Positive(node, "'conductor_temperature'") is { } c
+            return Values.InRange(node, "'conductor_temperature'", ValueRanges.ConductorTemperatureC) is { } c
                 ? rules with { Temperature = TemperatureMode.Fixed, FixedTemperatureC = c }
                 : rules;
         }

@@ -62,11 +62,11 @@ internal sealed class RunReader(SectionContext context)
         double? ocpd = null;
         if (m.Optional("ocpd") is { } ocpdNode)
         {
-            ocpd = Values.Positive(ocpdNode, subject.Of("'ocpd' of "));
+            ocpd = Values.InRange(ocpdNode, subject.Of("'ocpd' of "), ValueRanges.OcpdA);
             ocpdLocation = m.KeyLocation("ocpd");
         }
 
-        var limit = m.Optional("limit_percent") is { } limitNode ? Values.Positive(limitNode, subject.Of("'limit_percent' of ")) : null;
+        var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
         if (length is null || size is null || (neutralNode is not null && neutral is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
@@ -127,20 +127,7 @@ internal sealed class RunReader(SectionContext context)
         return null;
     }
 
-    // The parallel sets: 1 unless stated; below 1 is reported (and the run then not made).
-    private int Sets(in MappingReader m, Subject subject)
-    {
-        var sets = 1;
-        if (m.Optional("sets") is { } setsNode && Values.Integer(setsNode, subject.Of("'sets' of ")) is { } s)
-        {
-            if (s < 1)
-            {
-                Bag.Error(setsNode.Location, ProjectMessages.SetsBelowOne(subject, s));
-            }
-
-            sets = s;
-        }
-
-        return sets;
-    }
+    // The parallel sets: 1 unless stated; out of range is reported (0 then, and the run not made).
+    private int Sets(in MappingReader m, Subject subject) =>
+        m.Optional("sets") is { } setsNode ? Values.WholeInRange(setsNode, subject.Of("'sets' of "), ValueRanges.Sets) ?? 0 : 1;
 }

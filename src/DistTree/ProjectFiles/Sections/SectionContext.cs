@@ -44,17 +44,30 @@ internal sealed class SectionContext(DiagnosticBag bag)
         return null;
     }
 
-    /// <summary>An optional key's value as a number greater than zero, named <c>'key'</c> in messages.</summary>
-    public double? Positive(in MappingReader m, string key) =>
-        m.Optional(key) is { } node ? Values.Positive(node, $"'{key}'") : null;
+    /// <summary>An optional key's value as a number in <paramref name="range"/>, named <c>'key'</c> in messages.</summary>
+    public double? InRange(in MappingReader m, string key, NumberRange range) =>
+        m.Optional(key) is { } node ? Values.InRange(node, $"'{key}'", range) : null;
 
-    /// <summary>An id: text without '/' (which joins a panel's id and a circuit's).</summary>
+    /// <summary>An id: text without '/' (which joins a panel's id and a circuit's), of at most <see cref="ProjectLimits.MaxIdLength"/> characters.</summary>
     public string? Id(SourceNode node, string what)
     {
-        var id = Values.Text(node, what);
+        var id = IdReference(node, what);
         if (id is not null && id.Contains('/', StringComparison.Ordinal))
         {
             bag.Error(node.Location, ProjectMessages.IdWithSlash(id));
+            return null;
+        }
+
+        return id;
+    }
+
+    /// <summary>Text naming an id (<c>from</c>), of at most <see cref="ProjectLimits.MaxIdLength"/> characters.</summary>
+    public string? IdReference(SourceNode node, Subject what)
+    {
+        var id = Values.Text(node, what);
+        if (id is { Length: > ProjectLimits.MaxIdLength })
+        {
+            bag.Error(node.Location, ProjectMessages.IdTooLong(what, id.Length));
             return null;
         }
 
@@ -68,7 +81,10 @@ internal sealed class SectionContext(DiagnosticBag bag)
         {
             if (entry.Key.Value == "id")
             {
-                return entry.Value is SourceScalar { IsNull: false } scalar && scalar.Value.Trim() is { Length: > 0 } id ? id : null;
+                // An id too long to be one (reported where it is read) is named by its start in messages about its entry.
+                return entry.Value is SourceScalar { IsNull: false } scalar && scalar.Value.Trim() is { Length: > 0 } id
+                    ? (id.Length > ProjectLimits.MaxIdLength ? scalar.Echo() : id)
+                    : null;
             }
         }
 

@@ -18,16 +18,9 @@ internal sealed class SizingReader(SectionContext context)
         }
 
         var sizing = SizingOptions.Default;
-        if (m.Optional("max_sets") is { } setsNode && Values.Integer(setsNode, "'max_sets'") is { } sets)
+        if (m.Optional("max_sets") is { } setsNode && Values.WholeInRange(setsNode, "'max_sets'", ValueRanges.MaxSetsRange) is { } sets)
         {
-            if (sets < 1)
-            {
-                context.Bag.Error(setsNode.Location, ProjectMessages.MaxSetsBelowOne(sets));
-            }
-            else
-            {
-                sizing = sizing with { MaxSets = sets };
-            }
+            sizing = sizing with { MaxSets = sets };
         }
 
         if (m.Optional("currency") is { } currencyNode && Values.Text(currencyNode, "'currency'") is { } currency)
@@ -35,7 +28,7 @@ internal sealed class SizingReader(SectionContext context)
             sizing = sizing with { Currency = currency };
         }
 
-        if (context.Positive(m, "resolution_percent") is { } resolution)
+        if (context.InRange(m, "resolution_percent", ValueRanges.ResolutionPercent) is { } resolution)
         {
             sizing = sizing with { ResolutionPercent = resolution };
         }
@@ -75,7 +68,7 @@ internal sealed class SizingReader(SectionContext context)
                 continue;
             }
 
-            if (Values.Positive(value, $"the price of {size}") is { } price)
+            if (Values.InRange(value, $"the price of {size}", ValueRanges.Price) is { } price)
             {
                 prices[size] = price;
             }

@@ -31,31 +31,32 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
         return Finite(scalar, what);
     }
 
-    /// <summary>A number greater than zero.</summary>
-    public double? Positive(SourceNode node, Subject what)
+    /// <summary>A number in <paramref name="range"/> (see <see cref="ValueRanges"/>); outside it, an error naming the range.</summary>
+    public double? InRange(SourceNode node, Subject what, NumberRange range)
     {
-        var value = Number(node, what);
-        if (value is <= 0)
+        if (Number(node, what) is not { } value)
         {
-            bag.Error(node.Location, ProjectMessages.NotPositive(what, value.Value));
+            return null;
+        }
+
+        if (range.Whole && value != Math.Floor(value))
+        {
+            bag.Error(node.Location, ProjectMessages.NotWhole(what, value));
+            return null;
+        }
+
+        if (!range.Contains(value))
+        {
+            bag.Error(node.Location, ProjectMessages.OutOfRange(what, range, ((SourceScalar)node).Echo()));
             return null;
         }
 
         return value;
     }
 
-    /// <summary>A number zero or greater.</summary>
-    public double? NotNegative(SourceNode node, Subject what)
-    {
-        var value = Number(node, what);
-        if (value is < 0)
-        {
-            bag.Error(node.Location, ProjectMessages.Negative(what, value.Value));
-            return null;
-        }
-
-        return value;
-    }
+    /// <summary>A whole number in <paramref name="range"/>, a range of whole numbers.</summary>
+    public int? WholeInRange(SourceNode node, Subject what, NumberRange range) =>
+        InRange(node, what, range) is { } value ? (int)value : null;
 
     /// <summary>A whole number.</summary>
     public int? Integer(SourceNode node, Subject what)
@@ -173,19 +174,22 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     }
 
     /// <summary>
-    /// A one-way length in metres, greater than zero: a bare number in the project's unit, or text with
-    /// its unit (<c>28 m</c>, <c>92 ft</c>).
+    /// A one-way length in metres, in <see cref="ValueRanges.LengthM"/>: a bare number in the project's unit, or text
+    /// with its unit (<c>28 m</c>, <c>92 ft</c>). A length in feet is held to the same bound in feet, so that the
+    /// schema can state both.
     /// </summary>
     public double? LengthM(SourceNode node, Subject what, UnitSystem units)
     {
         double? metres;
+        bool inFeet;
         if (node is SourceScalar { IsPlain: true } plain && IsNumberText(plain.Value))
         {
-            metres = Finite(plain, what) * (units == UnitSystem.Imperial ? UnitFactors.MetresPerFoot : 1.0);
+            inFeet = units == UnitSystem.Imperial;
+            metres = Finite(plain, what) * (inFeet ? UnitFactors.MetresPerFoot : 1.0);
         }
         else if (node is SourceScalar { IsNull: false } scalar && !IsBoolText(scalar.Value))
         {
-            metres = LengthText(scalar, what);
+            metres = LengthText(scalar, what, out inFeet);
         }
         else
         {
@@ -197,9 +201,9 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
             return null;
         }
 
-        if (metres is <= 0)
+        if (metres is { } m && (m <= 0 || m > (inFeet ? ValueRanges.MaxLengthFt * UnitFactors.MetresPerFoot : ValueRanges.MaxLengthM)))
         {
-            bag.Error(node.Location, ProjectMessages.LengthNotPositive(what, ((SourceScalar)node).Value.Trim()));
+            bag.Error(node.Location, ProjectMessages.LengthOutOfRange(what, ((SourceScalar)node).Echo().Trim()));
             return null;
         }
 
@@ -213,8 +217,9 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
     public static bool IsBoolText(string text) =>
         text is "true" or "True" or "TRUE" or "false" or "False" or "FALSE";
 
-    private double? LengthText(SourceScalar scalar, Subject what)
+    private double? LengthText(SourceScalar scalar, Subject what, out bool inFeet)
     {
+        inFeet = false;
         var match = LengthPattern().Match(scalar.Value);
         if (!match.Success)
         {
@@ -235,6 +240,7 @@ internal sealed partial class ValueReader(DiagnosticBag bag)
             case "m":
                 return number;
             case "ft":
+                inFeet = true;
                 return number * UnitFactors.MetresPerFoot;
             default:
                 bag.Error(scalar.Location, ProjectMessages.NotALengthUnit(what, scalar.Value.Trim(), unit));

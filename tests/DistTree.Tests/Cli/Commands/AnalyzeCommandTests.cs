@@ -79,4 +79,13 @@ public sealed class AnalyzeCommandTests
 
     [Fact]
     public void Analyze_BadWorst_ExitsTwo() => Assert.Equal(2, CliRunner.Run("analyze", Clean, "--worst", "0").ExitCode);
+
+    // All 100,000 worst paths of a large project took 35 s and 2.4 GB for a 400 MB page (docs/limits.md).
+    [Fact]
+    public void Analyze_WorstAboveTheMost_ExitsTwoNamingTheBound()
+    {
+        var result = CliRunner.Run("analyze", Clean, "--worst", "2147483647");
+        Assert.Equal(2, result.ExitCode);
+        Assert.Contains("--worst takes a whole number from 1 to 1,000", result.Error, StringComparison.Ordinal);
+    }
 }
