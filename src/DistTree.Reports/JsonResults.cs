@@ -51,15 +51,7 @@ public static class JsonResults
             w.WriteBoolean("converged", solution.LoadFlow.Converged);
             w.WriteNumber("iterations", solution.LoadFlow.Iterations);
             w.WriteNumber("tolerance_pu", LoadFlow.TolerancePu);
-            if (solution.LoadFlow.WeakestId is { } weakest)
-            {
-                w.WriteString("weakest", weakest);
-            }
-            else
-            {
-                w.WriteNull("weakest");
-            }
-
+            NullableString(w, "weakest"u8, solution.LoadFlow.WeakestId);
             w.WriteEndObject();
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)

@@ -58,8 +58,11 @@ public static class ValueRanges
     /// </summary>
     public static readonly NumberRange FrequencyHz = NumberRange.Closed(40, 70, "Hz");
 
-    /// <summary>The utility's available three-phase fault current at the service, kA: above 0, at most 300 (beyond any building service).</summary>
-    public static readonly NumberRange AvailableFaultCurrentKa = NumberRange.AboveUpTo(0, 300, "kA");
+    /// <summary>
+    /// The utility's available three-phase fault current at the service, kA: 0.1 (a 100 A short-circuit current, less
+    /// than any service gives) to 300 (beyond any building service); below it the source's impedance is not a number.
+    /// </summary>
+    public static readonly NumberRange AvailableFaultCurrentKa = NumberRange.Closed(0.1, 300, "kA");
 
     /// <summary>The X/R ratio of the utility's source impedance: above 0, at most 100.</summary>
     public static readonly NumberRange FaultXOverR = NumberRange.AboveUpTo(0, 100, "");

@@ -27,6 +27,8 @@ internal static partial class EdgeProject
         ["sizing.resolution_percent"] = "0.01",
         ["sizing.prices"] = "3",
         ["service.frequency_hz"] = "60",
+        ["service.available_fault_current_ka"] = "22",
+        ["service.fault_x_r"] = "6",
         ["equipment.demand_factor"] = "1",
         ["equipment.kva"] = "75",
         ["equipment.impedance_percent"] = "5",
@@ -54,7 +56,7 @@ internal static partial class EdgeProject
         project: { name: Edges, units: metric }
         rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c} }
         sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
-        service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz} }
+        service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz}, available_fault_current_ka: {service.available_fault_current_ka}, fault_x_r: {service.fault_x_r} }
         equipment:
           - id: MSB
             kind: switchboard

@@ -252,10 +252,10 @@ public sealed class ProjectLoaderElectricalKeysTests
     }
 
     [Theory]
-    [InlineData("available_fault_current_ka: 300.5, fault_x_r: 8", "300.5", "'available_fault_current_ka' of the service must be at most 300; found 300.5")]
-    [InlineData("available_fault_current_ka: 0, fault_x_r: 8", "0", "'available_fault_current_ka' of the service must be greater than zero; found 0")]
-    [InlineData("available_fault_current_ka: 22, fault_x_r: 101", "101", "'fault_x_r' of the service must be at most 100; found 101")]
-    [InlineData("available_fault_current_ka: 22, fault_x_r: -3", "-3", "'fault_x_r' of the service must be greater than zero; found -3")]
+    [InlineData("available_fault_current_ka: 300.5, fault_x_r: 8", "300.5", "'available_fault_current_ka' of the service must be between 0.1 and 300 kA; found 300.5")]
+    [InlineData("available_fault_current_ka: 0, fault_x_r: 8", "0", "'available_fault_current_ka' of the service must be between 0.1 and 300 kA; found 0")]
+    [InlineData("available_fault_current_ka: 22, fault_x_r: 101", "101", "'fault_x_r' of the service must be greater than 0 and at most 100; found 101")]
+    [InlineData("available_fault_current_ka: 22, fault_x_r: -3", "-3", "'fault_x_r' of the service must be greater than 0 and at most 100; found -3")]
     [InlineData("available_fault_current_ka: 22, fault_x_r: high", "high", "'fault_x_r' of the service must be a number; found 'high'")]
     public void Parse_FaultKeyOutOfRange_IsAnErrorAtTheValue(string keys, string token, string message)
     {
