@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DistTree.Diagnostics;
 using DistTree.ProjectFiles.Writing;
 using DistTree.Reports;
 using DistTree.Sizing;
@@ -91,6 +92,6 @@ internal static class UpsizeCommand
 
         var text = File.ReadAllText(path);
         OutputFile.Write(context, output, ProjectFileEditor.Apply(text, plan.Changes), path);
-        context.Error.WriteLine($"wrote {output}: {plan.Changes.Count} runs changed");
+        context.Error.WriteLine($"wrote {DisplayText.Escape(output)}: {plan.Changes.Count} runs changed");
     }
 }

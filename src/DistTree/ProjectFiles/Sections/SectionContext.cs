@@ -48,13 +48,22 @@ internal sealed class SectionContext(DiagnosticBag bag)
     public double? Positive(in MappingReader m, string key) =>
         m.Optional(key) is { } node ? Values.Positive(node, $"'{key}'") : null;
 
-    /// <summary>An id: text without '/' (which joins a panel's id and a circuit's).</summary>
+    /// <summary>
+    /// An id: text without '/' (which joins a panel's id and a circuit's) and without the characters an output would
+    /// show escaped (<see cref="Diagnostics.DisplayText"/>: control characters, line separators, direction marks).
+    /// </summary>
     public string? Id(SourceNode node, string what)
     {
         var id = Values.Text(node, what);
         if (id is not null && id.Contains('/', StringComparison.Ordinal))
         {
             bag.Error(node.Location, ProjectMessages.IdWithSlash(id));
+            return null;
+        }
+
+        if (id is not null && Diagnostics.DisplayText.NeedsEscape(id))
+        {
+            bag.Error(node.Location, ProjectMessages.IdWithControl(id));
             return null;
         }
 
