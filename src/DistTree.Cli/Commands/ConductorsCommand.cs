@@ -9,16 +9,29 @@ namespace DistTree.Cli.Commands;
 /// <summary><c>disttree conductors</c>: prints the conductor catalogue the program computes with, and its sources.</summary>
 internal static class ConductorsCommand
 {
+    /// <summary>
+    /// The conductor temperatures shown, °C: above zero, as a project's <c>conductor_temperature</c>, and at most 250 °C,
+    /// the short-circuit limit of XLPE insulation (IEC 60502-1), past which no conductor of the catalogue runs. The
+    /// resistance's linear temperature coefficient would give a negative resistance below about −234 °C.
+    /// </summary>
+    internal const double MaxTemperatureC = 250;
+
+    /// <summary>
+    /// The supply frequencies shown, Hz: above zero (the catalogue's reactance and skin effect are for AC) and at most
+    /// 1,000 Hz, above the 400 Hz of aircraft and ship supplies, the highest power frequency in use.
+    /// </summary>
+    internal const double MaxFrequencyHz = 1000;
+
     private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true };
 
     public static Command Create(CliContext context)
     {
         var material = new Option<string>("--material") { Description = Words.Listed(Words.Material, "or"), DefaultValueFactory = _ => Words.Material.Of(Material.Copper) };
         material.AcceptOnlyFromAmong([.. Words.Material.Words]);
-        var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
+        var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance, above 0 and at most 250", DefaultValueFactory = _ => 75 };
         var raceway = new Option<string>("--raceway") { Description = Words.Listed(Words.Raceway, "or"), DefaultValueFactory = _ => Words.Raceway.Of(Raceway.Pvc) };
         raceway.AcceptOnlyFromAmong([.. Words.Raceway.Words]);
-        var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
+        var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz, above 0 and at most 1000", DefaultValueFactory = _ => 60 };
         var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };
         var json = new Option<bool>("--json") { Description = "write the catalogue as JSON to standard output" };
         var command = new Command("conductors", "Print the conductor catalogue: size, area, R, X, ampacities, and the source of each column.\n" +
@@ -28,25 +41,32 @@ internal static class ConductorsCommand
         };
         command.SetAction(parse =>
         {
+            // Outside these the figures are not a conductor's (a negative frequency gave NaN, and --json an internal error).
+            var temperatureC = AboveZero(parse.GetValue(temperature), MaxTemperatureC, "--temperature", "°C");
+            var frequencyHz = AboveZero(parse.GetValue(frequency), MaxFrequencyHz, "--frequency", "Hz");
             var rows = Rows(
                 Words.Material.TryRead(parse.GetValue(material)!, out var metal) ? metal : Material.Copper,
-                parse.GetValue(temperature),
+                temperatureC,
                 Words.Raceway.TryRead(parse.GetValue(raceway)!, out var kind) ? kind : Raceway.Pvc,
-                parse.GetValue(frequency),
+                frequencyHz,
                 parse.GetValue(ambient));
             if (parse.GetValue(json))
             {
-                WriteJson(context.Out, rows, parse.GetValue(temperature), parse.GetValue(frequency), parse.GetValue(ambient));
+                WriteJson(context.Out, rows, temperatureC, frequencyHz, parse.GetValue(ambient));
             }
             else
             {
-                WriteTable(context.Out, rows, parse.GetValue(temperature), parse.GetValue(frequency), parse.GetValue(ambient));
+                WriteTable(context.Out, rows, temperatureC, frequencyHz, parse.GetValue(ambient));
             }
 
             return ExitCodes.Ok;
         });
         return command;
     }
+
+    private static double AboveZero(double value, double max, string option, string unit) => value > 0 && value <= max
+        ? value
+        : throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"{option} takes a number above 0 and at most {max:#,0} {unit}; found {value:R}"));
 
     private static List<CatalogLine> Rows(Material material, double temperatureC, Raceway raceway, double frequencyHz, double ambientC)
     {
