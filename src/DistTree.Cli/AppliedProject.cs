@@ -1,4 +1,5 @@
 using System.Security.Cryptography;
+using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.ProjectFiles;
 using DistTree.ProjectFiles.Writing;
@@ -87,7 +88,7 @@ internal sealed class AppliedProject
         }
 
         var files = _files.Count == 1 ? "" : $" in {_editedFiles} of its {_files.Count} files";
-        context.Error.WriteLine($"wrote {Output}: {Runs} runs changed{files}");
+        context.Error.WriteLine($"wrote {DisplayText.Escape(Output)}: {Runs} runs changed{files}");
     }
 
     // The file's bytes now, when they are still the bytes read at load time.

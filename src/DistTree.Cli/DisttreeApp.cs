@@ -7,7 +7,8 @@ namespace DistTree.Cli;
 /// <summary>
 /// Builds the command tree and runs it. The one top-level catch turns user errors into messages and exit code 2,
 /// and any other exception (a defect) into one <c>internal error:</c> line and exit code 3; no stack trace reaches
-/// a user.
+/// a user. Every message shows the values it repeats (a path, an option's value, a project's text) with their
+/// control characters escaped (<see cref="DisplayText"/>).
 /// </summary>
 public static class DisttreeApp
 {
@@ -62,7 +63,7 @@ public static class DisttreeApp
         {
             foreach (var error in parsed.Errors)
             {
-                stderr.WriteLine($"disttree: error: {error.Message}");
+                stderr.WriteLine($"disttree: error: {DisplayText.Escape(error.Message)}");
             }
 
             stderr.WriteLine("Run 'disttree --help' for usage.");
@@ -84,7 +85,7 @@ public static class DisttreeApp
         }
         catch (UsageException e)
         {
-            stderr.WriteLine($"disttree: error: {e.Message}");
+            stderr.WriteLine($"disttree: error: {DisplayText.Escape(e.Message)}");
             return ExitCodes.BadInput;
         }
     }

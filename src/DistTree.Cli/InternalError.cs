@@ -1,3 +1,5 @@
+using DistTree.Diagnostics;
+
 namespace DistTree.Cli;
 
 /// <summary>
@@ -11,7 +13,8 @@ internal static class InternalError
 
     /// <summary>
     /// <c>internal error: TYPE in METHOD: MESSAGE; please report it …</c> on one line: the message's line breaks
-    /// become spaces, and an aggregate of one exception (from work spread over the cores) is told as that one.
+    /// become spaces, any other control character is escaped (<see cref="DisplayText"/>), and an aggregate of one
+    /// exception (from work spread over the cores) is told as that one.
     /// </summary>
     public static string Line(Exception exception)
     {
@@ -23,6 +26,6 @@ internal static class InternalError
 
         var where = e.TargetSite is { } method ? $" in {method.DeclaringType?.FullName ?? "?"}.{method.Name}" : "";
         var message = string.Join(' ', e.Message.Split(['\r', '\n'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
-        return $"internal error: {e.GetType().FullName}{where}: {message}; {ReportTo}";
+        return DisplayText.Escape($"internal error: {e.GetType().FullName}{where}: {message}; {ReportTo}");
     }
 }

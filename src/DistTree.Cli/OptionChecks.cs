@@ -23,9 +23,9 @@ internal static class OptionChecks
 
     /// <summary>
     /// Checks the output options (option name, path or null) before any work: no path is empty, and at most one is
-    /// standard output. What stands at each path is checked once the inputs are read (<see cref="OutputTarget"/>).
+    /// standard output; no path holds a NUL character. What stands at each path is checked once the inputs are read (<see cref="OutputTarget"/>).
     /// </summary>
-    /// <exception cref="UsageException">An output path is empty, or two or more are <c>-</c>.</exception>
+    /// <exception cref="UsageException">An output path is empty or holds a NUL character, or two or more are <c>-</c>.</exception>
     public static void Outputs(params (string Option, string? Path)[] outputs)
     {
         foreach (var (option, path) in outputs)
@@ -33,6 +33,11 @@ internal static class OptionChecks
             if (path is { Length: 0 })
             {
                 throw new UsageException($"{option} was given an empty path; give a file name, or '-' for standard output");
+            }
+
+            if (path is not null && path.Contains('\0', StringComparison.Ordinal))
+            {
+                throw new UsageException($"{option} was given a path with a NUL character, which no file name can hold");
             }
         }
 

@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using DistTree.Diagnostics;
 
 namespace DistTree.Cli;
 
@@ -6,7 +7,8 @@ namespace DistTree.Cli;
 /// A one-line progress display on standard error for work that runs longer than about a second. It stays
 /// silent for the first second (short commands never show it), then rewrites one line in place ('\r'),
 /// at most ten times a second, and clears it when disposed. Given no writer, it does nothing at all: standard
-/// error that is redirected (a log, a pipe, a test) never sees it.
+/// error that is redirected (a log, a pipe, a test) never sees it. What it shows is escaped (<see cref="DisplayText"/>):
+/// only its own '\r' moves the cursor.
 /// </summary>
 public sealed class StatusLine : IProgress<string>, IDisposable
 {
@@ -71,6 +73,7 @@ public sealed class StatusLine : IProgress<string>, IDisposable
 
     private void Show(string value)
     {
+        value = DisplayText.Escape(value);
         var padded = value.Length < _width ? value.PadRight(_width) : value;
         _writer!.Write('\r' + padded);
         _writer.Flush();

@@ -3,14 +3,17 @@ using DistTree.Comparing;
 
 namespace DistTree.Reports;
 
-/// <summary>Formats a comparison as plain text for a terminal: summary, changes, affected end points, upstream runs, findings.</summary>
+/// <summary>
+/// Formats a comparison as plain text for a terminal: summary, changes, affected end points, upstream runs, findings.
+/// Text from the input (names, paths) is shown with its control characters escaped (<see cref="DisplayWriter"/>).
+/// </summary>
 public static class ComparisonConsole
 {
     /// <summary>Writes the comparison, at most <paramref name="rows"/> lines in each list of end points and runs.</summary>
     public static void Write(TextWriter o, Comparison c, int rows)
     {
-        ArgumentNullException.ThrowIfNull(o);
         ArgumentNullException.ThrowIfNull(c);
+        o = DisplayWriter.Over(o);
         o.WriteLine($"DistTree comparison: {c.After.Name}");
         WriteRevision(o, "old", c.Before);
         WriteRevision(o, "new", c.After);

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using DistTree.Comparing;
+using DistTree.Diagnostics;
 
 namespace DistTree.Reports;
 
@@ -126,7 +127,8 @@ public static class ComparisonMarkdown
         }
     }
 
-    // Table cells: a pipe would end the cell and a line break the row; markup characters are escaped.
+    // Table cells: a pipe would end the cell; markup characters are escaped. A line break, which would end the row,
+    // is escaped with every other control character when the line is written (Line).
     private static string Escape(string text)
     {
         var b = new StringBuilder(text.Length);
@@ -136,9 +138,6 @@ public static class ComparisonMarkdown
             {
                 case '|' or '\\' or '*' or '_' or '`' or '<' or '>' or '[' or ']':
                     b.Append('\\').Append(ch);
-                    break;
-                case '\r' or '\n':
-                    b.Append(' ');
                     break;
                 default:
                     b.Append(ch);
@@ -152,7 +151,9 @@ public static class ComparisonMarkdown
     // Inside a code span a backtick cannot be escaped and a pipe still splits a table cell.
     private static string Code(string text) => text.Replace("`", "'", StringComparison.Ordinal).Replace("|", "\\|", StringComparison.Ordinal);
 
-    private static void Line(StringBuilder o, string text) => o.Append(text).Append('\n');
+    // Each line with the control characters of the text in it shown as \u001B (DisplayText): a line break in a name
+    // would end a table's row, an escape sequence act on the terminal that shows the file.
+    private static void Line(StringBuilder o, string text) => o.Append(DisplayText.Escape(text)).Append('\n');
 
     private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

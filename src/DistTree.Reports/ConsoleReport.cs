@@ -1,14 +1,19 @@
 using System.Globalization;
+using DistTree.Diagnostics;
 using DistTree.Solving;
 
 namespace DistTree.Reports;
 
-/// <summary>Formats a solution as plain text for a terminal: a summary, the worst paths, every finding.</summary>
+/// <summary>
+/// Formats a solution as plain text for a terminal: a summary, the worst paths, every finding. Text from the input
+/// (names, paths) is shown with its control characters escaped (<see cref="DisplayWriter"/>).
+/// </summary>
 public static class ConsoleReport
 {
     /// <summary>The full analysis text.</summary>
     public static void WriteAnalysis(TextWriter o, Solution s, int worst)
     {
+        o = DisplayWriter.Over(o);
         var p = s.Project;
         o.WriteLine($"DistTree analysis: {p.Name}");
         o.WriteLine($"  file   {p.File} (sha256 {p.Sha256[..12]}…)");
@@ -49,6 +54,7 @@ public static class ConsoleReport
     /// <summary>The terse check text: a verdict line and the findings.</summary>
     public static void WriteCheck(TextWriter o, Solution s)
     {
+        o = DisplayWriter.Over(o);
         var verdict = s.HasFindings ? "FAIL" : "PASS";
         o.WriteLine(F($"{verdict}: {s.Project.File}: {s.Summary.EndPoints} end points, {s.Summary.Findings} findings, worst total {s.Summary.WorstTotalDropPercent:0.00} % at {s.Summary.WorstEndPoint ?? "-"}"));
         foreach (var f in s.AllFindings)
@@ -85,7 +91,7 @@ public static class ConsoleReport
 
     private static string Label(RunResult r) => r.Kind == RunResultKind.Transformer ? $"{r.Id}(xfmr)" : r.Id;
 
-    private static string Truncate(string text, int length) => text.Length <= length ? text : text[..(length - 1)] + "…";
+    private static string Truncate(string text, int length) => text.Length <= length ? text : DisplayText.Prefix(text, length - 1) + "…";
 
     private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

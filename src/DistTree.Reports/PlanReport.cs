@@ -9,9 +9,10 @@ namespace DistTree.Reports;
 /// <summary>Formats an upsize plan: console text, and the <c>upsize_plan</c> object of the results document.</summary>
 public static class PlanReport
 {
-    /// <summary>The plan as text: each change, the total, what no size can fix.</summary>
+    /// <summary>The plan as text: each change, the total, what no size can fix; text from the input escaped (<see cref="DisplayWriter"/>).</summary>
     public static void WriteConsole(TextWriter o, UpsizePlan plan)
     {
+        o = DisplayWriter.Over(o);
         var p = plan.Before.Project;
         o.WriteLine($"DistTree upsize plan: {p.Name}");
         o.WriteLine($"  file   {p.File} (sha256 {p.Sha256[..12]}…)");

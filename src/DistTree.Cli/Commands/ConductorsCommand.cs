@@ -16,11 +16,11 @@ internal static class ConductorsCommand
     {
         var material = new Option<string>("--material") { Description = Words.Listed(Words.Material, "or"), DefaultValueFactory = _ => Words.Material.Of(Material.Copper) };
         material.AcceptOnlyFromAmong([.. Words.Material.Words]);
-        var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance", DefaultValueFactory = _ => 75 };
+        var temperature = new Option<double>("--temperature") { CustomParser = InvariantNumber.Parse, Description = "conductor temperature in °C for resistance, above 0 and at most 250", DefaultValueFactory = _ => 75 };
         var raceway = new Option<string>("--raceway") { Description = Words.Listed(Words.Raceway, "or"), DefaultValueFactory = _ => Words.Raceway.Of(Raceway.Pvc) };
         raceway.AcceptOnlyFromAmong([.. Words.Raceway.Words]);
-        var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz", DefaultValueFactory = _ => 60 };
-        var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity", DefaultValueFactory = _ => 30 };
+        var frequency = new Option<double>("--frequency") { CustomParser = InvariantNumber.Parse, Description = "supply frequency in Hz, 40 to 70", DefaultValueFactory = _ => 60 };
+        var ambient = new Option<double>("--ambient") { CustomParser = InvariantNumber.Parse, Description = "ambient temperature in °C for ampacity, -60 to 90", DefaultValueFactory = _ => 30 };
         var json = new Option<bool>("--json") { Description = "write the catalogue as JSON to standard output" };
         var command = new Command("conductors", "Print the conductor catalogue: size, area, R, X, ampacities, and the source of each column.\n" +
             "Example: disttree conductors --material al --temperature 90 --raceway steel")

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.ProjectFiles.Writing;
 using DistTree.Vocabulary;
@@ -45,8 +46,9 @@ internal static class InitCommand
             OutputFile.Write(context, path, StarterProject.Write(unitSystem, found), replace, []);
             if (path != "-")
             {
-                context.Out.WriteLine($"wrote {path}: a starter project on {found.Name}, lengths in {(unitSystem == UnitSystem.Metric ? "metres" : "feet")}");
-                context.Out.WriteLine($"next: edit it, then run 'disttree validate {path}' and 'disttree analyze {path}'");
+                var shown = DisplayText.Escape(path);
+                context.Out.WriteLine($"wrote {shown}: a starter project on {found.Name}, lengths in {(unitSystem == UnitSystem.Metric ? "metres" : "feet")}");
+                context.Out.WriteLine($"next: edit it, then run 'disttree validate {shown}' and 'disttree analyze {shown}'");
             }
 
             return ExitCodes.Ok;

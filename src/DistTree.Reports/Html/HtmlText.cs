@@ -8,10 +8,15 @@ namespace DistTree.Reports.Html;
 /// <summary>Escaping and invariant number formatting for the HTML report: every string the template prints comes from here.</summary>
 internal static class HtmlText
 {
-    /// <summary>Escapes text for HTML element content and quoted attribute values.</summary>
+    /// <summary>
+    /// Escapes text for HTML element content and quoted attribute values: first the characters that would act rather
+    /// than show (control characters, separators, direction marks, unpaired surrogates) as visible <c>\u001B</c>
+    /// (<see cref="DisplayText"/>), then HTML's own.
+    /// </summary>
     public static string Escape(string? text)
     {
-        if (string.IsNullOrEmpty(text))
+        text = DisplayText.Escape(text);
+        if (text.Length == 0)
         {
             return "";
         }

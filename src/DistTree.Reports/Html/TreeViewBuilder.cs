@@ -1,3 +1,4 @@
+using DistTree.Diagnostics;
 using DistTree.Network;
 using DistTree.Solving;
 using static DistTree.Reports.Html.HtmlText;
@@ -64,7 +65,7 @@ internal static class TreeViewBuilder
         var line2 = node.Kind == NodeKind.Panelboard && below.OwnCircuits[i] > 0
             ? $"{Count(below.OwnCircuits[i])} ccts · worst {worst}"
             : worst is null ? "no circuits below" : $"worst below {worst}";
-        var id = node.Id.Length > 16 ? node.Id[..15] + "…" : node.Id;
+        var id = node.Id.Length > 16 ? DisplayText.Prefix(node.Id, 15) + "…" : node.Id;
         var band = below.BandBelow[i];
         var findings = below.FindingsBelow[i];
         return new TreeNodeView

@@ -9,6 +9,6 @@ public sealed record SourceLocation(string File, int Line, int Column)
     /// <summary>A location for values that come from no file (defaults, generated data).</summary>
     public static SourceLocation None { get; } = new("", 0, 0);
 
-    /// <inheritdoc />
-    public override string ToString() => $"{File}:{Line}:{Column}";
+    /// <summary><c>FILE:LINE:COL</c>, the file's path with its control characters escaped (<see cref="DisplayText"/>).</summary>
+    public override string ToString() => $"{DisplayText.Escape(File)}:{Line}:{Column}";
 }

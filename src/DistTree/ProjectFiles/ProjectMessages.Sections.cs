@@ -58,6 +58,13 @@ internal static partial class ProjectMessages
     /// <summary>An id holding '/', which joins a panel's id and a circuit's.</summary>
     public static string IdWithSlash(string id) => $"the id '{id}' must not contain '/' (it joins a panel's id and a circuit's: LP1/3)";
 
+    /// <summary>
+    /// An id holding a character <see cref="Diagnostics.DisplayText"/> escapes (a control character, a line separator, a
+    /// direction mark): an id is a reference that other entries and every output repeat, so it must read as it is stored.
+    /// </summary>
+    public static string IdWithControl(string id) =>
+        $"the id '{id}' holds a control character, a line separator or a direction mark (written here as \\uXXXX); an id is a reference that every output repeats, so it holds visible characters only";
+
     /// <summary><c>equipment</c> that is not a sequence.</summary>
     public static string EquipmentNotSequence(SourceNode found) => $"'equipment' must be a sequence of entries ('- id: ...'); found {found.Describe()}";
 

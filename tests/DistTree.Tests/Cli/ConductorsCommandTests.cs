@@ -49,6 +49,39 @@ public sealed class ConductorsCommandTests
         Assert.True(aluminum > Rac1000("steel"));
     }
 
+    // Found by CommandFuzzTests: a negative frequency or a temperature near absolute zero gave NaN figures, and with
+    // --json an internal error (JSON has no NaN).
+    [Theory]
+    [InlineData("--frequency", "-1", "--frequency must be between 40 and 70 Hz; found -1")]
+    [InlineData("--frequency", "0", "--frequency must be between 40 and 70 Hz; found 0")]
+    [InlineData("--frequency", "1000", "--frequency must be between 40 and 70 Hz; found 1,000")]
+    [InlineData("--temperature", "-273.15", "--temperature must be greater than 0 and at most 250 °C; found -273.15")]
+    [InlineData("--temperature", "250.5", "--temperature must be greater than 0 and at most 250 °C; found 250.5")]
+    public void Conductors_OutOfRange_ExitsTwoNamingTheRange(string option, string value, string message)
+    {
+        foreach (var json in new[] { false, true })
+        {
+            var result = CliRunner.Run(json ? ["conductors", option, value, "--json"] : ["conductors", option, value]);
+            Assert.Equal((2, "", $"disttree: error: {message}\n"), (result.ExitCode, result.Out, result.Error.ReplaceLineEndings("\n")));
+        }
+    }
+
+    [Theory]
+    [InlineData("--frequency", "70")]
+    [InlineData("--frequency", "40")]
+    [InlineData("--temperature", "250")]
+    [InlineData("--temperature", "0.5")]
+    [InlineData("--ambient", "90")] // at or above the rating the ampacity is zero (NEC 310.15(B)(1)'s relation)
+    [InlineData("--ambient", "-60")]
+    public void Conductors_AtTheEndsOfTheRange_GivesFiniteJson(string option, string value)
+    {
+        var result = CliRunner.Run("conductors", option, value, "--json");
+
+        Assert.Equal(0, result.ExitCode);
+        using var doc = JsonDocument.Parse(result.Out);
+        Assert.All(doc.RootElement.GetProperty("conductors").EnumerateArray(), r => Assert.True(r.GetProperty("resistance_ac_ohm_per_km").GetDouble() > 0));
+    }
+
     [Fact]
     public void Conductors_UnknownMaterial_ExitsTwo()
     {

@@ -31,6 +31,14 @@ public sealed class InternalErrorTests
     }
 
     [Fact]
+    public void Line_MessageWithControlCharacters_ShownEscaped()
+    {
+        var line = InternalError.Line(new InvalidOperationException("no '\u001B[31mP-9\u202E'\tfound"));
+
+        Assert.Equal($"internal error: System.InvalidOperationException: no '\\u001B[31mP-9\\u202E'\\u0009found; {InternalError.ReportTo}", line);
+    }
+
+    [Fact]
     public void Line_AggregateOfOne_TellsTheOneInside()
     {
         var line = InternalError.Line(new AggregateException(new AggregateException(new KeyNotFoundException("no 'P-9'"))));

@@ -67,4 +67,13 @@ public sealed class OptionChecksTests
 
         Assert.Equal("only one of --json and --html can write to standard output", e.Message);
     }
+
+    // A NUL character cannot be in a file name (POSIX); the path is refused before any work, not met as an internal error.
+    [Fact]
+    public void Outputs_PathWithNul_IsAUsageError()
+    {
+        var e = Assert.Throws<UsageException>(() => OptionChecks.Outputs(("--html", "out\0.html")));
+
+        Assert.Equal("--html was given a path with a NUL character, which no file name can hold", e.Message);
+    }
 }

@@ -67,6 +67,16 @@ public sealed class StatusLineTests
     }
 
     [Fact]
+    public void Report_TextWithControlCharacters_ShownEscaped_OnlyItsOwnCarriageReturnMoves()
+    {
+        using var writer = new StringWriter();
+        var now = TimeSpan.FromSeconds(2);
+        using var line = new StatusLine(writer, () => now);
+        line.Report("reading a\rb\u001B[2K\u202E");
+        Assert.Equal("\rreading a\\u000Db\\u001B[2K\\u202E", writer.ToString());
+    }
+
+    [Fact]
     public void Dispose_AfterALineWasShown_ClearsIt()
     {
         using var writer = new StringWriter();

@@ -118,7 +118,7 @@ public sealed class ProjectLoaderFilesTests
         Directory.CreateDirectory(folder.File("b"));
         File.WriteAllText(Path.Combine(folder.Path, "b", "one.yaml"), One); // on disk, but not in the source
 
-        var e = Assert.Throws<Diagnostics.ProjectException>(() => ProjectLoader.Load(folder.File("main.yaml"), source));
+        var e = Assert.Throws<DistTree.Diagnostics.ProjectException>(() => ProjectLoader.Load(folder.File("main.yaml"), source));
 
         Assert.Equal("mem:main.yaml:5:5: error: cannot read the included file 'mem:b/one.yaml': no such file", Assert.Single(e.Diagnostics).ToString());
     }

@@ -19,15 +19,16 @@ public sealed partial class ProjectLoaderFuzzTests(ITestOutputHelper output)
 {
     private const int DefaultCases = 2000;
 
-    private static readonly string[] OddNumbers =
+    /// <summary>Odd values for a number (also used by CommandFuzzTests).</summary>
+    internal static readonly string[] OddNumbers =
     [
         "0", "-0", "-1", "1e309", "-1e309", ".nan", ".NaN", ".inf", "-.inf", "+.Inf", "1e-320", "4.9e-324",
         "1.7976931348623157e308", "99999999999999999999", "2147483648", "-2147483649", "0x1F", "0o17", "0b101",
         "1_000", "+5", "1e", "0.", ".5", "NaN", "Infinity", "", "~", "null", "true", "'5'", "\"7\"", "1e300", "1e-300",
     ];
 
-    // YAML's indicators, white space of every kind, controls, a lone surrogate, a byte-order mark, an emoji.
-    private static readonly string[] Fragments =
+    /// <summary>YAML's indicators, white space of every kind, controls, a lone surrogate, a byte-order mark, an emoji (also used by CommandFuzzTests).</summary>
+    internal static readonly string[] Fragments =
     [
         "[", "]", "{", "}", ":", ": ", ",", "- ", "?", "&a ", "*a", "!", "!!str ", "!!int ", "|", ">", "'", "\"", "%", "@",
         "`", "#", "\t", "\n", "\r", "\r\n", " ", "  ", "\\", "\0", "\u0007", "\u00e9", "\u2028", "\uFEFF", "\uD800",

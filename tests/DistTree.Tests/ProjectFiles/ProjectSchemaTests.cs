@@ -54,6 +54,8 @@ public sealed class ProjectSchemaTests
     [InlineData("size: 12 AWG }", "size: 12 AWG, sets: 0 }")]
     [InlineData("length: 20, size: 12 AWG", "length: 12 kg, size: 12 AWG")]
     [InlineData("kind: panelboard", "kind: transformer")]
+    [InlineData("- id: LP1", "- id: \"LP\\e[2J1\"")] // an escape sequence in an id
+    [InlineData("- id: LP1", "- id: \"LP\\u202E1\"")] // a direction mark in an id
     public void Evaluate_BrokenFile_IsInvalid(string original, string replacement)
     {
         var good = File.ReadAllText(Path.Combine(TestPaths.Cases, "good", "minimal.yaml"));

@@ -119,7 +119,7 @@ public sealed class ProtectionRulesTests
     [Fact]
     public void AddFindings_GivenAList_AddsToIt()
     {
-        var earlier = new Finding(FindingKind.BranchDrop, "P/1", 4, 3, "earlier", Diagnostics.SourceLocation.None);
+        var earlier = new Finding(FindingKind.BranchDrop, "P/1", 4, 3, "earlier", DistTree.Diagnostics.SourceLocation.None);
         var findings = Rules.AddFindings([earlier], RunOf("12 AWG", 1, 20), 26, 25)!;
         Assert.Equal([FindingKind.BranchDrop, FindingKind.Ampacity], findings.Select(f => f.Kind));
     }

@@ -48,13 +48,23 @@ internal sealed class SectionContext(DiagnosticBag bag)
     public double? InRange(in MappingReader m, string key, NumberRange range) =>
         m.Optional(key) is { } node ? Values.InRange(node, $"'{key}'", range) : null;
 
-    /// <summary>An id: text without '/' (which joins a panel's id and a circuit's), of at most <see cref="ProjectLimits.MaxIdLength"/> characters.</summary>
+    /// <summary>
+    /// An id: text without '/' (which joins a panel's id and a circuit's), of at most
+    /// <see cref="ProjectLimits.MaxIdLength"/> characters, and without the characters an output would show escaped
+    /// (<see cref="Diagnostics.DisplayText"/>: control characters, line separators, direction marks).
+    /// </summary>
     public string? Id(SourceNode node, string what)
     {
         var id = IdReference(node, what);
         if (id is not null && id.Contains('/', StringComparison.Ordinal))
         {
             bag.Error(node.Location, ProjectMessages.IdWithSlash(id));
+            return null;
+        }
+
+        if (id is not null && Diagnostics.DisplayText.NeedsEscape(id))
+        {
+            bag.Error(node.Location, ProjectMessages.IdWithControl(id));
             return null;
         }
 

@@ -86,7 +86,8 @@ internal sealed class SourceScalar : SourceNode
     /// <summary>
     /// The value as a message shows it: its first line in the file only, and at most
     /// <see cref="ProjectLimits.MaxEchoedLength"/> characters of it, "..." marking a cut; so no message prints
-    /// more of a file (an unintended one, say) than the line it is about.
+    /// more of a file (an unintended one, say) than the line it is about; its control characters escaped
+    /// (<see cref="DisplayText"/>), so that it shows what the file holds and acts on no terminal.
     /// </summary>
     public string Echo()
     {
@@ -104,9 +105,13 @@ internal sealed class SourceScalar : SourceNode
         if (shown.Length > ProjectLimits.MaxEchoedLength)
         {
             shown = shown[..ProjectLimits.MaxEchoedLength];
+            if (char.IsHighSurrogate(shown[^1]))
+            {
+                shown = shown[..^1];
+            }
         }
 
-        return shown.Length == Value.Length ? Value : string.Concat(shown.TrimEnd(' '), "...");
+        return DisplayText.Escape(shown.Length == Value.Length ? Value : string.Concat(shown.TrimEnd(' '), "..."));
     }
 }
 
