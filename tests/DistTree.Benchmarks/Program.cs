@@ -47,6 +47,7 @@ Console.WriteLine();
 var folder = Directory.CreateTempSubdirectory("disttree-bench-");
 var results = new List<Measurement>();
 var solveRunsPerSecond = new Dictionary<int, double>();
+var loadFlow = new Dictionary<int, (double Seconds, int Iterations)>();
 var savings = new List<Saving>();
 var htmlBytes = new Dictionary<string, long>();
 var freshAnalyze = new List<string>();
@@ -130,6 +131,14 @@ try
         }
 
         solution ??= DropSolver.Standard.Solve(network);
+        if (Wanted("solve"))
+        {
+            // The load flow's part of the solve, timed alone on the same network (issue 17).
+            var (flow, iterations) = LoadFlowShare.Of(network, size, Math.Max(repeats, 11));
+            results.Add(flow);
+            loadFlow[size] = (flow.Median, iterations);
+        }
+
         if (Wanted("json"))
         {
             // As analyze writes it: streamed, here to nowhere, so that the figure is the formatting alone.
@@ -187,7 +196,7 @@ try
 
     if (results.Count > 0)
     {
-        Summarise(results, solveRunsPerSecond, savings, htmlBytes);
+        Summarise(results, solveRunsPerSecond, savings, htmlBytes, loadFlow);
     }
 
     foreach (var line in freshAnalyze.Concat(panelWidth))
@@ -256,7 +265,7 @@ static string RepositoryRoot()
 
 static string LoadAverage() => File.Exists("/proc/loadavg") ? File.ReadAllText("/proc/loadavg").Trim() : "not available";
 
-static void Summarise(List<Measurement> results, Dictionary<int, double> runsPerSecond, List<Saving> savings, Dictionary<string, long> htmlBytes)
+static void Summarise(List<Measurement> results, Dictionary<int, double> runsPerSecond, List<Saving> savings, Dictionary<string, long> htmlBytes, Dictionary<int, (double Seconds, int Iterations)> loadFlow)
 {
     Measurement? Find(string name, int size) => results.FirstOrDefault(r => r.Name == name && r.Size == size);
     Console.WriteLine("Targets (issue 9):");
@@ -280,6 +289,12 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
         {
             Console.WriteLine($"  solve time / parse time at {size,7:N0} {solve.Median / parse.Median,8:0.000}");
         }
+    }
+
+    foreach (var (size, (seconds, iterations)) in loadFlow.OrderBy(p => p.Key))
+    {
+        var solve = results.Single(r => r.Name == "solve" && r.Size == size);
+        Console.WriteLine($"  load flow at {size,7:N0}: {Measurement.Format(seconds),9} in {iterations} sweeps, {seconds / solve.Median:0.00} of the solve (issue 17)");
     }
 
     Console.WriteLine();

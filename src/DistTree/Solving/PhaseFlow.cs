@@ -12,6 +12,10 @@ namespace DistTree.Solving;
 /// </summary>
 internal sealed class PhaseFlow
 {
+    // The functionals of the bus this thread last asked for (see SlotOn).
+    [ThreadStatic]
+    private static BusFunctionals? t_last;
+
     // Per transformer node, the secondary's line currents (A) on its bus.
     private readonly Dictionary<int, Complex[]> _secondaryCurrents;
 
@@ -82,11 +86,31 @@ internal sealed class PhaseFlow
     /// <summary>The functional of slot <paramref name="slot"/> (see <see cref="Slots"/>) on the bus of <paramref name="node"/>.</summary>
     public Functional SlotOn(NetworkNode node, int slot)
     {
-        Span<Complex> nominal = stackalloc Complex[4];
-        Frame.Nominal(node, nominal);
-        return Slots.Functional(slot, nominal);
+        // A bus's functionals follow from its system and its turn alone: the last asked for are kept, per thread
+        // (the nodes of one panel come one after another, and the passes run on several threads).
+        var system = PhaseFrame.BusSystem(node);
+        var rotation = Frame.Rotation[node.Index];
+        var last = t_last;
+        if (last is null || !ReferenceEquals(last.System, system) || last.Rotation != rotation)
+        {
+            Span<Complex> nominal = stackalloc Complex[4];
+            PhaseFrame.Nominal(system, rotation, nominal);
+            var functionals = new Functional[Slots.Count];
+            var has = Slots.Of(PhaseRules.Lines(system), system.HasNeutral);
+            for (var s = 0; s < Slots.Count; s++)
+            {
+                functionals[s] = (has & (1 << s)) != 0 ? Slots.Functional(s, nominal) : default;
+            }
+
+            last = t_last = new BusFunctionals(system, rotation, functionals);
+        }
+
+        return last.Functionals[slot];
     }
 
     // |c|, without the call for no current (a line a circuit does not take): the magnitude of zero is zero.
     private static double Magnitude(Complex c) => c.Real == 0 && c.Imaginary == 0 ? 0.0 : c.Magnitude;
+
+    // A bus's system, its turn and its slots' functionals (default where the system lacks the slot).
+    private sealed record BusFunctionals(ElectricalSystem System, Complex Rotation, Functional[] Functionals);
 }

@@ -38,6 +38,9 @@ internal sealed class TransformerModel
     private readonly Complex _zp;
     private readonly Complex _zh;
 
+    // What MapUp gave for each functional asked (a tree reads a few: six per bus below, mapped up).
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<Functional, Functional> _mapped = new();
+
     private TransformerModel(WindingConnection connection, int primaryLines, int p, int q, double k0, double tap, Complex zt, Complex zp, Complex zh)
     {
         Connection = connection;
@@ -180,7 +183,10 @@ internal sealed class TransformerModel
     }
 
     /// <summary>The primary's functional that reads what <paramref name="below"/> reads on the secondary at no load, at the principal tap.</summary>
-    public Functional MapUp(Functional below)
+    public Functional MapUp(Functional below) => _mapped.GetOrAdd(below, Map);
+
+    // MapUp, worked out: the functional of the secondary voltages each primary conductor's unit voltage gives.
+    private Functional Map(Functional below)
     {
         Span<Complex> unit = stackalloc Complex[4];
         Span<Complex> secondary = stackalloc Complex[4];
