@@ -31,4 +31,22 @@ internal static class LoadFlowShare
         });
         return (time, iterations);
     }
+
+    /// <summary>Times the load flow of <paramref name="network"/> into <paramref name="results"/>, its median and sweeps into <paramref name="loadFlow"/>.</summary>
+    public static void Measure(List<Measurement> results, Dictionary<int, (double Seconds, int Iterations)> loadFlow, DistributionNetwork network, int size, int repeats)
+    {
+        var (time, iterations) = Of(network, size, repeats);
+        results.Add(time);
+        loadFlow[size] = (time.Median, iterations);
+    }
+
+    /// <summary>Prints each size's load flow: its time, sweeps and share of the solve timed in the same run.</summary>
+    public static void Summarise(List<Measurement> results, Dictionary<int, (double Seconds, int Iterations)> loadFlow)
+    {
+        foreach (var (size, (seconds, iterations)) in loadFlow.OrderBy(p => p.Key))
+        {
+            var solve = results.Single(r => r.Name == "solve" && r.Size == size);
+            Console.WriteLine($"  load flow at {size,7:N0}: {Measurement.Format(seconds),9} in {iterations} sweeps, {seconds / solve.Median:0.00} of the solve (issue 17)");
+        }
+    }
 }

@@ -133,10 +133,7 @@ try
         solution ??= DropSolver.Standard.Solve(network);
         if (Wanted("solve"))
         {
-            // The load flow's part of the solve, timed alone on the same network (issue 17).
-            var (flow, iterations) = LoadFlowShare.Of(network, size, Math.Max(repeats, 11));
-            results.Add(flow);
-            loadFlow[size] = (flow.Median, iterations);
+            LoadFlowShare.Measure(results, loadFlow, network, size, Math.Max(repeats, 11)); // the load flow alone (issue 17)
         }
 
         if (Wanted("json"))
@@ -291,12 +288,7 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
         }
     }
 
-    foreach (var (size, (seconds, iterations)) in loadFlow.OrderBy(p => p.Key))
-    {
-        var solve = results.Single(r => r.Name == "solve" && r.Size == size);
-        Console.WriteLine($"  load flow at {size,7:N0}: {Measurement.Format(seconds),9} in {iterations} sweeps, {seconds / solve.Median:0.00} of the solve (issue 17)");
-    }
-
+    LoadFlowShare.Summarise(results, loadFlow);
     Console.WriteLine();
     Console.WriteLine("Targets (issues 5, 6, 7):");
     foreach (var size in results.Select(r => r.Size).Distinct().Order())
@@ -363,7 +355,7 @@ static List<string> AnalyzeInFreshProcess(string path)
         long processPeak = 0;
         while (!process.WaitForExit(20))
         {
-            processPeak = Math.Max(processPeak, PeakOf(process));
+            processPeak = Math.Max(processPeak, ProcessPeak.Of(process));
         }
 
         Task.WaitAll(stdout, stderr);
@@ -379,30 +371,6 @@ static List<string> AnalyzeInFreshProcess(string path)
         $"  analyze 100,000 end points, file to JSON, fresh process: median {median:0.00} s of {times.Count} (spread {times[0]:0.00} .. {times[^1]:0.00})  target < 3 s  {Verdict(median < 3)}",
         $"  peak memory of that process (peak working set)              {peak / 1048576.0,6:0} MiB  target < 1024 MiB  {(peak == 0 ? "not measured" : Verdict(peak < 1L << 30))}",
     ];
-}
-
-// The high-water mark of a running process: VmHWM in /proc/PID/status on Linux, else PeakWorkingSet64.
-static long PeakOf(Process process)
-{
-    try
-    {
-        var status = $"/proc/{process.Id}/status";
-        if (File.Exists(status))
-        {
-            var line = File.ReadLines(status).FirstOrDefault(l => l.StartsWith("VmHWM:", StringComparison.Ordinal));
-            if (line is not null && long.TryParse(line["VmHWM:".Length..].Trim().Split(' ')[0], out var kib))
-            {
-                return kib * 1024;
-            }
-        }
-
-        process.Refresh();
-        return process.PeakWorkingSet64;
-    }
-    catch (Exception e) when (e is IOException or InvalidOperationException or UnauthorizedAccessException)
-    {
-        return 0; // the process has just ended
-    }
 }
 
 static string Verdict(bool met) => met ? "met" : "MISSED";

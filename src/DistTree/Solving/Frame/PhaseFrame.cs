@@ -13,8 +13,9 @@ namespace DistTree.Solving;
 /// </summary>
 internal sealed class PhaseFrame
 {
-    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, bool anyTransformer, Complex sourceImpedance)
+    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, double[] noLoad, bool anyTransformer, Complex sourceImpedance)
     {
+        NoLoad = noLoad;
         SourceImpedance = sourceImpedance;
         Models = models;
         Rotation = rotation;
@@ -33,6 +34,13 @@ internal sealed class PhaseFrame
     /// <summary>Per node, the turn of its bus's nominal voltages from the service's.</summary>
     public Complex[] Rotation { get; }
 
+    /// <summary>
+    /// Per node, its bus's no-load voltage in per unit of nominal: 1, but below a tapped transformer the product of
+    /// 1/(1 + tap) of every tap above. Loads draw their currents at it in the percent sum (the linearisation is about
+    /// the no-load state).
+    /// </summary>
+    public double[] NoLoad { get; }
+
     /// <summary>Whether the tree has a transformer.</summary>
     public bool AnyTransformer { get; }
 
@@ -42,21 +50,23 @@ internal sealed class PhaseFrame
         var (nodes, parents) = (network.NodeArray, network.ParentIndices);
         var models = new TransformerModel?[nodes.Length];
         var rotation = GC.AllocateUninitializedArray<Complex>(nodes.Length);
+        var noLoad = GC.AllocateUninitializedArray<double>(nodes.Length);
         var any = false;
-        rotation[0] = Complex.One;
+        (rotation[0], noLoad[0]) = (Complex.One, 1.0);
         for (var i = 1; i < nodes.Length; i++)
         {
-            rotation[i] = rotation[parents[i]];
+            (rotation[i], noLoad[i]) = (rotation[parents[i]], noLoad[parents[i]]);
             if (nodes[i].Equipment?.Transformer is { } t)
             {
                 var model = TransformerModel.Of(nodes[i], t, BusSystem(nodes[parents[i]]));
                 models[i] = model;
                 rotation[i] *= model.Rotation;
+                noLoad[i] *= model.Ratio / model.RatioUntapped;
                 any = true;
             }
         }
 
-        return new PhaseFrame(models, rotation, any, Source(network.Project.Service));
+        return new PhaseFrame(models, rotation, noLoad, any, Source(network.Project.Service));
     }
 
     // The utility's impedance per line (see SourceImpedance).

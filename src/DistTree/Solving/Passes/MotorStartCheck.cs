@@ -56,7 +56,7 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
         Span<Complex> secondary = stackalloc Complex[3];
         Span<Complex> m = stackalloc Complex[3];
         var panel = parents[motor];
-        PhaseCurrents.LoadCurrents(delta, phases.Assigned[motor], PhaseFrame.BusSystem(nodes[panel]), phases.Frame.Rotation[panel], current);
+        PhaseCurrents.LoadCurrents(delta, Model.LoadModel.ConstantPower, phases.Assigned[motor], PhaseFrame.BusSystem(nodes[panel]), phases.Frame.Rotation[panel], phases.Frame.NoLoad[panel], current);
         double extra = 0, own = 0;
         for (var i = motor; i > 0; i = parents[i])
         {

@@ -6,7 +6,7 @@ namespace DistTree.Solving.Passes;
 
 /// <summary>
 /// The currents pass, bottom-up a level at a time (see <see cref="TreeLevels"/>): each end point's load becomes line
-/// currents at the nominal voltages of the phase frame (see <see cref="PhaseLoads"/>, <see cref="PhaseFrame"/>); a
+/// currents at the no-load voltages of the phase frame (nominal, less a tap's part below a tapped transformer) (see <see cref="PhaseLoads"/>, <see cref="PhaseFrame"/>); a
 /// node's currents are the phasor sums of its children's times its demand factor; a transformer draws on its primary
 /// what its connection makes of its secondary's (see <see cref="TransformerModel.PrimaryCurrents"/>). The neutral of
 /// a run carries the return of its lines, −(I_A + I_B + I_C). Conductor temperatures, ampacity and the percent sum
@@ -44,16 +44,18 @@ internal sealed class PhaseCurrents
     }
 
     /// <summary>
-    /// Adds into <paramref name="into"/> (three lines) the currents of a load of <paramref name="s"/> on the lines
-    /// <paramref name="phases"/> of a bus of <paramref name="system"/> turned by <paramref name="rotation"/>, at nominal voltage.
+    /// Adds into <paramref name="into"/> (three lines) the currents of a load of <paramref name="s"/> (at nominal
+    /// voltage, of <paramref name="model"/>) on the lines <paramref name="phases"/> of a bus of
+    /// <paramref name="system"/> turned by <paramref name="rotation"/>, at its no-load voltage
+    /// <paramref name="noLoad"/> per unit of nominal.
     /// </summary>
-    public static void LoadCurrents(ComplexPower s, Phases phases, ElectricalSystem system, Complex rotation, Span<Complex> into)
+    public static void LoadCurrents(ComplexPower s, LoadModel model, Phases phases, ElectricalSystem system, Complex rotation, double noLoad, Span<Complex> into)
     {
-        Span<Complex> nominal = stackalloc Complex[4];
-        PhaseFrame.Nominal(system, rotation, nominal);
+        Span<Complex> voltage = stackalloc Complex[4];
+        PhaseFrame.Nominal(system, rotation * noLoad, voltage);
         var (single, pair) = PhaseFrame.LoadBases(system);
         var on = (int)phases & ((1 << PhaseRules.Lines(system)) - 1);
-        PhaseLoads.Add(new Complex(s.Watts, s.Vars), LoadModel.ConstantPower, on, nominal, single, pair, into);
+        PhaseLoads.Add(new Complex(s.Watts, s.Vars), model, on, voltage, single, pair, into);
     }
 
     // Each node works out its own currents; a node that is not an end point pulls its children's (a level below,
@@ -79,7 +81,18 @@ internal sealed class PhaseCurrents
             if (node.Circuit is not null)
             {
                 var parent = node.ParentIndex;
-                LoadCurrents(_power[i], _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], mine);
+                var circuit = node.Circuit;
+                if (circuit.Points.Count == 0)
+                {
+                    LoadCurrents(_power[i], circuit.Load.Model, _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], _frame.NoLoad[parent], mine);
+                }
+                else
+                {
+                    foreach (var point in circuit.Points)
+                    {
+                        LoadCurrents(LoadPower.Of(point.Load, circuit.Supply), point.Load.Model, _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], _frame.NoLoad[parent], mine);
+                    }
+                }
                 continue;
             }
 

@@ -81,7 +81,7 @@ internal sealed class RunDrops
         foreach (var p in points)
         {
             point.Clear();
-            PhaseCurrents.LoadCurrents(LoadPower.Of(p.Load, run.Supply), set, PhaseFrame.BusSystem(parent), phases.Frame.Rotation[parent.Index], point);
+            PhaseCurrents.LoadCurrents(LoadPower.Of(p.Load, run.Supply), p.Load.Model, set, PhaseFrame.BusSystem(parent), phases.Frame.Rotation[parent.Index], phases.Frame.NoLoad[parent.Index], point);
             var km = p.AtM / 1000.0 / conductors.Sets;
             for (var x = 0; x < 3; x++)
             {

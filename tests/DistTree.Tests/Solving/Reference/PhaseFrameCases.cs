@@ -254,6 +254,18 @@ internal static class PhaseFrameCases
                   - { id: d, poles: 2, phase: AB, load: { va: 1200, pf: 0.9 }, run: { length: 10, size: 10 AWG } }
             """),
 
+        // A feeder above a tapped transformer whose load is constant impedance: below the tap the no-load voltage is
+        // 1/1.05 of nominal, and the load draws its current there, in both methods (found by the random-tree property).
+        ["FeederAboveATap"] = Light("""
+            service: { id: SVC, system: 480Y/277 }
+            equipment:
+              - { id: MP, kind: panelboard, from: SVC, feeder: { length: 80, size: 6 AWG },
+                  circuits: [ { id: m, poles: 3, load: { va: 100, pf: 1 }, run: { length: 3, size: 12 AWG } } ] }
+              - { id: T, kind: transformer, from: MP, kva: 75, secondary: 208Y/120, impedance_percent: 2, x_r: 2, tap_percent: 5 }
+              - { id: LP, kind: panelboard, from: T,
+                  circuits: [ { id: h, poles: 3, load: { kva: 7.5, pf: 1, model: impedance }, run: { length: 3, size: 6 AWG } } ] }
+            """),
+
         // The utility's fault current and X/R at a 208Y/120 service (set in the model), mixed loads.
         ["FaultCurrentThreePhase"] = new(Head + """
             service: { id: SVC, system: 208Y/120 }
