@@ -69,19 +69,21 @@ internal sealed class PhaseVoltages : IDisposable
     private readonly int _n;
     private readonly Complex[] _bus;
     private readonly Dictionary<int, Complex[]> _primary;
+    private readonly TransformerModel?[] _models;
 
-    public PhaseVoltages(int n, Complex[] bus, Dictionary<int, Complex[]> primary)
+    public PhaseVoltages(int n, Complex[] bus, Dictionary<int, Complex[]> primary, TransformerModel?[] models)
     {
         _n = n;
         _bus = bus;
         _primary = primary;
+        _models = models;
     }
 
     /// <summary>The four conductor voltages on node <paramref name="node"/>'s bus (an end point's: at its far end).</summary>
     public ReadOnlySpan<Complex> Bus(int node) => _bus.AsSpan(node * 4, 4);
 
     /// <summary>The four conductor voltages where node <paramref name="node"/>'s run ends: a transformer's primary terminals, else its bus.</summary>
-    public ReadOnlySpan<Complex> Input(int node) => _primary.TryGetValue(node, out var p) ? p : Bus(node);
+    public ReadOnlySpan<Complex> Input(int node) => _models[node] is null ? Bus(node) : _primary[node];
 
     /// <summary>Gives back the scratch array.</summary>
     public void Dispose() => Scratch.Return(_bus, _n * 4);

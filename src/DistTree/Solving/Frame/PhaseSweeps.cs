@@ -236,7 +236,7 @@ internal sealed class PhaseSweeps : IDisposable
     public PhaseVoltages TakeVoltages()
     {
         _taken = true;
-        return new PhaseVoltages(_n, _bus, _primary);
+        return new PhaseVoltages(_n, _bus, _primary, _models);
     }
 
     /// <summary>Gives back the scratch arrays (the voltages too unless taken).</summary>

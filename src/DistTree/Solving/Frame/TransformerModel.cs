@@ -38,8 +38,9 @@ internal sealed class TransformerModel
     private readonly Complex _zp;
     private readonly Complex _zh;
 
-    // What MapUp gave for each functional asked (a tree reads a few: six per bus below, mapped up).
-    private readonly System.Collections.Concurrent.ConcurrentDictionary<Functional, Functional> _mapped = new();
+    // Per primary conductor k × 4 + secondary conductor j: the secondary's voltage j at no load and the principal
+    // tap when primary conductor k stands at 1 V and the others at 0 (the connection is linear).
+    private readonly Complex[] _noLoad = new Complex[16];
 
     private TransformerModel(WindingConnection connection, int primaryLines, int p, int q, double k0, double tap, Complex zt, Complex zp, Complex zh)
     {
@@ -61,6 +62,12 @@ internal sealed class TransformerModel
 
         Secondary(primary, [Complex.Zero, Complex.Zero, Complex.Zero], k0, secondary);
         Rotation = secondary[0] / secondary[0].Magnitude;
+        for (var k = 0; k < 4; k++)
+        {
+            primary.Clear();
+            primary[k] = Complex.One;
+            Secondary(primary, [Complex.Zero, Complex.Zero, Complex.Zero], k0, _noLoad.AsSpan(k * 4, 4));
+        }
     }
 
     /// <summary>How its windings are connected.</summary>
@@ -182,25 +189,19 @@ internal sealed class TransformerModel
         }
     }
 
-    /// <summary>The primary's functional that reads what <paramref name="below"/> reads on the secondary at no load, at the principal tap.</summary>
-    public Functional MapUp(Functional below) => _mapped.GetOrAdd(below, Map);
-
-    // MapUp, worked out: the functional of the secondary voltages each primary conductor's unit voltage gives.
-    private Functional Map(Functional below)
+    /// <summary>
+    /// The primary's functional that reads what <paramref name="below"/> reads on the secondary at no load, at the
+    /// principal tap: coefficient k is f of the secondary voltages a unit voltage on primary conductor k gives (see
+    /// <see cref="_noLoad"/>).
+    /// </summary>
+    public Functional MapUp(Functional below)
     {
-        Span<Complex> unit = stackalloc Complex[4];
-        Span<Complex> secondary = stackalloc Complex[4];
-        ReadOnlySpan<Complex> none = [Complex.Zero, Complex.Zero, Complex.Zero];
-        Span<Complex> c = stackalloc Complex[4];
-        for (var k = 0; k < 4; k++)
-        {
-            unit.Clear();
-            unit[k] = Complex.One;
-            Secondary(unit, none, RatioUntapped, secondary);
-            c[k] = below.Of(secondary);
-        }
-
-        return new Functional(c[0], c[1], c[2], c[3]);
+        var m = _noLoad;
+        return new Functional(
+            (below.A * m[0]) + (below.B * m[1]) + (below.C * m[2]) + (below.N * m[3]),
+            (below.A * m[4]) + (below.B * m[5]) + (below.C * m[6]) + (below.N * m[7]),
+            (below.A * m[8]) + (below.B * m[9]) + (below.C * m[10]) + (below.N * m[11]),
+            (below.A * m[12]) + (below.B * m[13]) + (below.C * m[14]) + (below.N * m[15]));
     }
 
     /// <summary>What the windings' leakage takes off <paramref name="below"/> when the secondary carries <paramref name="current"/>: f(E) − f(V).</summary>

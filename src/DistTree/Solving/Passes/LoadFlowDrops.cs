@@ -49,39 +49,39 @@ internal static class LoadFlowDrops
                 var node = nodes[i];
                 if (node.Incoming is { } run)
                 {
+                    var from = voltages.Bus(run.Source.Index);
+                    var to = voltages.Input(i);
                     var own = RunDrops.OwnSlots(run, phases);
-                    Record(ref rows[incomingRow[i]], Worst(own, slot =>
+                    var worst = double.NegativeInfinity;
+                    for (var slot = 0; slot < Slots.Count; slot++)
                     {
-                        var f = phases.SlotOn(run.Source, slot);
-                        return f.Of(voltages.Bus(run.Source.Index)).Magnitude - f.Of(voltages.Input(i)).Magnitude;
-                    }));
+                        if ((own & (1 << slot)) != 0)
+                        {
+                            var f = phases.SlotOn(run.Source, slot);
+                            worst = Math.Max(worst, (f.Of(from).Magnitude - f.Of(to).Magnitude) * 100.0);
+                        }
+                    }
+
+                    Record(ref rows[incomingRow[i]], worst);
                 }
 
                 if (phases.Frame.Models[i] is { } model)
                 {
                     var secondary = PhaseFrame.BusSystem(node);
-                    Record(ref rows[transformerRow[i]], Worst(Slots.Of(PhaseRules.Lines(secondary), secondary.HasNeutral), slot =>
+                    var slots = Slots.Of(PhaseRules.Lines(secondary), secondary.HasNeutral);
+                    var worst = double.NegativeInfinity;
+                    for (var slot = 0; slot < Slots.Count; slot++)
                     {
-                        var f = phases.SlotOn(node, slot);
-                        return model.MapUp(f).Of(voltages.Input(i)).Magnitude - f.Of(voltages.Bus(i)).Magnitude;
-                    }));
+                        if ((slots & (1 << slot)) != 0)
+                        {
+                            var f = phases.SlotOn(node, slot);
+                            worst = Math.Max(worst, (model.MapUp(f).Of(voltages.Input(i)).Magnitude - f.Of(voltages.Bus(i)).Magnitude) * 100.0);
+                        }
+                    }
+
+                    Record(ref rows[transformerRow[i]], worst);
                 }
             }
         });
-    }
-
-    // The worst of a figure over the slots, in percent.
-    private static double Worst(int slots, Func<int, double> fall)
-    {
-        var worst = double.NegativeInfinity;
-        for (var slot = 0; slot < Slots.Count; slot++)
-        {
-            if ((slots & (1 << slot)) != 0)
-            {
-                worst = Math.Max(worst, fall(slot) * 100.0);
-            }
-        }
-
-        return worst;
     }
 }
