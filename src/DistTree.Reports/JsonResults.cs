@@ -11,7 +11,7 @@ namespace DistTree.Reports;
 /// SI units, lengths in metres, figures rounded for reading (percent to 4 decimals, volts and amperes to 3).
 /// The same solution always gives the same bytes.
 /// </summary>
-public static class JsonResults
+public static partial class JsonResults
 {
     /// <summary>The format identifier.</summary>
     public const string Format = "disttree-results/1";
@@ -354,12 +354,7 @@ public static class JsonResults
 
         if (e.MotorStart is { } m)
         {
-            w.WriteStartObject("motor_start"u8);
-            Number(w, "locked_rotor_kva"u8, m.LockedRotorVa / 1000.0, 3);
-            Number(w, "terminal_dip_percent"u8, m.TerminalDipPercent, 4);
-            Number(w, "panel_dip_percent"u8, m.PanelDipPercent, 4);
-            Number(w, "limit_percent"u8, m.LimitPercent, 4);
-            w.WriteEndObject();
+            WriteMotorStart(w, m);
         }
         else
         {

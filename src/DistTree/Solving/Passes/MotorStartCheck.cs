@@ -22,34 +22,70 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
         var nodes = network.NodeArray;
         var panel = nodes[network.ParentIndices[motor]];
         var count = shares.AllRows(motor);
-        var buffer = ArrayPool<double>.Shared.Rent(count * 2);
+        var buffer = ArrayPool<double>.Shared.Rent(count * 3);
         var rows = ArrayPool<int>.Shared.Rent(count);
         var ps = buffer.AsSpan(0, count);
         var lf = buffer.AsSpan(count, count);
-        var (terminal, atPanel) = (double.NegativeInfinity, double.NegativeInfinity);
+        var extra = buffer.AsSpan(count * 2, count);
+        var (terminal, dips) = (double.NegativeInfinity, Array.Empty<BusDip>());
         for (var slot = 0; slot < Slots.Count; slot++)
         {
             if ((slots & (1 << slot)) != 0)
             {
                 var f = phases.SlotOn(panel, slot);
                 var (percentSum, loadFlow, _, _) = shares.Walk(motor, f, count, ps, lf, rows, true);
-                var (extra, ownExtra) = Extra(motor, f, lockedRotor + (running * -1.0));
-                var steady = onLoadFlow ? loadFlow : percentSum;
-                var own = (onLoadFlow ? lf[0] : ps[0]) + ownExtra;
-                if (steady + extra > terminal)
+                Extra(motor, f, lockedRotor + (running * -1.0), extra);
+                var steady = onLoadFlow ? lf : ps;
+                var total = (onLoadFlow ? loadFlow : percentSum) + Sum(extra);
+                if (total > terminal)
                 {
-                    (terminal, atPanel) = (steady + extra, steady + extra - own);
+                    (terminal, dips) = (total, Dips(motor, total, steady, extra));
                 }
             }
         }
 
         ArrayPool<double>.Shared.Return(buffer);
         ArrayPool<int>.Shared.Return(rows);
-        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, atPanel, _limitPercent);
+        return new MotorStartResult(lockedRotor.VoltAmperes, terminal, dips.Length > 0 ? dips[0].DipPercent : terminal, _limitPercent) { PathDips = dips };
     }
 
-    // The start's extra drop in f, percent, on the whole path and on the motor's own run.
-    private (double Extra, double Own) Extra(int motor, Functional f, ComplexPower delta)
+    // The dip at each bus of the path, from the motor's panel up: the terminal figure less the rows below the bus
+    // (running and start), in the order the walk took them (a node's transformer, then its incoming run).
+    private BusDip[] Dips(int motor, double total, ReadOnlySpan<double> steady, ReadOnlySpan<double> extra)
+    {
+        var (nodes, parents, incomingRow, transformerRow) = (network.NodeArray, network.ParentIndices, runs.IncomingRow, runs.TransformerRow);
+        var dips = new List<BusDip>();
+        var (k, below) = (0, 0.0);
+        for (var i = motor; i > 0; i = parents[i])
+        {
+            if (i != motor)
+            {
+                dips.Add(new BusDip(nodes[i].Id, total - below));
+            }
+
+            for (var row = 0; row < (transformerRow[i] >= 0 ? 1 : 0) + (incomingRow[i] >= 0 ? 1 : 0); row++, k++)
+            {
+                below += steady[k] + extra[k];
+            }
+        }
+
+        return [.. dips];
+    }
+
+    private static double Sum(ReadOnlySpan<double> values)
+    {
+        var sum = 0.0;
+        foreach (var v in values)
+        {
+            sum += v;
+        }
+
+        return sum;
+    }
+
+    // Into extra, the start's extra drop in f on each row of the whole path, percent, in the walk's order (a node's
+    // transformer, then its incoming run); the utility's impedance, where given, on the last.
+    private void Extra(int motor, Functional f, ComplexPower delta, Span<double> extra)
     {
         var (nodes, parents) = (network.NodeArray, network.ParentIndices);
         Span<Complex> current = stackalloc Complex[3];
@@ -57,12 +93,12 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
         Span<Complex> m = stackalloc Complex[3];
         var panel = parents[motor];
         PhaseCurrents.LoadCurrents(delta, Model.LoadModel.ConstantPower, phases.Assigned[motor], PhaseFrame.BusSystem(nodes[panel]), phases.Frame.Rotation[panel], phases.Frame.NoLoad[panel], current);
-        double extra = 0, own = 0;
+        var k = 0;
         for (var i = motor; i > 0; i = parents[i])
         {
             if (phases.Frame.Models[i] is { } model)
             {
-                extra += model.WindingDrop(f, current).Real * 100.0;
+                extra[k++] = model.WindingDrop(f, current).Real * 100.0;
                 f = model.MapUp(f);
                 current.CopyTo(secondary);
                 model.PrimaryCurrents(secondary, current);
@@ -77,14 +113,12 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
                     m[x] = current[x] * km;
                 }
 
-                var here = f.DropPercent(m, row.ResistanceOhmPerKm, row.ReactanceOhmPerKm, row.NeutralResistanceOhmPerKm, row.NeutralReactanceOhmPerKm);
-                extra += here;
-                own = i == motor ? here : own;
+                extra[k++] = f.DropPercent(m, row.ResistanceOhmPerKm, row.ReactanceOhmPerKm, row.NeutralResistanceOhmPerKm, row.NeutralReactanceOhmPerKm);
             }
         }
 
-        // The utility's impedance ahead of the service, where the project gives it.
+        // The utility's impedance ahead of the service, where the project gives it, counted with the last row.
         var source = ((f.A * current[0]) + (f.B * current[1]) + (f.C * current[2])) * phases.Frame.SourceImpedance * 100.0;
-        return (extra + source.Real, own);
+        extra[k - 1] += source.Real;
     }
 }

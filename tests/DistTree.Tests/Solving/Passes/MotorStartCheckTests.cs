@@ -34,4 +34,31 @@ public sealed class MotorStartCheckTests
     [Fact]
     public void Solve_NonMotor_HasNoStartingCheck() =>
         Assert.Null(SolverHarness.Solve(Motor("{ kva: 10, pf: 0.9 }")).EndPoints.Single().MotorStart);
+
+    // The dip at every bus of the path (issue 17): each is the terminal dip less the running and starting drops of the
+    // rows below that bus, so the figures fall going up, and the panel's is the panel dip.
+    [Fact]
+    public void Solve_MotorBelowTwoPanels_DipsAtEveryBusOfItsPath()
+    {
+        var s = SolverHarness.Solve("""
+            disttree: 1
+            project: { name: Dips, units: metric }
+            rules: { conductor_temperature: rated }
+            service: { id: SVC, system: 208Y/120 }
+            equipment:
+              - { id: MDP, kind: switchboard, from: SVC, feeder: { length: 30, size: 2 AWG } }
+              - id: LP
+                kind: panelboard
+                from: MDP
+                feeder: { length: 40, size: 6 AWG }
+                circuits:
+                  - { id: "1", poles: 1, load: { hp: 1, pf: 0.8, lrc_multiple: 6, starting_pf: 0.4 }, run: { length: 20, size: 12 AWG } }
+            """);
+        var start = s.EndPoints.Single().MotorStart!;
+
+        Assert.Equal(["LP", "MDP"], start.PathDips.Select(d => d.Id));
+        Assert.Equal(start.PanelDipPercent, start.PathDips[0].DipPercent, 12);
+        Assert.True(start.TerminalDipPercent > start.PathDips[0].DipPercent && start.PathDips[0].DipPercent > start.PathDips[1].DipPercent);
+        Assert.True(start.PathDips[1].DipPercent > 0);
+    }
 }
