@@ -200,6 +200,12 @@ public static class ProjectLoader
             throw new IOException(ProjectMessages.IsAFolder());
         }
 
+        // A pipe, a device or a socket is refused before it is opened: opening a pipe for reading waits for a writer.
+        if (FileIdentity.Of(path).Kind is FileKind.Pipe or FileKind.Device or FileKind.Socket)
+        {
+            throw new IOException(ProjectMessages.NotARegularFile());
+        }
+
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, 1, FileOptions.SequentialScan);
         if (!stream.CanSeek)
         {

@@ -231,6 +231,24 @@ public sealed class IncludeReaderTests : IDisposable
         Assert.StartsWith("it is not a regular file", e.Message, StringComparison.Ordinal);
     }
 
+    // Opening a pipe for reading waits for a writer (POSIX open(2)): a pipe given as the project, or included, is
+    // refused before it is opened, so nothing waits. Run on a task that must end within 30 s (else a TimeoutException).
+    [Fact]
+    public async Task Load_MainFileOrIncludeIsAPipe_RefusedWithoutWaiting()
+    {
+        var pipe = Path.Combine(_folder.FullName, "pipe.yaml");
+        DistTree.Tests.Cli.Tool.Run("mkfifo", pipe);
+        var main = Write("main.yaml", Main);
+        Directory.CreateDirectory(Path.Combine(_folder.FullName, "b"));
+        File.CreateSymbolicLink(Path.Combine(_folder.FullName, "b", "one.yaml"), pipe);
+
+        var (mainMessage, includeMessage) = await Task.Run(() => (Assert.Throws<IOException>(() => ProjectLoader.Load(pipe)).Message, Assert.Single(Errors(main)).Message))
+            .WaitAsync(TimeSpan.FromSeconds(30));
+
+        Assert.StartsWith("it is not a regular file", mainMessage, StringComparison.Ordinal);
+        Assert.Contains("not a regular file", includeMessage, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Load_IncludeIsAFolder_SaysItIsAFolder()
     {
