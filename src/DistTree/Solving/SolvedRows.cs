@@ -80,7 +80,6 @@ internal struct RunRow
 {
     public int Node;
     public bool IsTransformer;
-    public int OwnLines;
     public double CurrentA;
     public double DesignCurrentA;
     public double TemperatureC;

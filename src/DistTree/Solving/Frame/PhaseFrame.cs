@@ -13,13 +13,12 @@ namespace DistTree.Solving;
 /// </summary>
 internal sealed class PhaseFrame
 {
-    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, double[] noLoad, bool anyTransformer, Complex sourceImpedance)
+    private PhaseFrame(TransformerModel?[] models, Complex[] rotation, double[] noLoad, Complex sourceImpedance)
     {
         NoLoad = noLoad;
         SourceImpedance = sourceImpedance;
         Models = models;
         Rotation = rotation;
-        AnyTransformer = anyTransformer;
     }
 
     /// <summary>
@@ -41,9 +40,6 @@ internal sealed class PhaseFrame
     /// </summary>
     public double[] NoLoad { get; }
 
-    /// <summary>Whether the tree has a transformer.</summary>
-    public bool AnyTransformer { get; }
-
     /// <summary>The frame of <paramref name="network"/>: a model per transformer and each bus's turn, top-down.</summary>
     public static PhaseFrame Of(DistributionNetwork network)
     {
@@ -51,7 +47,6 @@ internal sealed class PhaseFrame
         var models = new TransformerModel?[nodes.Length];
         var rotation = GC.AllocateUninitializedArray<Complex>(nodes.Length);
         var noLoad = GC.AllocateUninitializedArray<double>(nodes.Length);
-        var any = false;
         (rotation[0], noLoad[0]) = (Complex.One, 1.0);
         for (var i = 1; i < nodes.Length; i++)
         {
@@ -62,11 +57,10 @@ internal sealed class PhaseFrame
                 models[i] = model;
                 rotation[i] *= model.Rotation;
                 noLoad[i] *= model.Ratio / model.RatioUntapped;
-                any = true;
             }
         }
 
-        return new PhaseFrame(models, rotation, noLoad, any, Source(network.Project.Service));
+        return new PhaseFrame(models, rotation, noLoad, Source(network.Project.Service));
     }
 
     // The utility's impedance per line (see SourceImpedance).

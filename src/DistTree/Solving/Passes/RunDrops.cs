@@ -210,7 +210,6 @@ internal sealed class RunDrops
             NeutralResistanceOhmPerKm = rN,
             NeutralReactanceOhmPerKm = xN,
             AmpacityA = figures.AmpacityA,
-            OwnLines = (int)_phases.Assigned[index],
             DropPercent = ownDrop,
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
