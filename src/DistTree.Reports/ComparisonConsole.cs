@@ -22,7 +22,7 @@ public static class ComparisonConsole
         {
             o.WriteLine(F($"No change: no field, drop, current or finding differs (tolerance {ComparisonTolerance.PercentPoints:0e0} percentage points, {ComparisonTolerance.Relative:0e0} relative)."));
             o.WriteLine();
-            o.WriteLine($"Caution: {Caution.Text}");
+            o.WriteLine($"Caution: {Caution.For(c.Before.Code, c.After.Code)}");
             return;
         }
 
@@ -34,7 +34,7 @@ public static class ComparisonConsole
         WriteFindings(o, "New findings", c.NewFindings);
         WriteFindings(o, "Resolved findings", c.ResolvedFindings);
         o.WriteLine();
-        o.WriteLine($"Caution: {Caution.Text}");
+        o.WriteLine($"Caution: {Caution.For(c.Before.Code, c.After.Code)}");
     }
 
     private static void WriteSummary(TextWriter o, Comparison c)
@@ -130,7 +130,7 @@ public static class ComparisonConsole
         o.WriteLine(F($"{title} ({findings.Count}):"));
         foreach (var f in findings)
         {
-            o.WriteLine($"  {f.Location}: {f.Code}: {f.Message}");
+            o.WriteLine($"  {f.Location}: {f.Code}: {f.Message} [{f.Reference}]");
         }
     }
 

@@ -26,7 +26,7 @@ public static class ComparisonJson
         {
             w.WriteStartObject();
             w.WriteString("format", Format);
-            w.WriteString("caution", Caution.Text);
+            w.WriteString("caution", Caution.For(c.Before.Code, c.After.Code));
             w.WriteStartObject("tolerance");
             w.WriteNumber("percent_points", ComparisonTolerance.PercentPoints);
             w.WriteNumber("relative", ComparisonTolerance.Relative);

@@ -36,7 +36,7 @@ public static class ComparisonMarkdown
         }
 
         Line(o, "");
-        Line(o, $"> **Caution:** {Caution.Text}");
+        Line(o, $"> **Caution:** {Caution.For(c.Before.Code, c.After.Code)}");
         return o.ToString();
     }
 
@@ -114,7 +114,7 @@ public static class ComparisonMarkdown
         Line(o, "");
         foreach (var f in findings)
         {
-            Line(o, $"- `{Code(f.Subject)}` {f.Code}: {Escape(f.Message)}");
+            Line(o, $"- `{Code(f.Subject)}` {f.Code}: {Escape(f.Message)} ({Escape(f.Reference)})");
         }
     }
 

@@ -48,7 +48,7 @@ public static class ConsoleReport
 
         WriteFindings(o, s);
         o.WriteLine();
-        o.WriteLine($"Caution: {Caution.Text}");
+        o.WriteLine($"Caution: {Caution.For(s.Project.Rules.Code)}");
     }
 
     /// <summary>The terse check text: a verdict line and the findings.</summary>
@@ -59,7 +59,7 @@ public static class ConsoleReport
         o.WriteLine(F($"{verdict}: {s.Project.File}: {s.Summary.EndPoints} end points, {s.Summary.Findings} findings, worst total {s.Summary.WorstTotalDropPercent:0.00} % at {s.Summary.WorstEndPoint ?? "-"}"));
         foreach (var f in s.AllFindings)
         {
-            o.WriteLine($"{f.Location}: {f.Code}: {f.Message}");
+            o.WriteLine($"{f.Location}: {f.Code}: {f.Message} [{f.Reference}]");
         }
     }
 
@@ -85,7 +85,7 @@ public static class ConsoleReport
         o.WriteLine(F($"Findings ({s.Summary.Findings}):"));
         foreach (var f in s.AllFindings)
         {
-            o.WriteLine($"  {f.Location}: {f.Code}: {f.Message}");
+            o.WriteLine($"  {f.Location}: {f.Code}: {f.Message} [{f.Reference}]");
         }
     }
 

@@ -43,7 +43,7 @@ public static partial class JsonResults
         {
             w.WriteStartObject();
             w.WriteString("format", Format);
-            w.WriteString("caution", Caution.Text);
+            w.WriteString("caution", Caution.For(solution.Project.Rules.Code));
             WriteProject(w, solution);
             WriteRules(w, solution);
             WriteSummary(w, solution.Summary);
@@ -99,11 +99,12 @@ public static partial class JsonResults
         }
     }
 
-    /// <summary>Writes a finding object (kind, subject, value, limit, message, line, column).</summary>
+    /// <summary>Writes a finding object (kind, reference, subject, value, limit, message, line, column).</summary>
     public static void WriteFinding(Utf8JsonWriter w, Finding f)
     {
         w.WriteStartObject();
         w.WriteString("kind"u8, f.Code);
+        w.WriteString("reference"u8, f.Reference);
         w.WriteString("subject"u8, f.Subject);
         Number(w, "value"u8, f.Value, 4);
         Number(w, "limit"u8, f.Limit, 4);
@@ -242,6 +243,8 @@ public static partial class JsonResults
     {
         var r = s.Project.Rules;
         w.WriteStartObject("rules");
+        w.WriteString("code", Words.Code.Of(r.Code));
+        w.WriteString("code_edition", RuleText.Code(r));
         w.WriteString("method", RuleText.Method(r));
         w.WriteNumber("feeder_limit_percent", r.FeederLimitPercent);
         w.WriteNumber("branch_limit_percent", r.BranchLimitPercent);
@@ -297,6 +300,7 @@ public static partial class JsonResults
         Number(w, "voltage_v"u8, r.VoltageV, 3);
         Number(w, "current_a"u8, r.CurrentA, 3);
         Number(w, "design_current_a"u8, r.DesignCurrentA, 3);
+        NullableString(w, "design_line"u8, r.DesignLine);
         Number(w, "power_factor"u8, r.PowerFactor, 4);
         NullableString(w, "size"u8, r.Size);
         if (neutralSize is not null)
@@ -320,6 +324,8 @@ public static partial class JsonResults
         NullableString(w, "lines"u8, r.Lines);
         Numbers(w, "line_currents_a"u8, r.LineCurrentsA, 3);
         Number(w, "neutral_current_a"u8, r.NeutralCurrentA, 3);
+        Number(w, "neutral_design_current_a"u8, r.NeutralDesignCurrentA, 3);
+        Number(w, "neutral_ampacity_a"u8, r.NeutralAmpacityA, 2);
         Number(w, "limit_percent"u8, r.LimitPercent, 4);
         Number(w, "max_length_m"u8, r.MaxLengthM, 2);
         Number(w, "max_length_total_m"u8, r.MaxLengthTotalM, 2);

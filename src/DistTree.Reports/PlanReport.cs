@@ -51,7 +51,7 @@ public static class PlanReport
 
         o.WriteLine();
         o.WriteLine("The plan was proved by solving the tree again with it applied.");
-        o.WriteLine($"Caution: {Caution.Text}");
+        o.WriteLine($"Caution: {Caution.For(plan.After.Project.Rules.Code)}");
     }
 
     /// <summary>Writes the <c>upsize_plan</c> property.</summary>

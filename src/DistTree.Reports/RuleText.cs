@@ -16,13 +16,16 @@ public static class RuleText
     /// <summary>The <c>transformer_drop</c> value as written in project files.</summary>
     public static string TransformerDrop(Rules rules) => Words.TransformerDrop.Of(rules.TransformerDrop);
 
+    /// <summary>The code and edition the checks assume: <c>NEC 2020</c>.</summary>
+    public static string Code(Rules rules) => Codes.CodeRules.Describe(rules.Code);
+
     /// <summary>The <c>method</c> value as written in project files.</summary>
     public static string Method(Rules rules) => Words.Method.Of(rules.Method);
 
     /// <summary>One line summing up the rules.</summary>
     public static string Summary(Rules rules) => string.Create(
         CultureInfo.InvariantCulture,
-        $"feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, total {rules.TotalLimitPercent:0.##} %; " +
+        $"{Code(rules)}; feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, total {rules.TotalLimitPercent:0.##} %; " +
         $"branch current: {BranchCurrent(rules)}; conductor temperature: {Temperature(rules)}; transformers: {TransformerDrop(rules)}; " +
         $"ambient {rules.AmbientC:0.#} °C; terminals {rules.TerminalC} °C");
 }

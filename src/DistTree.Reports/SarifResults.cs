@@ -52,7 +52,7 @@ public static class SarifResults
             w.WriteEndArray();
             w.WriteString("columnKind", "utf16CodeUnits");
             w.WriteStartObject("properties");
-            w.WriteString("caution", Caution.Text);
+            w.WriteString("caution", Caution.For(solution.Project.Rules.Code));
             w.WriteString("project", solution.Project.Name);
             w.WriteString("sha256", solution.Project.Sha256);
             w.WriteEndObject();
@@ -117,6 +117,7 @@ public static class SarifResults
         w.WriteEndArray();
         w.WriteStartObject("properties");
         w.WriteString("subject", finding.Subject);
+        w.WriteString("reference", finding.Reference);
         JsonResults.Number(w, "value", finding.Value, 4);
         JsonResults.Number(w, "limit", finding.Limit, 4);
         w.WriteEndObject();

@@ -56,5 +56,5 @@ internal static class FindingGroupBuilder
     }
 
     /// <summary>One finding as the page lists it.</summary>
-    public static FindingItem Item(Finding f) => new(Escape(f.Subject), Escape(f.Message), Escape(Where(f.Location)));
+    public static FindingItem Item(Finding f) => new(Escape(f.Subject), Escape(f.Message), Escape(f.Reference), Escape(Where(f.Location)));
 }

@@ -38,6 +38,7 @@ internal static class MethodViewBuilder
     /// <summary>Each rule, its value in force and what it means.</summary>
     public static RuleMeaning[] Meanings(Rules r) =>
     [
+        new("code", Escape(RuleText.Code(r)), "The code whose rule set judges the design: its limits' defaults, the current each check uses, the conductor and device rules, and the clause each finding cites."),
         new("feeder_limit_percent", Limit(r.FeederLimitPercent) + " %", "The largest drop allowed in any one feeder, in percent of the voltage it carries. A run may set its own limit_percent."),
         new("branch_limit_percent", Limit(r.BranchLimitPercent) + " %", "The largest drop allowed in any one branch circuit, in percent of the circuit voltage."),
         new("total_limit_percent", Limit(r.TotalLimitPercent) + " %", "The largest sum of the percent drops from the service (or from a new origin, below) to any point of use."),

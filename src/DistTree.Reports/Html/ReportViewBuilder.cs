@@ -38,7 +38,7 @@ internal static class ReportViewBuilder
             Date = options.Date is null ? null : Escape(options.Date),
             CatalogName = Escape(s.CatalogName),
             Rules = Escape(RuleText.Summary(rules)),
-            Caution = Escape(Caution.Text),
+            Caution = Escape(Caution.For(s.Project.Rules.Code)),
             Css = css,
             VerdictClass = SummaryViewBuilder.VerdictClass(s),
             VerdictText = SummaryViewBuilder.VerdictText(s),

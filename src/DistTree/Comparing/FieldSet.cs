@@ -17,6 +17,7 @@ internal sealed class FieldSet
         var r = p.Rules;
         var set = new FieldSet()
             .Text("name", p.Name)
+            .Text("rules.code", Words.Code.Of(r.Code))
             .Number("rules.feeder_limit_percent", r.FeederLimitPercent)
             .Number("rules.branch_limit_percent", r.BranchLimitPercent)
             .Number("rules.total_limit_percent", r.TotalLimitPercent)

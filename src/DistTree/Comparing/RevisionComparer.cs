@@ -92,7 +92,7 @@ public static class RevisionComparer
         };
     }
 
-    private static RevisionInfo Info(Solution s) => new(s.Project.Name, s.Project.File, s.Project.Sha256, s.Summary);
+    private static RevisionInfo Info(Solution s) => new(s.Project.Name, s.Project.File, s.Project.Sha256, s.Summary, s.Project.Rules.Code);
 
     private static List<ElementChange> CompareElements<T>(
         IEnumerable<T> before, IEnumerable<T> after, Func<T, string> id, Func<T, T, bool> same, Func<T, FieldSet> fieldsBefore, Func<T, FieldSet> fieldsAfter)

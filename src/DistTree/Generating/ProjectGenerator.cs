@@ -33,6 +33,9 @@ public static class ProjectGenerator
     private const Raceway Indoor = Raceway.Steel;
     private const double ServiceSectionA = 4000;
 
+    // A feeder's design current over its balanced one: the allowance for the lines' imbalance (common practice).
+    private const double LineImbalanceAllowance = 1.10;
+
     private static readonly ElectricalSystem High = ElectricalSystem.Find("480Y/277")!;
     private static readonly ElectricalSystem Low = ElectricalSystem.Find("208Y/120")!;
     private static readonly double[] TransformerKva = [15, 30, 45, 75, 112.5, 150, 225, 300, 500, 750, 1000];
@@ -212,7 +215,9 @@ public static class ProjectGenerator
             else
             {
                 item.LengthFt = item.Kind != PlannedKind.Board ? random.Between(20, 200) : item.Level == 2 ? random.Between(100, 500) : random.Between(50, 300);
-                designA = 1.25 * LoadPower.CurrentA(item.Power.VoltAmperes, supply);
+                // The most loaded line carries more than the balanced current: a designer allows 10 % for the
+                // imbalance of the panels' single-phase circuits (common practice).
+                designA = 1.25 * LineImbalanceAllowance * LoadPower.CurrentA(item.Power.VoltAmperes, supply);
                 target = item.Kind != PlannedKind.Board ? 0.75 : item.Level == 2 ? 1.0 : 0.5;
                 if (item.Kind == PlannedKind.Board && designA > ServiceSectionA)
                 {

@@ -1,3 +1,4 @@
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Solving;
@@ -19,7 +20,7 @@ internal static class RunSizer
     private const int MaxSets = ProjectFiles.ValueRanges.MaxSets;
 
     private static readonly ConductorCatalog Catalog = ConductorCatalog.Standard;
-    private static readonly ProtectionRules Protection = new(Catalog);
+    private static readonly CodeRules Protection = CodeRules.For(ElectricalCode.Nec, Catalog);
 
     /// <summary>Copper sizes a designer reaches for, 14 AWG to 500 kcmil (500 kcmil is the usual paralleled size).</summary>
     private static readonly ConductorSize[] Sizes =

@@ -36,6 +36,13 @@ public enum TemperatureMode
     Fixed,
 }
 
+/// <summary>The electrical code whose rule set judges a project (<c>rules: code:</c>; see <c>Codes/CodeRules</c>).</summary>
+public enum ElectricalCode
+{
+    /// <summary>The National Electrical Code (NFPA 70).</summary>
+    Nec,
+}
+
 /// <summary>Which method's figures the findings rest on.</summary>
 public enum SolutionMethod
 {
@@ -46,9 +53,15 @@ public enum SolutionMethod
     LoadFlow,
 }
 
-/// <summary>The limits and choices of method in force for a project; defaults are common practice.</summary>
+/// <summary>
+/// The limits and choices of method in force for a project. The limits' defaults are the rule set's (see
+/// <c>CodeRules.Defaults</c>); <see cref="Default"/> is the NEC's, the default code.
+/// </summary>
 public sealed record Rules
 {
+    /// <summary>The code whose rule set judges the project.</summary>
+    public ElectricalCode Code { get; init; } = ElectricalCode.Nec;
+
     /// <summary>Limit for any one feeder, in percent of its nominal voltage.</summary>
     public double FeederLimitPercent { get; init; } = 3;
 

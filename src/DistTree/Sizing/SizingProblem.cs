@@ -1,3 +1,4 @@
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Network;
@@ -72,7 +73,7 @@ internal sealed class SizingProblem
         var options = new RunOption[]?[nodes.Count];
         var transformerSteps = new int[nodes.Count];
         var unresolvable = new List<UnresolvableLimit>();
-        var protection = new ProtectionRules(catalog);
+        var protection = CodeRules.For(project.Rules.Code, catalog);
         foreach (var row in solution.Runs)
         {
             if (row.Kind == RunResultKind.Transformer)
@@ -139,7 +140,7 @@ internal sealed class SizingProblem
     }
 
     private static IEnumerable<RunOption> Candidates(
-        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, ProtectionRules protection, int? maxSteps, double dropFactor)
+        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, CodeRules protection, int? maxSteps, double dropFactor)
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
@@ -181,7 +182,7 @@ internal sealed class SizingProblem
     }
 
     // The run's current and device rules at a choice (see ProtectionRules).
-    private static bool MeetsCurrentRules(ProtectionRules protection, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
+    private static bool MeetsCurrentRules(CodeRules protection, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
     {
         if (ampacityA is not { } ampacity)
         {

@@ -1,3 +1,4 @@
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
@@ -16,14 +17,9 @@ namespace DistTree.Solving;
 public sealed class DropSolver
 {
     private readonly ConductorCatalog _catalog;
-    private readonly ProtectionRules _protection;
 
     /// <summary>Creates a solver that takes conductor data from <paramref name="catalog"/>.</summary>
-    public DropSolver(ConductorCatalog catalog)
-    {
-        _catalog = catalog;
-        _protection = new ProtectionRules(catalog);
-    }
+    public DropSolver(ConductorCatalog catalog) => _catalog = catalog;
 
     /// <summary>A solver on the embedded catalogue.</summary>
     public static DropSolver Standard { get; } = new(ConductorCatalog.Standard);
@@ -37,30 +33,49 @@ public sealed class DropSolver
         using var sums = new PowerSums(network);
         var assigned = new Phases[n];
         PhaseAssignment.Assign(network, sums.Power, assigned);
-        var phases = PhaseCurrents.Solve(network, PhaseFrame.Of(network), sums.Power, assigned);
+        var frame = PhaseFrame.Of(network);
+        var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned);
+        var continuous = ContinuousCurrents(network, frame, sums, assigned);
+        var code = CodeRules.For(network.Project.Rules.Code, _catalog);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same
         // impedances, whose drops are recorded beside the percent sum's. A run's findings follow from its drop: on
         // the percent sum they are found with its figures; on the load flow, once it is solved.
         using var runs = new RunRows(sums.Has, n);
-        var findings = RunDrops.Solve(_catalog, _protection, network, sums, phases, runs);
+        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, continuous, runs);
         var (flow, voltagesTaken) = LoadFlow.Solve(network, phases, sums.Power, runs);
         using var voltages = voltagesTaken;
         LoadFlowDrops.Record(network, phases, runs, flow, voltages);
         if (network.Project.Rules.Method != SolutionMethod.PercentSum)
         {
-            findings += RunFindings.OnLoadFlow(network.NodeArray, runs, _protection);
+            findings += RunFindings.OnLoadFlow(network.NodeArray, runs, code);
         }
 
         // The end points' totals, findings and motor starts; then each run's reach from them.
-        var points = EndPointTotals.Solve(network, sums, phases, runs, flow, voltages);
+        var points = EndPointTotals.Solve(network, sums, phases, runs, flow, voltages, code);
         Reach.Add(network, runs, points.EndPoints.Rows);
         var solved = new SolvedRows(network, phases, sums.Power, new SolvedRuns(runs.Rows, runs.Findings), points.EndPoints);
-        return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow);
+        return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow, code);
+    }
+
+    // Per node × 3, the continuous part of each line's current (the continuous loads alone, on the same lines), or
+    // null where no load is continuous.
+    private static System.Numerics.Complex[]? ContinuousCurrents(DistributionNetwork network, PhaseFrame frame, PowerSums sums, Phases[] assigned)
+    {
+        var continuous = sums.Continuous;
+        for (var i = 0; i < network.NodeArray.Length; i++)
+        {
+            if (continuous[i].VoltAmperes > 0)
+            {
+                return PhaseCurrents.Solve(network, frame, continuous, assigned, continuousOnly: true).Currents;
+            }
+        }
+
+        return null;
     }
 
     // The solution over the solved rows, with each panel's phase loads.
-    private Solution Result(DistributionNetwork network, SolvedRows solved, int runCount, int findings, int worstIndex, LoadFlowResult flow)
+    private Solution Result(DistributionNetwork network, SolvedRows solved, int runCount, int findings, int worstIndex, LoadFlowResult flow, CodeRules code)
     {
         var endPoints = new ViewList<EndPointResult>(solved.EndPoints.Length, e => new EndPointResult(solved, e));
         EndPointResult? worst = worstIndex < 0 ? null : endPoints[worstIndex];
@@ -74,6 +89,7 @@ public sealed class DropSolver
             LoadFlow = flow,
             Panels = Panels(network, solved.Phases),
             CatalogName = _catalog.SourceName,
+            Code = code,
         };
     }
 

@@ -26,6 +26,12 @@ public enum FindingKind
 
     /// <summary>A motor's terminals dip more than the limit while it starts.</summary>
     MotorStart,
+
+    /// <summary>A neutral's current exceeds its allowable ampacity.</summary>
+    NeutralAmpacity,
+
+    /// <summary>The design current exceeds the overcurrent device's rating.</summary>
+    DeviceBelowLoad,
 }
 
 /// <summary>
@@ -41,20 +47,22 @@ public sealed record Finding
 
     /// <summary>A finding with its sentence.</summary>
     /// <param name="kind">Which limit.</param>
+    /// <param name="reference">The clause of the code in force the limit comes from (see <c>CodeRules.Cite</c>).</param>
     /// <param name="subject">The id of the run or end point.</param>
     /// <param name="value">The figure found (percent, amperes or kVA as the kind says).</param>
     /// <param name="limit">The limit it exceeds, in the same unit.</param>
     /// <param name="message">One sentence with the figures, for people.</param>
     /// <param name="location">Where the run or circuit is in the project file.</param>
-    public Finding(FindingKind kind, string subject, double value, double limit, string message, SourceLocation location)
-        : this(kind, subject, value, limit, location) => _message = message;
+    public Finding(FindingKind kind, string reference, string subject, double value, double limit, string message, SourceLocation location)
+        : this(kind, reference, subject, value, limit, location) => _message = message;
 
-    private Finding(FindingKind kind, string subject, double value, double limit, FormattableString text, SourceLocation location)
-        : this(kind, subject, value, limit, location) => _text = text;
+    private Finding(FindingKind kind, string reference, string subject, double value, double limit, FormattableString text, SourceLocation location)
+        : this(kind, reference, subject, value, limit, location) => _text = text;
 
-    private Finding(FindingKind kind, string subject, double value, double limit, SourceLocation location)
+    private Finding(FindingKind kind, string reference, string subject, double value, double limit, SourceLocation location)
     {
         Kind = kind;
+        Reference = reference;
         Subject = subject;
         Value = value;
         Limit = limit;
@@ -63,6 +71,9 @@ public sealed record Finding
 
     /// <summary>Which limit.</summary>
     public FindingKind Kind { get; }
+
+    /// <summary>The clause of the code in force the limit comes from, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
+    public string Reference { get; }
 
     /// <summary>The id of the run or end point.</summary>
     public string Subject { get; }
@@ -83,14 +94,14 @@ public sealed record Finding
     public string Code => FindingKinds.Of(Kind).Code;
 
     /// <summary>A finding whose sentence <paramref name="text"/> is written, in the invariant culture, when it is first read.</summary>
-    internal static Finding Written(FindingKind kind, string subject, double value, double limit, FormattableString text, SourceLocation location) =>
-        new(kind, subject, value, limit, text, location);
+    internal static Finding Written(FindingKind kind, string reference, string subject, double value, double limit, FormattableString text, SourceLocation location) =>
+        new(kind, reference, subject, value, limit, text, location);
 
     /// <inheritdoc/>
     public bool Equals(Finding? other) =>
-        other is not null && Kind == other.Kind && Subject == other.Subject && Value.Equals(other.Value) && Limit.Equals(other.Limit)
+        other is not null && Kind == other.Kind && Reference == other.Reference && Subject == other.Subject && Value.Equals(other.Value) && Limit.Equals(other.Limit)
         && Message == other.Message && Location.Equals(other.Location);
 
     /// <inheritdoc/>
-    public override int GetHashCode() => HashCode.Combine(Kind, Subject, Value, Limit, Message, Location);
+    public override int GetHashCode() => HashCode.Combine(Kind, Reference, Subject, Value, Limit, Message, Location);
 }

@@ -51,5 +51,11 @@ public static class FindingKinds
         FindingKind.MotorStart => new(
             kind, "motor_start", "Motor terminals dip over the limit while starting", "Motor starting dip at the terminals", "MotorStart",
             "A motor's terminal voltage dips more than the motor-start limit while it starts.", "%", "the terminal dip", "the motor-start limit"),
+        FindingKind.NeutralAmpacity => new(
+            kind, "neutral_ampacity", "Neutral current above its ampacity", "Neutral ampacity", "NeutralAmpacity",
+            "A run's neutral carries more current than its corrected ampacity.", "A", "the neutral's current", "the neutral's allowable ampacity"),
+        FindingKind.DeviceBelowLoad => new(
+            kind, "device_below_load", "Design current above the overcurrent device's rating", "Overcurrent device rating (load)", "DeviceBelowLoad",
+            "The design current of a run is above the rating of its overcurrent device.", "A", "the design current", "the device rating"),
     };
 }

@@ -74,8 +74,20 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>Line current in amperes the drop is computed at.</summary>
     public double CurrentA => Row.CurrentA;
 
-    /// <summary>Design current in amperes for the ampacity check (125 % of continuous load plus the rest).</summary>
+    /// <summary>
+    /// Design current in amperes for the ampacity and device checks: the most loaded line's, as the code in force
+    /// counts it (under the NEC, 125 % of that line's continuous current plus the rest).
+    /// </summary>
     public double DesignCurrentA => Row.DesignCurrentA;
+
+    /// <summary>The line whose design current <see cref="DesignCurrentA"/> is (<c>A</c>, <c>B</c> or <c>C</c>), or null for a transformer.</summary>
+    public string? DesignLine => Run is null ? null : ((char)('A' + Row.DesignLine)).ToString();
+
+    /// <summary>The neutral's design current in amperes, as the code in force counts it, or null where the run has no neutral.</summary>
+    public double? NeutralDesignCurrentA => Run is null ? null : Row.NeutralDesignCurrentA;
+
+    /// <summary>The neutral's allowable ampacity of all sets, in amperes, or null where the run has no neutral or the table has none.</summary>
+    public double? NeutralAmpacityA => Run is null ? null : Row.NeutralAmpacityA;
 
     /// <summary>The current in each line (A, B, C; as many as the run's system has), amperes; empty for a transformer.</summary>
     public IReadOnlyList<double> LineCurrentsA => Run is { } run ? _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.Source.System)) : [];

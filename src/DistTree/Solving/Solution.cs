@@ -39,6 +39,9 @@ public sealed record Solution
     /// <summary>The conductor catalogue's name.</summary>
     public required string CatalogName { get; init; }
 
+    /// <summary>The rule set that judged the project (its code, edition and clauses).</summary>
+    public required Codes.CodeRules Code { get; init; }
+
     /// <summary>Every finding, runs' first then end points', in network order.</summary>
     public IEnumerable<Finding> AllFindings => Runs.SelectMany(r => r.Findings).Concat(EndPoints.SelectMany(e => e.Findings));
 

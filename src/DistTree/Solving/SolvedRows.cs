@@ -82,6 +82,9 @@ internal struct RunRow
     public bool IsTransformer;
     public double CurrentA;
     public double DesignCurrentA;
+    public byte DesignLine;
+    public double? NeutralDesignCurrentA;
+    public double? NeutralAmpacityA;
     public double TemperatureC;
     public double ResistanceOhmPerKm;
     public double ReactanceOhmPerKm;

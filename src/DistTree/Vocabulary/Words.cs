@@ -26,6 +26,9 @@ public static class Words
     public static WordTable<TransformerDropMode> TransformerDrop { get; } = new(
         "transformer_drop", [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)]);
 
+    /// <summary><c>rules: code</c>: the code whose rule set judges the project.</summary>
+    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec)]);
+
     /// <summary><c>rules: method</c>.</summary>
     public static WordTable<SolutionMethod> Method { get; } = new(
         "method", [("percent_sum", SolutionMethod.PercentSum), ("load_flow", SolutionMethod.LoadFlow)]);

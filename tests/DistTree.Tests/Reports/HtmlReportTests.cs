@@ -203,7 +203,7 @@ public sealed class HtmlReportTests
         Assert.Contains(s.Project.File, meta, StringComparison.Ordinal);
         Assert.Contains(s.Project.Sha256, meta, StringComparison.Ordinal);
         Assert.Contains(RuleText.Summary(s.Project.Rules), meta, StringComparison.Ordinal);
-        Assert.Equal(Caution.Text, doc.QuerySelector("aside.caution p")!.TextContent);
+        Assert.Equal(Caution.For(DistTree.Model.ElectricalCode.Nec), doc.QuerySelector("aside.caution p")!.TextContent);
     }
 
     [Fact]
@@ -217,8 +217,8 @@ public sealed class HtmlReportTests
         Assert.Equal(s.Summary.Findings.ToString(CultureInfo.InvariantCulture), tiles["findings"]);
 
         var rows = doc.QuerySelectorAll("table.limits tbody tr").Select(r => r.QuerySelectorAll("td").Select(c => c.TextContent).ToArray()).ToArray();
-        Assert.Equal(7, rows.Length);
-        foreach (var (name, kind) in new[] { ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart) })
+        Assert.Equal(9, rows.Length);
+        foreach (var (name, kind) in new[] { ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad) })
         {
             var row = rows.Single(r => r[0] == name);
             var over = s.AllFindings.Count(f => f.Kind == kind);
@@ -226,9 +226,10 @@ public sealed class HtmlReportTests
             Assert.Equal(over > 0 ? "fail" : "pass", row[5]);
         }
 
-        // Every finding is listed with its location.
-        var items = doc.QuerySelectorAll("#findings table.finding-list tbody tr").Select(r => r.QuerySelectorAll("td")[2].TextContent).ToArray();
-        Assert.Equal(s.AllFindings.Select(f => f.Location.ToString()).Order(StringComparer.Ordinal), items.Order(StringComparer.Ordinal));
+        // Every finding is listed with the clause it cites and its location.
+        var cells = doc.QuerySelectorAll("#findings table.finding-list tbody tr").Select(r => r.QuerySelectorAll("td")).ToArray();
+        Assert.Equal(s.AllFindings.Select(f => f.Location.ToString()).Order(StringComparer.Ordinal), cells.Select(c => c[3].TextContent).Order(StringComparer.Ordinal));
+        Assert.Equal(s.AllFindings.Select(f => f.Reference).Order(StringComparer.Ordinal), cells.Select(c => c[2].TextContent).Order(StringComparer.Ordinal));
     }
 
     [Fact]

@@ -98,14 +98,21 @@ public sealed class DropSolverTests
         Assert.True(s.HasFindings);
     }
 
-    // Common practice: a continuous load's design current is 125 % of it (NEC 210.19(A)(1), memory).
+    // A continuous load's design current is 125 % of it (NEC 210.19(A)(1)(a), memory), and the device must be rated
+    // for it (NEC 210.20(A), memory): 16 A continuous is 20 A, within a 20 A breaker and 12 AWG's 25 A; 18 A
+    // continuous is 22.5 A, still within 12 AWG but above the breaker.
     [Fact]
     public void Solve_ContinuousLoad_DesignCurrentIs125Percent()
     {
+        var within = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
+            "{ id: \"1\", poles: 1, ocpd: 20, continuous: true, load: { amps: 16 }, run: { length: 10, size: 12 AWG } }"));
+        Assert.Equal(20, within.Branch().DesignCurrentA, 6);
+        Assert.Empty(within.AllFindings);
         var s = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
             "{ id: \"1\", poles: 1, ocpd: 20, continuous: true, load: { amps: 18 }, run: { length: 10, size: 12 AWG } }"));
         Assert.Equal(22.5, s.Branch().DesignCurrentA, 6);
-        Assert.Empty(s.AllFindings);
+        var device = Assert.Single(s.AllFindings);
+        Assert.Equal(("device_below_load", "NEC 210.20(A)"), (device.Code, device.Reference));
         var over = SolverHarness.Solve(SolverHarness.OneCircuit("120/240", "imperial",
             "{ id: \"1\", poles: 1, ocpd: 20, continuous: true, load: { amps: 21 }, run: { length: 10, size: 12 AWG } }"));
         Assert.Contains(over.AllFindings, f => f.Code == "ampacity");

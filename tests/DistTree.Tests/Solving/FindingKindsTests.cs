@@ -38,7 +38,7 @@ public sealed class FindingKindsTests
     [Fact]
     public void Code_OfAFinding_IsItsKindsCode()
     {
-        var finding = new Finding(FindingKind.MotorStart, "P1/3", 16, 15, "motor P1/3 dips", DistTree.Diagnostics.SourceLocation.None);
+        var finding = new Finding(FindingKind.MotorStart, "starting voltage (common practice; no NEC clause)", "P1/3", 16, 15, "motor P1/3 dips", DistTree.Diagnostics.SourceLocation.None);
 
         Assert.Equal("motor_start", finding.Code);
         Assert.Equal(FindingKinds.Of(FindingKind.MotorStart).Code, finding.Code);

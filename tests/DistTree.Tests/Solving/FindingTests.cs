@@ -16,7 +16,7 @@ public sealed class FindingTests
             // A comma decimal separator where the culture is German (common practice in its number formats).
             CultureInfo.CurrentCulture = new CultureInfo("de-DE");
             var dropPercent = 3.456;
-            var finding = Finding.Written(FindingKind.BranchDrop, "LP-1/3", dropPercent, 3, $"drop {dropPercent:0.00} %", SourceLocation.None);
+            var finding = Finding.Written(FindingKind.BranchDrop, "NEC 210.19(A)(1) Informational Note No. 4", "LP-1/3", dropPercent, 3, $"drop {dropPercent:0.00} %", SourceLocation.None);
 
             Assert.Equal("drop 3.46 %", finding.Message);
         }
@@ -30,8 +30,8 @@ public sealed class FindingTests
     public void Written_EqualsTheSameFindingGivenItsSentence()
     {
         var limit = 3.0;
-        var written = Finding.Written(FindingKind.FeederDrop, "F-1", 3.5, limit, $"over {limit:0.##} %", SourceLocation.None);
-        var given = new Finding(FindingKind.FeederDrop, "F-1", 3.5, limit, "over 3 %", SourceLocation.None);
+        var written = Finding.Written(FindingKind.FeederDrop, "NEC 215.2(A)(1) Informational Note No. 2", "F-1", 3.5, limit, $"over {limit:0.##} %", SourceLocation.None);
+        var given = new Finding(FindingKind.FeederDrop, "NEC 215.2(A)(1) Informational Note No. 2", "F-1", 3.5, limit, "over 3 %", SourceLocation.None);
 
         Assert.Equal(given, written);
         Assert.Equal(given.GetHashCode(), written.GetHashCode());

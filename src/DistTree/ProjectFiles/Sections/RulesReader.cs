@@ -9,7 +9,7 @@ internal sealed class RulesReader(SectionContext context)
 {
     private ValueReader Values => context.Values;
 
-    /// <summary>Reads the <c>rules</c> section, when given; every rule it does not state keeps its default.</summary>
+    /// <summary>Reads the <c>rules</c> section, when given; every rule it does not state keeps its code's default.</summary>
     public void ReadRules(MappingReader? section)
     {
         if (section is not { } m)
@@ -17,7 +17,14 @@ internal sealed class RulesReader(SectionContext context)
             return;
         }
 
-        var rules = Rules.Default;
+        // The code first: its rule set's defaults are what every rule not stated here keeps.
+        var code = ElectricalCode.Nec;
+        if (m.Optional("code") is { } codeNode && Values.Choice(codeNode, "'code'", "code", Words.Code.Pairs) is { } chosen)
+        {
+            code = chosen;
+        }
+
+        var rules = Codes.CodeRules.DefaultsOf(code);
         if (context.InRange(m, "feeder_limit_percent", ValueRanges.LimitPercent) is { } feeder)
         {
             rules = rules with { FeederLimitPercent = feeder };

@@ -46,6 +46,7 @@ public static class StarterProject
     private static void WriteRules(StringBuilder o, Rules rules)
     {
         Line(o, "rules:", "the defaults, written out to be changed");
+        Line(o, $"  code: {Words.Code.Of(rules.Code)}", $"the code whose rules judge the design ({Codes.CodeRules.Describe(rules.Code)}); " + Choices(Words.Code.Words));
         Line(o, $"  feeder_limit_percent: {N(rules.FeederLimitPercent)}", "the most drop allowed in one feeder");
         Line(o, $"  branch_limit_percent: {N(rules.BranchLimitPercent)}", "... in one branch circuit");
         Line(o, $"  total_limit_percent: {N(rules.TotalLimitPercent)}", "... from the service to the farthest point of use");

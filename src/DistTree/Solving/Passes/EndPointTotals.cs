@@ -1,5 +1,6 @@
 using System.Buffers;
 using System.Numerics;
+using DistTree.Codes;
 using DistTree.Model;
 using DistTree.Network;
 
@@ -25,6 +26,8 @@ internal sealed class EndPointTotals
     private readonly bool _newOrigin;
     private readonly bool _onLoadFlow;
     private readonly double _limitPercent;
+    private readonly string _totalClause;
+    private readonly string _motorClause;
 
     // Per node, its depth (the service is 1); per end point, its node and the start of its path (see Number).
     private readonly int[] _depth;
@@ -43,8 +46,10 @@ internal sealed class EndPointTotals
     private int _findingCount;
     private readonly Lock _gate = new();
 
-    private EndPointTotals(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages)
+    private EndPointTotals(DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages, CodeRules code)
     {
+        _totalClause = code.Cite(CodeCheck.TotalDrop);
+        _motorClause = code.Cite(CodeCheck.MotorStart);
         var rules = network.Project.Rules;
         _network = network;
         _nodes = network.NodeArray;
@@ -63,11 +68,14 @@ internal sealed class EndPointTotals
         _pathStart = Scratch.RentToFill<int>(_nodes.Length + 1);
     }
 
-    /// <summary>Solves every end point of <paramref name="network"/>; gives the end points, the worst (−1 without any) and the number of findings.</summary>
+    /// <summary>
+    /// Solves every end point of <paramref name="network"/>, its findings judged by <paramref name="code"/>; gives the end
+    /// points, the worst (−1 without any) and the number of findings.
+    /// </summary>
     public static (SolvedEndPoints EndPoints, int Worst, int Findings) Solve(
-        DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages)
+        DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs, LoadFlowResult flow, PhaseVoltages voltages, CodeRules code)
     {
-        var pass = new EndPointTotals(network, sums, phases, runs, flow, voltages);
+        var pass = new EndPointTotals(network, sums, phases, runs, flow, voltages, code);
         pass.Number();
         ParallelRanges.For(pass._count, pass.SolveRange);
         var n = pass._nodes.Length;
@@ -205,6 +213,7 @@ internal sealed class EndPointTotals
             var circuit = _nodes[index].Circuit!;
             (found ??= []).Add(Finding.Written(
                 FindingKind.TotalDrop,
+                _totalClause,
                 circuit.FullId,
                 total,
                 limit,
@@ -217,6 +226,7 @@ internal sealed class EndPointTotals
             var circuit = _nodes[index].Circuit!;
             (found ??= []).Add(Finding.Written(
                 FindingKind.MotorStart,
+                _motorClause,
                 circuit.FullId,
                 start.TerminalDipPercent,
                 start.LimitPercent,

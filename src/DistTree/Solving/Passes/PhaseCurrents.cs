@@ -19,12 +19,14 @@ internal sealed class PhaseCurrents
     private readonly ComplexPower[] _power;
     private readonly Phases[] _assigned;
     private readonly Complex[] _currents;
+    private readonly bool _continuousOnly;
 
     // Per transformer node, the secondary's line currents (A) on its bus.
     private readonly Dictionary<int, Complex[]> _secondary = [];
 
-    private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned)
+    private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool continuousOnly)
     {
+        _continuousOnly = continuousOnly;
         _network = network;
         _frame = frame;
         _power = power;
@@ -34,11 +36,12 @@ internal sealed class PhaseCurrents
 
     /// <summary>
     /// The line currents of <paramref name="network"/> in <paramref name="frame"/>, whose loads are
-    /// <paramref name="power"/> on the lines <paramref name="assigned"/> (see <see cref="PhaseAssignment"/>).
+    /// <paramref name="power"/> on the lines <paramref name="assigned"/> (see <see cref="PhaseAssignment"/>); with
+    /// <paramref name="continuousOnly"/>, of the continuous loads alone (<paramref name="power"/> then their power).
     /// </summary>
-    public static PhaseFlow Solve(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned)
+    public static PhaseFlow Solve(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool continuousOnly = false)
     {
-        var pass = new PhaseCurrents(network, frame, power, assigned);
+        var pass = new PhaseCurrents(network, frame, power, assigned, continuousOnly);
         pass.Accumulate();
         return new PhaseFlow(frame, assigned, pass._currents, pass._secondary);
     }
@@ -82,6 +85,11 @@ internal sealed class PhaseCurrents
             {
                 var parent = node.ParentIndex;
                 var circuit = node.Circuit;
+                if (_continuousOnly && !circuit.Continuous)
+                {
+                    continue;
+                }
+
                 if (circuit.Points.Count == 0)
                 {
                     LoadCurrents(_power[i], circuit.Load.Model, _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], _frame.NoLoad[parent], mine);

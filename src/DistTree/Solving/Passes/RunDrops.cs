@@ -1,4 +1,5 @@
 using System.Numerics;
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Network;
@@ -16,21 +17,23 @@ namespace DistTree.Solving.Passes;
 internal sealed class RunDrops
 {
     private readonly ConductorCatalog _catalog;
-    private readonly ProtectionRules _protection;
+    private readonly CodeRules _code;
     private readonly Rules _rules;
     private readonly double _frequencyHz;
     private readonly RunElectrics.Bases _bases;
     private readonly NetworkNode[] _nodes;
     private readonly PowerSums _sums;
     private readonly PhaseFlow _phases;
+    private readonly Complex[]? _continuous;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
     private int _findings;
 
-    private RunDrops(ConductorCatalog catalog, ProtectionRules protection, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
+    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
     {
         _catalog = catalog;
-        _protection = protection;
+        _code = code;
+        _continuous = continuous;
         _rules = network.Project.Rules;
         _frequencyHz = network.Project.Service.FrequencyHz;
         _bases = new RunElectrics.Bases(catalog, _rules, _frequencyHz);
@@ -43,12 +46,13 @@ internal sealed class RunDrops
 
     /// <summary>
     /// Fills <paramref name="runs"/>' rows and current-lengths, and on the percent sum their findings; gives the number
-    /// of findings.
+    /// of findings. <paramref name="continuous"/> holds, per node × 3, the continuous part of each line's current (null
+    /// where no load is continuous).
     /// </summary>
     public static int Solve(
-        ConductorCatalog catalog, ProtectionRules protection, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
+        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
     {
-        var pass = new RunDrops(catalog, protection, network, sums, phases, runs);
+        var pass = new RunDrops(catalog, code, network, sums, phases, continuous, runs);
         ParallelRanges.For(pass._nodes.Length, pass.SolveRange);
         return pass._findings;
     }
@@ -137,7 +141,7 @@ internal sealed class RunDrops
     private void SolveRange(int start, int end)
     {
         var (nodes, rows, moments, findings) = (_nodes, _runs.Rows, _runs.Moments, _runs.Findings);
-        var (incomingRow, transformerRow, power, continuous) = (_runs.IncomingRow, _runs.TransformerRow, _sums.Power, _sums.Continuous);
+        var (incomingRow, transformerRow, power) = (_runs.IncomingRow, _runs.TransformerRow, _sums.Power);
         var (lengthM, limitPercent) = (_runs.LengthM, _runs.LimitPercent);
         var found = 0;
         for (var i = start; i < end; i++)
@@ -147,10 +151,10 @@ internal sealed class RunDrops
             {
                 var r = incomingRow[i];
                 ref var row = ref rows[r];
-                SolveRun(ref row, run, continuous[i], moments.AsSpan(r * 3, 3));
+                SolveRun(ref row, run, moments.AsSpan(r * 3, 3));
                 if (_findingsWithRuns)
                 {
-                    found += (findings[r] = RunFindings.Of(ref row, run, _protection))?.Count ?? 0;
+                    found += (findings[r] = RunFindings.Of(ref row, run, _code))?.Count ?? 0;
                 }
 
                 lengthM[r] = run.Conductors.LengthM;
@@ -160,7 +164,7 @@ internal sealed class RunDrops
             if (node.Equipment?.Transformer is { } transformer)
             {
                 var r = transformerRow[i];
-                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases))?.Count ?? 0;
+                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, _code))?.Count ?? 0;
             }
         }
 
@@ -168,7 +172,7 @@ internal sealed class RunDrops
     }
 
     // A run's figures, and into m its current-lengths (see Moments).
-    private void SolveRun(ref RunRow row, NetworkRun run, ComplexPower continuousPart, Span<Complex> m)
+    private void SolveRun(ref RunRow row, NetworkRun run, Span<Complex> m)
     {
         var supply = run.Supply;
         var conductors = run.Conductors;
@@ -176,7 +180,6 @@ internal sealed class RunDrops
         var lineA = _phases.MaxLineCurrentA(index);
         var points = run.Target.Circuit?.Points ?? [];
         var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(lineA, conductors.OcpdA, _rules.BranchCurrent) : lineA;
-        var designA = _protection.DesignCurrentA(_sums.Power[index], continuousPart, supply);
         var figures = RunElectrics.Compute(_catalog, _rules, conductors, conductors.Size, conductors.Sets, _frequencyHz, currentA, _bases.Of(conductors));
         Moments(run, _phases, LineScale(currentA, lineA), m);
 
@@ -199,11 +202,18 @@ internal sealed class RunDrops
             }
         }
 
+        var (designA, designLine, neutralA) = DesignCurrents(run);
+        double? neutralAmpacityA = neutralA is null ? null
+            : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC) * conductors.Sets
+            : figures.AmpacityA;
         row = new RunRow
         {
             Node = index,
             CurrentA = currentA,
             DesignCurrentA = designA,
+            DesignLine = designLine,
+            NeutralDesignCurrentA = neutralA,
+            NeutralAmpacityA = neutralAmpacityA,
             TemperatureC = figures.TemperatureC,
             ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
             ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
@@ -214,6 +224,34 @@ internal sealed class RunDrops
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
         };
+    }
+
+    // A run's design currents, as the code in force counts them from each line's current and its continuous part: the
+    // most loaded line's and which line that is, and the neutral's where the run's bus has one.
+    private (double DesignA, byte Line, double? NeutralA) DesignCurrents(NetworkRun run)
+    {
+        var index = run.Target.Index;
+        var i = _phases.Currents.AsSpan(index * 3, 3);
+        var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
+        var (worst, line) = (0.0, (byte)0);
+        for (var x = 0; x < 3; x++)
+        {
+            var design = _code.DesignCurrentA(i[x], c.IsEmpty ? Complex.Zero : c[x], protectedByDevice: true);
+            if (design > worst || double.IsNaN(design))
+            {
+                (worst, line) = (design, (byte)x);
+            }
+        }
+
+        double? neutral = null;
+        if (run.Source.System.HasNeutral)
+        {
+            var returned = -(i[0] + i[1] + i[2]);
+            var continuousReturn = c.IsEmpty ? Complex.Zero : -(c[0] + c[1] + c[2]);
+            neutral = _code.DesignCurrentA(returned, continuousReturn, protectedByDevice: false);
+        }
+
+        return (worst, line, neutral);
     }
 
     // A run's length in km per set: the sets share the current.

@@ -1,17 +1,18 @@
+using DistTree.Codes;
 using DistTree.Network;
 using DistTree.Vocabulary;
 
 namespace DistTree.Solving.Passes;
 
 /// <summary>
-/// A run's findings: its drop over its own limit, and the current and device rules of <see cref="ProtectionRules"/>.
+/// A run's findings: its drop over its own limit, and the conductor and device rules of the code in force (see <see cref="CodeRules"/>).
 /// On the percent sum they are found in the runs' pass (see <see cref="RunDrops"/>); on the load flow, whose drops
 /// count then, in a pass of their own once it is solved (see <see cref="OnLoadFlow"/>).
 /// </summary>
 internal static class RunFindings
 {
     /// <summary>The findings of <paramref name="run"/>, whose figures are <paramref name="r"/>, or null for none.</summary>
-    public static List<Finding>? Of(ref RunRow r, NetworkRun run, ProtectionRules protection)
+    public static List<Finding>? Of(ref RunRow r, NetworkRun run, CodeRules code)
     {
         List<Finding>? findings = null;
         var conductors = run.Conductors;
@@ -23,6 +24,7 @@ internal static class RunFindings
         {
             (findings ??= []).Add(Finding.Written(
                 branch ? FindingKind.BranchDrop : FindingKind.FeederDrop,
+                code.Cite(branch ? CodeCheck.BranchDrop : CodeCheck.FeederDrop),
                 run.Id,
                 r.DropPercent,
                 limit,
@@ -30,11 +32,11 @@ internal static class RunFindings
                 conductors.Location));
         }
 
-        return protection.AddFindings(findings, run, r.DesignCurrentA, r.AmpacityA);
+        return code.AddFindings(findings, run, new CurrentFigures(r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA));
     }
 
     /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>
-    public static int OnLoadFlow(NetworkNode[] nodes, RunRows runs, ProtectionRules protection)
+    public static int OnLoadFlow(NetworkNode[] nodes, RunRows runs, CodeRules code)
     {
         var (rows, findings) = (runs.Rows, runs.Findings);
         var count = 0;
@@ -46,7 +48,7 @@ internal static class RunFindings
                 ref var row = ref rows[r];
                 if (!row.IsTransformer)
                 {
-                    found += (findings[r] = Of(ref row, nodes[row.Node].Incoming!, protection))?.Count ?? 0;
+                    found += (findings[r] = Of(ref row, nodes[row.Node].Incoming!, code))?.Count ?? 0;
                 }
             }
 

@@ -1,3 +1,4 @@
+using DistTree.Codes;
 using DistTree.Network;
 
 namespace DistTree.Solving.Passes;
@@ -13,9 +14,9 @@ internal static class TransformerRegulation
 {
     /// <summary>
     /// Fills the row of the transformer <paramref name="data"/> at <paramref name="node"/>, carrying
-    /// <paramref name="carried"/>; gives its findings, or null for none.
+    /// <paramref name="carried"/>; gives its findings (judged by <paramref name="code"/>), or null for none.
     /// </summary>
-    public static List<Finding>? Solve(ref RunRow row, NetworkNode node, Model.TransformerData data, ComplexPower carried, PhaseFlow phases)
+    public static List<Finding>? Solve(ref RunRow row, NetworkNode node, Model.TransformerData data, ComplexPower carried, PhaseFlow phases, CodeRules code)
     {
         var supply = data.Secondary.FeederSupply;
         var model = phases.Frame.Models[node.Index]!;
@@ -38,6 +39,7 @@ internal static class TransformerRegulation
         {
             findings = [Finding.Written(
                 FindingKind.TransformerOverload,
+                code.Cite(CodeCheck.TransformerLoading),
                 node.Id,
                 carried.VoltAmperes / 1000.0,
                 data.Kva,

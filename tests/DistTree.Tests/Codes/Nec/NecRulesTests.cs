@@ -1,14 +1,17 @@
+using System.Numerics;
+using DistTree.Codes;
+using DistTree.Codes.Nec;
 using DistTree.Conductors;
-using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Solving;
+using DistTree.Tests.Solving;
 
-namespace DistTree.Tests.Solving;
+namespace DistTree.Tests.Codes.Nec;
 
-public sealed class ProtectionRulesTests
+public sealed class NecRulesTests
 {
-    private static readonly ProtectionRules Rules = new(ConductorCatalog.Standard);
+    private static readonly NecRules Rules = new(ConductorCatalog.Standard);
 
     // NEC 240.6(A) (memory; verify against the edition in force): the standard ratings of fuses and inverse-time
     // circuit breakers start 15, 20, 25 … in steps of 5 to 50, then 10 to 110, and end at 6000 A. Checked by their
@@ -67,15 +70,51 @@ public sealed class ProtectionRulesTests
     public void SmallConductorPermits_SmallConductorRule(string size, Material material, int sets, double ocpdA, bool expected) =>
         Assert.Equal(expected, Rules.SmallConductorPermits(ocpdA, ConductorSize.Parse(size), material, sets));
 
-    // 125 % of the continuous part plus the rest (NEC 210.19(A)(1), 215.2(A)(1); memory): at 120 V, 1200 VA
-    // continuous and 1200 VA not is (1.25 × 1200 + 1200) / 120 = 22.5 A.
+    // 125 % of the continuous part plus the rest for a line (NEC 210.19(A)(1)(a), 215.2(A)(1)(a); memory): 10 A
+    // continuous and 10 A not is 1.25 × 10 + 10 = 22.5 A. A neutral, which no device opens, at 100 %
+    // (210.19(A)(1) Exception No. 2, 215.2(A)(1) Exception No. 3; memory): 20 A.
     [Fact]
-    public void DesignCurrentA_ContinuousPart_IsTakenAt125Percent()
+    public void DesignCurrentA_ContinuousPart_IsTakenAt125PercentOnALineOnly()
     {
-        var supply = new CircuitSupply(120, 1);
-        var continuous = new ComplexPower(1200, 0);
-        Assert.Equal(22.5, Rules.DesignCurrentA(new ComplexPower(2400, 0), continuous, supply), 9);
-        Assert.Equal(20, Rules.DesignCurrentA(new ComplexPower(2400, 0), ComplexPower.Zero, supply), 9);
+        var carried = new Complex(20, 0);
+        var continuous = new Complex(10, 0);
+        Assert.Equal(22.5, Rules.DesignCurrentA(carried, continuous, protectedByDevice: true), 9);
+        Assert.Equal(20, Rules.DesignCurrentA(carried, Complex.Zero, protectedByDevice: true), 9);
+        Assert.Equal(20, Rules.DesignCurrentA(carried, continuous, protectedByDevice: false), 9);
+    }
+
+    // The device is rated for the design current (NEC 210.20(A), 215.3; memory): 110 A on a 100 A breaker is a
+    // finding citing the branch-circuit clause; 100 A on it is not.
+    [Fact]
+    public void AddFindings_LoadAboveDevice_CitesTheDeviceRule()
+    {
+        var found = Rules.AddFindings(null, RunOf("2/0 AWG", 1, 100), Figures(110, 175))!;
+        var device = Assert.Single(found, f => f.Kind == FindingKind.DeviceBelowLoad);
+        Assert.Equal("NEC 210.20(A)", device.Reference);
+        Assert.Equal(100, device.Limit);
+        Assert.Null(Rules.AddFindings(null, RunOf("2/0 AWG", 1, 100), Figures(100, 175)));
+    }
+
+    // A neutral whose current is above its ampacity is a finding (NEC 310.14(A); memory); within it, none.
+    [Fact]
+    public void AddFindings_NeutralAboveItsAmpacity_IsAFinding()
+    {
+        var found = Assert.Single(Rules.AddFindings(null, RunOf("8 AWG", 1, null), new CurrentFigures(40, 'A', 50, 64, 50))!);
+        Assert.Equal(FindingKind.NeutralAmpacity, found.Kind);
+        Assert.Equal((64.0, 50.0), (found.Value, found.Limit));
+        Assert.Null(Rules.AddFindings(null, RunOf("8 AWG", 1, null), new CurrentFigures(40, 'A', 50, 50, 50)));
+    }
+
+    // Every check cites a clause of its own code, and the code's name leads each clause that is one.
+    [Fact]
+    public void Cite_EveryCheck_NamesAClause()
+    {
+        foreach (var check in Enum.GetValues<CodeCheck>())
+        {
+            var clause = Rules.Cite(check);
+            Assert.False(string.IsNullOrWhiteSpace(clause));
+            Assert.True(clause.StartsWith("NEC ", StringComparison.Ordinal) || clause.Contains("common practice", StringComparison.Ordinal), clause);
+        }
     }
 
     [Theory]
@@ -90,7 +129,7 @@ public sealed class ProtectionRulesTests
     [Theory]
     [InlineData("12 AWG", 1, 20.0, 18, 25, true, new string[0])]
     [InlineData("12 AWG", 1, null, 24, 25, true, new string[0])]
-    [InlineData("12 AWG", 1, 20.0, 26, 25, false, new[] { "ampacity" })]
+    [InlineData("12 AWG", 1, 20.0, 26, 25, false, new[] { "ampacity", "device_below_load" })]
     [InlineData("12 AWG", 1, 25.0, 18, 25, false, new[] { "ocpd_above_ampacity" })]
     [InlineData("12 AWG", 1, 35.0, 30, 25, false, new[] { "ampacity", "ocpd_above_ampacity", "ocpd_above_ampacity" })]
     [InlineData("12 AWG", 2, 40.0, 30, 50, true, new string[0])]
@@ -100,7 +139,7 @@ public sealed class ProtectionRulesTests
     {
         var run = RunOf(size, sets, ocpdA);
         Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA));
-        var findings = Rules.AddFindings(null, run, designA, ampacityA);
+        var findings = Rules.AddFindings(null, run, Figures(designA, ampacityA));
         Assert.Equal(codes, findings?.Select(f => f.Code) ?? []);
         Assert.Equal(meets, findings is null);
     }
@@ -109,20 +148,23 @@ public sealed class ProtectionRulesTests
     [Fact]
     public void AddFindings_NoAmpacity_ChecksTheSmallConductorRuleOnly()
     {
-        var found = Assert.Single(Rules.AddFindings(null, RunOf("12 AWG", 1, 30), 40, null)!);
+        var found = Assert.Single(Rules.AddFindings(null, RunOf("12 AWG", 1, 30), Figures(30, null))!);
         Assert.Equal(FindingKind.OcpdAboveAmpacity, found.Kind);
         Assert.Equal(20, found.Limit);
         Assert.Equal("branch circuit P/1: a 12 AWG cu conductor may be protected at 20 A at most (small-conductor rule), not 30 A", found.Message);
-        Assert.Null(Rules.AddFindings(null, RunOf("12 AWG", 1, 20), 40, null));
+        Assert.Null(Rules.AddFindings(null, RunOf("12 AWG", 1, 20), Figures(20, null)));
     }
 
     [Fact]
     public void AddFindings_GivenAList_AddsToIt()
     {
-        var earlier = new Finding(FindingKind.BranchDrop, "P/1", 4, 3, "earlier", DistTree.Diagnostics.SourceLocation.None);
-        var findings = Rules.AddFindings([earlier], RunOf("12 AWG", 1, 20), 26, 25)!;
-        Assert.Equal([FindingKind.BranchDrop, FindingKind.Ampacity], findings.Select(f => f.Kind));
+        var earlier = new Finding(FindingKind.BranchDrop, "NEC 210.19(A)(1) Informational Note No. 4", "P/1", 4, 3, "earlier", DistTree.Diagnostics.SourceLocation.None);
+        var findings = Rules.AddFindings([earlier], RunOf("12 AWG", 1, 20), Figures(26, 25))!;
+        Assert.Equal([FindingKind.BranchDrop, FindingKind.Ampacity, FindingKind.DeviceBelowLoad], findings.Select(f => f.Kind));
     }
+
+    // A run's figures on line A without a neutral.
+    private static CurrentFigures Figures(double designA, double? ampacityA) => new(designA, 'A', ampacityA, null, null);
 
     // The run of a one-circuit project, copper, of the given size, sets and device.
     private static NetworkRun RunOf(string size, int sets, double? ocpdA)

@@ -1,0 +1,106 @@
+using DistTree.Codes.Nec;
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
+using DistTree.Solving;
+
+namespace DistTree.Codes;
+
+/// <summary>
+/// The seam for the code in force: a rule set owns everything a code decides (the limits' defaults, the current each
+/// check uses, the conductor-protection rules, and the clause each finding cites); the solver computes physics and
+/// asks the rule set to judge it. <c>rules: code:</c> chooses one (<see cref="For"/>); nothing outside a rule set
+/// knows a clause number.
+/// </summary>
+public abstract class CodeRules
+{
+    /// <summary>A figure breaks a rule when it is over its limit by more than this.</summary>
+    protected const double Tolerance = 1e-9;
+
+    /// <summary>Which code this is.</summary>
+    public abstract ElectricalCode Code { get; }
+
+    /// <summary>The code's short name, as a clause is cited: <c>NEC</c>.</summary>
+    public abstract string Name { get; }
+
+    /// <summary>The edition assumed: <c>2020</c>.</summary>
+    public abstract string Edition { get; }
+
+    /// <summary>The code's full title with its edition, for the caution and the report's method.</summary>
+    public abstract string Title { get; }
+
+    /// <summary>How the clause numbers were taken: read from the text, or recalled (and so to be verified).</summary>
+    public abstract string ClauseSource { get; }
+
+    /// <summary>The limits and choices a project under this code starts from (its own keys override them).</summary>
+    public abstract Rules Defaults { get; }
+
+    /// <summary>The standard ratings of fuses and inverse-time circuit breakers, amperes, ascending.</summary>
+    public abstract IReadOnlyList<double> StandardRatingsA { get; }
+
+    /// <summary>The clause a finding of <paramref name="check"/> cites, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
+    public abstract string Cite(CodeCheck check);
+
+    /// <summary>The rule set of <paramref name="code"/>, whose small-conductor limits come from <paramref name="catalog"/>.</summary>
+    public static CodeRules For(ElectricalCode code, ConductorCatalog catalog) => code switch
+    {
+        ElectricalCode.Nec => new NecRules(catalog),
+    };
+
+    /// <summary>The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue.</summary>
+    public static Rules DefaultsOf(ElectricalCode code) => code switch
+    {
+        ElectricalCode.Nec => NecRules.RuleDefaults,
+    };
+
+    /// <summary>The short name and edition of <paramref name="code"/>: <c>NEC 2020</c>.</summary>
+    public static string Describe(ElectricalCode code) => code switch
+    {
+        ElectricalCode.Nec => NecRules.Described,
+    };
+
+    /// <summary>
+    /// The design current of one conductor, amperes, from its current <paramref name="carried"/> and the continuous
+    /// part of it, <paramref name="continuous"/> (phasors, amperes), for a conductor that <paramref name="protectedByDevice"/>
+    /// (a line) or not (a neutral).
+    /// </summary>
+    public abstract double DesignCurrentA(System.Numerics.Complex carried, System.Numerics.Complex continuous, bool protectedByDevice);
+
+    /// <summary>
+    /// True when conductors of <paramref name="ampacityA"/> (all sets, amperes) carry a design current of
+    /// <paramref name="designCurrentA"/>. A current that is not a number (an overflowing load) is not held against them.
+    /// </summary>
+    public bool Carries(double designCurrentA, double ampacityA) => !(designCurrentA > ampacityA + Tolerance);
+
+    /// <summary>True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/> (amperes).</summary>
+    public abstract bool DevicePermits(double ocpdA, double ampacityA);
+
+    /// <summary>True when a device of <paramref name="ocpdA"/> amperes may protect <paramref name="sets"/> parallel sets of <paramref name="size"/> under the small-conductor rule.</summary>
+    public abstract bool SmallConductorPermits(double ocpdA, ConductorSize size, Material material, int sets);
+
+    /// <summary>True when a device of <paramref name="ocpdA"/> amperes is rated for a design current of <paramref name="designCurrentA"/>.</summary>
+    public bool DeviceCarries(double ocpdA, double designCurrentA) => !(designCurrentA > ocpdA + Tolerance);
+
+    /// <summary>
+    /// True when <paramref name="sets"/> sets of <paramref name="size"/> with an allowable ampacity of
+    /// <paramref name="ampacityA"/> (all sets) meet every conductor rule here for a design current of
+    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none).
+    /// </summary>
+    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA) =>
+        Carries(designCurrentA, ampacityA)
+        && (ocpdA is not { } ocpd || (DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
+
+    /// <summary>
+    /// Adds to <paramref name="findings"/> (made when first needed) a finding for each conductor or device rule
+    /// <paramref name="run"/> breaks with the figures <paramref name="figures"/>. Gives the list, or null while there is none.
+    /// </summary>
+    internal abstract List<Finding>? AddFindings(List<Finding>? findings, NetworkRun run, in CurrentFigures figures);
+}
+
+/// <summary>The currents and ampacities a run's conductor and device rules judge.</summary>
+/// <param name="DesignCurrentA">The most loaded line's design current, amperes.</param>
+/// <param name="Line">Which line that is (<c>A</c>, <c>B</c>, <c>C</c>), for the sentence.</param>
+/// <param name="AmpacityA">The lines' allowable ampacity, all sets, or null where the table has none.</param>
+/// <param name="NeutralCurrentA">The neutral's design current, amperes, or null where the run has no neutral.</param>
+/// <param name="NeutralAmpacityA">The neutral's allowable ampacity, all sets, or null.</param>
+internal readonly record struct CurrentFigures(double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA);

@@ -1,0 +1,211 @@
+using System.Numerics;
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
+using DistTree.Solving;
+using DistTree.Vocabulary;
+
+namespace DistTree.Codes.Nec;
+
+/// <summary>
+/// The National Electrical Code's rule set (NFPA 70, 2020 edition; the clause numbers are recalled, not read: verify
+/// them against the edition in force):
+/// <list type="bullet">
+/// <item>Voltage drop: 3 % in a feeder or a branch circuit, 5 % in all to the farthest outlet (NEC 215.2(A)(1)
+/// Informational Note No. 2 and 210.19(A)(1) Informational Note No. 4: advice, not requirements).</item>
+/// <item>The design current of a line is 125 % of the continuous load plus the rest (NEC 210.19(A)(1)(a) for branch
+/// circuits, 215.2(A)(1)(a) for feeders); a neutral, which no device opens, carries 100 % of its load
+/// (210.19(A)(1) Exception No. 2, 215.2(A)(1) Exception No. 3). The conductors' allowable ampacity must carry it.</item>
+/// <item>The device must be rated for the same current (NEC 210.20(A), 215.3).</item>
+/// <item>The device may be rated at the ampacity or below, or, at 800 A or less, at the next standard rating above
+/// it (NEC 240.4(B)). The standard ratings of fuses and inverse-time circuit breakers are NEC 240.6(A)'s.</item>
+/// <item>Small conductors (14 to 10 AWG copper, 12 and 10 AWG aluminium) may be protected at the catalogue's
+/// <c>ocpd_cu</c> and <c>ocpd_al</c> columns at most (NEC 240.4(D), read; see conductors.tsv), times the parallel
+/// sets.</item>
+/// </list>
+/// </summary>
+public sealed class NecRules : CodeRules
+{
+    /// <summary>The short name and edition, as the outputs name the code assumed.</summary>
+    internal const string Described = "NEC 2020";
+
+    // NEC 240.6(A) (memory; verify against the edition in force), amperes, ascending.
+    private static readonly double[] Standard =
+    [
+        15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300, 350, 400, 450, 500,
+        600, 700, 800, 1000, 1200, 1600, 2000, 2500, 3000, 4000, 5000, 6000,
+    ];
+
+    // NEC 240.4(B): the largest device that may take the next standard rating above the ampacity, amperes.
+    private const double NextSizeUpMaxA = 800;
+
+    private readonly ConductorCatalog _catalog;
+
+    /// <summary>The rules with the small-conductor limits of <paramref name="catalog"/>.</summary>
+    public NecRules(ConductorCatalog catalog) => _catalog = catalog;
+
+    /// <summary>The limits a project under the NEC starts from: 3 % per feeder and per branch circuit, 5 % in all.</summary>
+    internal static Rules RuleDefaults { get; } = new() { Code = ElectricalCode.Nec, FeederLimitPercent = 3, BranchLimitPercent = 3, TotalLimitPercent = 5 };
+
+    /// <inheritdoc/>
+    public override ElectricalCode Code => ElectricalCode.Nec;
+
+    /// <inheritdoc/>
+    public override string Name => "NEC";
+
+    /// <inheritdoc/>
+    public override string Edition => "2020";
+
+    /// <inheritdoc/>
+    public override string Title => "NFPA 70, National Electrical Code, 2020 edition";
+
+    /// <inheritdoc/>
+    public override string ClauseSource => "clause numbers recalled from the 2020 edition, not read from it: verify them against the edition in force";
+
+    /// <inheritdoc/>
+    public override Rules Defaults => RuleDefaults;
+
+    /// <inheritdoc/>
+    public override IReadOnlyList<double> StandardRatingsA => Standard;
+
+    /// <inheritdoc/>
+    public override string Cite(CodeCheck check) => check switch
+    {
+        CodeCheck.FeederDrop => "NEC 215.2(A)(1) Informational Note No. 2",
+        CodeCheck.BranchDrop => "NEC 210.19(A)(1) Informational Note No. 4",
+        CodeCheck.TotalDrop => "NEC 210.19(A)(1) Informational Note No. 4",
+        CodeCheck.FeederAmpacity => "NEC 215.2(A)(1)(a)",
+        CodeCheck.BranchAmpacity => "NEC 210.19(A)(1)(a)",
+        CodeCheck.NeutralAmpacity => "NEC 310.14(A)",
+        CodeCheck.FeederDevice => "NEC 215.3",
+        CodeCheck.BranchDevice => "NEC 210.20(A)",
+        CodeCheck.DeviceAboveAmpacity => "NEC 240.4(B)",
+        CodeCheck.SmallConductor => "NEC 240.4(D)",
+        CodeCheck.TransformerLoading => "nameplate rating (common practice; no NEC clause)",
+        CodeCheck.MotorStart => "starting voltage (common practice; no NEC clause)",
+    };
+
+    /// <inheritdoc/>
+    public override double DesignCurrentA(Complex carried, Complex continuous, bool protectedByDevice) =>
+        protectedByDevice ? Magnitude(carried + (continuous * 0.25)) : Magnitude(carried);
+
+    /// <summary>
+    /// True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/>
+    /// (amperes): the rating does not exceed the ampacity, or (800 A and less) it is the next standard rating above it.
+    /// </summary>
+    public override bool DevicePermits(double ocpdA, double ampacityA)
+    {
+        if (ocpdA <= ampacityA + Tolerance)
+        {
+            return true;
+        }
+
+        if (ocpdA > NextSizeUpMaxA)
+        {
+            return false;
+        }
+
+        // The next standard rating at or above the ampacity (none above the largest).
+        foreach (var next in Standard)
+        {
+            if (next >= ampacityA - Tolerance)
+            {
+                return ocpdA <= next + Tolerance;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>The largest device one set of small conductors of <paramref name="size"/> may have, amperes, or null where no such limit applies.</summary>
+    public double? SmallConductorMaxOcpdA(ConductorSize size, Material material) => _catalog.SmallConductorMaxOcpdA(size, material);
+
+    /// <inheritdoc/>
+    public override bool SmallConductorPermits(double ocpdA, ConductorSize size, Material material, int sets) =>
+        SmallConductorMaxOcpdA(size, material) is not { } smallMax || !AboveSmallMax(ocpdA, smallMax, sets);
+
+    /// <inheritdoc/>
+    internal override List<Finding>? AddFindings(List<Finding>? findings, NetworkRun run, in CurrentFigures figures)
+    {
+        var conductors = run.Conductors;
+        var branch = run.Kind == RunKind.Branch;
+        var what = Words.Noun(run.Kind);
+        var size = conductors.Size.Text;
+        var sets = conductors.Sets;
+        var design = figures.DesignCurrentA;
+        var line = figures.Line;
+        if (figures.AmpacityA is { } ampacity)
+        {
+            if (!Carries(design, ampacity))
+            {
+                (findings ??= []).Add(Finding.Written(
+                    FindingKind.Ampacity,
+                    Cite(branch ? CodeCheck.BranchAmpacity : CodeCheck.FeederAmpacity),
+                    run.Id,
+                    design,
+                    ampacity,
+                    $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A",
+                    conductors.Location));
+            }
+
+            if (conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity))
+            {
+                (findings ??= []).Add(Finding.Written(
+                    FindingKind.OcpdAboveAmpacity,
+                    Cite(CodeCheck.DeviceAboveAmpacity),
+                    run.Id,
+                    ocpd,
+                    ampacity,
+                    $"{what} {run.Id}: the {ocpd:0} A overcurrent device is above the {sets}×{size} ampacity of {ampacity:0.#} A (and not the next standard rating above it)",
+                    conductors.Location));
+            }
+        }
+
+        if (figures is { NeutralCurrentA: { } neutralA, NeutralAmpacityA: { } neutralAmpacity } && !Carries(neutralA, neutralAmpacity))
+        {
+            var neutralSize = (conductors.NeutralSize ?? conductors.Size).Text;
+            (findings ??= []).Add(Finding.Written(
+                FindingKind.NeutralAmpacity,
+                Cite(CodeCheck.NeutralAmpacity),
+                run.Id,
+                neutralA,
+                neutralAmpacity,
+                $"{what} {run.Id}: the neutral carries {neutralA:0.0} A, above the {sets}×{neutralSize} ampacity of {neutralAmpacity:0.#} A",
+                conductors.Location));
+        }
+
+        if (conductors.OcpdA is { } device)
+        {
+            if (!DeviceCarries(device, design))
+            {
+                (findings ??= []).Add(Finding.Written(
+                    FindingKind.DeviceBelowLoad,
+                    Cite(branch ? CodeCheck.BranchDevice : CodeCheck.FeederDevice),
+                    run.Id,
+                    design,
+                    device,
+                    $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds its {device:0} A overcurrent device",
+                    conductors.Location));
+            }
+
+            if (SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && AboveSmallMax(device, smallMax, sets))
+            {
+                (findings ??= []).Add(Finding.Written(
+                    FindingKind.OcpdAboveAmpacity,
+                    Cite(CodeCheck.SmallConductor),
+                    run.Id,
+                    device,
+                    smallMax,
+                    $"{what} {run.Id}: a {size} {Words.Material.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
+                    conductors.Location));
+            }
+        }
+
+        return findings;
+    }
+
+    private static bool AboveSmallMax(double ocpdA, double smallMaxA, int sets) => ocpdA > (smallMaxA * sets) + Tolerance;
+
+    // |c|, without the call for no current: the magnitude of zero is zero.
+    private static double Magnitude(Complex c) => c.Real == 0 && c.Imaginary == 0 ? 0.0 : c.Magnitude;
+}
