@@ -7,7 +7,7 @@ namespace DistTree.Reports.Html;
 /// <summary>How the page names a run, its kind and conductors, and a list of finding codes: shared by the paths, the tree, the panels and the plan.</summary>
 internal static class RunText
 {
-    /// <summary>The run's conductors (<c>2× 3/0 Cu</c>), or "regulation" for a transformer's row; escaped.</summary>
+    /// <summary>The run's conductors (<c>2× 3/0 Cu</c>; with <c>, 6 current-carrying</c> where a shared raceway derates it), or "regulation" for a transformer's row; escaped.</summary>
     public static string Conductor(RunResult r)
     {
         if (r.Kind == RunResultKind.Transformer || r.Size is null)
@@ -15,8 +15,10 @@ internal static class RunText
             return "regulation";
         }
 
+        // A raceway shared by more than three current-carrying conductors derates the run's ampacity: the count shows.
         var sets = r.Sets > 1 ? $"{r.Sets}× " : "";
-        return Escape($"{sets}{r.Size} {r.Material}");
+        var shared = r.CurrentCarryingConductors is > 3 and var n ? $", {n} current-carrying" : "";
+        return Escape($"{sets}{r.Size} {r.Material}{shared}");
     }
 
     /// <summary>The kind in words.</summary>

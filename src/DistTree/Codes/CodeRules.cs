@@ -91,6 +91,12 @@ public abstract class CodeRules
         && (ocpdA is not { } ocpd || (DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
 
     /// <summary>
+    /// The current-carrying conductors of one set of <paramref name="run"/>, as the code counts them for the
+    /// ampacity adjustment: its lines, and its neutral where the code counts it.
+    /// </summary>
+    public abstract int CurrentCarryingConductors(NetworkRun run);
+
+    /// <summary>
     /// Adds to <paramref name="findings"/> (made when first needed) a finding for each conductor or device rule
     /// <paramref name="run"/> breaks with the figures <paramref name="figures"/>. Gives the list, or null while there is none.
     /// </summary>

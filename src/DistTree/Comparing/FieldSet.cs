@@ -184,7 +184,18 @@ internal sealed class FieldSet
             .Number($"{prefix}.sets", run.Sets)
             .Text($"{prefix}.material", Words.Material.Of(run.Material))
             .Number($"{prefix}.insulation_c", run.InsulationC)
-            .Text($"{prefix}.raceway", Words.Raceway.Of(run.Raceway))
+            .Text($"{prefix}.raceway", Words.Raceway.Of(run.Raceway));
+        if (run.RacewayId is { } racewayId)
+        {
+            Text($"{prefix}.raceway_id", racewayId);
+        }
+
+        if (run.CurrentCarrying is { } carrying)
+        {
+            Number($"{prefix}.current_carrying", carrying);
+        }
+
+        this
             .Number($"{prefix}.ocpd_a", run.OcpdA)
             .Number($"{prefix}.limit_percent", run.LimitPercent)
             .Text($"{prefix}.fixed", run.Fixed ? "true" : "false");

@@ -32,6 +32,18 @@ public sealed record Run
     /// <summary>Raceway kind.</summary>
     public required Raceway Raceway { get; init; }
 
+    /// <summary>
+    /// The raceway or cable the run shares with other runs, by a name the project gives (<c>raceway_id</c>), or null:
+    /// the current-carrying conductors of every run that names it count together for the ampacity adjustment.
+    /// </summary>
+    public string? RacewayId { get; init; }
+
+    /// <summary>
+    /// The current-carrying conductors in the run's raceway or cable, all runs together, as the project states them
+    /// (<c>current_carrying</c>), or null to count them (the run's own, or its shared raceway's).
+    /// </summary>
+    public int? CurrentCarrying { get; init; }
+
     /// <summary>Overcurrent device rating in amperes protecting the run, if stated.</summary>
     public double? OcpdA { get; init; }
 

@@ -168,6 +168,10 @@ internal static partial class ProjectMessages
     public static string NeutralSeries(Subject run, Conductors.ConductorSize neutral, Conductors.ConductorSize lines) =>
         $"'neutral_size' of {run} is {neutral}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
 
+    /// <summary>A run that names its raceway and also states the raceway's count of current-carrying conductors.</summary>
+    public static string RacewayTwice(Subject run) =>
+        $"{run} names a shared raceway ('raceway_id') and states its current-carrying conductors ('current_carrying'): give one (a named raceway counts the conductors of every run in it)";
+
     /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>
         $"'neutral_size' of the run of {circuit}: a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)";

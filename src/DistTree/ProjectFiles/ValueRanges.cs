@@ -85,6 +85,12 @@ public static class ValueRanges
     /// <summary>A length or a point's distance, metres: above 0, at most <see cref="MaxLengthM"/>.</summary>
     public static readonly NumberRange LengthM = NumberRange.AboveUpTo(0, MaxLengthM, "m");
 
+    /// <summary>
+    /// The current-carrying conductors in a run's raceway or cable, as stated: 1 to 200 (the adjustment's last band
+    /// starts at 41; a count beyond 200 in one raceway is a typo).
+    /// </summary>
+    public static readonly NumberRange CurrentCarrying = NumberRange.WholeNumbers(1, 200);
+
     /// <summary>A run's parallel sets: 1 to <see cref="MaxSets"/>.</summary>
     public static readonly NumberRange Sets = NumberRange.WholeNumbers(1, MaxSets);
 
@@ -145,6 +151,7 @@ public static class ValueRanges
         ("circuit", "ocpd", OcpdA),
         ("run", "length", LengthM),
         ("run", "sets", Sets),
+        ("run", "current_carrying", CurrentCarrying),
         ("run", "ocpd", OcpdA),
         ("run", "limit_percent", LimitPercent),
         ("point", "at", LengthM),

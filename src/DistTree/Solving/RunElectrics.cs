@@ -26,10 +26,11 @@ public static class RunElectrics
     /// <param name="sets">Parallel sets to compute at.</param>
     /// <param name="frequencyHz">Supply frequency.</param>
     /// <param name="currentA">Line current of the whole run (all sets).</param>
-    public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA) =>
-        Compute(catalog, rules, run, size, sets, frequencyHz, currentA, BasisOf(catalog, rules, run, size, frequencyHz));
+    /// <param name="currentCarrying">The current-carrying conductors in its raceway (above 3, its ampacity is adjusted).</param>
+    public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, int currentCarrying = 3) =>
+        Compute(catalog, rules, run, size, sets, frequencyHz, currentA, BasisOf(catalog, rules, run, size, frequencyHz, currentCarrying));
 
-    /// <summary>The figures of <see cref="Compute(ConductorCatalog, Rules, Run, ConductorSize, int, double, double)"/> from the conductor's <paramref name="basis"/>.</summary>
+    /// <summary>The figures of <see cref="Compute(ConductorCatalog, Rules, Run, ConductorSize, int, double, double, int)"/> from the conductor's <paramref name="basis"/>.</summary>
     internal static RunFigures Compute(
         ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, ConductorBasis basis)
     {
@@ -43,10 +44,13 @@ public static class RunElectrics
         return new RunFigures(temperature, r, basis.ReactanceOhmPerKm, basis.AllowableA * sets);
     }
 
-    /// <summary>A conductor's figures that its current does not change, under <paramref name="rules"/> at <paramref name="frequencyHz"/>.</summary>
-    internal static ConductorBasis BasisOf(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, double frequencyHz)
+    /// <summary>
+    /// A conductor's figures that its current does not change, under <paramref name="rules"/> at
+    /// <paramref name="frequencyHz"/>, in a raceway of <paramref name="currentCarrying"/> current-carrying conductors.
+    /// </summary>
+    internal static ConductorBasis BasisOf(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, double frequencyHz, int currentCarrying = 3)
     {
-        var thermal = catalog.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC);
+        var thermal = catalog.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC, Math.Max(1, currentCarrying));
         return new ConductorBasis(
             thermal,
             ConductorCatalog.RatedTemperatureC(size, run.InsulationC),
@@ -63,8 +67,14 @@ public static class RunElectrics
     {
         private readonly StrongBox<ConductorBasis>?[] _bases = new StrongBox<ConductorBasis>?[ConductorSize.All.Count * 2 * 3 * 3];
 
-        public ConductorBasis Of(Run run)
+        public ConductorBasis Of(Run run, int currentCarrying)
         {
+            if (currentCarrying > 3)
+            {
+                // Adjusted for a shared raceway: few runs, each worked out on its own.
+                return BasisOf(catalog, rules, run, run.Size, frequencyHz, currentCarrying);
+            }
+
             var rating = run.InsulationC switch
             {
                 60 => 0,

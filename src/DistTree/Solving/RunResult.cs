@@ -86,6 +86,15 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>The neutral's design current in amperes, as the code in force counts it, or null where the run has no neutral.</summary>
     public double? NeutralDesignCurrentA => Run is null ? null : Row.NeutralDesignCurrentA;
 
+    /// <summary>
+    /// The current-carrying conductors in the run's raceway that its ampacity is adjusted for (above 3): as stated,
+    /// the sum of the runs sharing its named raceway, or its own set's as the code counts them; null for a transformer.
+    /// </summary>
+    public int? CurrentCarryingConductors => Run is null ? null : Row.CurrentCarrying;
+
+    /// <summary>The run's shared raceway as the project names it, or null.</summary>
+    public string? RacewayId => Run?.Conductors.RacewayId;
+
     /// <summary>The neutral's allowable ampacity of all sets, in amperes, or null where the run has no neutral or the table has none.</summary>
     public double? NeutralAmpacityA => Run is null ? null : Row.NeutralAmpacityA;
 

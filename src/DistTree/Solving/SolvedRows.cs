@@ -85,6 +85,7 @@ internal struct RunRow
     public byte DesignLine;
     public double? NeutralDesignCurrentA;
     public double? NeutralAmpacityA;
+    public int CurrentCarrying;
     public double TemperatureC;
     public double ResistanceOhmPerKm;
     public double ReactanceOhmPerKm;

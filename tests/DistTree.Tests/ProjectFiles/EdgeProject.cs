@@ -36,6 +36,7 @@ internal static partial class EdgeProject
         ["equipment.tap_percent"] = "2.5",
         ["run.length"] = "40",
         ["run.sets"] = "1",
+        ["run.current_carrying"] = "4",
         ["run.ocpd"] = "125",
         ["run.limit_percent"] = "2",
         ["circuit.ocpd"] = "20",
@@ -74,7 +75,7 @@ internal static partial class EdgeProject
             kind: panelboard
             from: T1
             demand_factor: {equipment.demand_factor}
-            feeder: { length: 3, size: 250 kcmil }
+            feeder: { length: 3, size: 250 kcmil, current_carrying: {run.current_carrying} }
             circuits:
               - { id: "1", poles: 1, ocpd: {circuit.ocpd}, load: { va: {load.va}, pf: {load.pf} }, run: { length: 20, size: 12 AWG } }
               - { id: "2", poles: 1, load: { kva: {load.kva} }, run: { length: 20, size: 12 AWG } }

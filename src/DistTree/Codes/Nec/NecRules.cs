@@ -204,6 +204,22 @@ public sealed class NecRules : CodeRules
         return findings;
     }
 
+    /// <summary>
+    /// NEC 310.15(E) (memory): a neutral that carries only the unbalanced current of the other conductors of its
+    /// circuit is not counted (a three-phase four-wire feeder, a three-wire single-phase one); it is counted on a
+    /// two-wire circuit (it carries the line's current) and on two lines and the neutral of a three-phase wye
+    /// (310.15(E)(2)). A neutral counted because most of the load is nonlinear (310.15(E)(3)) is not modelled: state
+    /// <c>current_carrying</c> for it.
+    /// </summary>
+    public override int CurrentCarryingConductors(NetworkRun run)
+    {
+        var system = PhaseFrame.BusSystem(run.Source);
+        var lines = run.Kind == RunKind.Branch && run.Target.Circuit is { } circuit ? circuit.Poles : PhaseRules.Lines(system);
+        var neutral = run.Kind == RunKind.Branch ? lines == 1 : system.HasNeutral;
+        var counted = neutral && (lines == 1 || (lines == 2 && system.Phases == 3));
+        return lines + (counted ? 1 : 0);
+    }
+
     private static bool AboveSmallMax(double ocpdA, double smallMaxA, int sets) => ocpdA > (smallMaxA * sets) + Tolerance;
 
     // |c|, without the call for no current: the magnitude of zero is zero.

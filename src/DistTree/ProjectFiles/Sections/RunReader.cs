@@ -59,6 +59,7 @@ internal sealed class RunReader(SectionContext context)
         var material = m.Optional("material") is { } materialNode ? Values.Choice(materialNode, subject.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
         var insulation = m.Optional("insulation_c") is { } insulationNode ? Values.IntegerOf(insulationNode, subject.Of("'insulation_c' of "), SectionContext.TemperatureRatings) : defaults.InsulationC;
         var raceway = m.Optional("raceway") is { } racewayNode ? Values.Choice(racewayNode, subject.Of("'raceway' of "), "raceway", Words.Raceway.Pairs) : defaults.Raceway;
+        var (racewayId, currentCarrying, sharingOk) = Sharing(m, subject);
         double? ocpd = null;
         if (m.Optional("ocpd") is { } ocpdNode)
         {
@@ -68,7 +69,7 @@ internal sealed class RunReader(SectionContext context)
 
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
-        if (length is null || size is null || (neutralNode is not null && neutral is null) || sets < 1 || material is null || insulation is null || raceway is null
+        if (!sharingOk || length is null || size is null || (neutralNode is not null && neutral is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
             return null;
@@ -83,12 +84,31 @@ internal sealed class RunReader(SectionContext context)
             Material = material.Value,
             InsulationC = insulation.Value,
             Raceway = raceway.Value,
+            RacewayId = racewayId,
+            CurrentCarrying = currentCarrying,
             OcpdA = ocpd ?? circuitOcpdA,
             LimitPercent = limit,
             Fixed = isFixed,
             Location = m.Node.Location,
             SizeLocation = sizeNode!.Location,
         };
+    }
+
+    // What the run shares its raceway with: a raceway's name, or a count of the current-carrying conductors in it, not
+    // both (the count of a named raceway is the sum of its runs'). Ok is false where a value was refused.
+    private (string? RacewayId, int? CurrentCarrying, bool Ok) Sharing(in MappingReader m, Subject subject)
+    {
+        var idNode = m.Optional("raceway_id");
+        var countNode = m.Optional("current_carrying");
+        var id = idNode is null ? null : context.Id(idNode, subject.Of("'raceway_id' of ").ToString());
+        var count = countNode is null ? null : Values.WholeInRange(countNode, subject.Of("'current_carrying' of "), ValueRanges.CurrentCarrying);
+        if (idNode is not null && countNode is not null)
+        {
+            Bag.Error(m.KeyLocation("current_carrying"), ProjectMessages.RacewayTwice(subject));
+            return (null, null, false);
+        }
+
+        return (id, count, (idNode is null || id is not null) && (countNode is null || count is not null));
     }
 
     // The neutral's size: read as the size is, and in the same series (AWG and kcmil, or mm²) as the lines.

@@ -25,12 +25,14 @@ internal sealed class RunDrops
     private readonly PowerSums _sums;
     private readonly PhaseFlow _phases;
     private readonly Complex[]? _continuous;
+    private readonly int[]? _sharedCounts;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
     private int _findings;
 
     private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
     {
+        _sharedCounts = RacewayCounts.Of(network, code);
         _catalog = catalog;
         _code = code;
         _continuous = continuous;
@@ -180,7 +182,8 @@ internal sealed class RunDrops
         var lineA = _phases.MaxLineCurrentA(index);
         var points = run.Target.Circuit?.Points ?? [];
         var currentA = run.Kind == RunKind.Branch && points.Count == 0 ? BranchCurrent(lineA, conductors.OcpdA, _rules.BranchCurrent) : lineA;
-        var figures = RunElectrics.Compute(_catalog, _rules, conductors, conductors.Size, conductors.Sets, _frequencyHz, currentA, _bases.Of(conductors));
+        var carrying = _sharedCounts is { } counts && counts[index] > 0 ? counts[index] : _code.CurrentCarryingConductors(run);
+        var figures = RunElectrics.Compute(_catalog, _rules, conductors, conductors.Size, conductors.Sets, _frequencyHz, currentA, _bases.Of(conductors, carrying));
         Moments(run, _phases, LineScale(currentA, lineA), m);
 
         // Its neutral: the lines' figures, or its own size's at the lines' temperature.
@@ -204,7 +207,7 @@ internal sealed class RunDrops
 
         var (designA, designLine, neutralA) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
-            : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC) * conductors.Sets
+            : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, Math.Max(1, carrying)) * conductors.Sets
             : figures.AmpacityA;
         row = new RunRow
         {
@@ -214,6 +217,7 @@ internal sealed class RunDrops
             DesignLine = designLine,
             NeutralDesignCurrentA = neutralA,
             NeutralAmpacityA = neutralAmpacityA,
+            CurrentCarrying = carrying,
             TemperatureC = figures.TemperatureC,
             ResistanceOhmPerKm = figures.ResistanceOhmPerKm,
             ReactanceOhmPerKm = figures.ReactanceOhmPerKm,
