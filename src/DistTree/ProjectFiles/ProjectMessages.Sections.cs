@@ -176,6 +176,10 @@ internal static partial class ProjectMessages
     public static string NeutralSeries(Subject run, Conductors.ConductorSize neutral, Conductors.ConductorSize lines) =>
         $"'neutral_size' of {run} is {neutral}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
 
+    /// <summary>A motor load (<c>hp</c> or <c>fla</c>) whose circuit states a category other than motor or hvac.</summary>
+    public static string MotorCategory(Subject circuit, LoadCategory stated) =>
+        $"'category' of {circuit} is {Words.LoadCategory.Of(stated)}, but its load is a motor (given in {MotorQuantityList}): a motor's category is {Words.LoadCategory.Of(LoadCategory.Motor)} or {Words.LoadCategory.Of(LoadCategory.Hvac)}";
+
     /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>
         $"'neutral_size' of the run of {circuit}: a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)";
