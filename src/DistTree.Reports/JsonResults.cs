@@ -226,6 +226,7 @@ public static partial class JsonResults
         w.WriteStartObject();
         w.WriteString("id"u8, e.Id);
         w.WriteString("name"u8, e.Name);
+        w.WriteString("category"u8, Words.LoadCategory.Of(e.Category));
         w.WriteStartArray("path"u8);
         foreach (var id in e.Path)
         {

@@ -76,6 +76,7 @@ internal sealed class FieldSet
             .Text("load.kind", c.Load.Kind.ToString().ToLowerInvariant())
             .Number("load.value", c.Load.Value)
             .Number("load.pf", c.Load.PowerFactor)
+            .Text("category", Words.LoadCategory.Of(c.Category))
             .Text("continuous", c.Continuous ? "true" : "false");
         set.AddRun("run", c.Run, units);
         return set;
@@ -93,7 +94,7 @@ internal sealed class FieldSet
     /// <summary>True when two circuits hold exactly the same design (locations aside).</summary>
     public static bool SameDesign(Circuit a, Circuit b) =>
         string.Equals(a.Name, b.Name, StringComparison.Ordinal) && a.Poles == b.Poles && a.Supply == b.Supply &&
-        a.Load == b.Load && a.Continuous == b.Continuous && SameRun(a.Run, b.Run);
+        a.Load == b.Load && a.Category == b.Category && a.Continuous == b.Continuous && SameRun(a.Run, b.Run);
 
     private static bool SameRun(Run? a, Run? b) =>
         a is null || b is null

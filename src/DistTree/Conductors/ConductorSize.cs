@@ -71,7 +71,8 @@ public readonly record struct ConductorSize : IComparable<ConductorSize>
     /// <summary>
     /// Parses <c>12 AWG</c>, <c>#12</c>, <c>12</c>, <c>1/0</c>, <c>1/0 AWG</c>, <c>250 kcmil</c>,
     /// <c>250 MCM</c>, <c>95 mm2</c>, <c>95 mm²</c> (case and spacing free).
-    /// On failure <paramref name="error"/> says why and names the nearest valid sizes.
+    /// On failure <paramref name="error"/> says why and names the nearest valid sizes. A bare number is read as AWG
+    /// here (the catalogue's rows); a project file's sizes are read through the loader, which refuses one.
     /// </summary>
     public static bool TryParse(string? text, out ConductorSize size, out string error)
     {

@@ -32,6 +32,12 @@ public sealed record Circuit
     /// <summary>Loads along the run, nearest first; empty for a load at the end. The farthest point is the end point.</summary>
     public IReadOnlyList<LoadPoint> Points { get; init; } = [];
 
+    /// <summary>
+    /// What the load is: as stated (<c>category</c>), else <see cref="LoadCategory.Motor"/> for a motor load and
+    /// <see cref="LoadCategory.Other"/> for any other. A motor load is a motor or HVAC equipment.
+    /// </summary>
+    public LoadCategory Category { get; init; } = LoadCategory.Other;
+
     /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it.</summary>
     public bool Continuous { get; init; }
 

@@ -116,4 +116,8 @@ public sealed record MotorStart(string? CodeLetter, double? LockedRotorMultiple,
 /// <summary>A load at a distance along a branch circuit's run (a row of luminaires, a chain of receptacles).</summary>
 /// <param name="AtM">Distance from the panel in metres.</param>
 /// <param name="Load">The load there.</param>
-public sealed record LoadPoint(double AtM, Load Load);
+public sealed record LoadPoint(double AtM, Load Load)
+{
+    /// <summary>What the point's load is: the point's own <c>category</c>, else its circuit's.</summary>
+    public LoadCategory Category { get; init; } = LoadCategory.Other;
+}

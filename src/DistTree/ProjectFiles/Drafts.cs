@@ -93,6 +93,9 @@ internal sealed class CircuitDraft(SourceLocation location)
 
     public Load? Load { get; set; }
 
+    /// <summary>The <c>category</c> stated, when it is.</summary>
+    public LoadCategory? Category { get; set; }
+
     /// <summary>Loads along the run, when given instead of a load at the end.</summary>
     public IReadOnlyList<LoadPoint> Points { get; set; } = [];
 

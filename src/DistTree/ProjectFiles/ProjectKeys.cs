@@ -33,9 +33,9 @@ internal static class ProjectKeys
     public static readonly string[] Run =
         ["length", "size", "neutral_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "limit_percent", "fixed"];
 
-    public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "load", "points", "continuous", "run"];
+    public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "category", "load", "points", "continuous", "run"];
 
-    public static readonly string[] Point = ["at", "load"];
+    public static readonly string[] Point = ["at", "category", "load"];
 
     /// <summary>The quantities a load may be given in, from the one table of load words.</summary>
     public static readonly IReadOnlyList<string> LoadQuantities = Vocabulary.Words.LoadQuantity.Words;

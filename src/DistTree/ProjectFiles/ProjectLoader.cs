@@ -143,6 +143,7 @@ public static class ProjectLoader
                     Supply = supply,
                     Load = c.Load ?? Model.Load.Combined(c.Points, supply),
                     Points = c.Points,
+                    Category = c.Category ?? (c.Load is { IsMotor: true } ? LoadCategory.Motor : LoadCategory.Other),
                     Phases = c.StatedPhases ?? numbered,
                     PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated : numbered is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
                     Continuous = c.Continuous,

@@ -44,6 +44,14 @@ internal static partial class ProjectMessages
     /// <summary>A size priced twice.</summary>
     public static string PriceTwice(Conductors.ConductorSize size) => $"the price of {size} is given twice";
 
+    /// <summary>
+    /// A size written as a bare number: <paramref name="readings"/> are the standard sizes it is in AWG, kcmil and mm2
+    /// (none, one or more), and the message asks for the unit.
+    /// </summary>
+    public static string BareSize(Subject what, string text, IReadOnlyList<Conductors.ConductorSize> readings) => readings.Count == 0
+        ? $"{what} is '{text}', which has no unit and is no standard size in AWG, kcmil or mm2: write a size with its unit, e.g. '12 AWG', '250 kcmil' or '95 mm2'"
+        : $"{what} is '{text}', which has no unit: write {string.Join(" or ", readings.Select(r => $"'{r.Text}'"))}";
+
     /// <summary>A sequence of services.</summary>
     public static string ServiceCount(int count) => $"a project has exactly one service (the root of the tree); found {count}";
 
@@ -171,6 +179,10 @@ internal static partial class ProjectMessages
     /// <summary>A run that names its raceway and also states the raceway's count of current-carrying conductors.</summary>
     public static string RacewayTwice(Subject run) =>
         $"{run} names a shared raceway ('raceway_id') and states its current-carrying conductors ('current_carrying'): give one (a named raceway counts the conductors of every run in it)";
+
+    /// <summary>A motor load (<c>hp</c> or <c>fla</c>) whose circuit states a category other than motor or hvac.</summary>
+    public static string MotorCategory(Subject circuit, LoadCategory stated) =>
+        $"'category' of {circuit} is {Words.LoadCategory.Of(stated)}, but its load is a motor (given in {MotorQuantityList}): a motor's category is {Words.LoadCategory.Of(LoadCategory.Motor)} or {Words.LoadCategory.Of(LoadCategory.Hvac)}";
 
     /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>

@@ -1,3 +1,4 @@
+using DistTree.Model;
 using DistTree.Network;
 
 namespace DistTree.Solving;
@@ -27,6 +28,9 @@ public readonly struct EndPointResult : IEquatable<EndPointResult>
 
     /// <summary>The circuit's name.</summary>
     public string Name => Node.Circuit!.Name;
+
+    /// <summary>What the circuit's load is (<see cref="Circuit.Category"/>).</summary>
+    public LoadCategory Category => Node.Circuit!.Category;
 
     /// <summary>The panel's id.</summary>
     public string Panel => _rows.Nodes[Node.ParentIndex].Id;

@@ -57,6 +57,15 @@ public static class Words
     public static WordTable<LoadModel> LoadModel { get; } = new(
         "load model", [("power", Model.LoadModel.ConstantPower), ("current", Model.LoadModel.ConstantCurrent), ("impedance", Model.LoadModel.ConstantImpedance)]);
 
+    /// <summary>A circuit's or a point's <c>category</c>, and an end point's in the results.</summary>
+    public static WordTable<LoadCategory> LoadCategory { get; } = new(
+        "load category",
+        [
+            ("lighting", Model.LoadCategory.Lighting), ("receptacle", Model.LoadCategory.Receptacle), ("motor", Model.LoadCategory.Motor),
+            ("hvac", Model.LoadCategory.Hvac), ("kitchen", Model.LoadCategory.Kitchen), ("ev_charger", Model.LoadCategory.EvCharger),
+            ("other", Model.LoadCategory.Other),
+        ]);
+
     /// <summary>A result run's <c>kind</c> in the outputs.</summary>
     public static WordTable<RunResultKind> RunKind { get; } = new(
         "run kind", [("feeder", RunResultKind.Feeder), ("branch", RunResultKind.Branch), ("transformer", RunResultKind.Transformer)]);

@@ -212,6 +212,20 @@ public sealed class RevisionComparerTests
         Assert.Equal([new FieldChange("run.neutral_size", null, "10 AWG")], change.Fields);
     }
 
+    // A stated category where there was none: the field moves from its default (other, for a load not a motor).
+    [Fact]
+    public void Compare_CategoryStated_ListsTheCircuitField()
+    {
+        var after = ComparisonProjects.Shared().Replace("name: Lighting, poles: 1", "name: Lighting, category: lighting, poles: 1", StringComparison.Ordinal);
+        Assert.NotEqual(ComparisonProjects.Shared(), after);
+
+        var c = Compare(ComparisonProjects.Shared(), after);
+
+        var change = Assert.Single(c.Circuits);
+        Assert.Equal(("LP1/2", ChangeKind.Changed), (change.Id, change.Change));
+        Assert.Equal([new FieldChange("category", "other", "lighting")], change.Fields);
+    }
+
     [Fact]
     public void Compare_FeederNeutralSizeChanged_ListsTheFeederField()
     {

@@ -262,7 +262,7 @@ public sealed class ValueRangesTests
             var node = value!;
             if ((string?)node["$ref"] is "#/$defs/id" or "#/$defs/text" or "#/$defs/system" or "#/$defs/size")
             {
-                // Text, which may be written as a plain number (id: 1, system: 120, size: 12).
+                // Text: an id or a system may be written as a plain number (id: 1, system: 120); a size is text with its unit.
                 continue;
             }
 

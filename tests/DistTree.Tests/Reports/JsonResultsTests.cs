@@ -100,6 +100,25 @@ public sealed class JsonResultsTests
         AssertValid(doc);
     }
 
+    // Every end point carries its category: the stated word, else motor for a motor load and other for any other
+    // (docs/project-file.md, Circuits); the document still passes the results schema.
+    [Fact]
+    public void Write_Category_EveryEndPointItsStatedOrDefaultWord()
+    {
+        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+            "{ id: \"1\", poles: 1, category: ev_charger, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }\n"
+            + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }\n"
+            + "      - { id: \"3\", poles: 3, load: { hp: 3, pf: 0.85 }, run: { length: 10, size: 12 AWG } }\n"
+            + "      - { id: \"4\", poles: 3, category: hvac, load: { fla: 10, pf: 0.85 }, run: { length: 10, size: 12 AWG } }");
+
+        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
+
+        var categories = doc.RootElement.GetProperty("end_points").EnumerateArray()
+            .ToDictionary(e => e.GetProperty("id").GetString()!, e => e.GetProperty("category").GetString());
+        Assert.Equal(new Dictionary<string, string?> { ["P/1"] = "ev_charger", ["P/2"] = "other", ["P/3"] = "motor", ["P/4"] = "hvac" }, categories);
+        AssertValid(doc);
+    }
+
     [Fact]
     public void Write_ServiceSource_WrittenBesideTheFrequencyOnlyWhenStated()
     {

@@ -69,6 +69,8 @@ public sealed class WordsTests
     [InlineData("project.schema.json", "raceway", nameof(Words.Raceway))]
     [InlineData("project.schema.json", "model", nameof(Words.LoadModel))]
     [InlineData("project.schema.json", "kind", nameof(Words.EquipmentKind))]
+    [InlineData("project.schema.json", "category", nameof(Words.LoadCategory))]
+    [InlineData("results.schema.json", "category", nameof(Words.LoadCategory))]
     [InlineData("results.schema.json", "method", nameof(Words.Method))]
     [InlineData("results.schema.json", "branch_current", nameof(Words.BranchCurrent))]
     [InlineData("results.schema.json", "transformer_drop", nameof(Words.TransformerDrop))]

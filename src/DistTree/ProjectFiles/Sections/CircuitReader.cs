@@ -1,6 +1,7 @@
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.ProjectFiles.Yaml;
+using DistTree.Vocabulary;
 
 namespace DistTree.ProjectFiles.Sections;
 
@@ -101,10 +102,26 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
             draft.Continuous = Values.Bool(continuousNode, full.Of("'continuous' of ")) ?? false;
         }
 
+        var categoryNode = m.Optional("category");
+        if (categoryNode is not null)
+        {
+            draft.Category = Category(categoryNode, full.Of("'category' of "));
+        }
+
         ReadLoadOrPoints(m, draft, full);
+        if (draft is { Load.IsMotor: true, Category: { } stated and not (LoadCategory.Motor or LoadCategory.Hvac) })
+        {
+            // A motor is a motor, or the compressor or fan of air-conditioning equipment.
+            Bag.Error(categoryNode!.Location, ProjectMessages.MotorCategory(full, stated));
+        }
+
         ReadRun(m, draft, full, ocpd);
         return draft;
     }
+
+    // A 'category' word of Words.LoadCategory, with a "did you mean" hint; null (reported) for any other text.
+    private LoadCategory? Category(SourceNode node, Subject what) =>
+        Values.Choice(node, what, "load category", Words.LoadCategory.Pairs);
 
     // The load at the end ('load') or along the run ('points'): one of the two.
     private void ReadLoadOrPoints(in MappingReader m, CircuitDraft draft, Subject full)
@@ -181,6 +198,13 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
             }
 
             var at = m.Required("at", ProjectMessages.KeyHints.At) is { } atNode ? Values.LengthM(atNode, point.Of("'at' of "), context.Draft.Units) : null;
+            // The point's own category, else its circuit's; null when the point's cannot be read (reported).
+            LoadCategory? category = draft.Category ?? LoadCategory.Other;
+            if (m.Optional("category") is { } categoryNode)
+            {
+                category = Category(categoryNode, point.Of("'category' of "));
+            }
+
             var load = m.Required("load") is { } loadNode ? loads.Read(loadNode, point.Of("the load of ")) : null;
             if (load is { IsMotor: true })
             {
@@ -188,7 +212,7 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
                 load = null;
             }
 
-            if (at is null || load is null)
+            if (at is null || load is null || category is null)
             {
                 ok = false;
                 continue;
@@ -200,7 +224,7 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
                 ok = false;
             }
 
-            points.Add(new LoadPoint(at.Value, load));
+            points.Add(new LoadPoint(at.Value, load) { Category = category.Value });
         }
 
         if (ok)

@@ -124,11 +124,18 @@ internal sealed class RunReader(SectionContext context)
         return neutral;
     }
 
-    // A conductor size, parsed once per distinct text; 'what' names the key in messages.
+    // A conductor size, parsed once per distinct text; 'what' names the key in messages. A bare number is refused
+    // with its readings (SizeText), a message naming the key, so it is not kept with the texts parsed.
     private ConductorSize? Size(SourceNode node, Subject what)
     {
         if (Values.Text(node, what) is not { } text)
         {
+            return null;
+        }
+
+        if (SizeText.BareNumberError(text, what) is { } bare)
+        {
+            Bag.Error(node.Location, bare);
             return null;
         }
 

@@ -56,7 +56,7 @@ internal sealed class SizingReader(SectionContext context)
 
         foreach (var (key, value) in mapping.Entries)
         {
-            if (!ConductorSize.TryParse(key.Value, out var size, out var error))
+            if (!SizeText.TryParse(key.Value, "a size in 'prices'", out var size, out var error))
             {
                 context.Bag.Error(key.Location, error);
                 continue;

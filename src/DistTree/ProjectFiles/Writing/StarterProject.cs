@@ -80,18 +80,18 @@ public static class StarterProject
         var circuits = new CircuitWriter(o, metric, iec ? "2.5 mm2" : "12 AWG", iec ? 16 : 20);
         if (system.CircuitFor(1) is not null)
         {
-            circuits.Write("Lighting", 1, Load(LoadKind.Va, "1200", "0.95"), continuous: true, 50, 15);
-            circuits.Write("Receptacles", 1, Load(LoadKind.Va, "1440", "0.95"), continuous: false, 40, 12);
+            circuits.Write("Lighting", LoadCategory.Lighting, 1, Load(LoadKind.Va, "1200", "0.95"), continuous: true, 50, 15);
+            circuits.Write("Receptacles", LoadCategory.Receptacle, 1, Load(LoadKind.Va, "1440", "0.95"), continuous: false, 40, 12);
         }
 
         if (system.CircuitFor(2) is not null)
         {
-            circuits.Write("Water heater", 2, Load(LoadKind.Kw, "3", "1.0"), continuous: false, 30, 9);
+            circuits.Write("Water heater", LoadCategory.Other, 2, Load(LoadKind.Kw, "3", "1.0"), continuous: false, 30, 9);
         }
 
         if (system.CircuitFor(3) is not null)
         {
-            circuits.Write("Exhaust fan", 3, Load(LoadKind.Kva, "5", "0.85"), continuous: true, 60, 18);
+            circuits.Write("Exhaust fan", LoadCategory.Hvac, 3, Load(LoadKind.Kva, "5", "0.85"), continuous: true, 60, 18);
         }
     }
 
@@ -114,12 +114,13 @@ public static class StarterProject
     {
         private int _id = 1;
 
-        public void Write(string name, int poles, string load, bool continuous, double feet, double metres)
+        public void Write(string name, LoadCategory category, int poles, string load, bool continuous, double feet, double metres)
         {
             var first = _id == 1;
             var quantities = Words.LoadQuantity;
             Note($"      - id: \"{_id++}\"", "unique in its panel; the full id is LP1/1");
             Note($"        name: {name}", "free text");
+            Note($"        category: {Words.LoadCategory.Of(category)}", $"{Choices(Words.LoadCategory.Words)}; unstated: motor for {quantities.Of(LoadKind.Hp)}/{quantities.Of(LoadKind.Fla)}, else other");
             Note(string.Create(CultureInfo.InvariantCulture, $"        poles: {poles}"), "1: line-neutral; 2: line-line; 3: three-phase");
             Note(string.Create(CultureInfo.InvariantCulture, $"        ocpd: {ocpdA}"), "the overcurrent device's rating, A");
             Note($"        continuous: {(continuous ? "true" : "false")}", "3 hours or more: counted at 125 % for ampacity");

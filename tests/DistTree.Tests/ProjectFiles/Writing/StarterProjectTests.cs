@@ -37,7 +37,7 @@ public sealed class StarterProjectTests
         var first = Array.FindIndex(lines, l => l.StartsWith("      - id: \"1\"", StringComparison.Ordinal));
         var second = Array.FindIndex(lines, l => l.StartsWith("      - id: \"2\"", StringComparison.Ordinal));
         Assert.All(lines[first..second], l => Assert.Contains(" # ", l, StringComparison.Ordinal));
-        Assert.All(lines[second..(second + 7)], l => Assert.DoesNotContain("#", l, StringComparison.Ordinal));
+        Assert.All(lines[second..(second + 8)], l => Assert.DoesNotContain("#", l, StringComparison.Ordinal));
     }
 
     [Theory]
