@@ -34,15 +34,14 @@ public sealed class DropSolver
         var assigned = new Phases[n];
         PhaseAssignment.Assign(network, sums.Power, assigned);
         var frame = PhaseFrame.Of(network);
-        var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned);
-        var continuous = ContinuousCurrents(network, frame, sums, assigned);
+        var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned, AnyContinuous(network));
         var code = CodeRules.For(network.Project.Rules.Code, _catalog);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same
         // impedances, whose drops are recorded beside the percent sum's. A run's findings follow from its drop: on
         // the percent sum they are found with its figures; on the load flow, once it is solved.
         using var runs = new RunRows(sums.Has, n);
-        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, continuous, runs);
+        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, runs);
         var (flow, voltagesTaken) = LoadFlow.Solve(network, phases, sums.Power, runs);
         using var voltages = voltagesTaken;
         LoadFlowDrops.Record(network, phases, runs, flow, voltages);
@@ -58,20 +57,18 @@ public sealed class DropSolver
         return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow, code);
     }
 
-    // Per node × 3, the continuous part of each line's current (the continuous loads alone, on the same lines), or
-    // null where no load is continuous.
-    private static System.Numerics.Complex[]? ContinuousCurrents(DistributionNetwork network, PhaseFrame frame, PowerSums sums, Phases[] assigned)
+    // True when any load of the tree is continuous (its currents' continuous part is then worked out too).
+    private static bool AnyContinuous(DistributionNetwork network)
     {
-        var continuous = sums.Continuous;
-        for (var i = 0; i < network.NodeArray.Length; i++)
+        foreach (var node in network.NodeArray)
         {
-            if (continuous[i].VoltAmperes > 0)
+            if (node.Circuit is { Continuous: true })
             {
-                return PhaseCurrents.Solve(network, frame, continuous, assigned, continuousOnly: true).Currents;
+                return true;
             }
         }
 
-        return null;
+        return false;
     }
 
     // The solution over the solved rows, with each panel's phase loads.

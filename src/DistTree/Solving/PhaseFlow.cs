@@ -37,6 +37,9 @@ internal sealed class PhaseFlow
     /// <summary>Per node × 3, the line currents (A) it draws from its parent, at nominal voltage.</summary>
     public Complex[] Currents { get; }
 
+    /// <summary>Per node × 3, the continuous loads' part of <see cref="Currents"/>, or null where no load is continuous.</summary>
+    public Complex[]? ContinuousCurrents { get; init; }
+
     /// <summary>The secondary line currents (A) of the transformer at <paramref name="node"/>.</summary>
     public ReadOnlySpan<Complex> SecondaryCurrents(int node) => _secondaryCurrents[node];
 

@@ -19,14 +19,16 @@ internal sealed class PhaseCurrents
     private readonly ComplexPower[] _power;
     private readonly Phases[] _assigned;
     private readonly Complex[] _currents;
-    private readonly bool _continuousOnly;
+
+    // Per node × 3, the continuous loads' part of _currents (null where no load is continuous).
+    private readonly Complex[]? _continuous;
 
     // Per transformer node, the secondary's line currents (A) on its bus.
     private readonly Dictionary<int, Complex[]> _secondary = [];
 
-    private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool continuousOnly)
+    private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool anyContinuous)
     {
-        _continuousOnly = continuousOnly;
+        _continuous = anyContinuous ? GC.AllocateUninitializedArray<Complex>(network.NodeArray.Length * 3) : null;
         _network = network;
         _frame = frame;
         _power = power;
@@ -37,13 +39,13 @@ internal sealed class PhaseCurrents
     /// <summary>
     /// The line currents of <paramref name="network"/> in <paramref name="frame"/>, whose loads are
     /// <paramref name="power"/> on the lines <paramref name="assigned"/> (see <see cref="PhaseAssignment"/>); with
-    /// <paramref name="continuousOnly"/>, of the continuous loads alone (<paramref name="power"/> then their power).
+    /// <paramref name="anyContinuous"/>, the continuous loads' part of them as well, summed the same way.
     /// </summary>
-    public static PhaseFlow Solve(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool continuousOnly = false)
+    public static PhaseFlow Solve(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool anyContinuous = false)
     {
-        var pass = new PhaseCurrents(network, frame, power, assigned, continuousOnly);
+        var pass = new PhaseCurrents(network, frame, power, assigned, anyContinuous);
         pass.Accumulate();
-        return new PhaseFlow(frame, assigned, pass._currents, pass._secondary);
+        return new PhaseFlow(frame, assigned, pass._currents, pass._secondary) { ContinuousCurrents = pass._continuous };
     }
 
     /// <summary>
@@ -67,7 +69,12 @@ internal sealed class PhaseCurrents
     {
         ParallelRanges.BottomUp(_network.Levels.Steps, Accumulate);
         _currents.AsSpan(0, 3).Clear();
-        AddChildren(0, _currents.AsSpan(0, 3));
+        AddChildren(_currents, 0, _currents.AsSpan(0, 3));
+        if (_continuous is { } continuous)
+        {
+            continuous.AsSpan(0, 3).Clear();
+            AddChildren(continuous, 0, continuous.AsSpan(0, 3));
+        }
     }
 
     // Accumulate for the nodes end − 1 down to start.
@@ -85,11 +92,6 @@ internal sealed class PhaseCurrents
             {
                 var parent = node.ParentIndex;
                 var circuit = node.Circuit;
-                if (_continuousOnly && !circuit.Continuous)
-                {
-                    continue;
-                }
-
                 if (circuit.Points.Count == 0)
                 {
                     LoadCurrents(_power[i], circuit.Load.Model, _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], _frame.NoLoad[parent], mine);
@@ -101,14 +103,40 @@ internal sealed class PhaseCurrents
                         LoadCurrents(LoadPower.Of(point.Load, circuit.Supply), point.Load.Model, _assigned[i], PhaseFrame.BusSystem(nodes[parent]), rotation[parent], _frame.NoLoad[parent], mine);
                     }
                 }
+
+                if (_continuous is { } continuousOut)
+                {
+                    // A continuous load's currents are all continuous; another's, none.
+                    var part = continuousOut.AsSpan(i * 3, 3);
+                    if (circuit.Continuous)
+                    {
+                        mine.CopyTo(part);
+                    }
+                    else
+                    {
+                        part.Clear();
+                    }
+                }
+
                 continue;
             }
 
-            AddChildren(i, mine);
+            AddChildren(_currents, i, mine);
             var factor = node.Equipment?.DemandFactor ?? 1.0;
             for (var x = 0; x < 3; x++)
             {
                 mine[x] *= factor;
+            }
+
+            var continuous = _continuous is null ? default : _continuous.AsSpan(i * 3, 3);
+            if (!continuous.IsEmpty)
+            {
+                continuous.Clear();
+                AddChildren(_continuous!, i, continuous);
+                for (var x = 0; x < 3; x++)
+                {
+                    continuous[x] *= factor;
+                }
             }
 
             if (_frame.Models[i] is { } model)
@@ -121,15 +149,21 @@ internal sealed class PhaseCurrents
 
                 mine.CopyTo(bus);
                 model.PrimaryCurrents(bus, mine);
+                if (!continuous.IsEmpty)
+                {
+                    // The connection maps currents linearly: the continuous part maps as the whole does.
+                    continuous.CopyTo(bus);
+                    model.PrimaryCurrents(bus, continuous);
+                }
             }
         }
     }
 
     // Adds the currents of node's children to into, from the last child to the first: the order in which they
     // were first added up, so that the sums are the same to the bit.
-    private void AddChildren(int node, Span<Complex> into)
+    private void AddChildren(Complex[] currents, int node, Span<Complex> into)
     {
-        var (childStarts, currents) = (_network.Levels.ChildStarts, _currents);
+        var childStarts = _network.Levels.ChildStarts;
         for (var child = childStarts[node + 1] - 1; child >= childStarts[node]; child--)
         {
             for (var x = 0; x < 3; x++)

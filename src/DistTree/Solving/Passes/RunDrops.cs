@@ -30,12 +30,12 @@ internal sealed class RunDrops
     private readonly bool _findingsWithRuns;
     private int _findings;
 
-    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
+    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
     {
         _sharedCounts = RacewayCounts.Of(network, code);
         _catalog = catalog;
         _code = code;
-        _continuous = continuous;
+        _continuous = phases.ContinuousCurrents;
         _rules = network.Project.Rules;
         _frequencyHz = network.Project.Service.FrequencyHz;
         _bases = new RunElectrics.Bases(catalog, _rules, _frequencyHz);
@@ -48,13 +48,12 @@ internal sealed class RunDrops
 
     /// <summary>
     /// Fills <paramref name="runs"/>' rows and current-lengths, and on the percent sum their findings; gives the number
-    /// of findings. <paramref name="continuous"/> holds, per node × 3, the continuous part of each line's current (null
-    /// where no load is continuous).
+    /// of findings. The design currents take each line's continuous part from <paramref name="phases"/>.
     /// </summary>
     public static int Solve(
-        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
+        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
     {
-        var pass = new RunDrops(catalog, code, network, sums, phases, continuous, runs);
+        var pass = new RunDrops(catalog, code, network, sums, phases, runs);
         ParallelRanges.For(pass._nodes.Length, pass.SolveRange);
         return pass._findings;
     }
