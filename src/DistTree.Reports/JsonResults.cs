@@ -317,6 +317,12 @@ public static partial class JsonResults
         Number(w, "reactance_ohm_per_km"u8, r.ReactanceOhmPerKm, 5);
         Number(w, "ampacity_a"u8, r.AmpacityA, 2);
         Number(w, "ocpd_a"u8, r.OcpdA, 1);
+        if (r.GroundSize is { } groundSize)
+        {
+            w.WriteString("ground_size"u8, groundSize);
+        }
+
+        NullableString(w, "ground_min_size"u8, r.GroundMinSize);
         Number(w, "drop_v"u8, r.DropV, 3);
         Number(w, "drop_percent"u8, r.DropPercent, 4);
         Number(w, "drop_percent_percent_sum"u8, r.PercentSumDropPercent, 4);

@@ -1,4 +1,4 @@
-using System.Globalization;
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
@@ -56,6 +56,7 @@ public sealed class Upsizer
         var (picks, unresolvable, after) = attempt;
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
+        unresolvable.AddRange(GroundsLeft(after, changes));
         return new UpsizePlan
         {
             Changes = changes,
@@ -140,11 +141,12 @@ public sealed class Upsizer
         }
     }
 
-    // A finding a conductor choice could fix that the re-solved plan still has, or null.
+    // A finding a conductor choice could fix that the re-solved plan still has, or null. A stated grounding conductor
+    // below its minimum is not one: the line sizes cannot fix it (the change says it must be increased).
     private static Finding? LeftOver(Solution after, List<UnresolvableLimit> unresolvable)
     {
         var known = new HashSet<string>(unresolvable.Select(u => u.Subject), StringComparer.Ordinal);
-        return after.AllFindings.FirstOrDefault(f => f.Kind != FindingKind.TransformerOverload && !known.Contains(f.Subject));
+        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor) && !known.Contains(f.Subject));
     }
 
     // The proof: re-solved, nothing a conductor choice can fix is left over a limit. Where it is not, the user is told
@@ -167,6 +169,9 @@ public sealed class Upsizer
             var option = picks[index];
             var run = before.Network.Nodes[index].Incoming!;
             var was = beforeRows[index];
+            var least = afterRows[index].GroundMinimum;
+            var stated = run.Conductors.GroundSize;
+            var increase = stated is { } g && least is { } l && g < l;
             changes.Add(new UpsizeChange
             {
                 RunId = was.Id,
@@ -178,7 +183,10 @@ public sealed class Upsizer
                 DropPercentBefore = was.DropPercent,
                 DropPercentAfter = afterRows[index].DropPercent,
                 CostAdded = option.Cost,
-                GroundingNote = GroundingNote(run.Conductors, option),
+                GroundingNote = GroundingNote(before.Code.Cite(CodeCheck.GroundingConductor), option.Sets, least, stated, increase),
+                GroundMinSize = least?.Text,
+                GroundSize = stated?.Text,
+                GroundMustIncrease = increase,
                 SizeLocation = run.Conductors.SizeLocation,
             });
         }
@@ -186,14 +194,27 @@ public sealed class Upsizer
         return changes;
     }
 
-    // NEC 250.122(B) (memory; verify against the edition in force): where ungrounded conductors are increased
-    // in size, a wire-type equipment grounding conductor grows in proportion to their circular-mil area.
-    private static string? GroundingNote(Run present, RunOption option)
+    // What the new size needs of the grounding conductor, with the clause the code in force cites.
+    private static string GroundingNote(string clause, int sets, ConductorSize? least, ConductorSize? stated, bool increase)
     {
-        var ratio = option.Size.AreaCmil * option.Sets / (present.Size.AreaCmil * present.Sets);
-        return ratio <= 1 + 1e-9
-            ? null
-            : string.Create(CultureInfo.InvariantCulture, $"increase a wire-type equipment grounding conductor in proportion to the circular-mil area (×{ratio:0.00}), NEC 250.122(B)");
+        if (least is not { } minimum)
+        {
+            return $"no minimum without an overcurrent device ({clause})";
+        }
+
+        var each = sets > 1 ? " in each set" : "";
+        return increase
+            ? $"at least {minimum.Text}{each} ({clause}); the stated {stated!.Value.Text} is too small and must be increased too"
+            : $"at least {minimum.Text}{each} ({clause})";
+    }
+
+    // The runs the plan leaves alone whose stated grounding conductor is below its minimum: no line size fixes that.
+    private static IEnumerable<UnresolvableLimit> GroundsLeft(Solution after, List<UpsizeChange> changes)
+    {
+        var changed = new HashSet<string>(changes.Select(c => c.RunId), StringComparer.Ordinal);
+        return after.AllFindings
+            .Where(f => f.Kind == FindingKind.GroundingConductor && !changed.Contains(f.Subject))
+            .Select(f => new UnresolvableLimit(f.Subject, $"{f.Message}: a larger line size cannot fix this; increase the grounding conductor"));
     }
 
     // A plan, what it reports as unfixable, and its proof.

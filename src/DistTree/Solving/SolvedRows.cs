@@ -99,6 +99,9 @@ internal struct RunRow
     public double? MaxLengthM;
     public double? MaxLengthTotalM;
 
+    /// <summary>The smallest equipment grounding conductor the run needs, as its size's index + 1 (0 for none).</summary>
+    public short GroundMinIndex;
+
     /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
     public readonly double DropV => DropPercent / 100.0 * VoltageV;
 }

@@ -223,6 +223,7 @@ internal sealed class RunDrops
             DropPercent = ownDrop,
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
+            GroundMinIndex = GroundMinIndex(conductors, designA),
         };
     }
 
@@ -253,6 +254,10 @@ internal sealed class RunDrops
 
         return (worst, line, neutral);
     }
+
+    // The smallest equipment grounding conductor the run needs, as its size's index + 1 (0 for none; see RunRow).
+    private short GroundMinIndex(Run conductors, double designA) =>
+        _code.MinimumGroundSize(conductors, conductors.Size, conductors.Sets, designA, _rules) is { } least ? (short)(least.Index + 1) : (short)0;
 
     // A run's length in km per set: the sets share the current.
     private static double PerSetKm(Run conductors) => conductors.LengthM / 1000.0 / conductors.Sets;
