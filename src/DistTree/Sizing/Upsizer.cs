@@ -2,7 +2,6 @@ using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
-using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Sizing;
@@ -79,7 +78,7 @@ public sealed class Upsizer
         }
 
         var picks = Picks(problem, choice);
-        var after = Analysis.Run(Apply(before.Project, before.Network, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
+        var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
         return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
     }
 
@@ -106,18 +105,31 @@ public sealed class Upsizer
         return picks;
     }
 
-    /// <summary>The project with the picked sizes and sets on their runs; everything else as it was.</summary>
-    private static Project Apply(Project project, DistributionNetwork network, Dictionary<int, RunOption> picks)
+    /// <summary>
+    /// The project with the picked sizes and sets on their runs, and a stated grounding conductor the new size makes too
+    /// small raised to its minimum (the change says so); everything else as it was.
+    /// </summary>
+    private static Project Apply(Solution before, Dictionary<int, RunOption> picks)
     {
-        var feeders = new Dictionary<string, RunOption>(StringComparer.Ordinal);
-        var branches = new Dictionary<string, RunOption>(StringComparer.Ordinal);
+        var (project, network) = (before.Project, before.Network);
+        var designA = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex, r => r.DesignCurrentA);
+        var feeders = new Dictionary<string, (RunOption, double)>(StringComparer.Ordinal);
+        var branches = new Dictionary<string, (RunOption, double)>(StringComparer.Ordinal);
         foreach (var (index, option) in picks)
         {
             var node = network.Nodes[index];
-            (node.Circuit is not null ? branches : feeders)[node.Id] = option;
+            (node.Circuit is not null ? branches : feeders)[node.Id] = (option, designA[index]);
         }
 
-        Run With(Run run, RunOption o) => run with { Size = o.Size, Sets = o.Sets };
+        Run With(Run run, (RunOption Option, double DesignA) pick)
+        {
+            var o = pick.Option;
+            var ground = run.GroundSize is { } stated && before.Code.MinimumGroundSize(run, o.Size, o.Sets, pick.DesignA, project.Rules) is { } least && stated < least
+                ? least
+                : run.GroundSize;
+            return run with { Size = o.Size, Sets = o.Sets, GroundSize = ground };
+        }
+
         var equipment = project.Equipment.Select(e => e with
         {
             Feeder = e.Feeder is { } f && feeders.TryGetValue(e.Id, out var fo) ? With(f, fo) : e.Feeder,
