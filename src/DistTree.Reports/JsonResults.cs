@@ -56,7 +56,7 @@ public static partial class JsonResults
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
-                WriteRun(w, run, NeutralSize(solution, run));
+                WriteRun(w, run);
                 FlushEvery(w);
             }
 
@@ -285,11 +285,7 @@ public static partial class JsonResults
         w.WriteEndObject();
     }
 
-    // A feeder's or branch circuit's neutral size, when the project file states one.
-    private static string? NeutralSize(Solution s, RunResult r) =>
-        r.Kind == RunResultKind.Transformer ? null : s.Network.Nodes[r.NodeIndex].Incoming?.Conductors.NeutralSize?.Text;
-
-    private static void WriteRun(Utf8JsonWriter w, RunResult r, string? neutralSize)
+    private static void WriteRun(Utf8JsonWriter w, RunResult r)
     {
         w.WriteStartObject();
         w.WriteString("id"u8, r.Id);
@@ -303,7 +299,7 @@ public static partial class JsonResults
         NullableString(w, "design_line"u8, r.DesignLine);
         Number(w, "power_factor"u8, r.PowerFactor, 4);
         NullableString(w, "size"u8, r.Size);
-        if (neutralSize is not null)
+        if (r.NeutralSize is { } neutralSize)
         {
             w.WriteString("neutral_size"u8, neutralSize);
         }

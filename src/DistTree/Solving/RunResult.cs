@@ -132,6 +132,9 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>Allowable ampacity of all sets, in amperes (for a transformer: its rated current).</summary>
     public double? AmpacityA => Run is null ? Row.RatedA : Row.AmpacityA;
 
+    /// <summary>The stated neutral size of each set (<c>neutral_size</c>), or null where none is stated.</summary>
+    public string? NeutralSize => Run?.Conductors.NeutralSize?.Text;
+
     /// <summary>The stated equipment grounding conductor of each set (<c>ground_size</c>), or null where none is stated.</summary>
     public string? GroundSize => Run?.Conductors.GroundSize?.Text;
 
