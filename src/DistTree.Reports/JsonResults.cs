@@ -56,7 +56,7 @@ public static partial class JsonResults
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
-                WriteRun(w, run, NeutralSize(solution, run));
+                WriteRun(w, run);
                 FlushEvery(w);
             }
 
@@ -170,11 +170,7 @@ public static partial class JsonResults
         w.WriteEndObject();
     }
 
-    // A feeder's or branch circuit's neutral size, when the project file states one.
-    private static string? NeutralSize(Solution s, RunResult r) =>
-        r.Kind == RunResultKind.Transformer ? null : s.Network.Nodes[r.NodeIndex].Incoming?.Conductors.NeutralSize?.Text;
-
-    private static void WriteRun(Utf8JsonWriter w, RunResult r, string? neutralSize)
+    private static void WriteRun(Utf8JsonWriter w, RunResult r)
     {
         w.WriteStartObject();
         w.WriteString("id"u8, r.Id);
@@ -188,7 +184,7 @@ public static partial class JsonResults
         NullableString(w, "design_line"u8, r.DesignLine);
         Number(w, "power_factor"u8, r.PowerFactor, 4);
         NullableString(w, "size"u8, r.Size);
-        if (neutralSize is not null)
+        if (r.NeutralSize is { } neutralSize)
         {
             w.WriteString("neutral_size"u8, neutralSize);
         }
@@ -204,6 +200,12 @@ public static partial class JsonResults
         Number(w, "reactance_ohm_per_km"u8, r.ReactanceOhmPerKm, 5);
         Number(w, "ampacity_a"u8, r.AmpacityA, 2);
         Number(w, "ocpd_a"u8, r.OcpdA, 1);
+        if (r.GroundSize is { } groundSize)
+        {
+            w.WriteString("ground_size"u8, groundSize);
+        }
+
+        NullableString(w, "ground_min_size"u8, r.GroundMinSize);
         Number(w, "drop_v"u8, r.DropV, 3);
         Number(w, "drop_percent"u8, r.DropPercent, 4);
         Number(w, "drop_percent_percent_sum"u8, r.PercentSumDropPercent, 4);

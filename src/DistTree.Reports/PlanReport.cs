@@ -32,7 +32,7 @@ public static class PlanReport
                 o.WriteLine(F($"{c.RunId,-14} {Kind(c.Kind),-7} {sizes,-34} {drops,-22} {c.CostAdded,14:0.#}"));
                 if (c.GroundingNote is { } note)
                 {
-                    o.WriteLine($"{"",-14} note: {note}");
+                    o.WriteLine($"{"",-14} grounding conductor: {note}");
                 }
             }
 
@@ -85,6 +85,10 @@ public static class PlanReport
                 w.WriteNull("grounding_note");
             }
 
+            NullableString(w, "ground_min_size", c.GroundMinSize);
+            NullableString(w, "ground_size", c.GroundSize);
+            w.WriteBoolean("ground_must_increase", c.GroundMustIncrease);
+
             w.WriteNumber("line", c.SizeLocation.Line);
             w.WriteNumber("column", c.SizeLocation.Column);
             w.WriteEndObject();
@@ -102,6 +106,18 @@ public static class PlanReport
 
         w.WriteEndArray();
         w.WriteEndObject();
+    }
+
+    private static void NullableString(Utf8JsonWriter w, string name, string? value)
+    {
+        if (value is null)
+        {
+            w.WriteNull(name);
+        }
+        else
+        {
+            w.WriteString(name, value);
+        }
     }
 
     private static string Sets(int sets) => sets > 1 ? $"{sets}×" : "";

@@ -67,6 +67,7 @@ internal static class SummaryViewBuilder
             FindingKind.MotorStart => (Limit(rules.MotorStartLimitPercent) + " %", t.Motors, Worst(t.WorstDip)),
             FindingKind.NeutralAmpacity => ("neutral's ampacity", t.WithNeutral, "–"),
             FindingKind.DeviceBelowLoad => ("device rating", t.WithOcpd, "–"),
+            FindingKind.GroundingConductor => ("minimum for the device", t.WithGround, "–"),
         };
         return LimitRowOf(FindingKinds.Of(kind).Check, limit, checkedCount, over, worst);
     }
@@ -82,11 +83,11 @@ internal static class SummaryViewBuilder
 
     // How many of each kind the limits' checks saw, and the largest figure of each that has one.
     private readonly record struct Tally(
-        int Feeders, int Branches, int Transformers, int WithAmpacity, int WithOcpd, int WithNeutral, double WorstFeeder, double WorstBranch, int Motors, double WorstDip)
+        int Feeders, int Branches, int Transformers, int WithAmpacity, int WithOcpd, int WithNeutral, int WithGround, double WorstFeeder, double WorstBranch, int Motors, double WorstDip)
     {
         public static Tally Of(Solution s)
         {
-            int feeders = 0, branches = 0, transformers = 0, withAmpacity = 0, withOcpd = 0, withNeutral = 0, motors = 0;
+            int feeders = 0, branches = 0, transformers = 0, withAmpacity = 0, withOcpd = 0, withNeutral = 0, withGround = 0, motors = 0;
             double worstFeeder = double.NegativeInfinity, worstBranch = double.NegativeInfinity, worstDip = double.NegativeInfinity;
             foreach (var r in s.Runs)
             {
@@ -108,6 +109,7 @@ internal static class SummaryViewBuilder
                 withAmpacity += r.Kind != RunResultKind.Transformer && r.AmpacityA is not null ? 1 : 0;
                 withOcpd += r.OcpdA is not null ? 1 : 0;
                 withNeutral += r.NeutralAmpacityA is not null ? 1 : 0;
+                withGround += r.GroundSize is not null && r.GroundMinSize is not null ? 1 : 0;
             }
 
             foreach (var e in s.EndPoints)
@@ -119,7 +121,7 @@ internal static class SummaryViewBuilder
                 }
             }
 
-            return new Tally(feeders, branches, transformers, withAmpacity, withOcpd, withNeutral, worstFeeder, worstBranch, motors, worstDip);
+            return new Tally(feeders, branches, transformers, withAmpacity, withOcpd, withNeutral, withGround, worstFeeder, worstBranch, motors, worstDip);
         }
     }
 }

@@ -41,4 +41,7 @@ public enum CodeCheck
 
     /// <summary>A motor's terminals dipping more than the limit while it starts.</summary>
     MotorStart,
+
+    /// <summary>A stated equipment grounding conductor smaller than the run needs.</summary>
+    GroundingConductor,
 }

@@ -17,6 +17,12 @@ public abstract class CodeRules
     /// <summary>A figure breaks a rule when it is over its limit by more than this.</summary>
     protected const double Tolerance = 1e-9;
 
+    /// <summary>A rule set whose conductor data (ampacities, small-conductor limits) come from <paramref name="catalog"/>.</summary>
+    protected CodeRules(ConductorCatalog catalog) => Catalog = catalog;
+
+    /// <summary>The conductor data the rules read.</summary>
+    protected ConductorCatalog Catalog { get; }
+
     /// <summary>Which code this is.</summary>
     public abstract ElectricalCode Code { get; }
 
@@ -97,6 +103,55 @@ public abstract class CodeRules
     public abstract int CurrentCarryingConductors(NetworkRun run);
 
     /// <summary>
+    /// The smallest equipment grounding conductor each set of a run needs, or null where the rule set gives none (under
+    /// the NEC: no device stated, or one above its table). <paramref name="ground"/> holds what the rule reads: the device,
+    /// the material, the lines' size and the smallest size that would meet the conductor rules for the run's load.
+    /// </summary>
+    public abstract ConductorSize? MinimumGroundSize(in GroundingCase ground);
+
+    /// <summary>
+    /// The smallest equipment grounding conductor each set of <paramref name="conductors"/> needs with lines of
+    /// <paramref name="sets"/> sets of <paramref name="size"/>, carrying a design current of <paramref name="designCurrentA"/>
+    /// under <paramref name="rules"/> (ambient and terminal rating) in a raceway of <paramref name="currentCarrying"/>
+    /// current-carrying conductors, or null where the rule set gives none.
+    /// </summary>
+    public ConductorSize? MinimumGroundSize(Run conductors, ConductorSize size, int sets, double designCurrentA, Rules rules, int currentCarrying = 3)
+    {
+        ArgumentNullException.ThrowIfNull(conductors);
+        return conductors.OcpdA is not { } ocpd
+            ? null
+            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying)));
+    }
+
+    /// <summary>
+    /// The smallest size of <paramref name="series"/> in the catalogue whose <paramref name="sets"/> sets, of the material and
+    /// insulation of <paramref name="conductors"/>, meet every conductor rule here (<see cref="Meets"/>) for a design current
+    /// of <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/>, their ampacity worked out as the solver
+    /// and the sizer do (<paramref name="rules"/>' ambient and terminal rating, adjusted for
+    /// <paramref name="currentCarrying"/> conductors in the raceway); null where no size does.
+    /// </summary>
+    public ConductorSize? SmallestSufficientSize(double designCurrentA, double? ocpdA, Run conductors, SizeSeries series, int sets, Rules rules, int currentCarrying = 3)
+    {
+        ArgumentNullException.ThrowIfNull(conductors);
+        ArgumentNullException.ThrowIfNull(rules);
+        foreach (var size in ConductorSize.All)
+        {
+            if (size.Series != series || !Catalog.Contains(size)
+                || Catalog.AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, Math.Max(1, currentCarrying)) is not { } oneSetA)
+            {
+                continue;
+            }
+
+            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets))
+            {
+                return size;
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>
     /// Adds to <paramref name="findings"/> (made when first needed) a finding for each conductor or device rule
     /// <paramref name="run"/> breaks with the figures <paramref name="figures"/>. Gives the list, or null while there is none.
     /// </summary>
@@ -109,4 +164,16 @@ public abstract class CodeRules
 /// <param name="AmpacityA">The lines' allowable ampacity, all sets, or null where the table has none.</param>
 /// <param name="NeutralCurrentA">The neutral's design current, amperes, or null where the run has no neutral.</param>
 /// <param name="NeutralAmpacityA">The neutral's allowable ampacity, all sets, or null.</param>
-internal readonly record struct CurrentFigures(double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA);
+/// <param name="GroundMinSize">The smallest equipment grounding conductor each set needs, or null where the rule set gives none.</param>
+internal readonly record struct CurrentFigures(
+    double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA, ConductorSize? GroundMinSize = null);
+
+/// <summary>What a rule set reads to size a run's equipment grounding conductor.</summary>
+/// <param name="OcpdA">The rating of the overcurrent device ahead of the run, amperes.</param>
+/// <param name="Material">The conductors' metal (the grounding conductor is taken to be of the same).</param>
+/// <param name="LineSize">The size of the lines in each set.</param>
+/// <param name="SufficientSize">
+/// The smallest size of the lines' series that would meet the conductor rules for the run's design current under its
+/// device at the same sets, or null where none in the catalogue does.
+/// </param>
+public readonly record struct GroundingCase(double OcpdA, Material Material, ConductorSize LineSize, ConductorSize? SufficientSize);

@@ -100,7 +100,7 @@ internal sealed class FieldSet
         a is null || b is null
             ? a is null && b is null
             : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
-              Nullable.Equals(a.NeutralSize, b.NeutralSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
+              Nullable.Equals(a.NeutralSize, b.NeutralSize) && Nullable.Equals(a.GroundSize, b.GroundSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
               Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed;
 
     /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
@@ -179,6 +179,11 @@ internal sealed class FieldSet
         {
             // Only when stated, so that an element added or removed lists the fields it always did.
             Text($"{prefix}.neutral_size", neutral.Text);
+        }
+
+        if (run.GroundSize is { } ground)
+        {
+            Text($"{prefix}.ground_size", ground.Text);
         }
 
         this

@@ -20,6 +20,12 @@ public sealed record Run
     /// </summary>
     public ConductorSize? NeutralSize { get; init; }
 
+    /// <summary>
+    /// The size of the equipment grounding conductor in each set, where the project states one (<c>ground_size</c>);
+    /// null where it states none (then none is checked: the results still give the minimum).
+    /// </summary>
+    public ConductorSize? GroundSize { get; init; }
+
     /// <summary>Number of parallel sets (1 or more).</summary>
     public int Sets { get; init; } = 1;
 

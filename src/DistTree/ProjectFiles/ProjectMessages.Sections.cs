@@ -184,6 +184,10 @@ internal static partial class ProjectMessages
     public static string MotorCategory(Subject circuit, LoadCategory stated) =>
         $"'category' of {circuit} is {Words.LoadCategory.Of(stated)}, but its load is a motor (given in {MotorQuantityList}): a motor's category is {Words.LoadCategory.Of(LoadCategory.Motor)} or {Words.LoadCategory.Of(LoadCategory.Hvac)}";
 
+    /// <summary>A grounding conductor's size of the other series than the lines' size (mm² against AWG or kcmil).</summary>
+    public static string GroundSeries(Subject run, Conductors.ConductorSize ground, Conductors.ConductorSize lines) =>
+        $"'ground_size' of {run} is {ground}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
+
     /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>
         $"'neutral_size' of the run of {circuit}: a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)";

@@ -33,8 +33,20 @@ public sealed record UpsizeChange
     /// <summary>Conductor material added: Δ(area × length × current-carrying conductors × sets), in mm²·m (or the price table's unit).</summary>
     public required double CostAdded { get; init; }
 
-    /// <summary>A note for the equipment grounding conductor when it must grow in proportion (NEC 250.122(B)), or null.</summary>
+    /// <summary>
+    /// What the new size needs of the equipment grounding conductor, in words with the clause the code in force cites: the
+    /// minimum in each set (<see cref="GroundMinSize"/>), and where the stated one is smaller, that it must be increased too.
+    /// </summary>
     public string? GroundingNote { get; init; }
+
+    /// <summary>The smallest equipment grounding conductor each set needs at the new size, or null where the code gives none (no device).</summary>
+    public string? GroundMinSize { get; init; }
+
+    /// <summary>The run's stated equipment grounding conductor (<c>ground_size</c>), or null where none is stated.</summary>
+    public string? GroundSize { get; init; }
+
+    /// <summary>True when the stated grounding conductor is smaller than the new size needs: it must be increased too.</summary>
+    public bool GroundMustIncrease { get; init; }
 
     /// <summary>Where the run's size value is in the project file.</summary>
     public SourceLocation SizeLocation { get; init; } = SourceLocation.None;

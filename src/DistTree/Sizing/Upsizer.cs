@@ -1,8 +1,7 @@
-using System.Globalization;
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
-using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Sizing;
@@ -56,6 +55,7 @@ public sealed class Upsizer
         var (picks, unresolvable, after) = attempt;
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
+        unresolvable.AddRange(GroundsLeft(after, changes));
         return new UpsizePlan
         {
             Changes = changes,
@@ -78,7 +78,7 @@ public sealed class Upsizer
         }
 
         var picks = Picks(problem, choice);
-        var after = Analysis.Run(Apply(before.Project, before.Network, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
+        var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
         return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
     }
 
@@ -105,18 +105,32 @@ public sealed class Upsizer
         return picks;
     }
 
-    /// <summary>The project with the picked sizes and sets on their runs; everything else as it was.</summary>
-    private static Project Apply(Project project, DistributionNetwork network, Dictionary<int, RunOption> picks)
+    /// <summary>
+    /// The project with the picked sizes and sets on their runs, and a stated grounding conductor the new size makes too
+    /// small raised to its minimum (the change says so); everything else as it was.
+    /// </summary>
+    private static Project Apply(Solution before, Dictionary<int, RunOption> picks)
     {
-        var feeders = new Dictionary<string, RunOption>(StringComparer.Ordinal);
-        var branches = new Dictionary<string, RunOption>(StringComparer.Ordinal);
+        var (project, network) = (before.Project, before.Network);
+        var rows = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex, r => (r.DesignCurrentA, r.CurrentCarryingConductors ?? 3));
+        var feeders = new Dictionary<string, (RunOption, double, int)>(StringComparer.Ordinal);
+        var branches = new Dictionary<string, (RunOption, double, int)>(StringComparer.Ordinal);
         foreach (var (index, option) in picks)
         {
             var node = network.Nodes[index];
-            (node.Circuit is not null ? branches : feeders)[node.Id] = option;
+            var (design, carrying) = rows[index];
+            (node.Circuit is not null ? branches : feeders)[node.Id] = (option, design, carrying);
         }
 
-        Run With(Run run, RunOption o) => run with { Size = o.Size, Sets = o.Sets };
+        Run With(Run run, (RunOption Option, double DesignA, int Carrying) pick)
+        {
+            var o = pick.Option;
+            var ground = run.GroundSize is { } stated && before.Code.MinimumGroundSize(run, o.Size, o.Sets, pick.DesignA, project.Rules, pick.Carrying) is { } least && stated < least
+                ? least
+                : run.GroundSize;
+            return run with { Size = o.Size, Sets = o.Sets, GroundSize = ground };
+        }
+
         var equipment = project.Equipment.Select(e => e with
         {
             Feeder = e.Feeder is { } f && feeders.TryGetValue(e.Id, out var fo) ? With(f, fo) : e.Feeder,
@@ -140,11 +154,12 @@ public sealed class Upsizer
         }
     }
 
-    // A finding a conductor choice could fix that the re-solved plan still has, or null.
+    // A finding a conductor choice could fix that the re-solved plan still has, or null. A stated grounding conductor
+    // below its minimum is not one: the line sizes cannot fix it (the change says it must be increased).
     private static Finding? LeftOver(Solution after, List<UnresolvableLimit> unresolvable)
     {
         var known = new HashSet<string>(unresolvable.Select(u => u.Subject), StringComparer.Ordinal);
-        return after.AllFindings.FirstOrDefault(f => f.Kind != FindingKind.TransformerOverload && !known.Contains(f.Subject));
+        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor) && !known.Contains(f.Subject));
     }
 
     // The proof: re-solved, nothing a conductor choice can fix is left over a limit. Where it is not, the user is told
@@ -167,6 +182,9 @@ public sealed class Upsizer
             var option = picks[index];
             var run = before.Network.Nodes[index].Incoming!;
             var was = beforeRows[index];
+            var least = afterRows[index].GroundMinimum;
+            var stated = run.Conductors.GroundSize;
+            var increase = stated is { } g && least is { } l && g < l;
             changes.Add(new UpsizeChange
             {
                 RunId = was.Id,
@@ -178,7 +196,10 @@ public sealed class Upsizer
                 DropPercentBefore = was.DropPercent,
                 DropPercentAfter = afterRows[index].DropPercent,
                 CostAdded = option.Cost,
-                GroundingNote = GroundingNote(run.Conductors, option),
+                GroundingNote = GroundingNote(before.Code.Cite(CodeCheck.GroundingConductor), option.Sets, least, stated, increase),
+                GroundMinSize = least?.Text,
+                GroundSize = stated?.Text,
+                GroundMustIncrease = increase,
                 SizeLocation = run.Conductors.SizeLocation,
             });
         }
@@ -186,14 +207,27 @@ public sealed class Upsizer
         return changes;
     }
 
-    // NEC 250.122(B) (memory; verify against the edition in force): where ungrounded conductors are increased
-    // in size, a wire-type equipment grounding conductor grows in proportion to their circular-mil area.
-    private static string? GroundingNote(Run present, RunOption option)
+    // What the new size needs of the grounding conductor, with the clause the code in force cites.
+    private static string GroundingNote(string clause, int sets, ConductorSize? least, ConductorSize? stated, bool increase)
     {
-        var ratio = option.Size.AreaCmil * option.Sets / (present.Size.AreaCmil * present.Sets);
-        return ratio <= 1 + 1e-9
-            ? null
-            : string.Create(CultureInfo.InvariantCulture, $"increase a wire-type equipment grounding conductor in proportion to the circular-mil area (×{ratio:0.00}), NEC 250.122(B)");
+        if (least is not { } minimum)
+        {
+            return $"no minimum without an overcurrent device ({clause})";
+        }
+
+        var each = sets > 1 ? " in each set" : "";
+        return increase
+            ? $"at least {minimum.Text}{each} ({clause}); the stated {stated!.Value.Text} is too small and must be increased too"
+            : $"at least {minimum.Text}{each} ({clause})";
+    }
+
+    // The runs the plan leaves alone whose stated grounding conductor is below its minimum: no line size fixes that.
+    private static IEnumerable<UnresolvableLimit> GroundsLeft(Solution after, List<UpsizeChange> changes)
+    {
+        var changed = new HashSet<string>(changes.Select(c => c.RunId), StringComparer.Ordinal);
+        return after.AllFindings
+            .Where(f => f.Kind == FindingKind.GroundingConductor && !changed.Contains(f.Subject))
+            .Select(f => new UnresolvableLimit(f.Subject, $"{f.Message}: a larger line size cannot fix this; increase the grounding conductor"));
     }
 
     // A plan, what it reports as unfixable, and its proof.

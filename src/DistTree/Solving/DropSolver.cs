@@ -53,7 +53,7 @@ public sealed class DropSolver
         // The end points' totals, findings and motor starts; then each run's reach from them.
         var points = EndPointTotals.Solve(network, sums, phases, runs, flow, voltages, code);
         Reach.Add(network, runs, points.EndPoints.Rows);
-        var solved = new SolvedRows(network, phases, sums.Power, new SolvedRuns(runs.Rows, runs.Findings), points.EndPoints);
+        var solved = new SolvedRows(network, phases, sums.Power, new SolvedRuns(runs.Rows, runs.Findings), points.EndPoints, code);
         return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow, code);
     }
 

@@ -32,6 +32,9 @@ public enum FindingKind
 
     /// <summary>The design current exceeds the overcurrent device's rating.</summary>
     DeviceBelowLoad,
+
+    /// <summary>A stated equipment grounding conductor is smaller than the run needs.</summary>
+    GroundingConductor,
 }
 
 /// <summary>

@@ -10,7 +10,7 @@ namespace DistTree.Solving;
 /// <param name="Check">The check's name in a list of checks: <c>Feeder drop</c>.</param>
 /// <param name="SarifName">The SARIF rule's name (a Pascal-case identifier).</param>
 /// <param name="Description">One sentence saying what the finding means (the SARIF rule's short description).</param>
-/// <param name="Unit">The unit of the finding's value and limit: <c>%</c>, <c>A</c> or <c>kVA</c>.</param>
+/// <param name="Unit">The unit of the finding's value and limit: <c>%</c>, <c>A</c>, <c>kVA</c> or <c>mm2</c>.</param>
 /// <param name="Value">What the finding's value is.</param>
 /// <param name="Limit">What the finding's limit is.</param>
 public sealed record FindingKindInfo(
@@ -57,5 +57,9 @@ public static class FindingKinds
         FindingKind.DeviceBelowLoad => new(
             kind, "device_below_load", "Design current above the overcurrent device's rating", "Overcurrent device rating (load)", "DeviceBelowLoad",
             "The design current of a run is above the rating of its overcurrent device.", "A", "the design current", "the device rating"),
+        FindingKind.GroundingConductor => new(
+            kind, "grounding_conductor", "Equipment grounding conductor below its minimum", "Equipment grounding conductor", "GroundingConductor",
+            "A run's stated equipment grounding conductor is smaller than the minimum for its device and lines.", "mm2",
+            "the stated grounding conductor's area", "the minimum's area"),
     };
 }

@@ -1,3 +1,4 @@
+using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.Network;
@@ -139,6 +140,26 @@ public readonly struct RunResult : IEquatable<RunResult>
 
     /// <summary>Allowable ampacity of all sets, in amperes (for a transformer: its rated current).</summary>
     public double? AmpacityA => Run is null ? Row.RatedA : Row.AmpacityA;
+
+    /// <summary>The stated neutral size of each set (<c>neutral_size</c>), or null where none is stated.</summary>
+    public string? NeutralSize => Run?.Conductors.NeutralSize?.Text;
+
+    /// <summary>The stated equipment grounding conductor of each set (<c>ground_size</c>), or null where none is stated.</summary>
+    public string? GroundSize => Run?.Conductors.GroundSize?.Text;
+
+    /// <summary>
+    /// The smallest equipment grounding conductor each set needs, as the code in force sizes it (NEC: by the device and
+    /// in proportion to lines larger than the load needs), or null where it gives none (no device, or a transformer).
+    /// </summary>
+    public ConductorSize? GroundMinimum => Run switch
+    {
+        null => null,
+        { Conductors.GroundSize: not null } => Row.GroundMinIndex == 0 ? null : ConductorSize.All[Row.GroundMinIndex - 1],
+        { Conductors: var c } => _rows.Code.MinimumGroundSize(c, c.Size, c.Sets, Row.DesignCurrentA, _rows.Rules, Row.CurrentCarrying),
+    };
+
+    /// <summary>The text of <see cref="GroundMinimum"/>, or null.</summary>
+    public string? GroundMinSize => GroundMinimum?.Text;
 
     /// <summary>Overcurrent device rating in amperes, if given.</summary>
     public double? OcpdA => Run?.Conductors.OcpdA;

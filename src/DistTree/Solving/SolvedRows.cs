@@ -15,8 +15,9 @@ internal sealed class SolvedRows
     // The text of each set of lines, by (int)Phases.
     private static readonly string[] LinesText = Enumerable.Range(0, 8).Select(set => PhaseRules.Text((Phases)set)).ToArray();
 
-    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, SolvedRuns runs, SolvedEndPoints endPoints)
+    public SolvedRows(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power, SolvedRuns runs, SolvedEndPoints endPoints, Codes.CodeRules code)
     {
+        Code = code;
         Rules = network.Project.Rules;
         Nodes = network.NodeArray;
         Phases = phases;
@@ -31,6 +32,9 @@ internal sealed class SolvedRows
     }
 
     public Rules Rules { get; }
+
+    /// <summary>The rule set that judged the solve.</summary>
+    public Codes.CodeRules Code { get; }
 
     public NetworkNode[] Nodes { get; }
 
@@ -99,6 +103,9 @@ internal struct RunRow
     public double? LoadFlowDropPercent;
     public double? MaxLengthM;
     public double? MaxLengthTotalM;
+
+    /// <summary>The smallest equipment grounding conductor the run needs, as its size's index + 1 (0 for none).</summary>
+    public short GroundMinIndex;
 
     /// <summary>The drop in volts: always the drop in percent of the nominal voltage.</summary>
     public readonly double DropV => DropPercent / 100.0 * VoltageV;

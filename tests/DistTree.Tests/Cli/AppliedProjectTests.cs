@@ -85,12 +85,12 @@ public sealed class AppliedProjectTests
         var text = File.ReadAllText(input);
         string[] forms =
         [
-            "feeder: { length: 750, size: \"8\\x20AWG\", ocpd: 50, raceway: pvc }    # long\u0085on purpose",
+            "feeder: { length: 750, size: \"8\\x20AWG\", ground_size: '10 AWG', ocpd: 50, raceway: pvc }    # long\u0085on purpose",
             "run: { length: 180, size: '12 AWG' }    # long on purpose",
             "run: { length: 85, size: !!str 8 AWG, raceway: pvc }",
         ];
         text = "# NEL\u0085here\n" + text
-            .Replace("feeder: { length: 750, size: 8 AWG, ocpd: 50, raceway: pvc }    # long on purpose", forms[0], StringComparison.Ordinal)
+            .Replace("feeder: { length: 750, size: 8 AWG, ground_size: 10 AWG, ocpd: 50, raceway: pvc }    # long on purpose", forms[0], StringComparison.Ordinal)
             .Replace("run: { length: 180, size: 12 AWG }    # long on purpose", forms[1], StringComparison.Ordinal)
             .Replace("run: { length: 85, size: 8 AWG, raceway: pvc }", forms[2], StringComparison.Ordinal);
         text = endings switch
@@ -108,7 +108,7 @@ public sealed class AppliedProjectTests
 
         Assert.True(result.ExitCode == 0, result.Error);
         var expected = text
-            .Replace(forms[0], forms[0].Replace("\"8\\x20AWG\"", "\"2 AWG\"", StringComparison.Ordinal), StringComparison.Ordinal)
+            .Replace(forms[0], forms[0].Replace("\"8\\x20AWG\"", "\"2 AWG\"", StringComparison.Ordinal).Replace("'10 AWG'", "'4 AWG'", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace(forms[1], forms[1].Replace("'12 AWG'", "'6 AWG'", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace(forms[2], forms[2].Replace("!!str 8 AWG", "!!str 6 AWG", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace("run: { length: 250, size: 8 AWG, raceway: pvc }", "run: { length: 250, size: 3 AWG, raceway: pvc }", StringComparison.Ordinal);

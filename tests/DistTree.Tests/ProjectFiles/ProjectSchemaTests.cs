@@ -73,6 +73,8 @@ public sealed class ProjectSchemaTests
     [InlineData("  system: 208Y/120\n", "  system: 208Y/120\n  available_fault_current_ka: 25\n  fault_x_r: 0\n", false)]
     [InlineData("size: 12 AWG }", "size: 12 AWG, neutral_size: 10 AWG }", true)]
     [InlineData("size: 12 AWG }", "size: 12 AWG, neutral_size: 10 kg }", false)]
+    [InlineData("size: 12 AWG }", "size: 12 AWG, ground_size: 12 AWG }", true)]
+    [InlineData("size: 12 AWG }", "size: 12 AWG, ground_size: 12 kg }", false)]
     [InlineData("    kind: panelboard\n", "    kind: panelboard\n    phase: AB\n", false)]
     public void Evaluate_ElectricalKeys_ValidWhereTheLoaderReadsThem(string original, string replacement, bool valid)
     {

@@ -217,8 +217,8 @@ public sealed class HtmlReportTests
         Assert.Equal(s.Summary.Findings.ToString(CultureInfo.InvariantCulture), tiles["findings"]);
 
         var rows = doc.QuerySelectorAll("table.limits tbody tr").Select(r => r.QuerySelectorAll("td").Select(c => c.TextContent).ToArray()).ToArray();
-        Assert.Equal(9, rows.Length);
-        foreach (var (name, kind) in new[] { ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad) })
+        Assert.Equal(10, rows.Length);
+        foreach (var (name, kind) in new[] { ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad), ("Equipment grounding conductor", FindingKind.GroundingConductor) })
         {
             var row = rows.Single(r => r[0] == name);
             var over = s.AllFindings.Count(f => f.Kind == kind);

@@ -119,6 +119,25 @@ public sealed class JsonResultsTests
         AssertValid(doc);
     }
 
+    // A stated grounding conductor is written on its run only; the minimum on every run, null without a device (a 20 A
+    // device on 12 AWG: Table 250.122's 12 AWG, NEC 2020, memory).
+    [Fact]
+    public void Write_GroundSizes_StatedOnThatRunOnlyAndTheMinimumOnEvery()
+    {
+        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+            "{ id: \"1\", poles: 1, ocpd: 20, load: { va: 1000 }, run: { length: 10, size: 12 AWG, ground_size: 12 AWG } }\n"
+            + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }");
+
+        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
+
+        var runs = doc.RootElement.GetProperty("runs").EnumerateArray().ToDictionary(r => r.GetProperty("id").GetString()!);
+        Assert.Equal("12 AWG", runs["P/1"].GetProperty("ground_size").GetString());
+        Assert.Equal("12 AWG", runs["P/1"].GetProperty("ground_min_size").GetString());
+        Assert.False(runs["P/2"].TryGetProperty("ground_size", out _));
+        Assert.Equal(JsonValueKind.Null, runs["P/2"].GetProperty("ground_min_size").ValueKind);
+        AssertValid(doc);
+    }
+
     [Fact]
     public void Write_ServiceSource_WrittenBesideTheFrequencyOnlyWhenStated()
     {

@@ -118,11 +118,17 @@ public sealed class UpsizerTests
     }
 
     [Fact]
-    public void Plan_Upsize_CarriesTheGroundingNote()
+    public void Plan_Upsize_NamesTheGroundingConductorTheNewSizeNeeds()
     {
+        // 16 A under a 20 A device: 12 AWG is the smallest that will do, and Table 250.122's size (NEC, memory); on the
+        // larger size the plan takes, 250.122(B)'s proportion makes it the lines' own size (12 AWG × new / 12 AWG area).
         var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
             "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 16 }, run: { length: 90, size: 12 AWG } }"));
-        Assert.Contains("250.122(B)", Assert.Single(plan.Changes).GroundingNote, StringComparison.Ordinal);
+        var change = Assert.Single(plan.Changes);
+        Assert.Equal(change.SizeAfter, change.GroundMinSize);
+        Assert.Equal($"at least {change.SizeAfter} (NEC 250.122)", change.GroundingNote);
+        Assert.Null(change.GroundSize);
+        Assert.False(change.GroundMustIncrease);
     }
 
     // With the findings on the load flow, its drops come out larger than the percent sums the sizer prices (a lower

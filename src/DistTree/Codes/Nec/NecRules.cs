@@ -22,6 +22,12 @@ namespace DistTree.Codes.Nec;
 /// <item>Small conductors (14 to 10 AWG copper, 12 and 10 AWG aluminium) may be protected at the catalogue's
 /// <c>ocpd_cu</c> and <c>ocpd_al</c> columns at most (NEC 240.4(D), read; see conductors.tsv), times the parallel
 /// sets.</item>
+/// <item>An equipment grounding conductor is at least the size of Table 250.122 for the device ahead of it (see
+/// <see cref="NecGroundingTable"/>); where the lines are larger than the smallest size that would meet the rules above
+/// for the run's load, it grows in proportion to their circular-mil area, to the next size at or above (250.122(B));
+/// it need not be larger than the lines (250.122(A)); in parallel sets each set's is sized on the device's full rating,
+/// so the proportion is per set (250.122(F)). A metric run takes the smallest metric size at or above the area so found.
+/// No device, no minimum.</item>
 /// </list>
 /// </summary>
 public sealed class NecRules : CodeRules
@@ -42,7 +48,8 @@ public sealed class NecRules : CodeRules
     private readonly ConductorCatalog _catalog;
 
     /// <summary>The rules with the small-conductor limits of <paramref name="catalog"/>.</summary>
-    public NecRules(ConductorCatalog catalog) => _catalog = catalog;
+    public NecRules(ConductorCatalog catalog)
+        : base(catalog) => _catalog = catalog;
 
     /// <summary>The limits a project under the NEC starts from: 3 % per feeder and per branch circuit, 5 % in all.</summary>
     internal static Rules RuleDefaults { get; } = new() { Code = ElectricalCode.Nec, FeederLimitPercent = 3, BranchLimitPercent = 3, TotalLimitPercent = 5 };
@@ -83,7 +90,38 @@ public sealed class NecRules : CodeRules
         CodeCheck.SmallConductor => "NEC 240.4(D)",
         CodeCheck.TransformerLoading => "nameplate rating (common practice; no NEC clause)",
         CodeCheck.MotorStart => "starting voltage (common practice; no NEC clause)",
+        CodeCheck.GroundingConductor => "NEC 250.122",
     };
+
+    /// <inheritdoc/>
+    public override ConductorSize? MinimumGroundSize(in GroundingCase ground)
+    {
+        var row = NecGroundingTable.RowOf(ground.OcpdA);
+        if (row < 0)
+        {
+            return null;
+        }
+
+        // 250.122(B): in proportion to the lines' area over the smallest that would do, where they are larger.
+        var line = ground.LineSize;
+        var requiredCmil = NecGroundingTable.AreaCmil(row, ground.Material);
+        if (ground.SufficientSize is { } least && line.AreaCmil > least.AreaCmil * (1 + Tolerance))
+        {
+            requiredCmil *= line.AreaCmil / least.AreaCmil;
+        }
+
+        // 250.122(A): never larger than the lines. The lines' own size is in their series, so a size is always found.
+        requiredCmil = Math.Min(requiredCmil, line.AreaCmil);
+        foreach (var size in ConductorSize.All)
+        {
+            if (size.Series == line.Series && size.AreaCmil >= requiredCmil * (1 - Tolerance))
+            {
+                return size;
+            }
+        }
+
+        return line;
+    }
 
     /// <inheritdoc/>
     public override double DesignCurrentA(Complex carried, Complex continuous, bool protectedByDevice) =>
@@ -174,6 +212,11 @@ public sealed class NecRules : CodeRules
                 conductors.Location));
         }
 
+        if (conductors.GroundSize is { } ground && figures.GroundMinSize is { } least && ground.AreaCmil < least.AreaCmil * (1 - Tolerance))
+        {
+            (findings ??= []).Add(GroundingFinding(run, ground, least));
+        }
+
         if (conductors.OcpdA is { } device)
         {
             if (!DeviceCarries(device, design))
@@ -218,6 +261,26 @@ public sealed class NecRules : CodeRules
         var neutral = run.Kind == RunKind.Branch ? lines == 1 : system.HasNeutral;
         var counted = neutral && (lines == 1 || (lines == 2 && system.Phases == 3));
         return lines + (counted ? 1 : 0);
+    }
+
+    // A stated grounding conductor below the minimum: its area against the minimum's, mm².
+    private Finding GroundingFinding(NetworkRun run, ConductorSize ground, ConductorSize least)
+    {
+        var conductors = run.Conductors;
+        var device = conductors.OcpdA ?? 0;
+        var row = NecGroundingTable.RowOf(device);
+        var table = row < 0 ? least.Text : NecGroundingTable.SizeText(row, conductors.Material);
+        var why = table == least.Text
+            ? FormattableString.Invariant($"the table's size for a {device:0} A device")
+            : FormattableString.Invariant($"the table's {table} for a {device:0} A device, increased in proportion to lines of {conductors.Size.Text}, larger than the load needs");
+        return Finding.Written(
+            FindingKind.GroundingConductor,
+            Cite(CodeCheck.GroundingConductor),
+            run.Id,
+            ground.AreaMm2,
+            least.AreaMm2,
+            $"{Words.Noun(run.Kind)} {run.Id}: the stated {ground.Text} equipment grounding conductor is smaller than the {least.Text} it needs ({why})",
+            conductors.Location);
     }
 
     private static bool AboveSmallMax(double ocpdA, double smallMaxA, int sets) => ocpdA > (smallMaxA * sets) + Tolerance;

@@ -8,7 +8,7 @@ using DistTree.Vocabulary;
 namespace DistTree.ProjectFiles.Sections;
 
 /// <summary>
-/// Reads a feeder's or a branch circuit's run: its length, size, neutral size, sets, conductor, device, limit and
+/// Reads a feeder's or a branch circuit's run: its length, size, neutral size, grounding conductor's size, sets, conductor, device, limit and
 /// whether it is fixed.
 /// </summary>
 internal sealed class RunReader(SectionContext context)
@@ -54,6 +54,8 @@ internal sealed class RunReader(SectionContext context)
             neutralLocation = m.KeyLocation("neutral_size");
         }
 
+        var groundNode = m.Optional("ground_size");
+        var ground = groundNode is null ? null : GroundSize(groundNode, subject, size);
         var sets = Sets(m, subject);
         var defaults = context.Draft.Defaults;
         var material = m.Optional("material") is { } materialNode ? Values.Choice(materialNode, subject.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
@@ -69,7 +71,7 @@ internal sealed class RunReader(SectionContext context)
 
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
-        if (!sharingOk || length is null || size is null || (neutralNode is not null && neutral is null) || sets < 1 || material is null || insulation is null || raceway is null
+        if (!sharingOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
             return null;
@@ -80,6 +82,7 @@ internal sealed class RunReader(SectionContext context)
             LengthM = length.Value,
             Size = size.Value,
             NeutralSize = neutral,
+            GroundSize = ground,
             Sets = sets,
             Material = material.Value,
             InsulationC = insulation.Value,
@@ -122,6 +125,19 @@ internal sealed class RunReader(SectionContext context)
         }
 
         return neutral;
+    }
+
+    // The equipment grounding conductor's size: read as the size is, and in the same series as the lines.
+    private ConductorSize? GroundSize(SourceNode node, Subject subject, ConductorSize? lines)
+    {
+        var ground = Size(node, subject.Of("'ground_size' of "));
+        if (ground is { } g && lines is { } l && g.Series != l.Series)
+        {
+            Bag.Error(node.Location, ProjectMessages.GroundSeries(subject, g, l));
+            return null;
+        }
+
+        return ground;
     }
 
     // A conductor size, parsed once per distinct text; 'what' names the key in messages. A bare number is refused

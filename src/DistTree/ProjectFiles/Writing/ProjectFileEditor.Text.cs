@@ -16,7 +16,7 @@ public static partial class ProjectFileEditor
     {
         var at = new SourceLocation(change.SizeLocation.File, scalar.Line, scalar.Column);
         var what = $"the {key} of run '{change.RunId}'";
-        var example = $"'{key}: {(key == SizeKey ? change.SizeBefore : change.SetsBefore)}'";
+        var example = $"'{key}: {key switch { SizeKey => change.SizeBefore, GroundKey => change.GroundSize, _ => Number(change.SetsBefore) }}'";
         var start = Position(lines, scalar.Line, scalar.Column);
         if (start < text.Length && text[start] == '!')
         {

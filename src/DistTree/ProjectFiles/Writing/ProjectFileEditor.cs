@@ -10,7 +10,8 @@ namespace DistTree.ProjectFiles.Writing;
 /// <summary>
 /// Applies an upsize plan to one project file, editing only the values that change: each changed run's
 /// <c>size</c> scalar in place, in the form it is written in (plain, single- or double-quoted, after a tag),
-/// and its <c>sets</c> value (replaced where written, else added right after the size). Every other byte stays
+/// its <c>sets</c> value (replaced where written, else added right after the size), and its stated
+/// <c>ground_size</c> where the new size needs a larger one (<see cref="UpsizeChange.GroundMustIncrease"/>). Every other byte stays
 /// as it was: comments, key order, line endings (LF, CR LF or CR, mixed as they are), characters such as NEL
 /// inside a value, and a UTF-8 byte-order mark. The file is read as the loader reads it, so each size is found
 /// as the loader found it; a size the editor cannot rewrite (a block scalar, a value over several lines) is a
@@ -20,6 +21,7 @@ public static partial class ProjectFileEditor
 {
     private const string SizeKey = "size";
     private const string SetsKey = "sets";
+    private const string GroundKey = "ground_size";
     private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
 
     /// <summary>
@@ -98,6 +100,13 @@ public static partial class ProjectFileEditor
         }
 
         edits.Add(new Edit(size.Start, size.End - size.Start, size.Quote + change.SizeAfter + size.Quote));
+        if (change is { GroundMustIncrease: true, GroundMinSize: { } least } && entry.Mapping.Entries.Find(e => e.Key.Value == GroundKey).Value is SourceScalar ground)
+        {
+            // The loader read the stated size from this mapping, so it is here; only its value changes.
+            var span = ScalarSpan(text, lines, ground, change, GroundKey);
+            edits.Add(new Edit(span.Start, span.End - span.Start, span.Quote + least + span.Quote));
+        }
+
         if (change.SetsAfter == change.SetsBefore)
         {
             return;

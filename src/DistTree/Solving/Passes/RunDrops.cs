@@ -226,6 +226,7 @@ internal sealed class RunDrops
             DropPercent = ownDrop,
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
+            GroundMinIndex = conductors.GroundSize is null ? (short)0 : GroundMinIndex(conductors, designA, carrying),
         };
     }
 
@@ -256,6 +257,11 @@ internal sealed class RunDrops
 
         return (worst, line, neutral);
     }
+
+    // The smallest equipment grounding conductor a run that states one needs, as its size's index + 1 (0 for none; see
+    // RunRow). Another run's is worked out when it is read (RunResult.GroundMinimum): it judges nothing.
+    private short GroundMinIndex(Run conductors, double designA, int carrying) =>
+        _code.MinimumGroundSize(conductors, conductors.Size, conductors.Sets, designA, _rules, carrying) is { } least ? (short)(least.Index + 1) : (short)0;
 
     // A run's length in km per set: the sets share the current.
     private static double PerSetKm(Run conductors) => conductors.LengthM / 1000.0 / conductors.Sets;

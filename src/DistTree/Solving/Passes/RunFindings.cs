@@ -1,4 +1,5 @@
 using DistTree.Codes;
+using DistTree.Conductors;
 using DistTree.Network;
 using DistTree.Vocabulary;
 
@@ -32,7 +33,8 @@ internal static class RunFindings
                 conductors.Location));
         }
 
-        return code.AddFindings(findings, run, new CurrentFigures(r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA));
+        return code.AddFindings(findings, run, new CurrentFigures(
+            r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA, r.GroundMinIndex == 0 ? null : ConductorSize.All[r.GroundMinIndex - 1]));
     }
 
     /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>
