@@ -60,11 +60,25 @@ public abstract class CodeRules
     };
 
     /// <summary>
-    /// The design current of one conductor, amperes, from its current <paramref name="carried"/> and the continuous
-    /// part of it, <paramref name="continuous"/> (phasors, amperes), for a conductor that <paramref name="protectedByDevice"/>
-    /// (a line) or not (a neutral).
+    /// The design current of one conductor, amperes, from its current <paramref name="carried"/>, the continuous
+    /// part of it, <paramref name="continuous"/> (phasors, amperes; a motor's current is never counted continuous),
+    /// and the full-load current of the largest motor it carries, <paramref name="largestMotorA"/> (amperes, 0 for
+    /// none), for a conductor that <paramref name="protectedByDevice"/> (a line) or not (a neutral).
     /// </summary>
-    public abstract double DesignCurrentA(System.Numerics.Complex carried, System.Numerics.Complex continuous, bool protectedByDevice);
+    public abstract double DesignCurrentA(System.Numerics.Complex carried, System.Numerics.Complex continuous, double largestMotorA, bool protectedByDevice);
+
+    /// <summary>
+    /// The design current of each line of a branch circuit whose <paramref name="duty"/> sets it from the equipment
+    /// rather than from its load (a motor's full-load current, air-conditioning equipment's nameplate), amperes; null
+    /// for a general circuit.
+    /// </summary>
+    public abstract double? EquipmentDesignCurrentA(in CircuitDuty duty);
+
+    /// <summary>
+    /// The largest overcurrent device the rules for <paramref name="duty"/> allow, amperes, where they set one in place
+    /// of the general conductor-protection rules (a motor's, air-conditioning equipment's); null for a general circuit.
+    /// </summary>
+    public abstract double? EquipmentMaxDeviceA(in CircuitDuty duty);
 
     /// <summary>
     /// True when conductors of <paramref name="ampacityA"/> (all sets, amperes) carry a design current of
@@ -84,11 +98,15 @@ public abstract class CodeRules
     /// <summary>
     /// True when <paramref name="sets"/> sets of <paramref name="size"/> with an allowable ampacity of
     /// <paramref name="ampacityA"/> (all sets) meet every conductor rule here for a design current of
-    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none).
+    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none), on a
+    /// run serving <paramref name="duty"/>: where the duty's own rules set the largest device
+    /// (<see cref="EquipmentMaxDeviceA"/>), those replace the general device rules.
     /// </summary>
-    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA) =>
+    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, in CircuitDuty duty) =>
         Carries(designCurrentA, ampacityA)
-        && (ocpdA is not { } ocpd || (DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
+        && (ocpdA is not { } ocpd || (EquipmentMaxDeviceA(duty) is { } maxA
+            ? !(ocpd > maxA + Tolerance)
+            : DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
 
     /// <summary>
     /// Adds to <paramref name="findings"/> (made when first needed) a finding for each conductor or device rule
@@ -103,4 +121,7 @@ public abstract class CodeRules
 /// <param name="AmpacityA">The lines' allowable ampacity, all sets, or null where the table has none.</param>
 /// <param name="NeutralCurrentA">The neutral's design current, amperes, or null where the run has no neutral.</param>
 /// <param name="NeutralAmpacityA">The neutral's allowable ampacity, all sets, or null.</param>
-internal readonly record struct CurrentFigures(double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA);
+/// <param name="LargestMotorA">The full-load current of the largest motor on the most loaded line, amperes (0 for none).</param>
+/// <param name="Duty">What the run serves (general for a feeder).</param>
+internal readonly record struct CurrentFigures(
+    double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA, double LargestMotorA = 0, CircuitDuty Duty = default);

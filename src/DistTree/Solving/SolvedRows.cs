@@ -83,6 +83,7 @@ internal struct RunRow
     public double CurrentA;
     public double DesignCurrentA;
     public byte DesignLine;
+    public double LargestMotorA;
     public double? NeutralDesignCurrentA;
     public double? NeutralAmpacityA;
     public double TemperatureC;

@@ -85,7 +85,7 @@ internal sealed class PhaseCurrents
             {
                 var parent = node.ParentIndex;
                 var circuit = node.Circuit;
-                if (_continuousOnly && !circuit.Continuous)
+                if (_continuousOnly && (!circuit.Continuous || circuit.Load.IsMotor))
                 {
                     continue;
                 }

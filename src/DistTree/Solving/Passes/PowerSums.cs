@@ -6,7 +6,8 @@ namespace DistTree.Solving.Passes;
 
 /// <summary>
 /// The power pass, bottom-up: an end point's power is its load; a node's is the phasor sum of its children's
-/// times its demand factor: S_node = d·ΣS_child. The continuous part of each is summed the same way. On the way
+/// times its demand factor: S_node = d·ΣS_child. The continuous part of each is summed the same way (a motor is
+/// never counted continuous: the motor rules give its 125 %, see <see cref="LargestMotors"/>). On the way
 /// it notes what each node has (<see cref="Passes.Has"/>), and a motor's locked-rotor power while its load is at
 /// hand (an end point's demand factor is 1, so its power is the one the motor-start check would read).
 /// </summary>
@@ -35,7 +36,7 @@ internal sealed class PowerSums : IDisposable
     /// <summary>Per node, the complex power it carries after demand factors.</summary>
     public ComplexPower[] Power { get; }
 
-    /// <summary>Per node, the continuous part of <see cref="Power"/>.</summary>
+    /// <summary>Per node, the continuous part of <see cref="Power"/> (motors left out).</summary>
     public ComplexPower[] Continuous { get; }
 
     /// <summary>Per node, what it has.</summary>
@@ -79,7 +80,7 @@ internal sealed class PowerSums : IDisposable
                         throw ProjectException.At(circuit.Location, e.Message);
                     }
 
-                    continuous[i] = circuit.Continuous ? power[i] : ComplexPower.Zero;
+                    continuous[i] = circuit.Continuous && !circuit.Load.IsMotor ? power[i] : ComplexPower.Zero;
                     if (circuit.Load.IsMotor)
                     {
                         lockedRotor[i] = MotorStarting.LockedRotor(circuit.Load, power[i]);

@@ -25,15 +25,16 @@ internal sealed class RunDrops
     private readonly PowerSums _sums;
     private readonly PhaseFlow _phases;
     private readonly Complex[]? _continuous;
+    private readonly double[]? _motors;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
     private int _findings;
 
-    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
+    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, CurrentParts parts, RunRows runs)
     {
         _catalog = catalog;
         _code = code;
-        _continuous = continuous;
+        (_continuous, _motors) = (parts.Continuous, parts.LargestMotors);
         _rules = network.Project.Rules;
         _frequencyHz = network.Project.Service.FrequencyHz;
         _bases = new RunElectrics.Bases(catalog, _rules, _frequencyHz);
@@ -46,13 +47,13 @@ internal sealed class RunDrops
 
     /// <summary>
     /// Fills <paramref name="runs"/>' rows and current-lengths, and on the percent sum their findings; gives the number
-    /// of findings. <paramref name="continuous"/> holds, per node × 3, the continuous part of each line's current (null
-    /// where no load is continuous).
+    /// of findings. <paramref name="parts"/> holds, per node × 3, the continuous part of each line's current and the
+    /// largest motor's full-load current on it.
     /// </summary>
     public static int Solve(
-        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, Complex[]? continuous, RunRows runs)
+        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, CurrentParts parts, RunRows runs)
     {
-        var pass = new RunDrops(catalog, code, network, sums, phases, continuous, runs);
+        var pass = new RunDrops(catalog, code, network, sums, phases, parts, runs);
         ParallelRanges.For(pass._nodes.Length, pass.SolveRange);
         return pass._findings;
     }
@@ -202,7 +203,7 @@ internal sealed class RunDrops
             }
         }
 
-        var (designA, designLine, neutralA) = DesignCurrents(run);
+        var (designA, designLine, motorA, neutralA) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
             : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC) * conductors.Sets
             : figures.AmpacityA;
@@ -212,6 +213,7 @@ internal sealed class RunDrops
             CurrentA = currentA,
             DesignCurrentA = designA,
             DesignLine = designLine,
+            LargestMotorA = motorA,
             NeutralDesignCurrentA = neutralA,
             NeutralAmpacityA = neutralAmpacityA,
             TemperatureC = figures.TemperatureC,
@@ -226,17 +228,25 @@ internal sealed class RunDrops
         };
     }
 
-    // A run's design currents, as the code in force counts them from each line's current and its continuous part: the
-    // most loaded line's and which line that is, and the neutral's where the run's bus has one.
-    private (double DesignA, byte Line, double? NeutralA) DesignCurrents(NetworkRun run)
+    // A run's design currents, as the code in force counts them from each line's current, its continuous part and the
+    // largest motor on it (a motor's or air-conditioning equipment's branch circuit: from the equipment, on each line
+    // it is on): the most loaded line's, which line that is and its largest motor, and the neutral's where the run's
+    // bus has one.
+    private (double DesignA, byte Line, double MotorA, double? NeutralA) DesignCurrents(NetworkRun run)
     {
         var index = run.Target.Index;
         var i = _phases.Currents.AsSpan(index * 3, 3);
         var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
+        var m = _motors is null ? default : _motors.AsSpan(index * 3, 3);
+        var equipmentA = (run.Kind == RunKind.Branch && m.Length > 0) || run.Target.Circuit?.Load.MinimumCircuitA is not null
+            ? _code.EquipmentDesignCurrentA(CircuitDuty.Of(run))
+            : null;
         var (worst, line) = (0.0, (byte)0);
         for (var x = 0; x < 3; x++)
         {
-            var design = _code.DesignCurrentA(i[x], c.IsEmpty ? Complex.Zero : c[x], protectedByDevice: true);
+            var design = equipmentA is { } fromEquipment
+                ? (i[x] == Complex.Zero ? 0.0 : fromEquipment)
+                : _code.DesignCurrentA(i[x], c.IsEmpty ? Complex.Zero : c[x], m.IsEmpty ? 0.0 : m[x], protectedByDevice: true);
             if (design > worst || double.IsNaN(design))
             {
                 (worst, line) = (design, (byte)x);
@@ -248,10 +258,10 @@ internal sealed class RunDrops
         {
             var returned = -(i[0] + i[1] + i[2]);
             var continuousReturn = c.IsEmpty ? Complex.Zero : -(c[0] + c[1] + c[2]);
-            neutral = _code.DesignCurrentA(returned, continuousReturn, protectedByDevice: false);
+            neutral = _code.DesignCurrentA(returned, continuousReturn, 0.0, protectedByDevice: false);
         }
 
-        return (worst, line, neutral);
+        return (worst, line, m.IsEmpty ? 0.0 : m[line], neutral);
     }
 
     // A run's length in km per set: the sets share the current.
