@@ -76,6 +76,8 @@ internal sealed class FieldSet
             .Text("load.kind", c.Load.Kind.ToString().ToLowerInvariant())
             .Number("load.value", c.Load.Value)
             .Number("load.pf", c.Load.PowerFactor)
+            .Number("load.mca_a", c.Load.MinimumCircuitA)
+            .Number("load.mocp_a", c.Load.MaximumDeviceA)
             .Text("continuous", c.Continuous ? "true" : "false");
         set.AddRun("run", c.Run, units);
         return set;
