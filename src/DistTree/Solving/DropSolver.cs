@@ -30,7 +30,7 @@ public sealed class DropSolver
         var n = network.NodeArray.Length;
 
         // Bottom-up: each node's power and what it has; each circuit's lines; each node's line currents, their continuous
-    // part and each line's largest motor.
+        // part and each line's largest motor.
         using var sums = new PowerSums(network);
         var assigned = new Phases[n];
         PhaseAssignment.Assign(network, sums.Power, assigned);
