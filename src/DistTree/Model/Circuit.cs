@@ -32,7 +32,7 @@ public sealed record Circuit
     /// <summary>Loads along the run, nearest first; empty for a load at the end. The farthest point is the end point.</summary>
     public IReadOnlyList<LoadPoint> Points { get; init; } = [];
 
-    /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it.</summary>
+    /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it (a motor's 125 % comes from the motor rules instead).</summary>
     public bool Continuous { get; init; }
 
     /// <summary>The branch-circuit conductors.</summary>
