@@ -74,6 +74,26 @@ public sealed class MotorRulesTests
         Assert.All(s.Runs.Where(r => r.Id != "P"), r => Assert.Empty(r.Findings));
     }
 
+    // A feeder's device is rated for its load (NEC 215.3, memory), not for the largest motor's extra 25 %, which sizes
+    // conductors (430.24): a 25 hp motor (34 A) alone on a feeder of 8 AWG (50 A) makes a design current of 42.5 A; a
+    // 40 A feeder breaker carries its 34 A load, a 30 A one does not. (The feeder device's own motor rule, 430.62, is
+    // not checked: docs/limits.md.)
+    [Theory]
+    [InlineData(40, false)]
+    [InlineData(30, true)]
+    public void Solve_FeederDevice_AgainstTheLoadWithoutTheMotorShare(double ocpdA, bool found)
+    {
+        var yaml = Panel(Motor("25", "8 AWG", 60), feeder: FormattableString.Invariant($"8 AWG, ocpd: {ocpdA}"));
+        var feeder = SolverHarness.Solve(yaml).Runs.Single(r => r.Id == "P");
+        Assert.Equal(42.5, feeder.DesignCurrentA, 6);
+        Assert.Equal(found ? ["device_below_load"] : [], feeder.Findings.Select(f => f.Code));
+        if (found)
+        {
+            Assert.Equal(34, feeder.Findings[0].Value, 6);
+            Assert.Equal(30, feeder.Findings[0].Limit, 9);
+        }
+    }
+
     // Motors below a transformer are on another system: the transformer's primary feeder counts their current as the
     // transformer draws it, with no motor share (docs/limits.md). A 25 hp 208 V motor (74.8 A) on the secondary of a
     // 45 kVA 480-208Y/120 transformer: the primary feeder's design current is its line current.
