@@ -67,6 +67,7 @@ internal sealed class PowerSums : IDisposable
                 demand[i] = node.Equipment?.DemandFactor ?? 1.0;
                 has[i] = (node.Circuit is null ? Flag.None : Flag.Circuit)
                     | (node.Circuit is { Load.IsMotor: true } ? Flag.Motor : Flag.None)
+                    | (node.Circuit is { Load.MinimumCircuitA: not null } ? Flag.Nameplate : Flag.None)
                     | (node.Incoming is null ? Flag.None : Flag.Run)
                     | (node.Equipment?.Transformer is null ? Flag.None : Flag.Transformer);
                 if (node.Circuit is { } circuit)

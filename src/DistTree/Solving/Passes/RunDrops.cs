@@ -238,9 +238,7 @@ internal sealed class RunDrops
         var i = _phases.Currents.AsSpan(index * 3, 3);
         var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
         var m = _motors is null ? default : _motors.AsSpan(index * 3, 3);
-        var equipmentA = (run.Kind == RunKind.Branch && m.Length > 0) || run.Target.Circuit?.Load.MinimumCircuitA is not null
-            ? _code.EquipmentDesignCurrentA(CircuitDuty.Of(run))
-            : null;
+        var equipmentA = (_sums.Has[index] & (Has.Motor | Has.Nameplate)) != 0 ? _code.EquipmentDesignCurrentA(CircuitDuty.Of(run)) : null;
         var (worst, line) = (0.0, (byte)0);
         for (var x = 0; x < 3; x++)
         {
