@@ -37,7 +37,7 @@ public sealed class DropSolver
         var frame = PhaseFrame.Of(network);
         var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned);
         var continuous = ContinuousCurrents(network, frame, sums, assigned);
-        var motors = LargestMotors.Of(network, sums.Has, assigned);
+        var motors = LargestMotors.Of(network, sums, assigned);
         var code = CodeRules.For(network.Project.Rules.Code, _catalog);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same

@@ -84,6 +84,7 @@ internal struct RunRow
     public double DesignCurrentA;
     public byte DesignLine;
     public double LargestMotorA;
+    public bool FromEquipment; // a motor's or air-conditioning equipment's branch circuit (see CircuitDuty)
     public double? NeutralDesignCurrentA;
     public double? NeutralAmpacityA;
     public double TemperatureC;

@@ -18,10 +18,10 @@ internal static class LargestMotors
     /// Per node × 3, each line's largest motor's full-load current, amperes, rented from the pool (give it back with
     /// <see cref="Scratch.Return{T}(T[], int)"/> at three times the node count), or null where the tree has no motor.
     /// </summary>
-    public static double[]? Of(DistributionNetwork network, Has[] has, Phases[] assigned)
+    public static double[]? Of(DistributionNetwork network, PowerSums sums, Phases[] assigned)
     {
-        var (nodes, parents) = (network.NodeArray, network.ParentIndices);
-        var n = nodes.Length;
+        var (parents, has, fullLoad) = (network.ParentIndices, sums.Has, sums.FullLoadA);
+        var n = network.NodeArray.Length;
         if (!AnyMotor(has, n))
         {
             return null;
@@ -31,11 +31,11 @@ internal static class LargestMotors
         for (var i = n - 1; i >= 0; i--)
         {
             var mine = largest.AsSpan(i * 3, 3);
-            if ((has[i] & Flag.Motor) != 0 && nodes[i].Circuit is { } circuit && circuit.Load.FullLoadCurrentA(circuit.Supply) is { } flcA)
+            if ((has[i] & Flag.Motor) != 0)
             {
                 for (var x = 0; x < 3; x++)
                 {
-                    mine[x] = ((int)assigned[i] & (1 << x)) != 0 ? flcA : 0.0;
+                    mine[x] = ((int)assigned[i] & (1 << x)) != 0 ? fullLoad[i] : 0.0;
                 }
             }
             else if ((has[i] & Flag.Transformer) != 0)

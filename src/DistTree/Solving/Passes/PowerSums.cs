@@ -8,8 +8,8 @@ namespace DistTree.Solving.Passes;
 /// The power pass, bottom-up: an end point's power is its load; a node's is the phasor sum of its children's
 /// times its demand factor: S_node = d·ΣS_child. The continuous part of each is summed the same way (a motor is
 /// never counted continuous: the motor rules give its 125 %, see <see cref="LargestMotors"/>). On the way
-/// it notes what each node has (<see cref="Passes.Has"/>), and a motor's locked-rotor power while its load is at
-/// hand (an end point's demand factor is 1, so its power is the one the motor-start check would read).
+/// it notes what each node has (<see cref="Passes.Has"/>), and a motor's locked-rotor power and full-load current while
+/// its load is at hand (an end point's demand factor is 1, so its power is the one the motor-start check would read).
 /// </summary>
 internal sealed class PowerSums : IDisposable
 {
@@ -27,6 +27,7 @@ internal sealed class PowerSums : IDisposable
         Continuous = Scratch.RentToFill<ComplexPower>(_n);
         Has = Scratch.RentToFill<Has>(_n);
         LockedRotor = Scratch.RentToFill<ComplexPower>(_n); // read only for a motor, and written there
+        FullLoadA = Scratch.RentToFill<double>(_n); // the same
         var demand = Scratch.RentToFill<double>(_n);
         ReadNodes(nodes, demand);
         Sum(network.ParentIndices, demand);
@@ -45,12 +46,16 @@ internal sealed class PowerSums : IDisposable
     /// <summary>Per node, a motor's locked-rotor power (written for motors only).</summary>
     public ComplexPower[] LockedRotor { get; }
 
+    /// <summary>Per node, a motor's full-load current, amperes (written for motors only).</summary>
+    public double[] FullLoadA { get; }
+
     /// <summary>Gives back the scratch arrays (all but <see cref="Power"/>).</summary>
     public void Dispose()
     {
         Scratch.Return(Continuous, _n);
         Scratch.Return(Has, _n);
         Scratch.Return(LockedRotor, _n);
+        Scratch.Return(FullLoadA, _n);
     }
 
     // The end points' loads and the other nodes' demand factors first, each node on its own, on every core. Each
@@ -58,7 +63,7 @@ internal sealed class PowerSums : IDisposable
     // bottom-up loop met first.
     private void ReadNodes(NetworkNode[] nodes, double[] demand)
     {
-        var (power, continuous, has, lockedRotor) = (Power, Continuous, Has, LockedRotor);
+        var (power, continuous, has, lockedRotor, fullLoad) = (Power, Continuous, Has, LockedRotor, FullLoadA);
         ParallelRanges.For(nodes.Length, (start, end) =>
         {
             for (var i = end - 1; i >= start; i--)
@@ -85,6 +90,7 @@ internal sealed class PowerSums : IDisposable
                     if (circuit.Load.IsMotor)
                     {
                         lockedRotor[i] = MotorStarting.LockedRotor(circuit.Load, power[i]);
+                        fullLoad[i] = circuit.Load.FullLoadCurrentA(circuit.Supply) ?? 0.0;
                     }
                 }
                 else

@@ -203,7 +203,7 @@ internal sealed class RunDrops
             }
         }
 
-        var (designA, designLine, motorA, neutralA) = DesignCurrents(run);
+        var (designA, designLine, motorA, neutralA, fromEquipment) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
             : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC) * conductors.Sets
             : figures.AmpacityA;
@@ -214,6 +214,7 @@ internal sealed class RunDrops
             DesignCurrentA = designA,
             DesignLine = designLine,
             LargestMotorA = motorA,
+            FromEquipment = fromEquipment,
             NeutralDesignCurrentA = neutralA,
             NeutralAmpacityA = neutralAmpacityA,
             TemperatureC = figures.TemperatureC,
@@ -231,14 +232,15 @@ internal sealed class RunDrops
     // A run's design currents, as the code in force counts them from each line's current, its continuous part and the
     // largest motor on it (a motor's or air-conditioning equipment's branch circuit: from the equipment, on each line
     // it is on): the most loaded line's, which line that is and its largest motor, and the neutral's where the run's
-    // bus has one.
-    private (double DesignA, byte Line, double MotorA, double? NeutralA) DesignCurrents(NetworkRun run)
+    // bus has one; and whether the run serves equipment with rules of its own (a motor, air conditioning).
+    private (double DesignA, byte Line, double MotorA, double? NeutralA, bool FromEquipment) DesignCurrents(NetworkRun run)
     {
         var index = run.Target.Index;
         var i = _phases.Currents.AsSpan(index * 3, 3);
         var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
         var m = _motors is null ? default : _motors.AsSpan(index * 3, 3);
-        var equipmentA = (_sums.Has[index] & (Has.Motor | Has.Nameplate)) != 0 ? _code.EquipmentDesignCurrentA(CircuitDuty.Of(run)) : null;
+        var duty = (_sums.Has[index] & (Has.Motor | Has.Nameplate)) != 0 ? CircuitDuty.Of(run) : default;
+        var equipmentA = duty.Kind == DutyKind.General ? null : _code.EquipmentDesignCurrentA(duty);
         var (worst, line) = (0.0, (byte)0);
         for (var x = 0; x < 3; x++)
         {
@@ -259,7 +261,7 @@ internal sealed class RunDrops
             neutral = _code.DesignCurrentA(returned, continuousReturn, 0.0, protectedByDevice: false);
         }
 
-        return (worst, line, m.IsEmpty ? 0.0 : m[line], neutral);
+        return (worst, line, m.IsEmpty ? 0.0 : m[line], neutral, duty.Kind != DutyKind.General);
     }
 
     // A run's length in km per set: the sets share the current.

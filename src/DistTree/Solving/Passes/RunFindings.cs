@@ -32,7 +32,7 @@ internal static class RunFindings
                 conductors.Location));
         }
 
-        return code.AddFindings(findings, run, new CurrentFigures(r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA, r.LargestMotorA, CircuitDuty.Of(run)));
+        return code.AddFindings(findings, run, new CurrentFigures(r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA, r.LargestMotorA, r.FromEquipment ? CircuitDuty.Of(run) : default));
     }
 
     /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>
