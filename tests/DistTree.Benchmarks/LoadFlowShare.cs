@@ -21,7 +21,7 @@ internal static class LoadFlowShare
         PhaseAssignment.Assign(network, sums.Power, assigned);
         var phases = PhaseCurrents.Solve(network, PhaseFrame.Of(network), sums.Power, assigned);
         using var runs = new RunRows(sums.Has, n);
-        RunDrops.Solve(ConductorCatalog.Standard, Codes.CodeRules.For(ElectricalCode.Nec, ConductorCatalog.Standard), network, sums, phases, runs);
+        RunDrops.Solve(ConductorCatalog.Standard, Codes.CodeRules.For(ElectricalCode.Nec, ConductorCatalog.Standard), network, sums, phases, null, runs);
         var iterations = 0;
         var time = Measurement.Of("loadflow", size, repeats, () =>
         {

@@ -36,6 +36,21 @@ public enum CodeCheck
     /// <summary>A small conductor protected above its own limit.</summary>
     SmallConductor,
 
+    /// <summary>A motor branch circuit's conductors below the current the motor rules ask of them.</summary>
+    MotorBranchAmpacity,
+
+    /// <summary>A feeder's conductors below the current the motor rules ask of them, with motors on its most loaded line.</summary>
+    MotorFeederAmpacity,
+
+    /// <summary>A motor branch circuit's device above the largest the motor rules allow.</summary>
+    MotorDevice,
+
+    /// <summary>Air-conditioning equipment's conductors below its nameplate minimum circuit ampacity.</summary>
+    AirConditioningAmpacity,
+
+    /// <summary>Air-conditioning equipment's device above its nameplate maximum overcurrent device.</summary>
+    AirConditioningDevice,
+
     /// <summary>A transformer loaded above its nameplate rating.</summary>
     TransformerLoading,
 

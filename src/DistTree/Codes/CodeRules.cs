@@ -66,11 +66,25 @@ public abstract class CodeRules
     };
 
     /// <summary>
-    /// The design current of one conductor, amperes, from its current <paramref name="carried"/> and the continuous
-    /// part of it, <paramref name="continuous"/> (phasors, amperes), for a conductor that <paramref name="protectedByDevice"/>
-    /// (a line) or not (a neutral).
+    /// The design current of one conductor, amperes, from its current <paramref name="carried"/>, the continuous
+    /// part of it, <paramref name="continuous"/> (phasors, amperes; a motor's current is never counted continuous),
+    /// and the full-load current of the largest motor it carries, <paramref name="largestMotorA"/> (amperes, 0 for
+    /// none), for a conductor that <paramref name="protectedByDevice"/> (a line) or not (a neutral).
     /// </summary>
-    public abstract double DesignCurrentA(System.Numerics.Complex carried, System.Numerics.Complex continuous, bool protectedByDevice);
+    public abstract double DesignCurrentA(System.Numerics.Complex carried, System.Numerics.Complex continuous, double largestMotorA, bool protectedByDevice);
+
+    /// <summary>
+    /// The design current of each line of a branch circuit whose <paramref name="duty"/> sets it from the equipment
+    /// rather than from its load (a motor's full-load current, air-conditioning equipment's nameplate), amperes; null
+    /// for a general circuit.
+    /// </summary>
+    public abstract double? EquipmentDesignCurrentA(in CircuitDuty duty);
+
+    /// <summary>
+    /// The largest overcurrent device the rules for <paramref name="duty"/> allow, amperes, where they set one in place
+    /// of the general conductor-protection rules (a motor's, air-conditioning equipment's); null for a general circuit.
+    /// </summary>
+    public abstract double? EquipmentMaxDeviceA(in CircuitDuty duty);
 
     /// <summary>
     /// True when conductors of <paramref name="ampacityA"/> (all sets, amperes) carry a design current of
@@ -90,11 +104,15 @@ public abstract class CodeRules
     /// <summary>
     /// True when <paramref name="sets"/> sets of <paramref name="size"/> with an allowable ampacity of
     /// <paramref name="ampacityA"/> (all sets) meet every conductor rule here for a design current of
-    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none).
+    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none), on a
+    /// run serving <paramref name="duty"/>: where the duty's own rules set the largest device
+    /// (<see cref="EquipmentMaxDeviceA"/>), those replace the general device rules.
     /// </summary>
-    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA) =>
+    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, in CircuitDuty duty) =>
         Carries(designCurrentA, ampacityA)
-        && (ocpdA is not { } ocpd || (DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
+        && (ocpdA is not { } ocpd || (EquipmentMaxDeviceA(duty) is { } maxA
+            ? !(ocpd > maxA + Tolerance)
+            : DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
 
     /// <summary>
     /// The current-carrying conductors of one set of <paramref name="run"/>, as the code counts them for the
@@ -113,14 +131,15 @@ public abstract class CodeRules
     /// The smallest equipment grounding conductor each set of <paramref name="conductors"/> needs with lines of
     /// <paramref name="sets"/> sets of <paramref name="size"/>, carrying a design current of <paramref name="designCurrentA"/>
     /// under <paramref name="rules"/> (ambient and terminal rating) in a raceway of <paramref name="currentCarrying"/>
-    /// current-carrying conductors, or null where the rule set gives none.
+    /// current-carrying conductors, serving <paramref name="duty"/> (a motor's or air conditioning's device rules), or null
+    /// where the rule set gives none.
     /// </summary>
-    public ConductorSize? MinimumGroundSize(Run conductors, ConductorSize size, int sets, double designCurrentA, Rules rules, int currentCarrying = 3)
+    public ConductorSize? MinimumGroundSize(Run conductors, ConductorSize size, int sets, double designCurrentA, Rules rules, int currentCarrying = 3, in CircuitDuty duty = default)
     {
         ArgumentNullException.ThrowIfNull(conductors);
         return conductors.OcpdA is not { } ocpd
             ? null
-            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying)));
+            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying, duty)));
     }
 
     /// <summary>
@@ -128,9 +147,10 @@ public abstract class CodeRules
     /// insulation of <paramref name="conductors"/>, meet every conductor rule here (<see cref="Meets"/>) for a design current
     /// of <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/>, their ampacity worked out as the solver
     /// and the sizer do (<paramref name="rules"/>' ambient and terminal rating, adjusted for
-    /// <paramref name="currentCarrying"/> conductors in the raceway); null where no size does.
+    /// <paramref name="currentCarrying"/> conductors in the raceway) and the device rules of <paramref name="duty"/>; null
+    /// where no size does.
     /// </summary>
-    public ConductorSize? SmallestSufficientSize(double designCurrentA, double? ocpdA, Run conductors, SizeSeries series, int sets, Rules rules, int currentCarrying = 3)
+    public ConductorSize? SmallestSufficientSize(double designCurrentA, double? ocpdA, Run conductors, SizeSeries series, int sets, Rules rules, int currentCarrying = 3, in CircuitDuty duty = default)
     {
         ArgumentNullException.ThrowIfNull(conductors);
         ArgumentNullException.ThrowIfNull(rules);
@@ -142,7 +162,7 @@ public abstract class CodeRules
                 continue;
             }
 
-            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets))
+            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets, duty))
             {
                 return size;
             }
@@ -164,9 +184,12 @@ public abstract class CodeRules
 /// <param name="AmpacityA">The lines' allowable ampacity, all sets, or null where the table has none.</param>
 /// <param name="NeutralCurrentA">The neutral's design current, amperes, or null where the run has no neutral.</param>
 /// <param name="NeutralAmpacityA">The neutral's allowable ampacity, all sets, or null.</param>
+/// <param name="LargestMotorA">The full-load current of the largest motor on the most loaded line, amperes (0 for none).</param>
+/// <param name="Duty">What the run serves (general for a feeder).</param>
 /// <param name="GroundMinSize">The smallest equipment grounding conductor each set needs, or null where the rule set gives none.</param>
 internal readonly record struct CurrentFigures(
-    double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA, ConductorSize? GroundMinSize = null);
+    double DesignCurrentA, char Line, double? AmpacityA, double? NeutralCurrentA, double? NeutralAmpacityA, double LargestMotorA = 0, CircuitDuty Duty = default,
+    ConductorSize? GroundMinSize = null);
 
 /// <summary>What a rule set reads to size a run's equipment grounding conductor.</summary>
 /// <param name="OcpdA">The rating of the overcurrent device ahead of the run, amperes.</param>

@@ -77,6 +77,8 @@ internal sealed class FieldSet
             .Number("load.value", c.Load.Value)
             .Number("load.pf", c.Load.PowerFactor)
             .Text("category", Words.LoadCategory.Of(c.Category))
+            .Number("load.mca_a", c.Load.MinimumCircuitA)
+            .Number("load.mocp_a", c.Load.MaximumDeviceA)
             .Text("continuous", c.Continuous ? "true" : "false");
         set.AddRun("run", c.Run, units);
         return set;

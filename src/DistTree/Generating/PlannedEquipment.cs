@@ -64,4 +64,7 @@ internal sealed class PlannedEquipment(string id, PlannedKind kind, ElectricalSy
 
     /// <summary>Estimated drop from the service to this item's output, percent.</summary>
     public double UpstreamPercent { get; set; }
+
+    /// <summary>The full-load current of the largest motor this item's feeder carries on its own system, amperes (0 for none).</summary>
+    public double LargestMotorA { get; set; }
 }

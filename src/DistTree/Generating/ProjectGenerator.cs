@@ -165,7 +165,8 @@ public static class ProjectGenerator
         _ => new PlannedCircuit($"EF-{n} exhaust fan", 3, LoadKind.Hp, r.Pick(LowMotorHp), r.Pick(MotorPf), false, 15, r.Between(20, 150)),
     };
 
-    // Bottom-up: items are listed parents first, so a backwards pass adds each item's power to its parent's.
+    // Bottom-up: items are listed parents first, so a backwards pass adds each item's power to its parent's, and carries
+    // its largest motor up to a transformer (the motors below one are on another system).
     private static void AccumulatePower(List<PlannedEquipment> items)
     {
         for (var i = items.Count - 1; i >= 0; i--)
@@ -174,11 +175,19 @@ public static class ProjectGenerator
             foreach (var c in item.Circuits)
             {
                 item.Power += c.Power;
+                if (c.Load.IsMotor)
+                {
+                    item.LargestMotorA = Math.Max(item.LargestMotorA, c.CurrentA);
+                }
             }
 
             if (item.Parent is { } parent)
             {
                 parent.Power += item.Power;
+                if (item.Kind != PlannedKind.Transformer)
+                {
+                    parent.LargestMotorA = Math.Max(parent.LargestMotorA, item.LargestMotorA);
+                }
             }
         }
     }
@@ -216,8 +225,8 @@ public static class ProjectGenerator
             {
                 item.LengthFt = item.Kind != PlannedKind.Board ? random.Between(20, 200) : item.Level == 2 ? random.Between(100, 500) : random.Between(50, 300);
                 // The most loaded line carries more than the balanced current: a designer allows 10 % for the
-                // imbalance of the panels' single-phase circuits (common practice).
-                designA = 1.25 * LineImbalanceAllowance * LoadPower.CurrentA(item.Power.VoltAmperes, supply);
+                // imbalance of the panels' single-phase circuits (common practice); and 25 % more of the largest motor.
+                designA = (1.25 * LineImbalanceAllowance * LoadPower.CurrentA(item.Power.VoltAmperes, supply)) + (0.25 * item.LargestMotorA);
                 target = item.Kind != PlannedKind.Board ? 0.75 : item.Level == 2 ? 1.0 : 0.5;
                 if (item.Kind == PlannedKind.Board && designA > ServiceSectionA)
                 {

@@ -38,7 +38,7 @@ public sealed record Circuit
     /// </summary>
     public LoadCategory Category { get; init; } = LoadCategory.Other;
 
-    /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it.</summary>
+    /// <summary>True when the load is continuous (3 hours or more): design current is 125 % of it (a motor's 125 % comes from the motor rules instead).</summary>
     public bool Continuous { get; init; }
 
     /// <summary>The branch-circuit conductors.</summary>

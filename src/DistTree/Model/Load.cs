@@ -47,6 +47,18 @@ public sealed record Load(LoadKind Kind, double Value, double PowerFactor)
     /// <summary>Starting data for a motor (<c>hp</c> or <c>fla</c>); null for other loads.</summary>
     public MotorStart? Start { get; init; }
 
+    /// <summary>
+    /// Air-conditioning equipment's nameplate minimum circuit ampacity, amperes (<c>mca</c>), or null; given with
+    /// <see cref="MaximumDeviceA"/>.
+    /// </summary>
+    public double? MinimumCircuitA { get; init; }
+
+    /// <summary>
+    /// Air-conditioning equipment's nameplate maximum overcurrent protective device, amperes (<c>mocp</c>), or null;
+    /// given with <see cref="MinimumCircuitA"/>.
+    /// </summary>
+    public double? MaximumDeviceA { get; init; }
+
     /// <summary>True for a motor load (<c>hp</c> or <c>fla</c>).</summary>
     public bool IsMotor => IsMotorKind(Kind);
 
@@ -67,10 +79,25 @@ public sealed record Load(LoadKind Kind, double Value, double PowerFactor)
         LoadKind.Kva => Value * 1000,
         LoadKind.Kw => Value * 1000 / PowerFactor,
         LoadKind.Amps or LoadKind.Fla => FromCurrent(Value, supply),
-        LoadKind.Hp => FromCurrent(
-            MotorTables.FullLoadCurrentA(Value, supply)
-                ?? throw new ArgumentException($"no full-load current is listed for a {Value} hp motor on {supply.Phases}-phase {supply.VoltageV} V"),
-            supply),
+        LoadKind.Hp => FromCurrent(TableCurrentA(supply), supply),
+    };
+
+    // The full-load current the tables list for this many horsepower on the supply.
+    private double TableCurrentA(CircuitSupply supply) =>
+        MotorTables.FullLoadCurrentA(Value, supply)
+            ?? throw new ArgumentException(FormattableString.Invariant(
+                $"no full-load current is listed for a {Value} hp motor on {supply.Phases}-phase {supply.VoltageV} V; give the motor's nameplate current as 'fla' instead"));
+
+    /// <summary>
+    /// A motor's full-load current in amperes on <paramref name="supply"/>: <c>fla</c> as stated, <c>hp</c> from the
+    /// motor full-load current tables (<see cref="MotorTables"/>); null for a load that is not a motor.
+    /// </summary>
+    /// <exception cref="ArgumentException">A motor rating the tables do not list for the supply.</exception>
+    public double? FullLoadCurrentA(CircuitSupply supply) => Kind switch
+    {
+        LoadKind.Fla => Value,
+        LoadKind.Hp => TableCurrentA(supply),
+        LoadKind.Va or LoadKind.Kva or LoadKind.Kw or LoadKind.Amps => null,
     };
 
     /// <summary>

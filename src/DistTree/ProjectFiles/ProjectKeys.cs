@@ -42,5 +42,8 @@ internal static class ProjectKeys
 
     public static readonly string[] MotorStart = ["code_letter", "lrc_multiple", "starting_pf"];
 
-    public static readonly string[] Load = [.. LoadQuantities, "pf", "model", .. MotorStart];
+    /// <summary>Air-conditioning equipment's nameplate figures: minimum circuit ampacity, maximum overcurrent device.</summary>
+    public static readonly string[] Nameplate = ["mca", "mocp"];
+
+    public static readonly string[] Load = [.. LoadQuantities, "pf", "model", .. MotorStart, .. Nameplate];
 }

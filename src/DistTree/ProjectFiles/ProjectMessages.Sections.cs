@@ -157,6 +157,14 @@ internal static partial class ProjectMessages
     /// <summary>A motor-start key on a load that is not a motor.</summary>
     public static string MotorOnlyKey(string key, Subject load) => $"'{key}' in {load} applies to motors only (loads given as {MotorQuantityList})";
 
+    /// <summary>One of air-conditioning equipment's nameplate figures without the other.</summary>
+    public static string NameplateNeedsBoth(string given, string missing, Subject load) =>
+        $"'{given}' in {load} needs '{missing}' with it (air-conditioning equipment is judged by its nameplate's minimum circuit ampacity and maximum overcurrent device together)";
+
+    /// <summary>A point's load giving air-conditioning nameplate figures.</summary>
+    public static string PointCarriesNameplate(Subject circuit) =>
+        $"a point of {circuit} gives 'mca' and 'mocp'; air-conditioning equipment is a circuit of its own";
+
     /// <summary>A locked-rotor code letter not in <paramref name="letters"/>.</summary>
     public static string NotACodeLetter(string text, IEnumerable<string> letters) =>
         $"'{text}' is not a locked-rotor code letter; expected one of {string.Join(", ", letters)}";

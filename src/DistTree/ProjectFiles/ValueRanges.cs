@@ -109,11 +109,20 @@ public static class ValueRanges
     /// <summary>A load in amperes: 0 to 100 kA.</summary>
     public static readonly NumberRange Amps = NumberRange.Closed(0, 1e5, "A");
 
-    /// <summary>A motor's horsepower: above 0, at most 200 (the largest rating of the full-load current tables).</summary>
-    public static readonly NumberRange Hp = NumberRange.AboveUpTo(0, 200, "hp");
+    /// <summary>A motor's horsepower: above 0, at most 500 (the largest rating of the full-load current tables).</summary>
+    public static readonly NumberRange Hp = NumberRange.AboveUpTo(0, 500, "hp");
 
     /// <summary>A motor's full-load amperes: 0 to 10 kA.</summary>
     public static readonly NumberRange Fla = NumberRange.Closed(0, 1e4, "A");
+
+    /// <summary>Air-conditioning equipment's nameplate minimum circuit ampacity: above 0, at most 10 kA (as <c>fla</c>).</summary>
+    public static readonly NumberRange MinimumCircuitAmpacity = NumberRange.AboveUpTo(0, 1e4, "A");
+
+    /// <summary>
+    /// Air-conditioning equipment's nameplate maximum overcurrent device: above 0, at most 6 kA (the largest standard
+    /// rating of fuses and breakers; NEC 240.6(A), memory).
+    /// </summary>
+    public static readonly NumberRange MaximumOvercurrentDevice = NumberRange.AboveUpTo(0, 6000, "A");
 
     /// <summary>
     /// A power factor, running or starting: 0.05 to 1 (a large motor starts at 0.15 or so; a lower bound keeps a load
@@ -159,6 +168,8 @@ public static class ValueRanges
         ("load", "pf", PowerFactor),
         ("load", "starting_pf", PowerFactor),
         ("load", "lrc_multiple", LockedRotorMultiple),
+        ("load", "mca", MinimumCircuitAmpacity),
+        ("load", "mocp", MaximumOvercurrentDevice),
     ];
 
     /// <summary>The range of a load quantity, by the quantity's kind.</summary>

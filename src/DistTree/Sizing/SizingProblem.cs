@@ -175,22 +175,23 @@ internal sealed class SizingProblem
                 var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
                 var ratio = (double)conductors.Sets / sets;
                 var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
-                var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, conductors, s, sets, row, figures.AmpacityA);
+                var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
             }
         }
     }
 
     // The run's current and device rules at a choice (see ProtectionRules).
-    private static bool MeetsCurrentRules(CodeRules protection, Run conductors, ConductorSize size, int sets, RunResult row, double? ampacityA)
+    private static bool MeetsCurrentRules(CodeRules protection, NetworkRun run, ConductorSize size, int sets, RunResult row, double? ampacityA)
     {
+        var conductors = run.Conductors;
         if (ampacityA is not { } ampacity)
         {
             // No tabulated ampacity (e.g. metric 400 mm² and up): only the present choice, which the solver already reported on.
             return size == conductors.Size && sets == conductors.Sets;
         }
 
-        return protection.Meets(row.DesignCurrentA, row.OcpdA, size, conductors.Material, sets, ampacity);
+        return protection.Meets(row.DesignCurrentA, row.OcpdA, size, conductors.Material, sets, ampacity, CircuitDuty.Of(run));
     }
 
     // Material: area × length × current-carrying conductors × sets (mm²·m); with a price table, price × length × conductors × sets.

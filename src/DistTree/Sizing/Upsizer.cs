@@ -113,19 +113,19 @@ public sealed class Upsizer
     {
         var (project, network) = (before.Project, before.Network);
         var rows = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex, r => (r.DesignCurrentA, r.CurrentCarryingConductors ?? 3));
-        var feeders = new Dictionary<string, (RunOption, double, int)>(StringComparer.Ordinal);
-        var branches = new Dictionary<string, (RunOption, double, int)>(StringComparer.Ordinal);
+        var feeders = new Dictionary<string, (RunOption, double, int, CircuitDuty)>(StringComparer.Ordinal);
+        var branches = new Dictionary<string, (RunOption, double, int, CircuitDuty)>(StringComparer.Ordinal);
         foreach (var (index, option) in picks)
         {
             var node = network.Nodes[index];
             var (design, carrying) = rows[index];
-            (node.Circuit is not null ? branches : feeders)[node.Id] = (option, design, carrying);
+            (node.Circuit is not null ? branches : feeders)[node.Id] = (option, design, carrying, CircuitDuty.Of(node.Incoming!));
         }
 
-        Run With(Run run, (RunOption Option, double DesignA, int Carrying) pick)
+        Run With(Run run, (RunOption Option, double DesignA, int Carrying, CircuitDuty Duty) pick)
         {
             var o = pick.Option;
-            var ground = run.GroundSize is { } stated && before.Code.MinimumGroundSize(run, o.Size, o.Sets, pick.DesignA, project.Rules, pick.Carrying) is { } least && stated < least
+            var ground = run.GroundSize is { } stated && before.Code.MinimumGroundSize(run, o.Size, o.Sets, pick.DesignA, project.Rules, pick.Carrying, pick.Duty) is { } least && stated < least
                 ? least
                 : run.GroundSize;
             return run with { Size = o.Size, Sets = o.Sets, GroundSize = ground };

@@ -29,19 +29,26 @@ public sealed class DropSolver
     {
         var n = network.NodeArray.Length;
 
-        // Bottom-up: each node's power and what it has; each circuit's lines; each node's line currents.
+        // Bottom-up: each node's power and what it has; each circuit's lines; each node's line currents, their continuous
+        // part and each line's largest motor.
         using var sums = new PowerSums(network);
         var assigned = new Phases[n];
         PhaseAssignment.Assign(network, sums.Power, assigned);
         var frame = PhaseFrame.Of(network);
         var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned, AnyContinuous(network));
+        var motors = LargestMotors.Of(network, sums, assigned);
         var code = CodeRules.For(network.Project.Rules.Code, _catalog);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same
         // impedances, whose drops are recorded beside the percent sum's. A run's findings follow from its drop: on
         // the percent sum they are found with its figures; on the load flow, once it is solved.
         using var runs = new RunRows(sums.Has, n);
-        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, runs);
+        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, motors, runs);
+        if (motors is not null)
+        {
+            Scratch.Return(motors, n * 3);
+        }
+
         var (flow, voltagesTaken) = LoadFlow.Solve(network, phases, sums.Power, runs);
         using var voltages = voltagesTaken;
         LoadFlowDrops.Record(network, phases, runs, flow, voltages);
@@ -62,7 +69,7 @@ public sealed class DropSolver
     {
         foreach (var node in network.NodeArray)
         {
-            if (node.Circuit is { Continuous: true })
+            if (node.Circuit is { Continuous: true, Load.IsMotor: false })
             {
                 return true;
             }

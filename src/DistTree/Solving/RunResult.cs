@@ -77,7 +77,9 @@ public readonly struct RunResult : IEquatable<RunResult>
 
     /// <summary>
     /// Design current in amperes for the ampacity and device checks: the most loaded line's, as the code in force
-    /// counts it (under the NEC, 125 % of that line's continuous current plus the rest).
+    /// counts it (under the NEC, 125 % of that line's continuous current plus the rest, and 25 % more of the largest
+    /// motor on it; a motor's branch circuit 125 % of its full-load current, air-conditioning equipment's its nameplate
+    /// minimum circuit ampacity).
     /// </summary>
     public double DesignCurrentA => Row.DesignCurrentA;
 
@@ -155,7 +157,7 @@ public readonly struct RunResult : IEquatable<RunResult>
     {
         null => null,
         { Conductors.GroundSize: not null } => Row.GroundMinIndex == 0 ? null : ConductorSize.All[Row.GroundMinIndex - 1],
-        { Conductors: var c } => _rows.Code.MinimumGroundSize(c, c.Size, c.Sets, Row.DesignCurrentA, _rows.Rules, Row.CurrentCarrying),
+        { Conductors: var c } run => _rows.Code.MinimumGroundSize(c, c.Size, c.Sets, Row.DesignCurrentA, _rows.Rules, Row.CurrentCarrying, Codes.CircuitDuty.Of(run)),
     };
 
     /// <summary>The text of <see cref="GroundMinimum"/>, or null.</summary>

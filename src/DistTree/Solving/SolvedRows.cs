@@ -87,6 +87,8 @@ internal struct RunRow
     public double CurrentA;
     public double DesignCurrentA;
     public byte DesignLine;
+    public double LargestMotorA;
+    public bool FromEquipment; // a motor's or air-conditioning equipment's branch circuit (see CircuitDuty)
     public double? NeutralDesignCurrentA;
     public double? NeutralAmpacityA;
     public int CurrentCarrying;

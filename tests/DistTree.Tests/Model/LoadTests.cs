@@ -36,6 +36,18 @@ public sealed class LoadTests
         Assert.Contains("no full-load current is listed for a 7 hp motor", e.Message, StringComparison.Ordinal);
     }
 
+    // A motor's full-load current: the table's for hp (NEC Table 430.250, memory: 10 hp at 460 V, 14 A), the stated
+    // amperes for fla; none for a load that is not a motor.
+    [Theory]
+    [InlineData(LoadKind.Hp, 10, 14.0)]
+    [InlineData(LoadKind.Fla, 22, 22.0)]
+    [InlineData(LoadKind.Amps, 22, null)]
+    [InlineData(LoadKind.Kva, 5, null)]
+    public void FullLoadCurrentA_MotorsOnly(LoadKind kind, double value, double? expected)
+    {
+        Assert.Equal(expected, new Load(kind, value, 0.85).FullLoadCurrentA(ThreePhase480));
+    }
+
     [Theory]
     [InlineData(LoadKind.Hp, true)]
     [InlineData(LoadKind.Fla, true)]

@@ -50,6 +50,8 @@ internal static partial class EdgeProject
         ["load.pf"] = "0.9",
         ["load.starting_pf"] = "0.35",
         ["load.lrc_multiple"] = "6",
+        ["load.mca"] = "28",
+        ["load.mocp"] = "45",
     };
 
     private const string Template = """
@@ -62,6 +64,12 @@ internal static partial class EdgeProject
           - id: MSB
             kind: switchboard
             from: SVC
+          - id: MP
+            kind: panelboard
+            from: MSB
+            feeder: { length: 3, size: 250 kcmil }
+            circuits:
+              - { id: "5", poles: 3, load: { hp: {load.hp}, pf: 0.85, lrc_multiple: {load.lrc_multiple}, starting_pf: {load.starting_pf} }, run: { length: 20, size: 10 AWG } }
           - id: T1
             kind: transformer
             from: MSB
@@ -81,7 +89,7 @@ internal static partial class EdgeProject
               - { id: "2", poles: 1, load: { kva: {load.kva} }, run: { length: 20, size: 12 AWG } }
               - { id: "3", poles: 1, load: { kw: {load.kw} }, run: { length: 20, size: 12 AWG } }
               - { id: "4", poles: 1, load: { amps: {load.amps} }, run: { length: 20, size: 12 AWG } }
-              - { id: "5", poles: 3, load: { hp: {load.hp}, pf: 0.85, lrc_multiple: {load.lrc_multiple}, starting_pf: {load.starting_pf} }, run: { length: 20, size: 10 AWG } }
+              - { id: "5", poles: 2, ocpd: 45, load: { amps: 22, pf: 0.9, mca: {load.mca}, mocp: {load.mocp} }, run: { length: 20, size: 10 AWG } }
               - { id: "6", poles: 3, load: { fla: {load.fla}, pf: 0.85 }, run: { length: 20, size: 10 AWG } }
               - { id: "7", poles: 1, points: [{ at: {point.at}, load: { va: 500 } }], run: { length: 100000, size: 12 AWG } }
 

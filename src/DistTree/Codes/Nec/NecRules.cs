@@ -28,6 +28,16 @@ namespace DistTree.Codes.Nec;
 /// it need not be larger than the lines (250.122(A)); in parallel sets each set's is sized on the device's full rating,
 /// so the proportion is per set (250.122(F)). A metric run takes the smallest metric size at or above the area so found.
 /// No device, no minimum.</item>
+/// <item>Motors (Article 430): a motor's full-load current is the table's for <c>hp</c> (NEC 430.6(A)(1); Tables
+/// 430.248 and 430.250, see <see cref="MotorTables"/>), the stated amperes for <c>fla</c>. A motor branch circuit's
+/// conductors carry 125 % of it (NEC 430.22), whatever its <c>continuous</c> flag says; a feeder's line carries 125 %
+/// of the largest motor's full-load current on that line plus the rest (NEC 430.24). A motor branch circuit's device
+/// (an inverse-time breaker assumed) may be at most 250 % of the full-load current, or the next standard rating above
+/// that (NEC 430.52(C)(1) and Table 430.52, Exception No. 1); 240.4(B) and (D) do not apply (NEC 240.4(G)), nor does
+/// 210.20(A).</item>
+/// <item>Air-conditioning equipment given by its nameplate (Article 440): the conductors' ampacity at least the
+/// minimum circuit ampacity (NEC 440.35, marked per 440.4(B)); the device at most the maximum overcurrent device
+/// (NEC 440.22(C)); 240.4(B) and (D) and 210.20(A) do not apply.</item>
 /// </list>
 /// </summary>
 public sealed class NecRules : CodeRules
@@ -41,6 +51,12 @@ public sealed class NecRules : CodeRules
         15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300, 350, 400, 450, 500,
         600, 700, 800, 1000, 1200, 1600, 2000, 2500, 3000, 4000, 5000, 6000,
     ];
+
+    // NEC 430.24 and 430.22: the largest motor's full-load current counts 125 %, so 25 % more than as a load.
+    private const double MotorExtra = 0.25;
+
+    // NEC Table 430.52: an inverse-time breaker at most 250 % of the motor's full-load current.
+    private const double MotorBreakerMultiple = 2.5;
 
     // NEC 240.4(B): the largest device that may take the next standard rating above the ampacity, amperes.
     private const double NextSizeUpMaxA = 800;
@@ -88,6 +104,11 @@ public sealed class NecRules : CodeRules
         CodeCheck.BranchDevice => "NEC 210.20(A)",
         CodeCheck.DeviceAboveAmpacity => "NEC 240.4(B)",
         CodeCheck.SmallConductor => "NEC 240.4(D)",
+        CodeCheck.MotorBranchAmpacity => "NEC 430.22",
+        CodeCheck.MotorFeederAmpacity => "NEC 430.24",
+        CodeCheck.MotorDevice => "NEC 430.52(C)(1)",
+        CodeCheck.AirConditioningAmpacity => "NEC 440.35",
+        CodeCheck.AirConditioningDevice => "NEC 440.22(C)",
         CodeCheck.TransformerLoading => "nameplate rating (common practice; no NEC clause)",
         CodeCheck.MotorStart => "starting voltage (common practice; no NEC clause)",
         CodeCheck.GroundingConductor => "NEC 250.122",
@@ -124,8 +145,28 @@ public sealed class NecRules : CodeRules
     }
 
     /// <inheritdoc/>
-    public override double DesignCurrentA(Complex carried, Complex continuous, bool protectedByDevice) =>
-        protectedByDevice ? Magnitude(carried + (continuous * 0.25)) : Magnitude(carried);
+    public override double DesignCurrentA(Complex carried, Complex continuous, double largestMotorA, bool protectedByDevice) =>
+        protectedByDevice ? Magnitude(carried + (continuous * 0.25)) + (MotorExtra * largestMotorA) : Magnitude(carried);
+
+    /// <summary>A motor's: 125 % of its full-load current (NEC 430.22); air conditioning's: the nameplate minimum circuit ampacity (NEC 440.35).</summary>
+    public override double? EquipmentDesignCurrentA(in CircuitDuty duty) => duty.Kind switch
+    {
+        DutyKind.General => null,
+        DutyKind.Motor => (1 + MotorExtra) * duty.FullLoadA,
+        DutyKind.AirConditioning => duty.MinimumCircuitA,
+    };
+
+    /// <summary>
+    /// A motor's: 250 % of its full-load current, or the next standard rating above that where it is not one (NEC
+    /// 430.52(C)(1), Table 430.52 and Exception No. 1; an inverse-time breaker); air conditioning's: the nameplate
+    /// maximum overcurrent device (NEC 440.22(C)).
+    /// </summary>
+    public override double? EquipmentMaxDeviceA(in CircuitDuty duty) => duty.Kind switch
+    {
+        DutyKind.General => null,
+        DutyKind.Motor => NextStandardAtOrAbove(MotorBreakerMultiple * duty.FullLoadA),
+        DutyKind.AirConditioning => duty.MaximumDeviceA,
+    };
 
     /// <summary>
     /// True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/>
@@ -144,15 +185,7 @@ public sealed class NecRules : CodeRules
         }
 
         // The next standard rating at or above the ampacity (none above the largest).
-        foreach (var next in Standard)
-        {
-            if (next >= ampacityA - Tolerance)
-            {
-                return ocpdA <= next + Tolerance;
-            }
-        }
-
-        return false;
+        return ocpdA <= NextStandardAtOrAbove(ampacityA) + Tolerance;
     }
 
     /// <summary>The largest device one set of small conductors of <paramref name="size"/> may have, amperes, or null where no such limit applies.</summary>
@@ -166,27 +199,20 @@ public sealed class NecRules : CodeRules
     internal override List<Finding>? AddFindings(List<Finding>? findings, NetworkRun run, in CurrentFigures figures)
     {
         var conductors = run.Conductors;
-        var branch = run.Kind == RunKind.Branch;
         var what = Words.Noun(run.Kind);
         var size = conductors.Size.Text;
         var sets = conductors.Sets;
         var design = figures.DesignCurrentA;
-        var line = figures.Line;
+        var duty = figures.Duty;
+        var maxDeviceA = EquipmentMaxDeviceA(duty);
         if (figures.AmpacityA is { } ampacity)
         {
             if (!Carries(design, ampacity))
             {
-                (findings ??= []).Add(Finding.Written(
-                    FindingKind.Ampacity,
-                    Cite(branch ? CodeCheck.BranchAmpacity : CodeCheck.FeederAmpacity),
-                    run.Id,
-                    design,
-                    ampacity,
-                    $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacity:0.#} A",
-                    conductors.Location));
+                (findings ??= []).Add(AmpacityFinding(run, figures, ampacity));
             }
 
-            if (conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity))
+            if (maxDeviceA is null && conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity))
             {
                 (findings ??= []).Add(Finding.Written(
                     FindingKind.OcpdAboveAmpacity,
@@ -219,29 +245,9 @@ public sealed class NecRules : CodeRules
 
         if (conductors.OcpdA is { } device)
         {
-            if (!DeviceCarries(device, design))
-            {
-                (findings ??= []).Add(Finding.Written(
-                    FindingKind.DeviceBelowLoad,
-                    Cite(branch ? CodeCheck.BranchDevice : CodeCheck.FeederDevice),
-                    run.Id,
-                    design,
-                    device,
-                    $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds its {device:0} A overcurrent device",
-                    conductors.Location));
-            }
-
-            if (SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && AboveSmallMax(device, smallMax, sets))
-            {
-                (findings ??= []).Add(Finding.Written(
-                    FindingKind.OcpdAboveAmpacity,
-                    Cite(CodeCheck.SmallConductor),
-                    run.Id,
-                    device,
-                    smallMax,
-                    $"{what} {run.Id}: a {size} {Words.Material.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {device:0} A",
-                    conductors.Location));
-            }
+            findings = maxDeviceA is { } maxA
+                ? EquipmentDeviceFindings(findings, run, duty, device, maxA)
+                : GeneralDeviceFindings(findings, run, figures, device);
         }
 
         return findings;
@@ -281,6 +287,93 @@ public sealed class NecRules : CodeRules
             least.AreaMm2,
             $"{Words.Noun(run.Kind)} {run.Id}: the stated {ground.Text} equipment grounding conductor is smaller than the {least.Text} it needs ({why})",
             conductors.Location);
+    }
+
+    // The conductors below the design current, citing the rule that counted it.
+    private Finding AmpacityFinding(NetworkRun run, in CurrentFigures figures, double ampacityA)
+    {
+        var conductors = run.Conductors;
+        var (what, size, sets, design, line) = (Words.Noun(run.Kind), conductors.Size.Text, conductors.Sets, figures.DesignCurrentA, figures.Line);
+        (CodeCheck Check, FormattableString Text) cited = figures.Duty.Kind switch
+        {
+            DutyKind.Motor => (CodeCheck.MotorBranchAmpacity, $"{what} {run.Id}: design current {design:0.0} A (125 % of the motor's full-load current of {figures.Duty.FullLoadA:0.#} A) exceeds the {sets}×{size} ampacity of {ampacityA:0.#} A"),
+            DutyKind.AirConditioning => (CodeCheck.AirConditioningAmpacity, $"{what} {run.Id}: the nameplate minimum circuit ampacity of {design:0.#} A exceeds the {sets}×{size} ampacity of {ampacityA:0.#} A"),
+            DutyKind.General when figures.LargestMotorA > 0 => (CodeCheck.MotorFeederAmpacity, $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of the largest motor's full-load current of {figures.LargestMotorA:0.#} A and of continuous load, plus the rest) exceeds the {sets}×{size} ampacity of {ampacityA:0.#} A"),
+            DutyKind.General => (run.Kind == RunKind.Branch ? CodeCheck.BranchAmpacity : CodeCheck.FeederAmpacity, $"{what} {run.Id}: design current {design:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds the {sets}×{size} ampacity of {ampacityA:0.#} A"),
+        };
+        return Finding.Written(FindingKind.Ampacity, Cite(cited.Check), run.Id, design, ampacityA, cited.Text, conductors.Location);
+    }
+
+    // A motor's or air-conditioning equipment's device above the largest its own rules allow (these replace the
+    // general rules: NEC 240.4(G)).
+    private List<Finding>? EquipmentDeviceFindings(List<Finding>? findings, NetworkRun run, in CircuitDuty duty, double deviceA, double maxA)
+    {
+        if (!(deviceA > maxA + Tolerance))
+        {
+            return findings;
+        }
+
+        var what = Words.Noun(run.Kind);
+        var motor = duty.Kind == DutyKind.Motor;
+        (findings ??= []).Add(Finding.Written(
+            FindingKind.OcpdAboveAmpacity,
+            Cite(motor ? CodeCheck.MotorDevice : CodeCheck.AirConditioningDevice),
+            run.Id,
+            deviceA,
+            maxA,
+            motor
+                ? (FormattableString)$"{what} {run.Id}: the {deviceA:0} A overcurrent device is above the {maxA:0} A the motor rules allow (250 % of the {duty.FullLoadA:0.#} A full-load current, or the next standard rating above it; an inverse-time breaker)"
+                : (FormattableString)$"{what} {run.Id}: the {deviceA:0} A overcurrent device is above the nameplate maximum overcurrent device of {maxA:0} A",
+            run.Conductors.Location));
+        return findings;
+    }
+
+    // The general device rules: rated for the load (on a feeder, less the largest motor's extra 25 %, which sizes
+    // conductors, not devices) and the small-conductor limit.
+    private List<Finding>? GeneralDeviceFindings(List<Finding>? findings, NetworkRun run, in CurrentFigures figures, double deviceA)
+    {
+        var conductors = run.Conductors;
+        var (what, size, sets, line) = (Words.Noun(run.Kind), conductors.Size.Text, conductors.Sets, figures.Line);
+        var loadA = figures.DesignCurrentA - (MotorExtra * figures.LargestMotorA);
+        if (!DeviceCarries(deviceA, loadA))
+        {
+            (findings ??= []).Add(Finding.Written(
+                FindingKind.DeviceBelowLoad,
+                Cite(run.Kind == RunKind.Branch ? CodeCheck.BranchDevice : CodeCheck.FeederDevice),
+                run.Id,
+                loadA,
+                deviceA,
+                $"{what} {run.Id}: design current {loadA:0.0} A on line {line} (125 % of continuous load plus the rest) exceeds its {deviceA:0} A overcurrent device",
+                conductors.Location));
+        }
+
+        if (SmallConductorMaxOcpdA(conductors.Size, conductors.Material) is { } smallMax && AboveSmallMax(deviceA, smallMax, sets))
+        {
+            (findings ??= []).Add(Finding.Written(
+                FindingKind.OcpdAboveAmpacity,
+                Cite(CodeCheck.SmallConductor),
+                run.Id,
+                deviceA,
+                smallMax,
+                $"{what} {run.Id}: a {size} {Words.Material.Of(conductors.Material)} conductor may be protected at {smallMax:0} A at most (small-conductor rule), not {deviceA:0} A",
+                conductors.Location));
+        }
+
+        return findings;
+    }
+
+    // The smallest standard rating at or above amperesA; above the largest, amperesA itself.
+    private static double NextStandardAtOrAbove(double amperesA)
+    {
+        foreach (var next in Standard)
+        {
+            if (next >= amperesA - Tolerance)
+            {
+                return next;
+            }
+        }
+
+        return amperesA;
     }
 
     private static bool AboveSmallMax(double ocpdA, double smallMaxA, int sets) => ocpdA > (smallMaxA * sets) + Tolerance;

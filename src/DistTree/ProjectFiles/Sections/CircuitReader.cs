@@ -211,6 +211,11 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
                 Bag.Error(m.KeyLocation("load"), ProjectMessages.PointCarriesMotor(full));
                 load = null;
             }
+            else if (load is { MinimumCircuitA: not null })
+            {
+                Bag.Error(m.KeyLocation("load"), ProjectMessages.PointCarriesNameplate(full));
+                load = null;
+            }
 
             if (at is null || load is null || category is null)
             {

@@ -6,7 +6,7 @@ namespace DistTree.ProjectFiles.Sections;
 
 /// <summary>
 /// Reads a <c>load</c>: exactly one quantity (its word from <see cref="Words.LoadQuantity"/>), the power factor, the
-/// load model, and a motor's starting data.
+/// load model, a motor's starting data, and air-conditioning equipment's nameplate <c>mca</c> and <c>mocp</c>.
 /// </summary>
 internal sealed class LoadReader(SectionContext context)
 {
@@ -50,7 +50,31 @@ internal sealed class LoadReader(SectionContext context)
         }
 
         var start = ReadMotorStart(m, subject, motor, out var startOk);
-        return value is not null && pf is not null && startOk ? new Load(kind, value.Value, pf.Value) { Model = model, Start = start } : null;
+        var (mca, mocp, nameplateOk) = ReadNameplate(m, subject);
+        return value is not null && pf is not null && startOk && nameplateOk
+            ? new Load(kind, value.Value, pf.Value) { Model = model, Start = start, MinimumCircuitA = mca, MaximumDeviceA = mocp }
+            : null;
+    }
+
+    // Air-conditioning equipment's nameplate minimum circuit ampacity and maximum overcurrent device: both or neither.
+    private (double? Mca, double? Mocp, bool Ok) ReadNameplate(in MappingReader m, Subject subject)
+    {
+        var (mcaNode, mocpNode) = (m.Optional("mca"), m.Optional("mocp"));
+        if (mcaNode is null && mocpNode is null)
+        {
+            return (null, null, true);
+        }
+
+        var mca = mcaNode is null ? null : Values.InRange(mcaNode, subject.Of("'mca' of "), ValueRanges.MinimumCircuitAmpacity);
+        var mocp = mocpNode is null ? null : Values.InRange(mocpNode, subject.Of("'mocp' of "), ValueRanges.MaximumOvercurrentDevice);
+        if (mcaNode is null || mocpNode is null)
+        {
+            var (given, missing) = mcaNode is null ? ("mocp", "mca") : ("mca", "mocp");
+            Bag.Error(m.KeyLocation(given), ProjectMessages.NameplateNeedsBoth(given, missing, subject));
+            return (null, null, false);
+        }
+
+        return (mca, mocp, mca is not null && mocp is not null);
     }
 
     // The position in Words.LoadQuantity of the one quantity given; null (reported) when none or two are.

@@ -12,4 +12,7 @@ internal enum Has : byte
     Run = 2,
     Transformer = 4,
     Motor = 8,
+
+    /// <summary>Air-conditioning equipment given by its nameplate (<c>mca</c>, <c>mocp</c>).</summary>
+    Nameplate = 16,
 }

@@ -106,9 +106,10 @@ internal sealed class PhaseCurrents
 
                 if (_continuous is { } continuousOut)
                 {
-                    // A continuous load's currents are all continuous; another's, none.
+                    // A continuous load's currents are all continuous; another's, none. A motor's 125 % comes from the
+                    // motor rules instead, so its currents are never counted continuous.
                     var part = continuousOut.AsSpan(i * 3, 3);
-                    if (circuit.Continuous)
+                    if (circuit.Continuous && !circuit.Load.IsMotor)
                     {
                         mine.CopyTo(part);
                     }

@@ -26,16 +26,18 @@ internal sealed class RunDrops
     private readonly PhaseFlow _phases;
     private readonly Complex[]? _continuous;
     private readonly int[]? _sharedCounts;
+    private readonly double[]? _motors;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
     private int _findings;
 
-    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
+    private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, double[]? motors, RunRows runs)
     {
         _sharedCounts = RacewayCounts.Of(network, code);
         _catalog = catalog;
         _code = code;
         _continuous = phases.ContinuousCurrents;
+        _motors = motors;
         _rules = network.Project.Rules;
         _frequencyHz = network.Project.Service.FrequencyHz;
         _bases = new RunElectrics.Bases(catalog, _rules, _frequencyHz);
@@ -48,12 +50,13 @@ internal sealed class RunDrops
 
     /// <summary>
     /// Fills <paramref name="runs"/>' rows and current-lengths, and on the percent sum their findings; gives the number
-    /// of findings. The design currents take each line's continuous part from <paramref name="phases"/>.
+    /// of findings. The design currents take each line's continuous part from <paramref name="phases"/> and the largest
+    /// motor's full-load current on it from <paramref name="motors"/> (per node × 3; null where there is no motor).
     /// </summary>
     public static int Solve(
-        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, RunRows runs)
+        ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, double[]? motors, RunRows runs)
     {
-        var pass = new RunDrops(catalog, code, network, sums, phases, runs);
+        var pass = new RunDrops(catalog, code, network, sums, phases, motors, runs);
         ParallelRanges.For(pass._nodes.Length, pass.SolveRange);
         return pass._findings;
     }
@@ -204,7 +207,7 @@ internal sealed class RunDrops
             }
         }
 
-        var (designA, designLine, neutralA) = DesignCurrents(run);
+        var (designA, designLine, motorA, neutralA, fromEquipment) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
             : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, Math.Max(1, carrying)) * conductors.Sets
             : figures.AmpacityA;
@@ -214,6 +217,8 @@ internal sealed class RunDrops
             CurrentA = currentA,
             DesignCurrentA = designA,
             DesignLine = designLine,
+            LargestMotorA = motorA,
+            FromEquipment = fromEquipment,
             NeutralDesignCurrentA = neutralA,
             NeutralAmpacityA = neutralAmpacityA,
             CurrentCarrying = carrying,
@@ -226,21 +231,28 @@ internal sealed class RunDrops
             DropPercent = ownDrop,
             PercentSumDropPercent = ownDrop,
             VoltageV = supply.VoltageV,
-            GroundMinIndex = conductors.GroundSize is null ? (short)0 : GroundMinIndex(conductors, designA, carrying),
+            GroundMinIndex = conductors.GroundSize is null ? (short)0 : GroundMinIndex(run, designA, carrying),
         };
     }
 
-    // A run's design currents, as the code in force counts them from each line's current and its continuous part: the
-    // most loaded line's and which line that is, and the neutral's where the run's bus has one.
-    private (double DesignA, byte Line, double? NeutralA) DesignCurrents(NetworkRun run)
+    // A run's design currents, as the code in force counts them from each line's current, its continuous part and the
+    // largest motor on it (a motor's or air-conditioning equipment's branch circuit: from the equipment, on each line
+    // it is on): the most loaded line's, which line that is and its largest motor, and the neutral's where the run's
+    // bus has one; and whether the run serves equipment with rules of its own (a motor, air conditioning).
+    private (double DesignA, byte Line, double MotorA, double? NeutralA, bool FromEquipment) DesignCurrents(NetworkRun run)
     {
         var index = run.Target.Index;
         var i = _phases.Currents.AsSpan(index * 3, 3);
         var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
+        var m = _motors is null ? default : _motors.AsSpan(index * 3, 3);
+        var duty = (_sums.Has[index] & (Has.Motor | Has.Nameplate)) != 0 ? CircuitDuty.Of(run) : default;
+        var equipmentA = duty.Kind == DutyKind.General ? null : _code.EquipmentDesignCurrentA(duty);
         var (worst, line) = (0.0, (byte)0);
         for (var x = 0; x < 3; x++)
         {
-            var design = _code.DesignCurrentA(i[x], c.IsEmpty ? Complex.Zero : c[x], protectedByDevice: true);
+            var design = equipmentA is { } fromEquipment
+                ? (i[x] == Complex.Zero ? 0.0 : fromEquipment)
+                : _code.DesignCurrentA(i[x], c.IsEmpty ? Complex.Zero : c[x], m.IsEmpty ? 0.0 : m[x], protectedByDevice: true);
             if (design > worst || double.IsNaN(design))
             {
                 (worst, line) = (design, (byte)x);
@@ -252,16 +264,19 @@ internal sealed class RunDrops
         {
             var returned = -(i[0] + i[1] + i[2]);
             var continuousReturn = c.IsEmpty ? Complex.Zero : -(c[0] + c[1] + c[2]);
-            neutral = _code.DesignCurrentA(returned, continuousReturn, protectedByDevice: false);
+            neutral = _code.DesignCurrentA(returned, continuousReturn, 0.0, protectedByDevice: false);
         }
 
-        return (worst, line, neutral);
+        return (worst, line, m.IsEmpty ? 0.0 : m[line], neutral, duty.Kind != DutyKind.General);
     }
 
     // The smallest equipment grounding conductor a run that states one needs, as its size's index + 1 (0 for none; see
     // RunRow). Another run's is worked out when it is read (RunResult.GroundMinimum): it judges nothing.
-    private short GroundMinIndex(Run conductors, double designA, int carrying) =>
-        _code.MinimumGroundSize(conductors, conductors.Size, conductors.Sets, designA, _rules, carrying) is { } least ? (short)(least.Index + 1) : (short)0;
+    private short GroundMinIndex(NetworkRun run, double designA, int carrying)
+    {
+        var conductors = run.Conductors;
+        return _code.MinimumGroundSize(conductors, conductors.Size, conductors.Sets, designA, _rules, carrying, CircuitDuty.Of(run)) is { } least ? (short)(least.Index + 1) : (short)0;
+    }
 
     // A run's length in km per set: the sets share the current.
     private static double PerSetKm(Run conductors) => conductors.LengthM / 1000.0 / conductors.Sets;

@@ -34,7 +34,8 @@ internal static class RunFindings
         }
 
         return code.AddFindings(findings, run, new CurrentFigures(
-            r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA, r.GroundMinIndex == 0 ? null : ConductorSize.All[r.GroundMinIndex - 1]));
+            r.DesignCurrentA, (char)('A' + r.DesignLine), r.AmpacityA, r.NeutralDesignCurrentA, r.NeutralAmpacityA, r.LargestMotorA, r.FromEquipment ? CircuitDuty.Of(run) : default,
+            r.GroundMinIndex == 0 ? null : ConductorSize.All[r.GroundMinIndex - 1]));
     }
 
     /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>

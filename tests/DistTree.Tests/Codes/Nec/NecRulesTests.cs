@@ -78,9 +78,47 @@ public sealed class NecRulesTests
     {
         var carried = new Complex(20, 0);
         var continuous = new Complex(10, 0);
-        Assert.Equal(22.5, Rules.DesignCurrentA(carried, continuous, protectedByDevice: true), 9);
-        Assert.Equal(20, Rules.DesignCurrentA(carried, Complex.Zero, protectedByDevice: true), 9);
-        Assert.Equal(20, Rules.DesignCurrentA(carried, continuous, protectedByDevice: false), 9);
+        Assert.Equal(22.5, Rules.DesignCurrentA(carried, continuous, 0, protectedByDevice: true), 9);
+        Assert.Equal(20, Rules.DesignCurrentA(carried, Complex.Zero, 0, protectedByDevice: true), 9);
+        Assert.Equal(20, Rules.DesignCurrentA(carried, continuous, 0, protectedByDevice: false), 9);
+    }
+
+    // 125 % of the largest motor's full-load current plus the rest (NEC 430.24; memory): a line carrying 55.6 A, of
+    // which the largest motor is 34 A, is 55.6 + 0.25 × 34 = 64.1 A; with 10 A of it continuous besides, 66.6 A. A
+    // neutral takes no motor share: 55.6 A.
+    [Fact]
+    public void DesignCurrentA_LargestMotor_AddsItsQuarterOnALineOnly()
+    {
+        var carried = new Complex(55.6, 0);
+        Assert.Equal(64.1, Rules.DesignCurrentA(carried, Complex.Zero, 34, protectedByDevice: true), 9);
+        Assert.Equal(66.6, Rules.DesignCurrentA(carried, new Complex(10, 0), 34, protectedByDevice: true), 9);
+        Assert.Equal(55.6, Rules.DesignCurrentA(carried, Complex.Zero, 34, protectedByDevice: false), 9);
+    }
+
+    // A motor branch circuit's conductors: 125 % of the full-load current (NEC 430.22; memory): 34 A gives 42.5 A. Air
+    // conditioning: the nameplate minimum circuit ampacity (NEC 440.35; memory). A general circuit: none.
+    [Fact]
+    public void EquipmentDesignCurrentA_ByDuty()
+    {
+        Assert.Equal(42.5, Rules.EquipmentDesignCurrentA(new CircuitDuty(DutyKind.Motor, 34, 0, 0))!.Value, 9);
+        Assert.Equal(28, Rules.EquipmentDesignCurrentA(new CircuitDuty(DutyKind.AirConditioning, 22, 28, 45))!.Value, 9);
+        Assert.Null(Rules.EquipmentDesignCurrentA(default));
+    }
+
+    // A motor branch circuit's inverse-time breaker: at most 250 % of the full-load current (NEC 430.52(C)(1), Table
+    // 430.52; memory), or the next standard rating above that (Exception No. 1): 34 A gives 85 A, so 90 A; 14 A gives
+    // 35 A, itself a standard rating; 7.6 A gives 19 A, so 20 A. Air conditioning: the nameplate's maximum (NEC
+    // 440.22(C); memory).
+    [Theory]
+    [InlineData(34, 90)]
+    [InlineData(14, 35)]
+    [InlineData(7.6, 20)]
+    [InlineData(361, 1000)] // 902.5 A: the next standard rating is 1000 A
+    public void EquipmentMaxDeviceA_Motor_250PercentOrTheNextStandardRating(double fullLoadA, double expectedA)
+    {
+        Assert.Equal(expectedA, Rules.EquipmentMaxDeviceA(new CircuitDuty(DutyKind.Motor, fullLoadA, 0, 0))!.Value, 9);
+        Assert.Equal(45, Rules.EquipmentMaxDeviceA(new CircuitDuty(DutyKind.AirConditioning, 0, 28, 45))!.Value, 9);
+        Assert.Null(Rules.EquipmentMaxDeviceA(default));
     }
 
     // The device is rated for the design current (NEC 210.20(A), 215.3; memory): 110 A on a 100 A breaker is a
@@ -138,9 +176,32 @@ public sealed class NecRulesTests
     public void Meets_AgreesWithAddFindings(string size, int sets, double? ocpdA, double designA, double ampacityA, bool meets, string[] codes)
     {
         var run = RunOf(size, sets, ocpdA);
-        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA));
+        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA, default));
         var findings = Rules.AddFindings(null, run, Figures(designA, ampacityA));
         Assert.Equal(codes, findings?.Select(f => f.Code) ?? []);
+        Assert.Equal(meets, findings is null);
+    }
+
+    // The same agreement on a motor's and an air-conditioning unit's circuit, whose device is judged by its own rules
+    // (NEC 430.52(C)(1), 440.22(C); memory) and not by 240.4(B), 240.4(D) or 210.20(A): a 25 hp motor (34 A, design
+    // 42.5 A, breaker at most 90 A); a unit of mca 28 A, mocp 45 A.
+    [Theory]
+    [InlineData("10 AWG", 60.0, 35, 34, 0, 0, false, new[] { "NEC 430.22" })] // the review's case: too small, breaker allowed
+    [InlineData("8 AWG", 60.0, 50, 34, 0, 0, true, new string[0])]
+    [InlineData("8 AWG", 90.0, 50, 34, 0, 0, true, new string[0])]
+    [InlineData("8 AWG", 100.0, 50, 34, 0, 0, false, new[] { "NEC 430.52(C)(1)" })]
+    [InlineData("14 AWG", 15.0, 20, 7.6, 0, 0, true, new string[0])]
+    [InlineData("10 AWG", 45.0, 35, 0, 28, 45, true, new string[0])]
+    [InlineData("12 AWG", 45.0, 25, 0, 28, 45, false, new[] { "NEC 440.35" })]
+    [InlineData("10 AWG", 50.0, 35, 0, 28, 45, false, new[] { "NEC 440.22(C)" })]
+    public void Meets_MotorAndAirConditioning_AgreesWithAddFindings(
+        string size, double ocpdA, double ampacityA, double fullLoadA, double mcaA, double mocpA, bool meets, string[] references)
+    {
+        var duty = mcaA > 0 ? new CircuitDuty(DutyKind.AirConditioning, fullLoadA, mcaA, mocpA) : new CircuitDuty(DutyKind.Motor, fullLoadA, 0, 0);
+        var designA = Rules.EquipmentDesignCurrentA(duty)!.Value;
+        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, 1, ampacityA, duty));
+        var findings = Rules.AddFindings(null, RunOf(size, 1, ocpdA), new CurrentFigures(designA, 'A', ampacityA, null, null, fullLoadA, duty));
+        Assert.Equal(references, findings?.Select(f => f.Reference) ?? []);
         Assert.Equal(meets, findings is null);
     }
 
