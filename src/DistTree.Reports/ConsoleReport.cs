@@ -1,6 +1,8 @@
 using System.Globalization;
 using DistTree.Diagnostics;
+using DistTree.Model;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -22,6 +24,8 @@ public static class ConsoleReport
         WriteSummaryLine(o, s);
         o.WriteLine();
         o.WriteLine(F($"Worst paths (total drop; each run's share in percent, service first):"));
+        var unit = s.Project.Units == UnitSystem.Imperial ? "ft" : "m";
+        o.WriteLine($"  (reach, {unit}: the length at which a run's own drop would reach its own limit / at which the end point would reach the total limit, other things equal; of its length; over: below it)");
         var rank = 0;
         foreach (var e in s.WorstEndPoints(worst))
         {
@@ -30,6 +34,7 @@ public static class ConsoleReport
             o.WriteLine(F($"  {rank,3}. {e.Id,-14} {e.TotalDropPercent,6:0.00} %  {mark,-4}  {Truncate(e.Name, 40)}"));
             var shares = e.RunIndices.Zip(e.RunSharesPercent).Select(p => F($"{Label(s.Runs[p.First])} {p.Second:0.00}"));
             o.WriteLine($"        {string.Join("  +  ", shares)}");
+            o.WriteLine($"        reach {unit}  {string.Join("  +  ", e.RunIndices.Select(r => Reach(s.Runs[r], s.Project.Units)))}");
         }
 
         o.WriteLine();
@@ -88,6 +93,27 @@ public static class ConsoleReport
             o.WriteLine($"  {f.Location}: {f.Code}: {f.Message} [{f.Reference}]");
         }
     }
+
+    // A run's reach by its own limit and by the total's, of its length, in the project's length unit; "over" where
+    // either is below its length. A transformer has none.
+    private static string Reach(RunResult r, UnitSystem units)
+    {
+        if (r.Kind == RunResultKind.Transformer)
+        {
+            return $"{Label(r)} –";
+        }
+
+        var over = r.MaxLengthM < r.LengthM || r.MaxLengthTotalM < r.LengthM ? " over" : "";
+        return $"{r.Id} {Length(r.MaxLengthM, units)}/{Length(r.MaxLengthTotalM, units)} of {Length(r.LengthM, units)}{over}";
+    }
+
+    // A length given in metres, in the project's unit: metres to 0.1, or whole feet; a dash for none.
+    private static string Length(double? metres, UnitSystem units) => metres switch
+    {
+        null => "–",
+        { } m when units == UnitSystem.Imperial => F($"{m / UnitFactors.MetresPerFoot:0}"),
+        { } m => F($"{m:0.0}"),
+    };
 
     private static string Label(RunResult r) => r.Kind == RunResultKind.Transformer ? $"{r.Id}(xfmr)" : r.Id;
 

@@ -91,6 +91,7 @@ internal static class PanelViewBuilder
         var circuit = s.Network.Nodes[e.NodeIndex].Circuit;
         var run = s.IncomingRun(e.NodeIndex);
         var findings = (run?.Findings ?? []).Concat(e.Findings);
+        var length = s.Project.Units == UnitSystem.Imperial ? (Func<double?, string>)Feet : Metres;
         return new CircuitRow(
             Escape(circuit?.Id ?? e.Id),
             Escape(e.Name),
@@ -102,6 +103,10 @@ internal static class PanelViewBuilder
             run is { Findings.Count: > 0 },
             Percent(e.TotalDropPercent),
             OtherTotal(s, e),
+            OfRun(r => length(r.MaxLengthM)),
+            run?.MaxLengthM < run?.LengthM,
+            OfRun(r => length(r.MaxLengthTotalM)),
+            run?.MaxLengthTotalM < run?.LengthM,
             circuit is { Points.Count: > 0 } c ? $"{Count(c.Points.Count)} points" : "",
             circuit is { Points.Count: > 0 } d
                 ? $"{Count(d.Points.Count)} loads along the run, the farthest at {Metres(d.Points[^1].AtM)} m; the drop is computed span by span"

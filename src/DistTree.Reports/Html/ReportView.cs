@@ -30,6 +30,7 @@ internal sealed record ReportView
     public required IReadOnlyList<PanelView> Panels { get; init; }
     public string? PanelRule { get; init; }
     public required bool ShowFeet { get; init; }
+    public required string LengthUnit { get; init; }
     public required IReadOnlyList<FindingGroup> Findings { get; init; }
     public string? FindingsRule { get; init; }
     public PlanView? Plan { get; init; }

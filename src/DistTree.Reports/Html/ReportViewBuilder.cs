@@ -55,6 +55,7 @@ internal static class ReportViewBuilder
             Panels = PanelViewBuilder.Build(s, below, large),
             PanelRule = PanelViewBuilder.Rule(s, large),
             ShowFeet = p.Units == UnitSystem.Imperial,
+            LengthUnit = p.Units == UnitSystem.Imperial ? "ft" : "m",
             Findings = FindingGroupBuilder.Groups(findings, large),
             FindingsRule = FindingGroupBuilder.Rule(large),
             Plan = options.Plan is { } plan ? PlanViewBuilder.Build(plan) : null,

@@ -62,7 +62,7 @@ public static class NetworkBuilder
             {
                 var end = Add(graph, byId, new NetworkNode(graph.VertexCount, circuit.FullId, NodeKind.EndPoint, equipment.OutputSystem, Unplaced) { Circuit = circuit });
                 var limit = circuit.Run.LimitPercent ?? rules.BranchLimitPercent;
-                end.Incoming = new NetworkRun(node, end, RunKind.Branch, circuit.Run, circuit.Supply, limit);
+                end.Incoming = new NetworkRun(node, end, RunKind.Branch, circuit.Run, equipment.OutputSystem, circuit.Supply, limit);
                 graph.AddEdge(new NetworkFeed(node, end));
             }
         }
@@ -85,7 +85,7 @@ public static class NetworkBuilder
             if (equipment.Feeder is { } feeder)
             {
                 var limit = feeder.LimitPercent ?? rules.FeederLimitPercent;
-                node.Incoming = new NetworkRun(source, node, RunKind.Feeder, feeder, equipment.System.FeederSupply, limit);
+                node.Incoming = new NetworkRun(source, node, RunKind.Feeder, feeder, equipment.System, equipment.System.FeederSupply, limit);
             }
 
             graph.AddEdge(new NetworkFeed(source, node));

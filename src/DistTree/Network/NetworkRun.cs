@@ -6,8 +6,9 @@ namespace DistTree.Network;
 /// <summary>A feeder or branch circuit: an edge of the tree from its source node to the node it feeds.</summary>
 public sealed class NetworkRun : IEdge<NetworkNode>
 {
-    internal NetworkRun(NetworkNode source, NetworkNode target, RunKind kind, Run conductors, CircuitSupply supply, double limitPercent)
+    internal NetworkRun(NetworkNode source, NetworkNode target, RunKind kind, Run conductors, ElectricalSystem system, CircuitSupply supply, double limitPercent)
     {
+        System = system;
         Source = source;
         Target = target;
         Kind = kind;
@@ -30,6 +31,12 @@ public sealed class NetworkRun : IEdge<NetworkNode>
 
     /// <summary>The conductors as the project gives them.</summary>
     public Run Conductors { get; }
+
+    /// <summary>
+    /// The system the run carries: its source bus's, but a transformer's feeder carries the transformer's primary, so
+    /// a delta primary on a wye bus makes it three lines and no neutral. A branch circuit's is its panel's.
+    /// </summary>
+    public ElectricalSystem System { get; }
 
     /// <summary>Nominal voltage and phases the run carries.</summary>
     public CircuitSupply Supply { get; }

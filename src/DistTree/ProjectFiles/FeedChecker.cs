@@ -111,24 +111,45 @@ internal sealed class FeedChecker(DiagnosticBag bag)
             child.System = output;
             if (output is not null)
             {
-                CheckAgainstSystem(child, feed.Source, output);
+                child.System = CheckAgainstSystem(child, feed.Source, output);
             }
         };
         search.Compute(service.Id);
         return reached;
     }
 
-    private void CheckAgainstSystem(EquipmentDraft draft, string sourceId, ElectricalSystem system)
+    // A delta primary (three lines, no neutral; the primary winding of a Dyn1 or a single-phase transformer across two
+    // lines) takes any three-phase system of its line-to-line voltage: 600D on 600Y/347, 480D on 480Y/277 or 480D.
+    private static bool IsDeltaOn(ElectricalSystem primary, ElectricalSystem given) =>
+        primary is { Phases: 3, HasNeutral: false } && given.Phases == 3 && primary.LineToLineV == given.LineToLineV;
+
+    // The delta system of the given system's line-to-line voltage, if the project knows one.
+    private static ElectricalSystem? DeltaOf(ElectricalSystem given) =>
+        given.Phases == 3 ? ElectricalSystem.Find(FormattableString.Invariant($"{given.LineToLineV:0}D")) : null;
+
+    // Checks a piece of equipment against the system its source gives; returns the system its feeder carries: the
+    // source's, or a transformer's delta primary on it.
+    private ElectricalSystem CheckAgainstSystem(EquipmentDraft draft, string sourceId, ElectricalSystem system)
     {
-        if (draft.Kind == EquipmentKind.Transformer && draft.Primary is { } primary && !ReferenceEquals(primary, system) && primary.Name != system.Name)
+        var carried = system;
+        if (draft.Kind == EquipmentKind.Transformer && draft.Primary is { } primary && primary.Name != system.Name)
         {
-            bag.Error(draft.PrimaryLocation, ProjectMessages.PrimaryMismatch(draft.Id, primary, sourceId, system));
+            if (IsDeltaOn(primary, system))
+            {
+                carried = primary;
+            }
+            else
+            {
+                bag.Error(draft.PrimaryLocation, ProjectMessages.PrimaryMismatch(draft.Id, primary, sourceId, system, DeltaOf(system)));
+            }
         }
 
         // A feeder carries its source's system (a transformer's feeder, its primary): a neutral needs one there.
-        if (draft.FeederNeutralLocation is { } neutralAt && !system.HasNeutral)
+        if (draft.FeederNeutralLocation is { } neutralAt && !carried.HasNeutral)
         {
-            bag.Error(neutralAt, ProjectMessages.NeutralWithoutNeutral(draft.Id, sourceId, system));
+            bag.Error(neutralAt, ReferenceEquals(carried, system)
+                ? ProjectMessages.NeutralWithoutNeutral(draft.Id, sourceId, system)
+                : ProjectMessages.NeutralOnDeltaPrimary(draft.Id, carried));
         }
 
         if (draft.Kind == EquipmentKind.Transformer)
@@ -138,7 +159,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
 
         if (draft.OutputSystem is not { } panelSystem)
         {
-            return;
+            return carried;
         }
 
         foreach (var circuit in draft.Circuits)
@@ -156,6 +177,8 @@ internal sealed class FeedChecker(DiagnosticBag bag)
             var name = circuit.Id is null ? $"the circuit at line {circuit.Location.Line}" : $"circuit '{draft.Id}/{circuit.Id}'";
             bag.Error(circuit.PolesLocation, ProjectMessages.PolesNotGiven(name, poles, draft.Id, panelSystem));
         }
+
+        return carried;
     }
 
     // A transformer's lines against its primary: the two lines a single-phase one is across are lines of a

@@ -16,13 +16,21 @@ internal static partial class ProjectMessages
     public static string UndefinedSource(string id, string from, string? near) =>
         $"'{id}' is fed from '{from}', which is not defined{(near is null ? "" : $"; did you mean '{near}'?")}";
 
-    /// <summary>A transformer whose stated primary is not the system its source gives.</summary>
-    public static string PrimaryMismatch(string? id, ElectricalSystem primary, string sourceId, ElectricalSystem given) =>
-        $"the primary of '{id}' is {primary.Name}, but it is fed from '{sourceId}', which gives {given.Name}";
+    /// <summary>
+    /// A transformer whose stated primary is neither the system its source gives nor a delta primary on it;
+    /// <paramref name="delta"/> is the delta primary the source would take, if any.
+    /// </summary>
+    public static string PrimaryMismatch(string? id, ElectricalSystem primary, string sourceId, ElectricalSystem given, ElectricalSystem? delta) =>
+        $"the primary of '{id}' is {primary.Name}, but it is fed from '{sourceId}', which gives {given.Name}" +
+        (delta is null || delta.Name == given.Name ? "" : $" (a delta primary on it is {delta.Name})");
 
     /// <summary>A feeder that states a neutral size on a system with no neutral.</summary>
     public static string NeutralWithoutNeutral(string? id, string sourceId, ElectricalSystem system) =>
         $"'neutral_size' of the feeder of '{id}': it is fed from '{sourceId}', which gives {system.Name}, a system with no neutral";
+
+    /// <summary>A transformer's feeder that states a neutral size where its primary is delta.</summary>
+    public static string NeutralOnDeltaPrimary(string? id, ElectricalSystem primary) =>
+        $"'neutral_size' of the feeder of '{id}': its primary is {primary.Name}, delta, so the feeder carries three lines and no neutral";
 
     /// <summary>A transformer's <c>phase</c> on a primary that is not three-phase.</summary>
     public static string TransformerPhaseOnSinglePhase(string? id, string sourceId, ElectricalSystem system) =>

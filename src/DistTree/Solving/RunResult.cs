@@ -64,7 +64,7 @@ public readonly struct RunResult : IEquatable<RunResult>
     public int NodeIndex => Row.Node;
 
     /// <summary>The system designation the run carries.</summary>
-    public string System => Run is { } run ? run.Source.System.Name : Transformer.Secondary.Name;
+    public string System => Run is { } run ? run.System.Name : Transformer.Secondary.Name;
 
     /// <summary>Nominal voltage in volts that the percentages refer to.</summary>
     public double VoltageV => Row.VoltageV;
@@ -102,10 +102,10 @@ public readonly struct RunResult : IEquatable<RunResult>
     public double? NeutralAmpacityA => Run is null ? null : Row.NeutralAmpacityA;
 
     /// <summary>The current in each line (A, B, C; as many as the run's system has), amperes; empty for a transformer.</summary>
-    public IReadOnlyList<double> LineCurrentsA => Run is { } run ? _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.Source.System)) : [];
+    public IReadOnlyList<double> LineCurrentsA => Run is { } run ? _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.System)) : [];
 
     /// <summary>Neutral current in amperes (Ia + Ib + Ic), or null on a system without a neutral or for a transformer.</summary>
-    public double? NeutralCurrentA => Run is { Source.System.HasNeutral: true } ? _rows.Phases.NeutralCurrentA(NodeIndex) : null;
+    public double? NeutralCurrentA => Run is { System.HasNeutral: true } ? _rows.Phases.NeutralCurrentA(NodeIndex) : null;
 
     /// <summary>A branch circuit's lines (<c>A</c>, <c>BC</c>, <c>ABC</c> …), or null for feeders and transformers.</summary>
     public string? Lines => Run is { Kind: RunKind.Branch } ? SolvedRows.LinesOf(_rows.Phases.Assigned[NodeIndex]) : null;

@@ -28,7 +28,7 @@ internal sealed record PhaseFrameTree(int System, FaultLevel? Fault, bool Estima
     private static readonly string[] Sizes =
         ["12 AWG", "10 AWG", "8 AWG", "6 AWG", "4 AWG", "3 AWG", "2 AWG", "1 AWG", "1/0 AWG", "2/0 AWG", "3/0 AWG", "4/0 AWG", "250 kcmil", "300 kcmil"];
 
-    private static readonly string[] Services = ["208Y/120", "480Y/277", "120/240", "240D", "480D"];
+    private static readonly string[] Services = ["208Y/120", "480Y/277", "120/240", "240D", "480D", "600Y/347"];
     private static readonly string[] SinglePhaseSecondaries = ["120/240", "240", "120"];
     private static readonly string[] TransformerPhases = ["", "AB", "BC", "CA"];
     private static readonly string[] Materials = ["cu", "al"];
@@ -70,7 +70,8 @@ internal sealed record PhaseFrameTree(int System, FaultLevel? Fault, bool Estima
         from impedance in Gen.Choose(15, 60)
         from xr in Gen.Choose(8, 60)
         from tapSteps in Gen.Choose(-2, 2)
-        select new FrameTransformer(threePhase, secondary, phase, rating, impedance / 10.0, xr / 10.0, tapSteps * 2.5);
+        from deltaPrimary in Gen.Elements(false, true)
+        select new FrameTransformer(threePhase, secondary, phase, rating, impedance / 10.0, xr / 10.0, tapSteps * 2.5, deltaPrimary);
 
     // A run: length in metres, its size's index, a neutral 0 (the lines' size) or 1 to 3 sizes smaller, one or two sets.
     private static Gen<FrameRun> RunGen(int shortestM, int longestM, int smallest, int largest) =>
@@ -127,7 +128,14 @@ internal sealed record PhaseFrameTree(int System, FaultLevel? Fault, bool Estima
                 b.AppendLine($"  - id: T{i}");
                 b.AppendLine("    kind: transformer");
                 b.AppendLine($"    from: {from}");
-                AppendRun(b, "feeder", unit.Feeder, primary);
+                // A delta primary on a bus of its line-to-line voltage: its feeder carries three lines and no neutral.
+                var carried = t.DeltaPrimary && DeltaOf(primary) is { } delta ? delta : primary;
+                if (t.DeltaPrimary)
+                {
+                    b.AppendLine($"    primary: \"{carried}\"");
+                }
+
+                AppendRun(b, "feeder", unit.Feeder, carried);
                 b.AppendLine(Inv($"    kva: {(threePhase ? ThreePhaseKva : SinglePhaseKva)[t.Rating]}"));
                 b.AppendLine($"    secondary: \"{secondary}\"");
                 b.AppendLine(Inv($"    impedance_percent: {t.ImpedancePercent}"));
@@ -221,7 +229,7 @@ internal sealed record PhaseFrameTree(int System, FaultLevel? Fault, bool Estima
     // What each system can give (docs/project-file.md, Circuits): 1 pole needs a neutral, 2 poles two lines, 3 poles three.
     private static int[] Poles(string system) => system switch
     {
-        "208Y/120" or "480Y/277" => [1, 2, 3],
+        "208Y/120" or "480Y/277" or "600Y/347" => [1, 2, 3],
         "240D" or "480D" => [2, 3],
         "120/240" => [1, 2],
         "240" => [2],
@@ -239,18 +247,33 @@ internal sealed record PhaseFrameTree(int System, FaultLevel? Fault, bool Estima
         _ => [],
     };
 
-    private static bool IsThreePhase(string system) => system is "208Y/120" or "480Y/277" or "240D" or "480D";
+    private static bool IsThreePhase(string system) => system is "208Y/120" or "480Y/277" or "600Y/347" or "240D" or "480D";
 
-    private static bool HasNeutral(string system) => system is "208Y/120" or "480Y/277" or "120/240" or "120";
+    private static bool HasNeutral(string system) => system is "208Y/120" or "480Y/277" or "600Y/347" or "120/240" or "120";
+
+    // The delta primary a three-phase bus takes (docs/project-file.md, Transformers); none at 208 V.
+    private static string? DeltaOf(string system) => system switch
+    {
+        "480Y/277" or "480D" => "480D",
+        "600Y/347" => "600D",
+        "240D" => "240D",
+        _ => null,
+    };
 
     private static double LineToLineV(string system) => system switch
     {
         "208Y/120" => 208,
         "480Y/277" or "480D" => 480,
+        "600Y/347" => 600,
         _ => 240,
     };
 
-    private static double LineToNeutralV(string system) => system == "480Y/277" ? 277 : 120;
+    private static double LineToNeutralV(string system) => system switch
+    {
+        "480Y/277" => 277,
+        "600Y/347" => 347,
+        _ => 120,
+    };
 
     private static string Inv(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
 }
@@ -267,9 +290,10 @@ internal sealed record FrameUnit(int Parent, FrameTransformer? Transformer, Fram
 
 /// <summary>
 /// A transformer: three-phase (to 208Y/120; single-phase on a 208 V primary) or single-phase to one of 120/240, 240,
-/// 120 across a stated pair of lines or by default; its rating's index, %Z, X/R and tap.
+/// 120 across a stated pair of lines or by default; its rating's index, %Z, X/R and tap; whether it states a delta
+/// primary (on a three-phase bus that has one of its line-to-line voltage).
 /// </summary>
-internal sealed record FrameTransformer(bool ThreePhase, int Secondary, int Phase, int Rating, double ImpedancePercent, double XOverR, double TapPercent);
+internal sealed record FrameTransformer(bool ThreePhase, int Secondary, int Phase, int Rating, double ImpedancePercent, double XOverR, double TapPercent, bool DeltaPrimary);
 
 /// <summary>A run: length in metres, size index, how many sizes smaller its neutral is (0: the same), sets, material and raceway indices.</summary>
 internal sealed record FrameRun(int LengthM, int Size, int NeutralStepsDown, int Sets, int Material, int Raceway);

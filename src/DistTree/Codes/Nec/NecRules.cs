@@ -262,7 +262,7 @@ public sealed class NecRules : CodeRules
     /// </summary>
     public override int CurrentCarryingConductors(NetworkRun run)
     {
-        var system = PhaseFrame.BusSystem(run.Source);
+        var system = run.System;
         var lines = run.Kind == RunKind.Branch && run.Target.Circuit is { } circuit ? circuit.Poles : PhaseRules.Lines(system);
         var neutral = run.Kind == RunKind.Branch ? lines == 1 : system.HasNeutral;
         var counted = neutral && (lines == 1 || (lines == 2 && system.Phases == 3));

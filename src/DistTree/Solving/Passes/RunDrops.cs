@@ -136,7 +136,7 @@ internal sealed class RunDrops
     /// <summary>The slots a run's own drop is the worst of: a branch circuit's own voltages, a feeder's every voltage of its system.</summary>
     internal static int OwnSlots(NetworkRun run, PhaseFlow phases)
     {
-        var system = PhaseFrame.BusSystem(run.Source);
+        var system = run.System;
         var all = Slots.Of(PhaseRules.Lines(system), system.HasNeutral);
         return run.Kind == RunKind.Branch ? all & Slots.OfCircuit((int)phases.Assigned[run.Target.Index] & ((1 << PhaseRules.Lines(system)) - 1)) : all;
     }
@@ -260,7 +260,7 @@ internal sealed class RunDrops
         }
 
         double? neutral = null;
-        if (run.Source.System.HasNeutral)
+        if (run.System.HasNeutral)
         {
             var returned = -(i[0] + i[1] + i[2]);
             var continuousReturn = c.IsEmpty ? Complex.Zero : -(c[0] + c[1] + c[2]);

@@ -175,11 +175,12 @@ internal sealed partial class ProjectCircuit
         return Complex.FromPolarCoordinates(ohms, Math.Atan(xOverR));
     }
 
-    // A feeder: every line of its system, and the neutral where the system has one, from the parent's bus to a new one.
+    // A feeder: every line of its system, and the neutral where the system has one (a transformer's feeder: its
+    // primary's, none for a delta primary), from the parent's bus to a new one.
     private Bus AddFeeder(NetworkRun feeder, Bus parent)
     {
         var figures = _analysis.Solution.IncomingRun(feeder.Target.Index) ?? throw new InvalidOperationException($"no run result for '{feeder.Id}'");
-        var withNeutral = feeder.Source.System.HasNeutral;
+        var withNeutral = feeder.Target.Equipment!.System.HasNeutral;
         var km = feeder.Conductors.LengthM / 1000;
         return AddSpan(feeder.Id, parent, parent.Lines, withNeutral, LineImpedance(figures, feeder.Conductors, km), NeutralImpedance(figures, feeder.Conductors, km));
     }
