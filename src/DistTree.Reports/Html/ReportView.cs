@@ -14,6 +14,8 @@ internal sealed record ReportView
     public required string CatalogName { get; init; }
     public required string Rules { get; init; }
     public required string Caution { get; init; }
+    public required string CodeTitle { get; init; }
+    public required string AmpacitySource { get; init; }
     public required string Css { get; init; }
     public required string VerdictClass { get; init; }
     public required string VerdictText { get; init; }

@@ -39,6 +39,8 @@ internal static class ReportViewBuilder
             CatalogName = Escape(s.CatalogName),
             Rules = Escape(RuleText.Summary(rules)),
             Caution = Escape(Caution.For(s.Project.Rules.Code)),
+            CodeTitle = Escape($"{s.Code.Title} ({s.Code.ClauseSource})"),
+            AmpacitySource = Escape(s.Code.AmpacitySource),
             Css = css,
             VerdictClass = SummaryViewBuilder.VerdictClass(s),
             VerdictText = SummaryViewBuilder.VerdictText(s),

@@ -21,7 +21,7 @@ public abstract class CodeRules
     protected CodeRules(ConductorCatalog catalog) => Catalog = catalog;
 
     /// <summary>The conductor data the rules read.</summary>
-    protected ConductorCatalog Catalog { get; }
+    public ConductorCatalog Catalog { get; }
 
     /// <summary>Which code this is.</summary>
     public abstract ElectricalCode Code { get; }
@@ -43,6 +43,27 @@ public abstract class CodeRules
 
     /// <summary>The standard ratings of fuses and inverse-time circuit breakers, amperes, ascending.</summary>
     public abstract IReadOnlyList<double> StandardRatingsA { get; }
+
+    /// <summary>Where the rule set's ampacities come from and how they are corrected, for the report's method.</summary>
+    public abstract string AmpacitySource { get; }
+
+    /// <summary>
+    /// The factor a tabulated ampacity (30 °C ambient, not more than three current-carrying conductors) is corrected
+    /// by for a conductor rated <paramref name="ratedC"/> at <paramref name="ambientC"/> among
+    /// <paramref name="currentCarrying"/> current-carrying conductors in its raceway, as the code gives it.
+    /// </summary>
+    public abstract double AmpacityFactor(double ratedC, double ambientC, int currentCarrying);
+
+    /// <summary>
+    /// A conductor's own ampacity Iz, amperes: the catalogue's column for its insulation times
+    /// <see cref="AmpacityFactor"/>; null where the table has no figure.
+    /// </summary>
+    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarrying = 3) =>
+        Catalog.TableAmpacityA(size, material, insulationC) * AmpacityFactor(ConductorCatalog.RatedTemperatureC(size, insulationC), ambientC, Math.Max(1, currentCarrying));
+
+    /// <summary>The allowable ampacity, amperes: <see cref="ThermalAmpacityA"/> limited by the terminal rating's column (see <see cref="ConductorCatalog"/>).</summary>
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3) =>
+        Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying));
 
     /// <summary>The clause a finding of <paramref name="check"/> cites, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
     public abstract string Cite(CodeCheck check);
@@ -157,7 +178,7 @@ public abstract class CodeRules
         foreach (var size in ConductorSize.All)
         {
             if (size.Series != series || !Catalog.Contains(size)
-                || Catalog.AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, Math.Max(1, currentCarrying)) is not { } oneSetA)
+                || AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, currentCarrying) is not { } oneSetA)
             {
                 continue;
             }

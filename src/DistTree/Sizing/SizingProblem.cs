@@ -172,7 +172,7 @@ internal sealed class SizingProblem
 
                 // The drop is linear in R and X (per phase too): the run's unit responses price any size. A branch
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
-                var figures = RunElectrics.Compute(catalog, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
+                var figures = RunElectrics.Compute(protection, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
                 var ratio = (double)conductors.Sets / sets;
                 var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);

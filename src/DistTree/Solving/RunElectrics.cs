@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Model;
 
@@ -28,7 +29,17 @@ public static class RunElectrics
     /// <param name="currentA">Line current of the whole run (all sets).</param>
     /// <param name="currentCarrying">The current-carrying conductors in its raceway (above 3, its ampacity is adjusted).</param>
     public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, int currentCarrying = 3) =>
-        Compute(catalog, rules, run, size, sets, frequencyHz, currentA, BasisOf(catalog, rules, run, size, frequencyHz, currentCarrying));
+        Compute(CodeRules.For(rules.Code, catalog), rules, run, size, sets, frequencyHz, currentA, currentCarrying);
+
+    /// <summary>
+    /// Computes the figures of a run carrying <paramref name="currentA"/> with the ampacity and its corrections of
+    /// <paramref name="code"/> (see <see cref="Compute(ConductorCatalog, Rules, Run, ConductorSize, int, double, double, int)"/>).
+    /// </summary>
+    public static RunFigures Compute(CodeRules code, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, int currentCarrying = 3)
+    {
+        ArgumentNullException.ThrowIfNull(code);
+        return Compute(code.Catalog, rules, run, size, sets, frequencyHz, currentA, BasisOf(code, rules, run, size, frequencyHz, currentCarrying));
+    }
 
     /// <summary>The figures of <see cref="Compute(ConductorCatalog, Rules, Run, ConductorSize, int, double, double, int)"/> from the conductor's <paramref name="basis"/>.</summary>
     internal static RunFigures Compute(
@@ -48,9 +59,10 @@ public static class RunElectrics
     /// A conductor's figures that its current does not change, under <paramref name="rules"/> at
     /// <paramref name="frequencyHz"/>, in a raceway of <paramref name="currentCarrying"/> current-carrying conductors.
     /// </summary>
-    internal static ConductorBasis BasisOf(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, double frequencyHz, int currentCarrying = 3)
+    internal static ConductorBasis BasisOf(CodeRules code, Rules rules, Run run, ConductorSize size, double frequencyHz, int currentCarrying = 3)
     {
-        var thermal = catalog.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC, Math.Max(1, currentCarrying));
+        var catalog = code.Catalog;
+        var thermal = code.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC, currentCarrying);
         return new ConductorBasis(
             thermal,
             ConductorCatalog.RatedTemperatureC(size, run.InsulationC),
@@ -63,7 +75,7 @@ public static class RunElectrics
     /// each worked out when first asked for: the rules and the frequency are the solve's. Threads may ask at once;
     /// two that work out the same basis get equal ones, each kept whole in a box of its own.
     /// </summary>
-    internal sealed class Bases(ConductorCatalog catalog, Rules rules, double frequencyHz)
+    internal sealed class Bases(CodeRules code, Rules rules, double frequencyHz)
     {
         private readonly StrongBox<ConductorBasis>?[] _bases = new StrongBox<ConductorBasis>?[ConductorSize.All.Count * 2 * 3 * 3];
 
@@ -72,7 +84,7 @@ public static class RunElectrics
             if (currentCarrying > 3)
             {
                 // Adjusted for a shared raceway: few runs, each worked out on its own.
-                return BasisOf(catalog, rules, run, run.Size, frequencyHz, currentCarrying);
+                return BasisOf(code, rules, run, run.Size, frequencyHz, currentCarrying);
             }
 
             var rating = run.InsulationC switch
@@ -84,11 +96,11 @@ public static class RunElectrics
             };
             if (rating < 0)
             {
-                return BasisOf(catalog, rules, run, run.Size, frequencyHz);
+                return BasisOf(code, rules, run, run.Size, frequencyHz);
             }
 
             var key = ((((run.Size.Index * 2) + (int)run.Material) * 3) + rating) * 3 + (int)run.Raceway;
-            return (_bases[key] ??= new StrongBox<ConductorBasis>(BasisOf(catalog, rules, run, run.Size, frequencyHz))).Value;
+            return (_bases[key] ??= new StrongBox<ConductorBasis>(BasisOf(code, rules, run, run.Size, frequencyHz))).Value;
         }
     }
 }

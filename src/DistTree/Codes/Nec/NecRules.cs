@@ -92,6 +92,14 @@ public sealed class NecRules : CodeRules
     public override IReadOnlyList<double> StandardRatingsA => Standard;
 
     /// <inheritdoc/>
+    public override string AmpacitySource =>
+        "NEC Table 310.16 (the conductor catalogue's 60, 75 and 90 °C columns; IEC 60364-5-52 method B1 for mm² sizes), corrected for ambient by 310.15(B)(1) and for more than three current-carrying conductors by 310.15(C)(1), limited by the terminal rating (110.14(C))";
+
+    /// <summary>NEC 310.15(B)(1)'s ambient factor times 310.15(C)(1)'s adjustment (see <see cref="Ampacity"/>).</summary>
+    public override double AmpacityFactor(double ratedC, double ambientC, int currentCarrying) =>
+        Ampacity.AmbientFactor(ratedC, ambientC) * Ampacity.AdjustmentFactor(currentCarrying);
+
+    /// <inheritdoc/>
     public override string Cite(CodeCheck check) => check switch
     {
         CodeCheck.FeederDrop => "NEC 215.2(A)(1) Informational Note No. 2",

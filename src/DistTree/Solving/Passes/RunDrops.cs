@@ -40,7 +40,7 @@ internal sealed class RunDrops
         _motors = motors;
         _rules = network.Project.Rules;
         _frequencyHz = network.Project.Service.FrequencyHz;
-        _bases = new RunElectrics.Bases(catalog, _rules, _frequencyHz);
+        _bases = new RunElectrics.Bases(code, _rules, _frequencyHz);
         _nodes = network.NodeArray;
         _sums = sums;
         _phases = phases;
@@ -209,7 +209,7 @@ internal sealed class RunDrops
 
         var (designA, designLine, motorA, neutralA, fromEquipment) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
-            : conductors.NeutralSize is { } neutralSize ? _catalog.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, Math.Max(1, carrying)) * conductors.Sets
+            : conductors.NeutralSize is { } neutralSize ? _code.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, carrying) * conductors.Sets
             : figures.AmpacityA;
         row = new RunRow
         {

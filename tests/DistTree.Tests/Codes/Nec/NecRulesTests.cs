@@ -143,6 +143,16 @@ public sealed class NecRulesTests
         Assert.Null(Rules.AddFindings(null, RunOf("8 AWG", 1, null), new CurrentFigures(40, 'A', 50, 50, 50)));
     }
 
+    // The rule set owns the ampacity's corrections: NEC Table 310.15(B)(1) (read) gives 0.88 for a 75 °C conductor at
+    // 36–40 °C, Table 310.15(C)(1) (read) 80 % for 4–6 conductors: 0.704 together; at 30 °C and 3 conductors, 1.
+    [Fact]
+    public void AmpacityFactor_AmbientAndGrouping_AreTheNecTables()
+    {
+        Assert.Equal(0.704, Rules.AmpacityFactor(75, 40, 6), 9);
+        Assert.Equal(1.0, Rules.AmpacityFactor(75, 30, 3), 9);
+        Assert.Equal(25 * 0.704, Rules.ThermalAmpacityA(ConductorSize.Parse("12 AWG"), Material.Copper, 75, 40, 6)!.Value, 9);
+    }
+
     // Every check cites a clause of its own code, and the code's name leads each clause that is one.
     [Fact]
     public void Cite_EveryCheck_NamesAClause()
