@@ -187,22 +187,7 @@ public sealed class GroundingConductorTests
 
     // A 208Y/120 panel P on a copper feeder of the given size and length with its extra keys, feeding one 3-pole 80 A load
     // (not continuous, so its design current is 80 A).
-    private static string Feeder(string size, double lengthM, string keys) => $$"""
-        disttree: 1
-        project:
-          name: Grounding
-          units: metric
-        rules:
-          conductor_temperature: rated
-        service:
-          id: SVC
-          system: 208Y/120
-        equipment:
-          - id: P
-            kind: panelboard
-            from: SVC
-            feeder: { length: {{lengthM}}, size: {{size}}{{keys}} }
-            circuits:
-              - { id: "1", poles: 3, ocpd: 100, load: { amps: 80 }, run: { length: 3, size: 1/0 AWG } }
-        """;
+    private static string Feeder(string size, double lengthM, string keys) => SolverHarness.PanelOnFeeder(
+        FormattableString.Invariant($"length: {lengthM}, size: {size}{keys}"),
+        "{ id: \"1\", poles: 3, ocpd: 100, load: { amps: 80 }, run: { length: 3, size: 1/0 AWG } }");
 }

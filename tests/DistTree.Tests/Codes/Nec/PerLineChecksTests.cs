@@ -80,32 +80,15 @@ public sealed class PerLineChecksTests
     }
 
     // The circuits, 1-pole on the given line, or 3-pole on ABC.
-    private static string Circuits(params (string Lines, double Amps, bool Continuous)[] circuits) =>
-        string.Join("\n", circuits.Select((c, i) => FormattableString.Invariant(
-            $"      - {{ id: \"{i + 1}\", poles: {c.Lines.Length}, phase: {c.Lines}, continuous: {(c.Continuous ? "true" : "false")}, load: {{ amps: {c.Amps} }}, run: {{ length: 3, size: 1/0 AWG }} }}")));
+    private static string[] Circuits(params (string Lines, double Amps, bool Continuous)[] circuits) =>
+        circuits.Select((c, i) => FormattableString.Invariant(
+            $"{{ id: \"{i + 1}\", poles: {c.Lines.Length}, phase: {c.Lines}, continuous: {(c.Continuous ? "true" : "false")}, load: {{ amps: {c.Amps} }}, run: {{ length: 3, size: 1/0 AWG }} }}")).ToArray();
 
     // A 208Y/120 panel P on a 10 m copper feeder of the given size, device and neutral, with its circuits.
-    private static string Feeder(string size, double? ocpdA, string circuits, string? neutral = null)
+    private static string Feeder(string size, double? ocpdA, string[] circuits, string? neutral = null)
     {
         var ocpd = ocpdA is { } a ? FormattableString.Invariant($", ocpd: {a}") : "";
         var neutralSize = neutral is null ? "" : $", neutral_size: {neutral}";
-        return $"""
-            disttree: 1
-            project:
-              name: Per-line checks
-              units: metric
-            rules:
-              conductor_temperature: rated
-            service:
-              id: SVC
-              system: 208Y/120
-            equipment:
-              - id: P
-                kind: panelboard
-                from: SVC
-                feeder: {"{"} length: 10, size: {size}{ocpd}{neutralSize} {"}"}
-                circuits:
-            {circuits}
-            """;
+        return SolverHarness.PanelOnFeeder($"length: 10, size: {size}{ocpd}{neutralSize}", circuits);
     }
 }

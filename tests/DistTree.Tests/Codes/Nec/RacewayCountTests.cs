@@ -17,8 +17,8 @@ public sealed class RacewayCountTests
     public void Solve_SharedRaceway_AdjustsTheAmpacity(bool shared, int count, double ampacityA, bool over)
     {
         var raceway = shared ? ", raceway_id: R1" : "";
-        var s = SolverHarness.Solve(Panel(string.Join("\n", Enumerable.Range(1, 3).Select(i =>
-            $"      - {{ id: \"{i}\", poles: 1, load: {{ amps: 21 }}, run: {{ length: 5, size: 12 AWG{raceway} }} }}"))));
+        var s = SolverHarness.Solve(Panel(Enumerable.Range(1, 3).Select(i =>
+            $"{{ id: \"{i}\", poles: 1, load: {{ amps: 21 }}, run: {{ length: 5, size: 12 AWG{raceway} }} }}").ToArray()));
         Assert.All(s.Runs.Where(r => r.Kind == DistTree.Solving.RunResultKind.Branch), r =>
         {
             Assert.Equal(count, r.CurrentCarryingConductors);
@@ -31,7 +31,7 @@ public sealed class RacewayCountTests
     [Fact]
     public void Solve_StatedCount_IsUsedAsGiven()
     {
-        var s = SolverHarness.Solve(Panel("      - { id: \"1\", poles: 1, load: { amps: 10 }, run: { length: 5, size: 12 AWG, current_carrying: 9 } }"));
+        var s = SolverHarness.Solve(Panel("{ id: \"1\", poles: 1, load: { amps: 10 }, run: { length: 5, size: 12 AWG, current_carrying: 9 } }"));
         var branch = s.Branch();
         Assert.Equal(9, branch.CurrentCarryingConductors);
         Assert.Equal(17.5, branch.AmpacityA!.Value, 9);
@@ -42,32 +42,14 @@ public sealed class RacewayCountTests
     [Fact]
     public void Solve_OwnCount_FollowsTheNeutralRule()
     {
-        var s = SolverHarness.Solve(Panel("""
-                  - { id: "1", poles: 1, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }
-                  - { id: "2", poles: 2, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }
-                  - { id: "3", poles: 3, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }
-            """));
+        var s = SolverHarness.Solve(Panel(
+            "{ id: \"1\", poles: 1, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }",
+            "{ id: \"2\", poles: 2, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }",
+            "{ id: \"3\", poles: 3, load: { amps: 10 }, run: { length: 5, size: 12 AWG } }"));
         Assert.Equal(3, s.Runs.Single(r => r.Id == "P").CurrentCarryingConductors);
         Assert.Equal([2, 2, 3], s.Runs.Where(r => r.Kind == DistTree.Solving.RunResultKind.Branch).OrderBy(r => r.Id, StringComparer.Ordinal).Select(r => r.CurrentCarryingConductors!.Value));
     }
 
     // A 208Y/120 panel P on a short 2/0 feeder with the given circuits.
-    private static string Panel(string circuits) => $"""
-        disttree: 1
-        project:
-          name: Raceways
-          units: metric
-        rules:
-          conductor_temperature: rated
-        service:
-          id: SVC
-          system: 208Y/120
-        equipment:
-          - id: P
-            kind: panelboard
-            from: SVC
-            feeder: {"{"} length: 5, size: 2/0 AWG {"}"}
-            circuits:
-        {circuits}
-        """;
+    private static string Panel(params string[] circuits) => SolverHarness.PanelOnFeeder("length: 5, size: 2/0 AWG", circuits);
 }
