@@ -180,9 +180,9 @@ internal static partial class ProjectMessages
     public static string LongBranch(Subject run, string lengthText) =>
         $"{run} is {lengthText} m long, more than 609.6 m (2000 ft); check the length";
 
-    /// <summary>A neutral size of the other series than the lines' size (mm² against AWG or kcmil).</summary>
-    public static string NeutralSeries(Subject run, Conductors.ConductorSize neutral, Conductors.ConductorSize lines) =>
-        $"'neutral_size' of {run} is {neutral}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
+    /// <summary>A second size of a run (<c>neutral_size</c>, <c>ground_size</c>) of the other series than the lines' size (mm² against AWG or kcmil).</summary>
+    public static string SeriesUnlikeLines(string key, Subject run, Conductors.ConductorSize size, Conductors.ConductorSize lines) =>
+        $"'{key}' of {run} is {size}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
 
     /// <summary>A run that names its raceway and also states the raceway's count of current-carrying conductors.</summary>
     public static string RacewayTwice(Subject run) =>
@@ -191,10 +191,6 @@ internal static partial class ProjectMessages
     /// <summary>A motor load (<c>hp</c> or <c>fla</c>) whose circuit states a category other than motor or hvac.</summary>
     public static string MotorCategory(Subject circuit, LoadCategory stated) =>
         $"'category' of {circuit} is {Words.LoadCategory.Of(stated)}, but its load is a motor (given in {MotorQuantityList}): a motor's category is {Words.LoadCategory.Of(LoadCategory.Motor)} or {Words.LoadCategory.Of(LoadCategory.Hvac)}";
-
-    /// <summary>A grounding conductor's size of the other series than the lines' size (mm² against AWG or kcmil).</summary>
-    public static string GroundSeries(Subject run, Conductors.ConductorSize ground, Conductors.ConductorSize lines) =>
-        $"'ground_size' of {run} is {ground}, but its 'size' is {lines}: give both in AWG and kcmil, or both in mm2";
 
     /// <summary>A neutral size on the run of a circuit of 2 or 3 poles.</summary>
     public static string NeutralOnLineToLine(Subject circuit, int poles) =>

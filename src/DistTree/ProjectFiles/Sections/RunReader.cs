@@ -48,14 +48,14 @@ internal sealed class RunReader(SectionContext context)
         var sizeNode = m.Required("size", ProjectMessages.KeyHints.Size);
         var size = sizeNode is null ? null : Size(sizeNode, subject.Of("'size' of "));
         var neutralNode = m.Optional("neutral_size");
-        var neutral = neutralNode is null ? null : NeutralSize(neutralNode, subject, size);
+        var neutral = neutralNode is null ? null : SizeBesideLines(neutralNode, "neutral_size", subject, size);
         if (neutralNode is not null)
         {
             neutralLocation = m.KeyLocation("neutral_size");
         }
 
         var groundNode = m.Optional("ground_size");
-        var ground = groundNode is null ? null : GroundSize(groundNode, subject, size);
+        var ground = groundNode is null ? null : SizeBesideLines(groundNode, "ground_size", subject, size);
         var sets = Sets(m, subject);
         var defaults = context.Draft.Defaults;
         var material = m.Optional("material") is { } materialNode ? Values.Choice(materialNode, subject.Of("'material' of "), "material", Words.Material.Pairs) : defaults.Material;
@@ -114,30 +114,18 @@ internal sealed class RunReader(SectionContext context)
         return (id, count, (idNode is null || id is not null) && (countNode is null || count is not null));
     }
 
-    // The neutral's size: read as the size is, and in the same series (AWG and kcmil, or mm²) as the lines.
-    private ConductorSize? NeutralSize(SourceNode node, Subject subject, ConductorSize? lines)
+    // A second size of the run ('neutral_size', 'ground_size'): read as the size is, and in the same series (AWG and
+    // kcmil, or mm²) as the lines.
+    private ConductorSize? SizeBesideLines(SourceNode node, string key, Subject subject, ConductorSize? lines)
     {
-        var neutral = Size(node, subject.Of("'neutral_size' of "));
-        if (neutral is { } n && lines is { } l && n.Series != l.Series)
+        var size = Size(node, subject.Of($"'{key}' of "));
+        if (size is { } s && lines is { } l && s.Series != l.Series)
         {
-            Bag.Error(node.Location, ProjectMessages.NeutralSeries(subject, n, l));
+            Bag.Error(node.Location, ProjectMessages.SeriesUnlikeLines(key, subject, s, l));
             return null;
         }
 
-        return neutral;
-    }
-
-    // The equipment grounding conductor's size: read as the size is, and in the same series as the lines.
-    private ConductorSize? GroundSize(SourceNode node, Subject subject, ConductorSize? lines)
-    {
-        var ground = Size(node, subject.Of("'ground_size' of "));
-        if (ground is { } g && lines is { } l && g.Series != l.Series)
-        {
-            Bag.Error(node.Location, ProjectMessages.GroundSeries(subject, g, l));
-            return null;
-        }
-
-        return ground;
+        return size;
     }
 
     // A conductor size, parsed once per distinct text; 'what' names the key in messages. A bare number is refused
