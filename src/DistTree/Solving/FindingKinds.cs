@@ -43,8 +43,9 @@ public static class FindingKinds
             kind, "ampacity", "Design current above the allowable ampacity", "Ampacity (design current)", "Ampacity",
             "The design current of a run is above its conductors' corrected ampacity.", "A", "the design current", "the allowable ampacity"),
         FindingKind.OcpdAboveAmpacity => new(
-            kind, "ocpd_above_ampacity", "Overcurrent device above what the conductors permit", "Overcurrent device", "OcpdAboveAmpacity",
-            "The overcurrent device is rated above what the conductors' ampacity permits.", "A", "the device rating", "the largest rating the conductors permit"),
+            kind, "ocpd_above_ampacity", "Overcurrent device above what the conductors or the equipment permit", "Overcurrent device", "OcpdAboveAmpacity",
+            "The overcurrent device is rated above what the conductors' ampacity permits, or, for a motor or air-conditioning equipment, above what its own rules allow.",
+            "A", "the device rating", "the largest rating the conductors or the equipment permit"),
         FindingKind.TransformerOverload => new(
             kind, "transformer_overload", "Transformer loaded above its rating", "Transformer loading", "TransformerOverload",
             "A transformer is loaded above its rating.", "kVA", "the load carried", "the nameplate rating"),
