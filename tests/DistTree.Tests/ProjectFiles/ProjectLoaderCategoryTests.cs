@@ -1,4 +1,3 @@
-using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.ProjectFiles;
 
@@ -58,7 +57,7 @@ public sealed class ProjectLoaderCategoryTests
     {
         var text = Project($"{{ id: 1, poles: 3, category: {word}, load: {{ fla: 12, pf: 0.85 }}, run: {{ length: 20, size: 12 AWG }} }}");
 
-        AssertOneError(text, word, $"'category' of circuit 'P/1' is {word}, but its load is a motor (given in 'hp' or 'fla'): a motor's category is motor or hvac");
+        ProjectText.AssertOneError(text, word, $"'category' of circuit 'P/1' is {word}, but its load is a motor (given in 'hp' or 'fla'): a motor's category is motor or hvac");
     }
 
     [Fact]
@@ -66,7 +65,7 @@ public sealed class ProjectLoaderCategoryTests
     {
         var text = Project("{ id: 1, poles: 1, category: lightning, load: { va: 1000 }, run: { length: 20, size: 12 AWG } }");
 
-        AssertOneError(text, "lightning", "unknown load category 'lightning'; did you mean 'lighting'?");
+        ProjectText.AssertOneError(text, "lightning", "unknown load category 'lightning'; did you mean 'lighting'?");
     }
 
     [Fact]
@@ -92,7 +91,7 @@ public sealed class ProjectLoaderCategoryTests
     {
         var text = Project("{ id: 1, poles: 1, points: [ { at: 5, category: kichen, load: { va: 300 } } ], run: { length: 20, size: 12 AWG } }");
 
-        AssertOneError(text, "kichen", "unknown load category 'kichen'; did you mean 'kitchen'?");
+        ProjectText.AssertOneError(text, "kichen", "unknown load category 'kichen'; did you mean 'kitchen'?");
     }
 
     private static Circuit OnlyCircuit(string circuit) =>
@@ -101,14 +100,4 @@ public sealed class ProjectLoaderCategoryTests
     private static string Project(string circuit) =>
         "disttree: 1\nproject: { name: Categories }\nservice: { id: SVC, system: 208Y/120 }\nequipment:\n"
         + $"  - {{ id: P, kind: panelboard, from: SVC, feeder: {{ length: 20, size: 2/0 AWG }}, circuits: [ {circuit} ] }}\n";
-
-    // Exactly one diagnostic, an error with this message, located where 'token' is written.
-    private static void AssertOneError(string text, string token, string message)
-    {
-        var error = Assert.Throws<ProjectException>(() => ProjectLoader.Parse(text, "t.yaml"));
-        var diagnostic = Assert.Single(error.Diagnostics);
-        Assert.Equal((Severity.Error, message), (diagnostic.Severity, diagnostic.Message));
-        var line = text.Split('\n')[diagnostic.Location.Line - 1];
-        Assert.StartsWith(token, line[(diagnostic.Location.Column - 1)..], StringComparison.Ordinal);
-    }
 }

@@ -1,5 +1,4 @@
 using DistTree.Conductors;
-using DistTree.Diagnostics;
 using DistTree.Model;
 using DistTree.ProjectFiles;
 
@@ -60,9 +59,9 @@ public sealed class ProjectLoaderElectricalKeysTests
     {
         var text = Project("208Y/120", Panel("LP1", "SVC", $"{{ length: 20, size: 2 AWG, neutral_size: {neutral} }}", Circuit1));
 
-        AssertOneError(text, neutral, message);
+        ProjectText.AssertOneError(text, neutral, message);
         // The same text as 'size' gives for it.
-        AssertOneError(Project("208Y/120", Panel("LP1", "SVC", $"{{ length: 20, size: {neutral} }}", Circuit1)), neutral, message);
+        ProjectText.AssertOneError(Project("208Y/120", Panel("LP1", "SVC", $"{{ length: 20, size: {neutral} }}", Circuit1)), neutral, message);
     }
 
     [Theory]
@@ -72,7 +71,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     {
         var text = Project("208Y/120", Panel("LP1", "SVC", $"{{ length: 20, size: {size}, neutral_size: {neutral} }}", Circuit1));
 
-        AssertOneError(text, neutral, message);
+        ProjectText.AssertOneError(text, neutral, message);
     }
 
     // docs/project-file.md: a 2-pole circuit is line to line (single-phase), a 3-pole circuit three-phase; neither has a neutral.
@@ -83,7 +82,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     {
         var circuit = $"{{ id: 1, poles: {poles}, load: {{ va: 1000 }}, run: {{ length: 20, size: 12 AWG, neutral_size: 12 AWG }} }}";
 
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project("208Y/120", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", circuit)),
             "neutral_size",
             $"'neutral_size' of the run of circuit 'LP1/1': a {poles}-pole circuit has no neutral (only a 1-pole circuit's run has one)");
@@ -97,7 +96,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     {
         var circuit = "{ id: 1, poles: 2, load: { va: 1000 }, run: { length: 20, size: 12 AWG } }";
 
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project(system, Panel("LP1", "SVC", "{ length: 20, size: 2 AWG, neutral_size: 4 AWG }", circuit)),
             "neutral_size",
             $"'neutral_size' of the feeder of 'LP1': it is fed from 'SVC', which gives {system}, a system with no neutral");
@@ -120,7 +119,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     {
         var text = Project("480D", Transformer("T1", "SVC", "208Y/120", feeder: "{ length: 30, size: 1 AWG, neutral_size: 2 AWG }"));
 
-        AssertOneError(text, "neutral_size", "'neutral_size' of the feeder of 'T1': it is fed from 'SVC', which gives 480D, a system with no neutral");
+        ProjectText.AssertOneError(text, "neutral_size", "'neutral_size' of the feeder of 'T1': it is fed from 'SVC', which gives 480D, a system with no neutral");
     }
 
     [Fact]
@@ -156,7 +155,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [InlineData("XY")]
     public void Parse_TransformerPhaseNotTwoLines_IsAnErrorAtTheValue(string phase)
     {
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project("480Y/277", Transformer("T1", "SVC", "120/240", phase: phase)),
             phase,
             $"'phase' of 'T1' is '{phase}'; a single-phase transformer's primary is across two lines: AB, BC or CA");
@@ -165,7 +164,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [Fact]
     public void Parse_TransformerPhaseWithThreePhaseSecondary_IsAnErrorAtTheKey()
     {
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project("480Y/277", Transformer("T1", "SVC", "208Y/120", phase: "BC")),
             "phase",
             "'phase' of 'T1' chooses the two primary lines of a single-phase transformer; its secondary 208Y/120 is three-phase and takes all three");
@@ -174,7 +173,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [Fact]
     public void Parse_TransformerPhaseOnSinglePhasePrimary_IsAnErrorAtTheKey()
     {
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project("120/240", Transformer("T1", "SVC", "120/240", phase: "AB")),
             "phase",
             "'phase' of 'T1' chooses two lines of a three-phase primary, but it is fed from 'SVC', which gives 120/240, single-phase");
@@ -183,7 +182,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [Fact]
     public void Parse_PhaseOnASwitchboard_IsATransformerOnlyKey()
     {
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project("480Y/277", "  - { id: MSB, kind: switchboard, from: SVC, phase: AB }\n"),
             "phase",
             "'phase' applies to transformers only; 'MSB' is a switchboard");
@@ -197,7 +196,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [InlineData("120", "480D")]
     public void Parse_ThreePhaseSecondaryOnSinglePhasePrimary_IsAnErrorAtTheSecondaryKey(string primary, string secondary)
     {
-        AssertOneError(
+        ProjectText.AssertOneError(
             Project(primary, Transformer("T1", "SVC", secondary)),
             "secondary",
             $"the secondary of 'T1' is {secondary}, three-phase, but it is fed from 'SVC', which gives {primary}, single-phase: a three-phase secondary needs a three-phase primary");
@@ -248,7 +247,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [InlineData(", fault_x_r: 8", "fault_x_r", "'fault_x_r' of the service needs 'available_fault_current_ka' with it: the utility's source is given by its fault current and its X/R ratio together")]
     public void Parse_OneFaultKeyAlone_IsAnErrorNamingTheOther(string keys, string token, string message)
     {
-        AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), keys), token, message);
+        ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), keys), token, message);
     }
 
     [Theory]
@@ -259,7 +258,7 @@ public sealed class ProjectLoaderElectricalKeysTests
     [InlineData("available_fault_current_ka: 22, fault_x_r: high", "high", "'fault_x_r' of the service must be a number; found 'high'")]
     public void Parse_FaultKeyOutOfRange_IsAnErrorAtTheValue(string keys, string token, string message)
     {
-        AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), ", " + keys), token, message);
+        ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), ", " + keys), token, message);
     }
 
     private static string Project(string system, string equipment, string serviceKeys = "") =>
@@ -272,14 +271,4 @@ public sealed class ProjectLoaderElectricalKeysTests
         $"  - id: {id}\n    kind: transformer\n    from: {from}\n    kva: 45\n    secondary: {secondary}\n    impedance_percent: 4\n    x_r: 3\n"
         + (phase is null ? "" : $"    phase: {phase}\n")
         + (feeder is null ? "" : $"    feeder: {feeder}\n");
-
-    // Exactly one diagnostic, an error with this message, located where 'token' is written.
-    private static void AssertOneError(string text, string token, string message)
-    {
-        var error = Assert.Throws<ProjectException>(() => ProjectLoader.Parse(text, "t.yaml"));
-        var diagnostic = Assert.Single(error.Diagnostics);
-        Assert.Equal((Severity.Error, message), (diagnostic.Severity, diagnostic.Message));
-        var line = text.Split('\n')[diagnostic.Location.Line - 1];
-        Assert.StartsWith(token, line[(diagnostic.Location.Column - 1)..], StringComparison.Ordinal);
-    }
 }

@@ -1,4 +1,3 @@
-using DistTree.Diagnostics;
 using DistTree.ProjectFiles;
 
 namespace DistTree.Tests.ProjectFiles;
@@ -24,7 +23,7 @@ public sealed class ProjectLoaderSizeTextTests
         var text = Project(units, system, "", $"{{ length: 20, size: {size} }}");
         var bare = size.Trim('"');
 
-        AssertOneError(text, 5, size, $"'size' of the run of circuit 'P/1' is '{bare}', which has no unit: write {readings}");
+        ProjectText.AssertOneError(text, size, $"'size' of the run of circuit 'P/1' is '{bare}', which has no unit: write {readings}", line: 5);
     }
 
     [Fact]
@@ -32,7 +31,7 @@ public sealed class ProjectLoaderSizeTextTests
     {
         var text = Project("imperial", "208Y/120", "", "{ length: 20, size: 7 }");
 
-        AssertOneError(text, 5, "7", "'size' of the run of circuit 'P/1' is '7', which has no unit and is no standard size in AWG, kcmil or mm2: write a size with its unit, e.g. '12 AWG', '250 kcmil' or '95 mm2'");
+        ProjectText.AssertOneError(text, "7", "'size' of the run of circuit 'P/1' is '7', which has no unit and is no standard size in AWG, kcmil or mm2: write a size with its unit, e.g. '12 AWG', '250 kcmil' or '95 mm2'", line: 5);
     }
 
     [Fact]
@@ -40,7 +39,7 @@ public sealed class ProjectLoaderSizeTextTests
     {
         var text = Project("metric", "400Y/230", "", "{ length: 20, size: 4 mm2, neutral_size: 6 }");
 
-        AssertOneError(text, 5, "6", "'neutral_size' of the run of circuit 'P/1' is '6', which has no unit: write '6 AWG' or '6 mm2'");
+        ProjectText.AssertOneError(text, "6", "'neutral_size' of the run of circuit 'P/1' is '6', which has no unit: write '6 AWG' or '6 mm2'", line: 5);
     }
 
     [Fact]
@@ -48,7 +47,7 @@ public sealed class ProjectLoaderSizeTextTests
     {
         var text = Project("imperial", "208Y/120", "sizing: { prices: { 10 AWG: 0.9, 12: 0.6 } }\n", "{ length: 20, size: 12 AWG }");
 
-        AssertOneError(text, 3, "12:", "a size in 'prices' is '12', which has no unit: write '12 AWG'");
+        ProjectText.AssertOneError(text, "12:", "a size in 'prices' is '12', which has no unit: write '12 AWG'", line: 3);
     }
 
     [Theory]
@@ -72,14 +71,4 @@ public sealed class ProjectLoaderSizeTextTests
         $"disttree: 1\nproject: {{ name: Sizes, units: {units} }}\n{sizing}service: {{ id: SVC, system: {system} }}\n"
         + "equipment:\n"
         + $"  - {{ id: P, kind: panelboard, from: SVC, feeder: {{ length: 20, size: 2/0 AWG }}, circuits: [ {{ id: 1, poles: 1, load: {{ va: 1000 }}, run: {run} }} ] }}\n";
-
-    // Exactly one diagnostic, an error with this message, on this line, located where 'token' is written.
-    private static void AssertOneError(string text, int line, string token, string message)
-    {
-        var error = Assert.Throws<ProjectException>(() => ProjectLoader.Parse(text, "t.yaml"));
-        var diagnostic = Assert.Single(error.Diagnostics);
-        Assert.Equal((Severity.Error, message, line), (diagnostic.Severity, diagnostic.Message, diagnostic.Location.Line));
-        var written = text.Split('\n')[line - 1];
-        Assert.StartsWith(token, written[(diagnostic.Location.Column - 1)..], StringComparison.Ordinal);
-    }
 }

@@ -1,3 +1,6 @@
+using DistTree.Diagnostics;
+using DistTree.ProjectFiles;
+
 namespace DistTree.Tests.ProjectFiles;
 
 /// <summary>Small project texts for tests, built from a valid minimal project (invented data).</summary>
@@ -25,4 +28,22 @@ internal static class ProjectText
                 {circuit}
 
         """;
+
+    /// <summary>
+    /// Loading <paramref name="text"/> gives exactly one diagnostic, an error with <paramref name="message"/>, located
+    /// where <paramref name="token"/> is written (on <paramref name="line"/> where one is given).
+    /// </summary>
+    public static void AssertOneError(string text, string token, string message, int? line = null)
+    {
+        var error = Assert.Throws<ProjectException>(() => ProjectLoader.Parse(text, "t.yaml"));
+        var diagnostic = Assert.Single(error.Diagnostics);
+        Assert.Equal((Severity.Error, message), (diagnostic.Severity, diagnostic.Message));
+        if (line is { } expected)
+        {
+            Assert.Equal(expected, diagnostic.Location.Line);
+        }
+
+        var written = text.Split('\n')[diagnostic.Location.Line - 1];
+        Assert.StartsWith(token, written[(diagnostic.Location.Column - 1)..], StringComparison.Ordinal);
+    }
 }
