@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
+using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.ProjectFiles;
 using DistTree.Vocabulary;
@@ -56,6 +57,7 @@ internal static class ConductorsCommand
     private static List<CatalogLine> Rows(Material material, double temperatureC, Raceway raceway, double frequencyHz, double ambientC)
     {
         var catalog = ConductorCatalog.Standard;
+        var nec = CodeRules.For(Model.ElectricalCode.Nec, catalog); // the catalogue's columns are NEC Table 310.16's
         return catalog.Sizes.Select(size => new CatalogLine(
             size.Text,
             size.AreaMm2,
@@ -64,9 +66,9 @@ internal static class ConductorsCommand
             catalog.DcResistanceBasis(size, material),
             catalog.AcResistanceOhmPerKm(size, material, raceway, temperatureC, frequencyHz),
             catalog.ReactanceOhmPerKm(size, raceway, frequencyHz),
-            catalog.ThermalAmpacityA(size, material, 60, ambientC),
-            catalog.ThermalAmpacityA(size, material, 75, ambientC),
-            catalog.ThermalAmpacityA(size, material, 90, ambientC))).ToList();
+            nec.ThermalAmpacityA(size, material, 60, ambientC),
+            nec.ThermalAmpacityA(size, material, 75, ambientC),
+            nec.ThermalAmpacityA(size, material, 90, ambientC))).ToList();
     }
 
     private static void WriteTable(TextWriter o, List<CatalogLine> rows, double temperatureC, double frequencyHz, double ambientC)

@@ -18,9 +18,6 @@ public sealed partial class ConductorCatalog
     // AC resistances already worked out, one per slot by a hash of the inputs (see AcResistanceOhmPerKm).
     private readonly AcResistance?[] _acResistances = new AcResistance?[AcResistanceCacheLength];
 
-    // The ambient correction factors at the ambient last asked for (see ThermalAmpacityA).
-    private AmbientFactors? _ambientFactors;
-
     private ConductorCatalog(string sourceName, IReadOnlyList<string> header, CatalogRow?[] rows)
     {
         SourceName = sourceName;
@@ -143,26 +140,12 @@ public sealed partial class ConductorCatalog
         size.Kind == SizeKind.Metric && columnC == 75 ? 70.0 : columnC;
 
     /// <summary>
-    /// The conductor's own ampacity Iz at the ambient, amperes: its insulation column × ambient factor ×
-    /// adjustment factor. This drives the temperature estimate. Null where the table has no figure.
+    /// The allowable ampacity, amperes, from the conductor's own (<paramref name="thermal"/>, corrected by the rule set:
+    /// <c>CodeRules.ThermalAmpacityA</c>): not above the column of the terminal rating (the lower of terminal and
+    /// insulation ratings; NEC 110.14(C), read). Metric sizes have no terminal column: their thermal ampacity is the
+    /// allowable one. Null where the table has no figure.
     /// </summary>
-    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarryingConductors = 3)
-    {
-        var table = TableAmpacityA(size, material, insulationC);
-        return table * AmbientFactor(RatedTemperatureC(size, insulationC), ambientC)
-            * Ampacity.AdjustmentFactor(currentCarryingConductors);
-    }
-
-    /// <summary>
-    /// The allowable ampacity, amperes: the thermal ampacity, but not above the column of the terminal rating
-    /// (the lower of terminal and insulation ratings; NEC 110.14(C), read). Metric sizes have no terminal
-    /// column: their thermal ampacity is the allowable one. Null where the table has no figure.
-    /// </summary>
-    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarryingConductors = 3) =>
-        AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarryingConductors));
-
-    /// <summary>The allowable ampacity from the conductor's <paramref name="thermal"/> ampacity (see <see cref="ThermalAmpacityA"/>).</summary>
-    internal double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double? thermal)
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double? thermal)
     {
         if (thermal is null || size.Kind == SizeKind.Metric)
         {
@@ -175,39 +158,12 @@ public sealed partial class ConductorCatalog
 
     /// <summary>
     /// The largest overcurrent device for one small conductor, amperes, from the catalogue's <c>ocpd_cu</c> and
-    /// <c>ocpd_al</c> columns, or null where they have none. The rule that applies it is the solver's
-    /// <c>ProtectionRules</c>.
+    /// <c>ocpd_al</c> columns, or null where they have none. The rule set applies it (<c>Codes/CodeRules</c>).
     /// </summary>
     public double? SmallConductorMaxOcpdA(ConductorSize size, Material material)
     {
         var row = Row(size);
         return material == Material.Copper ? row.MaxOcpdCuA : row.MaxOcpdAlA;
-    }
-
-    // Ampacity.AmbientFactor, kept for the last ambient asked for: a project has one ambient, and each run asks
-    // again. The ratings are those RatedTemperatureC gives; any other is worked out each time.
-    private double AmbientFactor(double ratedC, double ambientC)
-    {
-        var factors = _ambientFactors;
-        if (factors is null || BitConverter.DoubleToInt64Bits(factors.AmbientC) != BitConverter.DoubleToInt64Bits(ambientC))
-        {
-            factors = new AmbientFactors(
-                ambientC,
-                Ampacity.AmbientFactor(60.0, ambientC),
-                Ampacity.AmbientFactor(70.0, ambientC),
-                Ampacity.AmbientFactor(75.0, ambientC),
-                Ampacity.AmbientFactor(90.0, ambientC));
-            _ambientFactors = factors;
-        }
-
-        return ratedC switch
-        {
-            60.0 => factors.At60C,
-            70.0 => factors.At70C,
-            75.0 => factors.At75C,
-            90.0 => factors.At90C,
-            _ => Ampacity.AmbientFactor(ratedC, ambientC),
-        };
     }
 
     internal static double ToOhmPerKm(double value, bool perKft) =>
@@ -304,9 +260,6 @@ public sealed partial class ConductorCatalog
 
     // A worked-out AC resistance and its inputs (doubles as their bits).
     private sealed record AcResistance(int SizeIndex, Material Material, Raceway Raceway, long TemperatureBits, long FrequencyBits, double OhmPerKm);
-
-    // Ampacity.AmbientFactor at one ambient for each rating a column may have.
-    private sealed record AmbientFactors(double AmbientC, double At60C, double At70C, double At75C, double At90C);
 
     // Per size, the figures that do not depend on a run: reactances in ohm/km at the data's frequency, 20 °C
     // resistances (tabulated or from the area), the stranded diameter and the axial spacing of touching conductors.

@@ -104,5 +104,5 @@ internal static class RunSizer
         dropPercent / DropPercent(size, sets, 1.0, currentA, power, supply, raceway);
 
     private static double Ampacity(ConductorSize size) =>
-        Catalog.AllowableAmpacityA(size, Material.Copper, InsulationC, 75, 30) ?? 0;
+        Protection.AllowableAmpacityA(size, Material.Copper, InsulationC, 75, 30) ?? 0;
 }

@@ -181,7 +181,7 @@ internal sealed class SizingProblem
         }
     }
 
-    // The run's current and device rules at a choice (see ProtectionRules).
+    // The run's current and device rules at a choice (see CodeRules.Meets).
     private static bool MeetsCurrentRules(CodeRules protection, NetworkRun run, ConductorSize size, int sets, RunResult row, double? ampacityA)
     {
         var conductors = run.Conductors;

@@ -231,17 +231,6 @@ public sealed class ConductorCatalogTests
         Assert.Equal((double?)al90, Catalog.TableAmpacityA(s, Material.Aluminum, 90));
     }
 
-    // 90 °C conductor on 75 °C terminals at 40 °C ambient: 1/0 copper 170 A × 0.91 = 154.7 A, limited to
-    // the 75 °C column's 150 A (NEC 110.14(C) and 310.15(B)(1), read; the arithmetic is common practice).
-    [Fact]
-    public void AllowableAmpacity_TerminalLimitsTheColumn()
-    {
-        var s = ConductorSize.Parse("1/0");
-        Assert.Equal(170 * 0.91, Catalog.ThermalAmpacityA(s, Material.Copper, 90, 40)!.Value, 1);
-        Assert.Equal(150, Catalog.AllowableAmpacityA(s, Material.Copper, 90, 75, 40));
-        Assert.Equal(170 * 0.91 * 0.8, Catalog.AllowableAmpacityA(s, Material.Copper, 90, 75, 40, 6)!.Value, 1);
-    }
-
     [Fact]
     public void SmallConductorMaxOcpd_Is240_4D()
     {

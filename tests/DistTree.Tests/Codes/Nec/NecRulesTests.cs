@@ -153,6 +153,18 @@ public sealed class NecRulesTests
         Assert.Equal(25 * 0.704, Rules.ThermalAmpacityA(ConductorSize.Parse("12 AWG"), Material.Copper, 75, 40, 6)!.Value, 9);
     }
 
+    // 90 °C conductor on 75 °C terminals at 40 °C ambient: 1/0 copper 170 A × 0.91 = 154.7 A, limited to the 75 °C
+    // column's 150 A; with 6 conductors, 154.7 × 0.8 = 123.8 A (NEC 110.14(C), 310.15(B)(1) and (C)(1), read; the
+    // arithmetic is common practice).
+    [Fact]
+    public void AllowableAmpacityA_TerminalLimitsTheColumn()
+    {
+        var s = ConductorSize.Parse("1/0 AWG");
+        Assert.Equal(170 * 0.91, Rules.ThermalAmpacityA(s, Material.Copper, 90, 40)!.Value, 1);
+        Assert.Equal(150, Rules.AllowableAmpacityA(s, Material.Copper, 90, 75, 40));
+        Assert.Equal(170 * 0.91 * 0.8, Rules.AllowableAmpacityA(s, Material.Copper, 90, 75, 40, 6)!.Value, 1);
+    }
+
     // Every check cites a clause of its own code, and the code's name leads each clause that is one.
     [Fact]
     public void Cite_EveryCheck_NamesAClause()
