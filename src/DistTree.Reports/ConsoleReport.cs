@@ -71,7 +71,7 @@ public static class ConsoleReport
     private static void WriteSummaryLine(TextWriter o, Solution s)
     {
         var sum = s.Summary;
-        o.WriteLine(F($"Summary: {sum.EndPoints} end points, {sum.Runs} runs, {sum.Findings} findings; worst total {sum.WorstTotalDropPercent:0.00} % at {sum.WorstEndPoint ?? "-"} (limit {s.Project.Rules.TotalLimitPercent:0.##} %)"));
+        o.WriteLine(F($"Summary: {sum.EndPoints} end points, {sum.Runs} runs, {sum.Findings} findings; worst total {sum.WorstTotalDropPercent:0.00} % at {sum.WorstEndPoint ?? "-"} (limit {RuleText.TotalLimits(s)} %)"));
         var byKind = s.AllFindings.GroupBy(f => f.Code).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => $"{g.Key} {g.Count()}");
         if (sum.Findings > 0)
         {

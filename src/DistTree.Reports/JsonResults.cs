@@ -134,6 +134,25 @@ public static partial class JsonResults
         w.WriteNumber("feeder_limit_percent", r.FeederLimitPercent);
         w.WriteNumber("branch_limit_percent", r.BranchLimitPercent);
         w.WriteNumber("total_limit_percent", r.TotalLimitPercent);
+        if (r.LightingLimitPercent is { } lighting)
+        {
+            w.WriteNumber("lighting_limit_percent", lighting);
+        }
+
+        if (r.Supply is { } supply)
+        {
+            w.WriteString("supply", Words.Supply.Of(supply));
+        }
+
+        if (r.LongPathAllowance is { } allowance)
+        {
+            w.WriteStartObject("long_path_allowance");
+            w.WriteNumber("from_m", allowance.FromM);
+            w.WriteNumber("percent_per_m", allowance.PercentPerM);
+            w.WriteNumber("max_percent", allowance.MaxPercent);
+            w.WriteEndObject();
+        }
+
         w.WriteString("branch_current", RuleText.BranchCurrent(r));
         w.WriteString("conductor_temperature", RuleText.Temperature(r));
         w.WriteString("transformer_drop", RuleText.TransformerDrop(r));

@@ -22,10 +22,34 @@ public static class RuleText
     /// <summary>The <c>method</c> value as written in project files.</summary>
     public static string Method(Rules rules) => Words.Method.Of(rules.Method);
 
+    /// <summary>
+    /// The total limit of <paramref name="s"/>'s end points, without its unit: one figure where every end point has the
+    /// same, else the least and the largest (<c>3–5.5</c>).
+    /// </summary>
+    public static string TotalLimits(Solving.Solution s)
+    {
+        ArgumentNullException.ThrowIfNull(s);
+        var (least, largest) = (s.Project.Rules.TotalLimitPercent, s.Project.Rules.TotalLimitPercent);
+        if (s.Project.Rules.TotalLimitVaries && s.EndPoints.Count > 0)
+        {
+            (least, largest) = (s.EndPoints.Min(e => e.LimitPercent), s.EndPoints.Max(e => e.LimitPercent));
+        }
+
+        return least == largest
+            ? string.Create(CultureInfo.InvariantCulture, $"{least:0.##}")
+            : string.Create(CultureInfo.InvariantCulture, $"{least:0.##}–{largest:0.##}");
+    }
+
+    /// <summary>The total-limit part of <see cref="Summary"/>: the limit, and for lighting and long paths their own.</summary>
+    private static string Total(Rules rules) => string.Create(CultureInfo.InvariantCulture, $"total {rules.TotalLimitPercent:0.##} %")
+        + (rules.LightingLimitPercent is { } lighting ? string.Create(CultureInfo.InvariantCulture, $", lighting {lighting:0.##} %") : "")
+        + (rules.LongPathAllowance is { } a ? string.Create(CultureInfo.InvariantCulture, $", + {a.PercentPerM:0.###} % per m beyond {a.FromM:0.#} m, at most + {a.MaxPercent:0.##} %") : "")
+        + (rules.Supply is { } supply ? $" ({Words.Supply.Of(supply)} supply)" : "");
+
     /// <summary>One line summing up the rules.</summary>
     public static string Summary(Rules rules) => string.Create(
         CultureInfo.InvariantCulture,
-        $"{Code(rules)}; feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, total {rules.TotalLimitPercent:0.##} %; " +
+        $"{Code(rules)}; feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, {Total(rules)}; " +
         $"branch current: {BranchCurrent(rules)}; conductor temperature: {Temperature(rules)}; transformers: {TransformerDrop(rules)}; " +
         $"ambient {rules.AmbientC:0.#} °C; terminals {rules.TerminalC} °C");
 }

@@ -1,6 +1,8 @@
+using System.Globalization;
 using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 using static DistTree.Reports.Html.HtmlText;
 
 namespace DistTree.Reports.Html;
@@ -42,6 +44,7 @@ internal static class MethodViewBuilder
         new("feeder_limit_percent", Limit(r.FeederLimitPercent) + " %", "The largest drop allowed in any one feeder, in percent of the voltage it carries. A run may set its own limit_percent."),
         new("branch_limit_percent", Limit(r.BranchLimitPercent) + " %", "The largest drop allowed in any one branch circuit, in percent of the circuit voltage."),
         new("total_limit_percent", Limit(r.TotalLimitPercent) + " %", "The largest sum of the percent drops from the service (or from a new origin, below) to any point of use."),
+        .. LimitMeanings(r),
         new("branch_current", Escape(RuleText.BranchCurrent(r)), "The current a branch circuit's drop is computed at: connected = the connected load; ocpd_80 = 80 % of the overcurrent device rating; lesser = the smaller of the two."),
         new("conductor_temperature", Escape(RuleText.Temperature(r)), "The temperature of the conductor resistance: estimated = from loading (formula above); rated = the insulation rating; a number = that temperature in °C."),
         new("transformer_drop", Escape(RuleText.TransformerDrop(r)), "count = a transformer's regulation adds to the totals below it; new_origin = its secondary starts a new total budget."),
@@ -50,4 +53,29 @@ internal static class MethodViewBuilder
         new("method", RuleText.Method(r), "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
         new("motor_start_limit_percent", Limit(r.MotorStartLimitPercent) + " %", "The largest dip allowed at a motor's terminals while it starts."),
     ];
+
+    // The rows of the limits that vary by end point, where the rules have them.
+    private static RuleMeaning[] LimitMeanings(Rules r)
+    {
+        var rows = new List<RuleMeaning>();
+        if (r.Supply is { } supply)
+        {
+            rows.Add(new("supply", Words.Supply.Of(supply), "Who supplies the installation: public = directly from a public low-voltage network; private = from the installation's own transformer or generator. The code's limits depend on it."));
+        }
+
+        if (r.LightingLimitPercent is { } lighting)
+        {
+            rows.Add(new("lighting_limit_percent", Limit(lighting) + " %", "The total limit of an end point whose load is lighting (category: lighting); every other load takes total_limit_percent."));
+        }
+
+        if (r.LongPathAllowance is { } a)
+        {
+            rows.Add(new(
+                "long-path allowance",
+                Escape(string.Create(CultureInfo.InvariantCulture, $"+ {a.PercentPerM:0.###} % per m beyond {a.FromM:0.#} m, at most + {a.MaxPercent:0.##} %")),
+                "The code lets an end point's total limit grow with the length of the wiring from its origin; set by the code, not a key."));
+        }
+
+        return [.. rows];
+    }
 }

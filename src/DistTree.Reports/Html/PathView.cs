@@ -1,15 +1,14 @@
 namespace DistTree.Reports.Html;
 
-/// <summary>The worst-paths section: a common scale and one bar per path.</summary>
+/// <summary>
+/// The worst-paths section: a common scale and one bar per path. <paramref name="LimitLabel"/> is the total limit where
+/// every end point has the same, null where each has its own (a lighting limit, a long-path allowance).
+/// </summary>
 internal sealed record PathsView(
     string Count,
     string Width,
     string SvgWidth,
-    string LimitX,
-    string NearX,
-    string NearWidth,
-    string OverWidth,
-    string LimitLabel,
+    string? LimitLabel,
     IReadOnlyList<AxisTick> Ticks,
     IReadOnlyList<PathView> Items);
 
@@ -25,6 +24,7 @@ internal sealed record PathView
     public required string Route { get; init; }
     public required string Total { get; init; }
     public required string Limit { get; init; }
+    public required LimitMarks Marks { get; init; }
     public required string Band { get; init; }
     public required string BandText { get; init; }
     public required string EndVoltage { get; init; }
@@ -32,6 +32,9 @@ internal sealed record PathView
     public required IReadOnlyList<BarSegment> Segments { get; init; }
     public required IReadOnlyList<PathRunRow> Runs { get; init; }
 }
+
+/// <summary>Where a path's limit line (<paramref name="LimitX"/>) and its near and over zones lie on the bar's axis.</summary>
+internal sealed record LimitMarks(string LimitX, string NearX, string NearWidth, string OverWidth);
 
 /// <summary>One run's share of a path's bar.</summary>
 internal sealed record BarSegment(string X, string Width, string Kind, string Number, bool ShowNumber, string LabelX, string Title);

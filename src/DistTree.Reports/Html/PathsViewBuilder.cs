@@ -15,7 +15,8 @@ internal static class PathsViewBuilder
     public static PathsView Build(Solution s, int worst)
     {
         var shown = worst > 0 ? s.WorstEndPoints(worst) : [];
-        var limit = s.Project.Rules.TotalLimitPercent;
+        var rules = s.Project.Rules;
+        var limit = shown.Count == 0 ? rules.TotalLimitPercent : shown.Max(e => e.LimitPercent);
         var axis = Axis.Of(shown, limit);
         var ticks = new List<AxisTick>();
         for (var t = 0.0; t <= axis.Max + 1e-9; t += axis.Step)
@@ -33,14 +34,17 @@ internal static class PathsViewBuilder
             Count(shown.Count),
             Coordinate(Width),
             Coordinate(Width + 40),
-            Coordinate(axis.X(limit)),
-            Coordinate(axis.X(Bands.NearFraction * limit)),
-            Coordinate(axis.X(limit) - axis.X(Bands.NearFraction * limit)),
-            Coordinate(Math.Max(0, Width - axis.X(limit))),
-            Limit(limit),
+            rules.TotalLimitVaries ? null : Limit(rules.TotalLimitPercent),
             ticks,
             items);
     }
+
+    // Where a bar's limit line and its near and over zones lie on the axis.
+    private static LimitMarks MarksOf(double limit, Axis axis) => new(
+        Coordinate(axis.X(limit)),
+        Coordinate(axis.X(Bands.NearFraction * limit)),
+        Coordinate(axis.X(limit) - axis.X(Bands.NearFraction * limit)),
+        Coordinate(Math.Max(0, Width - axis.X(limit))));
 
     private static PathView PathOf(Solution s, EndPointResult e, int rank, Axis axis)
     {
@@ -74,6 +78,7 @@ internal static class PathsViewBuilder
             Route = string.Join(" → ", e.Path.Select(Escape)),
             Total = Percent(e.TotalDropPercent),
             Limit = Limit(e.LimitPercent),
+            Marks = MarksOf(e.LimitPercent, axis),
             Band = Bands.Class(band),
             BandText = Bands.Text(band),
             EndVoltage = Metres(e.EndVoltageV) + " V of " + Limit(e.VoltageV) + " V",

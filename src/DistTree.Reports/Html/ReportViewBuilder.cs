@@ -49,7 +49,7 @@ internal static class ReportViewBuilder
             WorstName = worst is { } v ? Escape(v.Name) : null,
             WorstTotal = Percent(s.Summary.WorstTotalDropPercent),
             WorstBand = worst is { } b ? Bands.Class(Bands.Of(b)) : "none",
-            TotalLimit = Limit(rules.TotalLimitPercent),
+            TotalLimit = worst is { } limited ? Limit(limited.LimitPercent) : Limit(rules.TotalLimitPercent),
             Limits = SummaryViewBuilder.Limits(s),
             FindingKinds = FindingGroupBuilder.Counts(findings),
             Paths = PathsViewBuilder.Build(s, options.Worst),

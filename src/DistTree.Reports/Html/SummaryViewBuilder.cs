@@ -60,7 +60,7 @@ internal static class SummaryViewBuilder
         {
             FindingKind.FeederDrop => (Limit(rules.FeederLimitPercent) + " %", t.Feeders, Worst(t.WorstFeeder)),
             FindingKind.BranchDrop => (Limit(rules.BranchLimitPercent) + " %", t.Branches, Worst(t.WorstBranch)),
-            FindingKind.TotalDrop => (Limit(rules.TotalLimitPercent) + " %", s.EndPoints.Count, s.EndPoints.Count == 0 ? "–" : Percent(s.Summary.WorstTotalDropPercent) + " %"),
+            FindingKind.TotalDrop => (Escape(RuleText.TotalLimits(s)) + " %", s.EndPoints.Count, s.EndPoints.Count == 0 ? "–" : Percent(s.Summary.WorstTotalDropPercent) + " %"),
             FindingKind.Ampacity => ("allowable ampacity", t.WithAmpacity, "–"),
             FindingKind.OcpdAboveAmpacity => ("conductor ampacity", t.WithOcpd, "–"),
             FindingKind.TransformerOverload => ("nameplate kVA", t.Transformers, "–"),

@@ -80,6 +80,15 @@ public abstract class CodeRules
         ElectricalCode.Nec => NecRules.RuleDefaults,
     };
 
+    /// <summary>
+    /// The defaults of <paramref name="code"/>'s rule set for an installation of <paramref name="supply"/>; the same as
+    /// <see cref="DefaultsOf(ElectricalCode)"/> where the code's limits do not depend on the supply.
+    /// </summary>
+    public static Rules DefaultsOf(ElectricalCode code, SupplyKind supply) => code switch
+    {
+        ElectricalCode.Nec => NecRules.RuleDefaults,
+    };
+
     /// <summary>The short name and edition of <paramref name="code"/>: <c>NEC 2020</c>.</summary>
     public static string Describe(ElectricalCode code) => code switch
     {

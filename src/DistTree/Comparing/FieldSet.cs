@@ -21,6 +21,8 @@ internal sealed class FieldSet
             .Number("rules.feeder_limit_percent", r.FeederLimitPercent)
             .Number("rules.branch_limit_percent", r.BranchLimitPercent)
             .Number("rules.total_limit_percent", r.TotalLimitPercent)
+            .Text("rules.lighting_limit_percent", r.LightingLimitPercent is { } lighting ? Format(lighting) : "as total_limit_percent")
+            .Text("rules.supply", r.Supply is { } supply ? Words.Supply.Of(supply) : "not read")
             .Text("rules.branch_current", Words.BranchCurrent.Of(r.BranchCurrent))
             .Text("rules.conductor_temperature", r.Temperature == TemperatureMode.Fixed ? Format(r.FixedTemperatureC ?? 0) : Words.Temperature.Of(r.Temperature))
             .Text("rules.transformer_drop", Words.TransformerDrop.Of(r.TransformerDrop))

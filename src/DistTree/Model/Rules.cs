@@ -43,6 +43,29 @@ public enum ElectricalCode
     Nec,
 }
 
+/// <summary>Who supplies the installation, where a code's limits depend on it (IEC 60364-5-52 Annex G).</summary>
+public enum SupplyKind
+{
+    /// <summary>Supplied directly from a public low-voltage distribution system.</summary>
+    Public,
+
+    /// <summary>Supplied from a private supply (the installation's own transformer or generator).</summary>
+    Private,
+}
+
+/// <summary>
+/// How a code lets the total limit grow on a long path: by <paramref name="PercentPerM"/> for every metre of the path's
+/// wiring beyond <paramref name="FromM"/>, at most <paramref name="MaxPercent"/> in all.
+/// </summary>
+/// <param name="FromM">The path length, metres, from which the allowance starts.</param>
+/// <param name="PercentPerM">The allowance per metre beyond it, percent.</param>
+/// <param name="MaxPercent">The largest allowance, percent.</param>
+public sealed record LengthAllowance(double FromM, double PercentPerM, double MaxPercent)
+{
+    /// <summary>The allowance for a path of <paramref name="pathLengthM"/> metres, percent.</summary>
+    public double PercentAt(double pathLengthM) => Math.Min(MaxPercent, PercentPerM * Math.Max(0.0, pathLengthM - FromM));
+}
+
 /// <summary>Which method's figures the findings rest on.</summary>
 public enum SolutionMethod
 {
@@ -70,6 +93,34 @@ public sealed record Rules
 
     /// <summary>Limit from the service (or a new origin) to any end point, in percent.</summary>
     public double TotalLimitPercent { get; init; } = 5;
+
+    /// <summary>
+    /// Limit from the service (or a new origin) to an end point whose load is lighting, in percent; null where lighting
+    /// takes <see cref="TotalLimitPercent"/> like any other load.
+    /// </summary>
+    public double? LightingLimitPercent { get; init; }
+
+    /// <summary>Who supplies the installation, where the code's limits depend on it (null where they do not).</summary>
+    public SupplyKind? Supply { get; init; }
+
+    /// <summary>How the total limit grows on a long path, where the code allows it (null where it does not).</summary>
+    public LengthAllowance? LongPathAllowance { get; init; }
+
+    /// <summary>True when end points may have different total limits (a lighting limit or a long-path allowance).</summary>
+    public bool TotalLimitVaries => LightingLimitPercent is { } l && l != TotalLimitPercent || LongPathAllowance is not null;
+
+    /// <summary>
+    /// The total limit of an end point whose load is of <paramref name="category"/>, on a path of
+    /// <paramref name="pathLengthM"/> metres of wiring from its origin, percent: the lighting limit for lighting, the
+    /// total limit for any other load, plus the long-path allowance.
+    /// </summary>
+    public double TotalLimitFor(LoadCategory category, double pathLengthM) =>
+        (category == LoadCategory.Lighting && LightingLimitPercent is { } lighting ? lighting : TotalLimitPercent)
+        + (LongPathAllowance?.PercentAt(pathLengthM) ?? 0.0);
+
+    /// <summary>The largest total limit any end point can have, percent (the long-path allowance at its most).</summary>
+    public double LargestTotalLimitPercent =>
+        Math.Max(TotalLimitPercent, LightingLimitPercent ?? TotalLimitPercent) + (LongPathAllowance?.MaxPercent ?? 0.0);
 
     /// <summary>Which current a branch circuit's drop is computed at.</summary>
     public BranchCurrentBasis BranchCurrent { get; init; } = BranchCurrentBasis.Connected;

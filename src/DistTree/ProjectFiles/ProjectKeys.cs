@@ -15,7 +15,7 @@ internal static class ProjectKeys
 
     public static readonly string[] Rules =
     [
-        "code", "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "branch_current",
+        "code", "supply", "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "lighting_limit_percent", "branch_current",
         "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c", "method", "motor_start_limit_percent",
     ];
 

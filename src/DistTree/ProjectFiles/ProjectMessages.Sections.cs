@@ -27,6 +27,10 @@ internal static partial class ProjectMessages
     public static string IncludeNotSequence(SourceNode found) =>
         $"'include' must be a sequence of relative paths ('- buildings/north.yaml'); found {found.Describe()}";
 
+    /// <summary>A <c>supply</c> under a code whose limits do not depend on who supplies the installation.</summary>
+    public static string SupplyNotRead(string code) =>
+        $"'supply' chooses the limits of a code that sets them by the kind of supply; code '{code}' does not: remove it, or state the limits";
+
     /// <summary>A format version other than 1.</summary>
     public static string UnsupportedVersion(int version) => $"unsupported format version {version}; this DistTree reads 'disttree: 1'";
 

@@ -143,6 +143,7 @@ public static class ValueRanges
         ("rules", "feeder_limit_percent", LimitPercent),
         ("rules", "branch_limit_percent", LimitPercent),
         ("rules", "total_limit_percent", LimitPercent),
+        ("rules", "lighting_limit_percent", LimitPercent),
         ("rules", "motor_start_limit_percent", LimitPercent),
         ("rules", "conductor_temperature", ConductorTemperatureC),
         ("rules", "ambient_c", AmbientC),

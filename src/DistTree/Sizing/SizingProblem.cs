@@ -94,11 +94,26 @@ internal sealed class SizingProblem
             options[row.NodeIndex] = Pareto(fitting.Length > 0 ? fitting : all);
         }
 
-        var budget = (int)Math.Floor((project.Rules.TotalLimitPercent / resolution) + 1e-9);
+        // The budget is the largest end point's limit on the grid; an end point with a smaller limit (lighting, a
+        // shorter path under a long-path allowance) has the difference added to its own run's steps, so that it fits
+        // exactly where its own limit allows.
+        var budget = solution.EndPoints.Count == 0 ? BudgetOf(project.Rules.TotalLimitPercent, resolution) : solution.EndPoints.Max(e => BudgetOf(e.LimitPercent, resolution));
+        foreach (var e in solution.EndPoints)
+        {
+            var shortBy = budget - BudgetOf(e.LimitPercent, resolution);
+            if (shortBy > 0 && options[e.NodeIndex] is { } leaf)
+            {
+                options[e.NodeIndex] = Array.ConvertAll(leaf, o => o with { Steps = o.Steps + shortBy });
+            }
+        }
+
         var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, new bool[nodes.Count], unresolvable);
         problem.ExcludeUnfixableEndPoints();
         return problem;
     }
+
+    // A limit on the grid, rounded down (the safe side).
+    private static int BudgetOf(double limitPercent, double resolution) => (int)Math.Floor((limitPercent / resolution) + 1e-9);
 
     /// <summary>A drop on the grid, rounded up (the safe side); exact multiples are not pushed up by rounding noise.</summary>
     public static int Steps(double dropPercent, double resolution) => (int)Math.Ceiling((dropPercent / resolution) - 1e-9);

@@ -78,8 +78,8 @@ public readonly struct EndPointResult : IEquatable<EndPointResult>
     /// <summary>Sum of the percent drops along the path (from a new origin where the rules say so).</summary>
     public double TotalDropPercent => Row.TotalDropPercent;
 
-    /// <summary>The total limit in percent.</summary>
-    public double LimitPercent => _rows.Rules.TotalLimitPercent;
+    /// <summary>The end point's total limit in percent (see <see cref="Rules.TotalLimitFor"/>).</summary>
+    public double LimitPercent => Row.LimitPercent;
 
     /// <summary>The voltage at the point of use: nominal × (1 − total/100).</summary>
     public double EndVoltageV => VoltageV * (1 - (TotalDropPercent / 100.0));

@@ -123,6 +123,7 @@ internal struct EndPointRow
     public int PathStart;
     public int PathCount;
     public double TotalDropPercent;
+    public double LimitPercent;
     public double PercentSumTotalDropPercent;
     public double? LoadFlowTotalDropPercent;
     public double? LoadFlowEndVoltageV;

@@ -29,6 +29,9 @@ public static class Words
     /// <summary><c>rules: code</c>: the code whose rule set judges the project.</summary>
     public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec)]);
 
+    /// <summary><c>rules: supply</c>.</summary>
+    public static WordTable<SupplyKind> Supply { get; } = new("supply", [("public", SupplyKind.Public), ("private", SupplyKind.Private)]);
+
     /// <summary><c>rules: method</c>.</summary>
     public static WordTable<SolutionMethod> Method { get; } = new(
         "method", [("percent_sum", SolutionMethod.PercentSum), ("load_flow", SolutionMethod.LoadFlow)]);

@@ -24,7 +24,20 @@ internal sealed class RulesReader(SectionContext context)
             code = chosen;
         }
 
+        // The supply next: where the code's limits depend on it, it chooses their defaults.
         var rules = Codes.CodeRules.DefaultsOf(code);
+        if (m.Optional("supply") is { } supplyNode && Values.Choice(supplyNode, "'supply'", "supply", Words.Supply.Pairs) is { } supply)
+        {
+            if (rules.Supply is null)
+            {
+                context.Bag.Error(supplyNode.Location, ProjectMessages.SupplyNotRead(Words.Code.Of(code)));
+            }
+            else
+            {
+                rules = Codes.CodeRules.DefaultsOf(code, supply);
+            }
+        }
+
         if (context.InRange(m, "feeder_limit_percent", ValueRanges.LimitPercent) is { } feeder)
         {
             rules = rules with { FeederLimitPercent = feeder };
@@ -38,6 +51,11 @@ internal sealed class RulesReader(SectionContext context)
         if (context.InRange(m, "total_limit_percent", ValueRanges.LimitPercent) is { } total)
         {
             rules = rules with { TotalLimitPercent = total };
+        }
+
+        if (context.InRange(m, "lighting_limit_percent", ValueRanges.LimitPercent) is { } lighting)
+        {
+            rules = rules with { LightingLimitPercent = lighting };
         }
 
         if (m.Optional("branch_current") is { } basisNode && Values.Choice(basisNode, "'branch_current'", "branch_current", Words.BranchCurrent.Pairs) is { } basis)

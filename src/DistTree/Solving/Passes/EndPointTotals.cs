@@ -25,12 +25,15 @@ internal sealed class EndPointTotals
     private readonly MotorStartCheck _motors;
     private readonly bool _newOrigin;
     private readonly bool _onLoadFlow;
-    private readonly double _limitPercent;
+    private readonly Rules _rules;
+    private readonly bool _limitVaries;
     private readonly string _totalClause;
     private readonly string _motorClause;
 
-    // Per node, its depth (the service is 1); per end point, its node and the start of its path (see Number).
+    // Per node, its depth (the service is 1) and, where the limit grows with it, the wiring length from its origin;
+    // per end point, its node and the start of its path (see Number).
     private readonly int[] _depth;
+    private readonly double[]? _pathLengthM;
     private readonly int[] _endPointNode;
     private readonly int[] _pathStart;
     private int _count;
@@ -62,8 +65,10 @@ internal sealed class EndPointTotals
         _onLoadFlow = rules.Method == SolutionMethod.LoadFlow && flow.Converged;
         _motors = new MotorStartCheck(network, phases, runs, _shares, _onLoadFlow);
         _newOrigin = rules.TransformerDrop == TransformerDropMode.NewOrigin;
-        _limitPercent = rules.TotalLimitPercent;
+        _rules = rules;
+        _limitVaries = rules.TotalLimitVaries;
         _depth = Scratch.RentToFill<int>(_nodes.Length);
+        _pathLengthM = rules.LongPathAllowance is null ? null : Scratch.RentToFill<double>(_nodes.Length);
         _endPointNode = Scratch.RentToFill<int>(_nodes.Length);
         _pathStart = Scratch.RentToFill<int>(_nodes.Length + 1);
     }
@@ -82,13 +87,18 @@ internal sealed class EndPointTotals
         Scratch.Return(pass._depth, n);
         Scratch.Return(pass._endPointNode, n);
         Scratch.Return(pass._pathStart, n + 1);
+        if (pass._pathLengthM is { } lengths)
+        {
+            Scratch.Return(lengths, n);
+        }
+
         return (new SolvedEndPoints(pass._endPoints, pass._findings, pass._motorStarts, pass._pathRuns, pass._pathShares), pass._worst, pass._findingCount);
     }
 
     // Top-down: the depth of every node, and how many rows a walk up from below a node counts from it to the
     // service: its transformer's and its incoming run's, unless the transformer is a new origin, where the counting
-    // stops. An end point's counted rows are its own run's and those above its panel; they take the next places in
-    // the path arrays, which are made here.
+    // stops (and so does the wiring length, where it is needed). An end point's counted rows are its own run's and
+    // those above its panel; they take the next places in the path arrays, which are made here.
     private void Number()
     {
         var (n, parents, depth, incomingRow, transformerRow, has) = (_nodes.Length, _parents, _depth, _runs.IncomingRow, _runs.TransformerRow, _sums.Has);
@@ -98,7 +108,13 @@ internal sealed class EndPointTotals
         {
             var above = i == 0 ? 0 : counted[parents[i]];
             depth[i] = i == 0 ? 1 : depth[parents[i]] + 1;
-            counted[i] = _newOrigin && transformerRow[i] >= 0 ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
+            var origin = _newOrigin && transformerRow[i] >= 0;
+            counted[i] = origin ? 0 : above + (incomingRow[i] >= 0 ? 1 : 0) + (transformerRow[i] >= 0 ? 1 : 0);
+            if (_pathLengthM is { } lengths)
+            {
+                lengths[i] = i == 0 || origin ? 0 : lengths[parents[i]] + (incomingRow[i] >= 0 ? _runs.LengthM[incomingRow[i]] : 0);
+            }
+
             if ((has[i] & Has.Circuit) != 0)
             {
                 _endPointNode[_count] = i;
@@ -184,7 +200,8 @@ internal sealed class EndPointTotals
 
         var total = _onLoadFlow ? worstLf.LoadFlow : worstPs.PercentSum;
         var start = (_sums.Has[index] & Has.Motor) != 0 ? _motors.Of(index, slots, _sums.Power[index], _sums.LockedRotor[index]) : null;
-        var found = Findings(index, total, pathCount, start);
+        var limit = _limitVaries ? _rules.TotalLimitFor(_nodes[index].Circuit!.Category, _pathLengthM?[index] ?? 0) : _rules.TotalLimitPercent;
+        var found = Findings(index, total, limit, pathCount, start);
         var nominal = _phases.SlotOn(panel, slotLf);
         _endPoints[e] = new EndPointRow
         {
@@ -192,6 +209,7 @@ internal sealed class EndPointTotals
             PathStart = first,
             PathCount = pathCount,
             TotalDropPercent = total,
+            LimitPercent = limit,
             PercentSumTotalDropPercent = worstPs.PercentSum,
             LoadFlowTotalDropPercent = _voltages is null ? null : worstLf.LoadFlow,
             SourceSharePercent = _onLoadFlow ? worstLf.SourceLoadFlow : worstPs.SourcePercentSum,
@@ -204,10 +222,9 @@ internal sealed class EndPointTotals
 
     // The end point's findings, or null for none: its total over the limit, and a motor's dip over its limit. The
     // end point's objects are read only for a finding (see Has).
-    private List<Finding>? Findings(int index, double total, int pathCount, MotorStartResult? start)
+    private List<Finding>? Findings(int index, double total, double limit, int pathCount, MotorStartResult? start)
     {
         List<Finding>? found = null;
-        var limit = _limitPercent;
         if (total > limit + 1e-9)
         {
             var circuit = _nodes[index].Circuit!;

@@ -19,7 +19,7 @@ internal static class Reach
         slack.AsSpan(0, nodes.Length).Fill(double.PositiveInfinity);
         foreach (var e in endPoints)
         {
-            slack[e.Node] = rules.TotalLimitPercent - e.TotalDropPercent;
+            slack[e.Node] = e.LimitPercent - e.TotalDropPercent;
         }
 
         // Bottom-up, the slack each node's incoming run sees (a new origin hides what is below it from above);
