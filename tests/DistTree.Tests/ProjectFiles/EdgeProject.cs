@@ -20,6 +20,7 @@ internal static partial class EdgeProject
         ["rules.feeder_limit_percent"] = "3",
         ["rules.branch_limit_percent"] = "3",
         ["rules.total_limit_percent"] = "5",
+        ["rules.lighting_limit_percent"] = "4",
         ["rules.motor_start_limit_percent"] = "15",
         ["rules.conductor_temperature"] = "75",
         ["rules.ambient_c"] = "30",
@@ -57,7 +58,7 @@ internal static partial class EdgeProject
     private const string Template = """
         disttree: 1
         project: { name: Edges, units: metric }
-        rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c} }
+        rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, lighting_limit_percent: {rules.lighting_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c} }
         sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
         service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz}, available_fault_current_ka: {service.available_fault_current_ka}, fault_x_r: {service.fault_x_r} }
         equipment:
