@@ -7,9 +7,11 @@ namespace DistTree.ProjectFiles.Writing;
 
 /// <summary>
 /// The commented starter project that <c>disttree init</c> writes: a service, its service-entrance
-/// switchboard, one panelboard on a feeder and a few branch circuits that the system can give, every key
-/// explained. The rules and conductor defaults are the defaults (<see cref="Rules.Default"/>,
-/// <see cref="ConductorDefaults.Standard"/>) written out; every word of the format comes from <see cref="Words"/>.
+/// switchboard, one panelboard on a feeder (through a delta-wye dry-type transformer where the code's usual
+/// building takes one) and a few branch circuits that the system can give, every key explained. The rules are
+/// the code's defaults (<see cref="Codes.CodeRules.DefaultsOf(ElectricalCode)"/>) and the conductor defaults the
+/// standard ones (<see cref="ConductorDefaults.Standard"/>), written out; the sizes are in the code's usual series;
+/// every word of the format comes from <see cref="Words"/>.
 /// The other figures are invented placeholders, chosen to be within every limit so that the file validates and
 /// analyzes cleanly before it is edited.
 /// </summary>
@@ -21,9 +23,25 @@ public static class StarterProject
     /// <summary>The default units for a system: metric for the 230 V systems (IEC practice), else imperial.</summary>
     public static UnitSystem DefaultUnits(ElectricalSystem system) => IsIec(system) ? UnitSystem.Metric : UnitSystem.Imperial;
 
-    /// <summary>The starter project's text (ending in a newline) for the given units and service system.</summary>
-    public static string Write(UnitSystem units, ElectricalSystem system)
+    /// <summary>The default units of a starter under <paramref name="code"/> on <paramref name="system"/>: metric wherever the code's country builds in metres.</summary>
+    public static UnitSystem DefaultUnits(ElectricalCode code, ElectricalSystem system) => code switch
     {
+        ElectricalCode.Nec => DefaultUnits(system),
+    };
+
+    /// <summary>The service system a starter under <paramref name="code"/> has unless told otherwise: the code's usual building's.</summary>
+    public static ElectricalSystem DefaultSystem(ElectricalCode code) => ElectricalSystem.Find(code switch
+    {
+        ElectricalCode.Nec => "208Y/120",
+    })!;
+
+    /// <summary>The starter project's text (ending in a newline) for the given units and service system, under the NEC.</summary>
+    public static string Write(UnitSystem units, ElectricalSystem system) => Write(units, system, ElectricalCode.Nec);
+
+    /// <summary>The starter project's text (ending in a newline) for the given units and service system, under <paramref name="code"/>.</summary>
+    public static string Write(UnitSystem units, ElectricalSystem system, ElectricalCode code)
+    {
+        ArgumentNullException.ThrowIfNull(system);
         var o = new StringBuilder();
         o.Append("""
             # A starter project written by 'disttree init'. Every name and figure below is an invented
@@ -36,10 +54,11 @@ public static class StarterProject
         Line(o, "disttree: 1", "the format version");
         o.Append("project:\n  name: New building\n");
         Line(o, $"  units: {Words.Units.Of(units)}", $"unit of bare lengths: {Words.Units.Of(UnitSystem.Metric)} (m) or {Words.Units.Of(UnitSystem.Imperial)} (ft)");
-        WriteRules(o, Rules.Default);
+        var profile = StarterProfile.Of(code, system);
+        WriteRules(o, Codes.CodeRules.DefaultsOf(code));
         WriteDefaults(o, ConductorDefaults.Standard);
-        o.Append(CultureInfo.InvariantCulture, $"service:\n  id: SVC\n  system: {system.Name}\n  frequency_hz: {(IsIec(system) ? 50 : 60)}\n");
-        WriteEquipment(o, units, system);
+        o.Append(CultureInfo.InvariantCulture, $"service:\n  id: SVC\n  system: {system.Name}\n  frequency_hz: {profile.FrequencyHz}\n");
+        WriteEquipment(o, units, system, profile);
         return o.ToString();
     }
 
@@ -49,7 +68,17 @@ public static class StarterProject
         Line(o, $"  code: {Words.Code.Of(rules.Code)}", $"the code whose rules judge the design ({Codes.CodeRules.Describe(rules.Code)}); " + Choices(Words.Code.Words));
         Line(o, $"  feeder_limit_percent: {N(rules.FeederLimitPercent)}", "the most drop allowed in one feeder");
         Line(o, $"  branch_limit_percent: {N(rules.BranchLimitPercent)}", "... in one branch circuit");
+        if (rules.Supply is { } supply)
+        {
+            Line(o, $"  supply: {Words.Supply.Of(supply)}", $"who supplies the building; its limits follow: {Choices(Words.Supply.Words)}");
+        }
+
         Line(o, $"  total_limit_percent: {N(rules.TotalLimitPercent)}", "... from the service to the farthest point of use");
+        if (rules.LightingLimitPercent is { } lighting)
+        {
+            Line(o, $"  lighting_limit_percent: {N(lighting)}", "... to a point of use whose load is lighting");
+        }
+
         Line(o, $"  branch_current: {Words.BranchCurrent.Of(rules.BranchCurrent)}", Choices(Words.BranchCurrent.Words));
         Line(o, $"  conductor_temperature: {Words.TemperatureOf(rules)}", Choices(Words.Temperature.Words) + " | a temperature in °C");
         Line(o, $"  transformer_drop: {Words.TransformerDrop.Of(rules.TransformerDrop)}", Choices(Words.TransformerDrop.Words));
@@ -64,20 +93,32 @@ public static class StarterProject
         Line(o, $"  raceway: {Words.Raceway.Of(defaults.Raceway)}", Choices(Words.Raceway.Words));
     }
 
-    // The service-entrance switchboard, the panelboard on its feeder, and the circuits the system can give.
-    private static void WriteEquipment(StringBuilder o, UnitSystem units, ElectricalSystem system)
+    // The service-entrance switchboard, a dry-type transformer where the profile has one, the panelboard on its
+    // feeder, and the circuits the panel's system can give.
+    private static void WriteEquipment(StringBuilder o, UnitSystem units, ElectricalSystem system, StarterProfile profile)
     {
-        var iec = IsIec(system);
         var metric = units == UnitSystem.Metric;
         Line(o, "equipment:", "in any order; each names what feeds it ('from')");
         o.Append("  - id: MDP\n");
         Line(o, $"    kind: {Words.EquipmentKind.Of(EquipmentKind.Switchboard)}", Choices(Words.EquipmentKind.Words));
         Line(o, "    from: SVC", "service-entrance equipment: no feeder, so no drop");
-        o.Append(CultureInfo.InvariantCulture, $"  - id: LP1\n    kind: {Words.EquipmentKind.Of(EquipmentKind.Panelboard)}\n    from: MDP\n");
+        var panelFrom = "MDP";
+        if (profile.Transformer is { } t)
+        {
+            o.Append(CultureInfo.InvariantCulture, $"  - id: T1\n    kind: {Words.EquipmentKind.Of(EquipmentKind.Transformer)}\n    from: MDP\n");
+            Line(o, $"    primary: {t.Primary}", "a delta primary on the wye service: three lines, no neutral");
+            o.Append(CultureInfo.InvariantCulture, $"    secondary: {t.Secondary.Name}\n    kva: {N(t.Kva)}\n    impedance_percent: {N(t.ImpedancePercent)}\n    x_r: {N(t.XOverR)}\n");
+            o.Append(CultureInfo.InvariantCulture, $"    feeder: {{ length: {Length(metric, 60, 20)}, size: {t.PrimarySize}, ocpd: {N(t.PrimaryOcpdA)} }}\n");
+            panelFrom = "T1";
+        }
+
+        var panelSystem = profile.Transformer?.Secondary ?? system;
+        o.Append(CultureInfo.InvariantCulture, $"  - id: LP1\n    kind: {Words.EquipmentKind.Of(EquipmentKind.Panelboard)}\n    from: {panelFrom}\n");
         o.Append(CultureInfo.InvariantCulture, $"    # Lengths are one way, in {(metric ? "metres" : "feet")} (or write the unit: \"30 m\", \"100 ft\").\n");
-        o.Append(CultureInfo.InvariantCulture, $"    feeder: {{ length: {Length(metric, 100, 30)}, size: {(iec ? "16 mm2" : "4 AWG")}, ocpd: {(iec ? 63 : 60)} }}\n");
+        o.Append(CultureInfo.InvariantCulture, $"    feeder: {{ length: {Length(metric, profile.Transformer is null ? 100 : 15, profile.Transformer is null ? 30 : 5)}, size: {profile.FeederSize}, ocpd: {N(profile.FeederOcpdA)} }}\n");
         o.Append("    demand_factor: 1.0\n    circuits:\n");
-        var circuits = new CircuitWriter(o, metric, iec ? "2.5 mm2" : "12 AWG", iec ? 16 : 20);
+        var circuits = new CircuitWriter(o, metric, profile.BranchSize, profile.BranchOcpdA);
+        system = panelSystem;
         if (system.CircuitFor(1) is not null)
         {
             circuits.Write("Lighting", LoadCategory.Lighting, 1, Load(LoadKind.Va, "1200", "0.95"), continuous: true, 50, 15);
@@ -108,6 +149,24 @@ public static class StarterProject
     private static string N(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
 
     private static bool IsIec(ElectricalSystem system) => system.Name is "400Y/230" or "230";
+
+    /// <summary>A delta-wye dry-type transformer of a starter: its primary, secondary, rating and the feeder to it.</summary>
+    private sealed record StarterTransformer(string Primary, ElectricalSystem Secondary, double Kva, double ImpedancePercent, double XOverR, string PrimarySize, double PrimaryOcpdA);
+
+    /// <summary>What a starter under one code on one system is made of: its frequency, sizes, devices and transformer.</summary>
+    private sealed record StarterProfile(int FrequencyHz, string FeederSize, double FeederOcpdA, string BranchSize, int BranchOcpdA, StarterTransformer? Transformer)
+    {
+        public static StarterProfile Of(ElectricalCode code, ElectricalSystem system) => code switch
+        {
+            ElectricalCode.Nec => IsIec(system) ? Metric : Imperial,
+        };
+
+        // The NEC's usual building; invented placeholder figures, sized within every limit.
+        private static StarterProfile Imperial { get; } = new(60, "4 AWG", 60, "12 AWG", 20, null);
+
+        // A building of 230/400 V practice: mm² sizes and IEC device ratings.
+        private static StarterProfile Metric { get; } = new(50, "16 mm2", 63, "2.5 mm2", 16, null);
+    }
 
     /// <summary>Writes the branch circuits, numbered from 1; the first explains its keys.</summary>
     private sealed class CircuitWriter(StringBuilder o, bool metric, string size, int ocpdA)

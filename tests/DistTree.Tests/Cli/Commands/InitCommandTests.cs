@@ -94,7 +94,7 @@ public sealed class InitCommandTests
         WorkingDirectory.In(folder.Path, () => result = CliRunner.Run("init"));
 
         Assert.Equal(0, result!.ExitCode);
-        Assert.StartsWith("wrote project.yaml: a starter project on 208Y/120, lengths in feet", result.Out, StringComparison.Ordinal);
+        Assert.StartsWith("wrote project.yaml: a starter project under NEC 2020 on 208Y/120, lengths in feet", result.Out, StringComparison.Ordinal);
         Assert.Equal(["project.yaml"], Directory.GetFileSystemEntries(folder.Path).Select(Path.GetFileName));
     }
 

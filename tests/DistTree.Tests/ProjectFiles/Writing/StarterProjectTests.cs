@@ -30,6 +30,22 @@ public sealed class StarterProjectTests
         Assert.Equal(name, project.Service.System.Name);
     }
 
+    public static TheoryData<ElectricalCode> Codes() => [.. Enum.GetValues<ElectricalCode>()];
+
+    // Each code's starter on its usual system (and in its usual units) reads back as that code's defaults and analyzes
+    // with no finding: the placeholders are sized within every rule of the code.
+    [Theory]
+    [MemberData(nameof(Codes))]
+    public void Write_EachCodesUsualBuilding_ReadsBackAsItsDefaultsAndHasNoFinding(ElectricalCode code)
+    {
+        var system = StarterProject.DefaultSystem(code);
+        var text = StarterProject.Write(StarterProject.DefaultUnits(code, system), system, code);
+        var result = Analysis.Parse(text, "starter.yaml");
+        Assert.Equal(DistTree.Codes.CodeRules.DefaultsOf(code), result.Project.Rules);
+        Assert.Equal(system.Name, result.Project.Service.System.Name);
+        Assert.Empty(result.Solution.AllFindings);
+    }
+
     [Fact]
     public void Write_FirstCircuit_ExplainsEveryKeyAndTheOthersDoNot()
     {
