@@ -76,6 +76,7 @@ public sealed class OwnTablesAnalysisTests : IDisposable
 
         Assert.Equal(1, result.ExitCode);
         Assert.Contains("ocpd_above_ampacity", result.Out, StringComparison.Ordinal);
+        Assert.Contains("rules.conductor_catalog", result.Out, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -157,7 +157,7 @@ public abstract class CodeRules
     public virtual GroundingTable? OwnGroundingTable => null;
 
     /// <summary>The table the project brings (<c>rules: grounding_table:</c>), which replaces <see cref="OwnGroundingTable"/>; null for none.</summary>
-    public GroundingTable? ProjectGroundingTable { get; private set; }
+    public GroundingTable? ProjectGroundingTable { get; internal set; }
 
     /// <summary>The grounding table in force: the project's where it brings one, else the rule set's own; null for neither.</summary>
     public GroundingTable? GroundingTableInForce => ProjectGroundingTable ?? OwnGroundingTable;
