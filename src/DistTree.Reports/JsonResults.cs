@@ -167,6 +167,31 @@ public static partial class JsonResults
             w.WriteNumber("fault_x_r", faultXOverR);
         }
 
+        // The tables the project brings, only when it brings them: each named by its file and its header (its source).
+        if (r.ConductorCatalog is { } catalog)
+        {
+            WriteTableFile(w, "conductor_catalog", catalog.SourceName, catalog.Header);
+        }
+
+        if (r.GroundingTable is { } table)
+        {
+            WriteTableFile(w, "grounding_table", table.SourceName, table.Header);
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteTableFile(Utf8JsonWriter w, string key, string file, IReadOnlyList<string> header)
+    {
+        w.WriteStartObject(key);
+        w.WriteString("file", file);
+        w.WriteStartArray("header");
+        foreach (var line in header)
+        {
+            w.WriteStringValue(line);
+        }
+
+        w.WriteEndArray();
         w.WriteEndObject();
     }
 

@@ -51,5 +51,10 @@ public static class RuleText
         CultureInfo.InvariantCulture,
         $"{Code(rules)}; feeder {rules.FeederLimitPercent:0.##} %, branch {rules.BranchLimitPercent:0.##} %, {Total(rules)}; " +
         $"branch current: {BranchCurrent(rules)}; conductor temperature: {Temperature(rules)}; transformers: {TransformerDrop(rules)}; " +
-        $"ambient {rules.AmbientC:0.#} °C; terminals {rules.TerminalC} °C");
+        $"ambient {rules.AmbientC:0.#} °C; terminals {rules.TerminalC} °C{OwnTables(rules)}");
+
+    /// <summary>The tables the project brings, named by their files, after '; ' each; empty when it brings none.</summary>
+    public static string OwnTables(Rules rules) =>
+        (rules.ConductorCatalog is { } catalog ? $"; conductor catalogue: {catalog.SourceName}" : "") +
+        (rules.GroundingTable is { } table ? $"; grounding table: {table.SourceName}" : "");
 }

@@ -8,7 +8,10 @@ public sealed record AnalysisOptions
     /// <summary>The embedded catalogue, no progress reports.</summary>
     public static AnalysisOptions Default { get; } = new();
 
-    /// <summary>The conductor data the solve takes its figures from; the embedded catalogue unless set.</summary>
+    /// <summary>
+    /// The conductor data the solve takes its figures from; the embedded catalogue unless set. A project that brings its
+    /// own (<c>rules: conductor_catalog:</c>, <see cref="Model.Rules.ConductorCatalog"/>) is solved with that one instead.
+    /// </summary>
     public ConductorCatalog Catalog { get; init; } = ConductorCatalog.Standard;
 
     /// <summary>

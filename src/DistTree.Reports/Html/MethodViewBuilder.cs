@@ -31,11 +31,36 @@ internal static class MethodViewBuilder
     /// <summary>The CSS class of the load flow's outcome.</summary>
     public static string LoadFlowClass(LoadFlowResult flow) => flow.Converged ? "pass" : "fail";
 
-    /// <summary>The embedded catalogue's column headings where the solution used it, else none; escaped.</summary>
+    /// <summary>
+    /// The header (the source of each column) of the catalogue the solution used where it is the embedded one or the
+    /// project's own (<c>rules: conductor_catalog</c>), else none; escaped.
+    /// </summary>
     public static string[] CatalogHeader(Solution s) =>
         string.Equals(s.CatalogName, ConductorCatalog.Standard.SourceName, StringComparison.Ordinal)
             ? ConductorCatalog.Standard.Header.Select(Escape).ToArray()
-            : [];
+            : s.Project.Rules.ConductorCatalog is { } own ? own.Header.Select(Escape).ToArray() : [];
+
+    /// <summary>What the page says of the grounding table the project brings, or null where it brings none.</summary>
+    public static GroundingTableView? GroundingTable(Solution s) => s.Project.Rules.GroundingTable is { } table
+        ? new GroundingTableView(
+            Escape(table.SourceName),
+            Escape(s.Code.OwnGroundingTable is { } own ? $"in place of {own.SourceName}" : $"the only grounding table: {s.Code.Name} holds none of its own"),
+            table.Header.Select(Escape).ToArray())
+        : null;
+
+    // The rows of the rules the project brings as files, only where it brings them.
+    private static IEnumerable<RuleMeaning> OwnTables(Rules r)
+    {
+        if (r.ConductorCatalog is { } catalog)
+        {
+            yield return new("conductor_catalog", Escape(catalog.SourceName), "The project's own conductor catalogue, in the embedded one's layout: its ampacities, resistances and reactances take the place of the embedded catalogue's in the whole analysis (the solve, the sizing and its proof).");
+        }
+
+        if (r.GroundingTable is { } table)
+        {
+            yield return new("grounding_table", Escape(table.SourceName), "The project's own table of equipment grounding conductors by device rating, in place of the rule set's own: a device takes the row of the smallest rating at or above it; the rule set's other steps (NEC: 250.122(A), (B) and (F)) still apply.");
+        }
+    }
 
     /// <summary>Each rule, its value in force and what it means.</summary>
     public static RuleMeaning[] Meanings(Rules r) =>
@@ -52,6 +77,7 @@ internal static class MethodViewBuilder
         new("terminal_c", Count(r.TerminalC) + " °C", "Terminal rating: the ampacity column used is at most this temperature."),
         new("method", RuleText.Method(r), "Which figures the findings rest on: percent_sum = the sum of the runs' drops by the effective-impedance formula; load_flow = the backward/forward sweep. Both are computed and shown."),
         new("motor_start_limit_percent", Limit(r.MotorStartLimitPercent) + " %", "The largest dip allowed at a motor's terminals while it starts."),
+        .. OwnTables(r),
     ];
 
     // The rows of the limits that vary by end point, where the rules have them.

@@ -48,12 +48,17 @@ internal sealed record ReportView
     public string? MotorsMore { get; init; }
     public required bool AnyPoints { get; init; }
     public required IReadOnlyList<string> CatalogHeader { get; init; }
+    public string? OwnCatalogName { get; init; }
+    public GroundingTableView? GroundingTable { get; init; }
     public required IReadOnlyList<RuleMeaning> RuleMeanings { get; init; }
     public required string NearPercent { get; init; }
 }
 
 /// <summary>The number of each section shown; null for a section the page leaves out.</summary>
 internal sealed record SectionNumbers(string Summary, string? Comparison, string Tree, string Worst, string Panels, string? Motors, string Findings, string? Plan, string Method);
+
+/// <summary>The grounding table the project brings: its file, what it replaces, and its header.</summary>
+internal sealed record GroundingTableView(string Name, string Replaces, IReadOnlyList<string> Header);
 
 /// <summary>One motor's starting check.</summary>
 internal sealed record MotorRow(string Circuit, string Name, string Anchor, string LockedRotorKva, string TerminalDip, string PanelDip, string Limit, string Status, string StatusText);

@@ -9,7 +9,7 @@ namespace DistTree.Codes;
 /// <summary>
 /// The seam for the code in force: a rule set owns everything a code decides (the limits' defaults, the current each
 /// check uses, the conductor-protection rules, and the clause each finding cites); the solver computes physics and
-/// asks the rule set to judge it. <c>rules: code:</c> chooses one (<see cref="For"/>); nothing outside a rule set
+/// asks the rule set to judge it. <c>rules: code:</c> chooses one (<see cref="For(ElectricalCode, ConductorCatalog)"/>); nothing outside a rule set
 /// knows a clause number.
 /// </summary>
 public abstract class CodeRules
@@ -67,6 +67,18 @@ public abstract class CodeRules
 
     /// <summary>The clause a finding of <paramref name="check"/> cites, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
     public abstract string Cite(CodeCheck check);
+
+    /// <summary>
+    /// The rule set of <paramref name="rules"/>' code, whose conductor data come from <paramref name="catalog"/> and whose
+    /// grounding table is the project's own where <paramref name="rules"/> bring one (<see cref="Rules.GroundingTable"/>).
+    /// </summary>
+    public static CodeRules For(Rules rules, ConductorCatalog catalog)
+    {
+        ArgumentNullException.ThrowIfNull(rules);
+        var set = For(rules.Code, catalog);
+        set.ProjectGroundingTable = rules.GroundingTable;
+        return set;
+    }
 
     /// <summary>The rule set of <paramref name="code"/>, whose small-conductor limits come from <paramref name="catalog"/>.</summary>
     public static CodeRules For(ElectricalCode code, ConductorCatalog catalog) => code switch
@@ -150,26 +162,50 @@ public abstract class CodeRules
     /// </summary>
     public abstract int CurrentCarryingConductors(NetworkRun run);
 
+    /// <summary>The rule set's own table of grounding conductors by device rating, or null where it holds none.</summary>
+    public virtual GroundingTable? OwnGroundingTable => null;
+
+    /// <summary>The table the project brings (<c>rules: grounding_table:</c>), which replaces <see cref="OwnGroundingTable"/>; null for none.</summary>
+    public GroundingTable? ProjectGroundingTable { get; internal set; }
+
+    /// <summary>The grounding table in force: the project's where it brings one, else the rule set's own; null for neither.</summary>
+    public GroundingTable? GroundingTableInForce => ProjectGroundingTable ?? OwnGroundingTable;
+
     /// <summary>
-    /// The smallest equipment grounding conductor each set of a run needs, or null where the rule set gives none (under
-    /// the NEC: no device stated, or one above its table). <paramref name="ground"/> holds what the rule reads: the device,
-    /// the material, the lines' size and the smallest size that would meet the conductor rules for the run's load.
+    /// The smallest equipment grounding conductor each set of a run needs, from the table's size for its device
+    /// (<see cref="GroundingCase.TableSize"/>, looked up in <see cref="GroundingTableInForce"/>) and the rule set's other
+    /// steps. <paramref name="ground"/> holds what the rule reads: the device, the material, the lines' size, the smallest
+    /// size that would meet the conductor rules for the run's load, and the table's size. Unless a rule set says more, the
+    /// table read as it stands: the smallest size of the lines' series whose area is at least the table's (null where none
+    /// is).
     /// </summary>
-    public abstract ConductorSize? MinimumGroundSize(in GroundingCase ground);
+    public virtual ConductorSize? MinimumGroundSize(in GroundingCase ground)
+    {
+        foreach (var size in ConductorSize.All)
+        {
+            if (size.Series == ground.LineSize.Series && size.AreaCmil >= ground.TableSize.AreaCmil * (1 - Tolerance))
+            {
+                return size;
+            }
+        }
+
+        return null;
+    }
 
     /// <summary>
     /// The smallest equipment grounding conductor each set of <paramref name="conductors"/> needs with lines of
     /// <paramref name="sets"/> sets of <paramref name="size"/>, carrying a design current of <paramref name="designCurrentA"/>
     /// under <paramref name="rules"/> (ambient and terminal rating) in a raceway of <paramref name="currentCarrying"/>
     /// current-carrying conductors, serving <paramref name="duty"/> (a motor's or air conditioning's device rules), or null
-    /// where the rule set gives none.
+    /// where none is given: no device stated, no table in force (<see cref="GroundingTableInForce"/>), or no size in it for
+    /// the device (above its last row, or a blank cell).
     /// </summary>
     public ConductorSize? MinimumGroundSize(Run conductors, ConductorSize size, int sets, double designCurrentA, Rules rules, int currentCarrying = 3, in CircuitDuty duty = default)
     {
         ArgumentNullException.ThrowIfNull(conductors);
-        return conductors.OcpdA is not { } ocpd
+        return conductors.OcpdA is not { } ocpd || GroundingTableInForce?.SizeFor(ocpd, conductors.Material) is not { } tableSize
             ? null
-            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying, duty)));
+            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying, duty), tableSize));
     }
 
     /// <summary>
@@ -229,4 +265,5 @@ internal readonly record struct CurrentFigures(
 /// The smallest size of the lines' series that would meet the conductor rules for the run's design current under its
 /// device at the same sets, or null where none in the catalogue does.
 /// </param>
-public readonly record struct GroundingCase(double OcpdA, Material Material, ConductorSize LineSize, ConductorSize? SufficientSize);
+/// <param name="TableSize">The size the grounding table in force names for the device and the material (see <see cref="GroundingTable.SizeFor"/>).</param>
+public readonly record struct GroundingCase(double OcpdA, Material Material, ConductorSize LineSize, ConductorSize? SufficientSize, GroundingTableSize TableSize);

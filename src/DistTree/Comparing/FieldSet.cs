@@ -28,6 +28,8 @@ internal sealed class FieldSet
             .Text("rules.transformer_drop", Words.TransformerDrop.Of(r.TransformerDrop))
             .Number("rules.ambient_c", r.AmbientC)
             .Number("rules.terminal_c", r.TerminalC)
+            .Text("rules.conductor_catalog", r.ConductorCatalog?.SourceName ?? "none")
+            .Text("rules.grounding_table", r.GroundingTable?.SourceName ?? "none")
             .Text("service.id", p.Service.Id)
             .Text("service.system", p.Service.System.Name)
             .Number("service.frequency_hz", p.Service.FrequencyHz)

@@ -1,4 +1,5 @@
 using System.Globalization;
+using DistTree.Diagnostics;
 
 namespace DistTree.Conductors;
 
@@ -49,7 +50,7 @@ public sealed partial class ConductorCatalog
                         var hint = cells.SequenceEqual(EarlierColumns)
                             ? "; this is the earlier layout: add the aluminium-conduit columns ral_cu and ral_al after rsteel_al (see the embedded catalogue's header)"
                             : "";
-                        throw new FormatException($"{sourceName}:{lineNumber}: expected the columns {string.Join(", ", Columns)}{hint}");
+                        throw Bad(sourceName, lineNumber, 1, $"expected the columns {string.Join(", ", Columns)}{hint}");
                     }
 
                     sawColumns = true;
@@ -58,12 +59,12 @@ public sealed partial class ConductorCatalog
 
                 if (cells.Length != Columns.Length)
                 {
-                    throw new FormatException($"{sourceName}:{lineNumber}: expected {Columns.Length} cells, found {cells.Length}");
+                    throw Bad(sourceName, lineNumber, 1, $"expected {Columns.Length} cells, found {cells.Length}");
                 }
 
                 if (!ConductorSize.TryParse(cells[0], out var size, out var error))
                 {
-                    throw new FormatException($"{sourceName}:{lineNumber}: {error}");
+                    throw Bad(sourceName, lineNumber, 1, error);
                 }
 
                 rows[size.Index] = ParseRow(cells, sourceName, lineNumber);
@@ -83,18 +84,25 @@ public sealed partial class ConductorCatalog
 
                 return double.TryParse(c[i], NumberStyles.Float, CultureInfo.InvariantCulture, out var v) && double.IsFinite(v) && v > 0
                     ? v
-                    : throw new FormatException($"{sourceName}:{lineNumber}: column {Columns[i]}: '{c[i]}' is not a positive number");
+                    : throw Bad(sourceName, lineNumber, ColumnOf(c, i), $"column {Columns[i]}: '{c[i]}' is not a positive number");
             }
 
             var perKft = c[1] switch
             {
                 "kft" => true,
                 "km" => false,
-                _ => throw new FormatException($"{sourceName}:{lineNumber}: column per: expected kft or km, found '{c[1]}'"),
+                _ => throw Bad(sourceName, lineNumber, ColumnOf(c, 1), $"column per: expected kft or km, found '{c[1]}'"),
             };
             return new RawRow(
                 perKft, N(2), N(3), N(4), N(5), N(6), N(7), N(8), N(9), N(10), N(11), N(12), N(13), N(14), N(15), N(16), N(17),
-                N(18) ?? throw new FormatException($"{sourceName}:{lineNumber}: column ins_mm is required"), N(19), N(20));
+                N(18) ?? throw Bad(sourceName, lineNumber, ColumnOf(c, 18), "column ins_mm is required"), N(19), N(20));
         }
+
+        // A bad line: its message names the file and line as before ('name:line: reason'); the exception holds the column too.
+        private static DataFileException Bad(string sourceName, int line, int column, string reason) =>
+            new(sourceName, line, column, reason, $"{sourceName}:{line}: {reason}");
+
+        // The column (from 1, in characters) where cell i of a tab-separated line starts.
+        private static int ColumnOf(string[] cells, int i) => 1 + cells.Take(i).Sum(cell => cell.Length + 1);
     }
 }

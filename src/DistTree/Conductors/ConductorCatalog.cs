@@ -37,7 +37,7 @@ public sealed partial class ConductorCatalog
     /// <summary>The sizes the catalogue has data for, in <see cref="ConductorSize.All"/> order.</summary>
     public IEnumerable<ConductorSize> Sizes => ConductorSize.All.Where(s => _rows[s.Index] is not null);
 
-    /// <summary>Reads a catalogue in the embedded file's layout; throws <see cref="FormatException"/> naming the line.</summary>
+    /// <summary>Reads a catalogue in the embedded file's layout; throws <see cref="Diagnostics.DataFileException"/> (a <see cref="FormatException"/>) naming the line and column of a bad cell.</summary>
     public static ConductorCatalog Load(TextReader reader, string sourceName) =>
         CatalogFile.Read(reader, sourceName, (header, rows) => new ConductorCatalog(sourceName, header, Interpolate(rows)));
 

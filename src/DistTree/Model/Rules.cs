@@ -146,6 +146,18 @@ public sealed record Rules
     /// <summary>Which method the findings rest on; both are always reported.</summary>
     public SolutionMethod Method { get; init; } = SolutionMethod.PercentSum;
 
+    /// <summary>
+    /// The conductor catalogue the project brings (<c>rules: conductor_catalog:</c>), read by the loader; it takes the
+    /// place of the analysis's own for the whole analysis. Null: none brought.
+    /// </summary>
+    public Conductors.ConductorCatalog? ConductorCatalog { get; init; }
+
+    /// <summary>
+    /// The grounding-conductor table the project brings (<c>rules: grounding_table:</c>), read by the loader; it replaces
+    /// the rule set's own table under every code (see <c>CodeRules.GroundingTableInForce</c>). Null: none brought.
+    /// </summary>
+    public Codes.GroundingTable? GroundingTable { get; init; }
+
     /// <summary>The defaults, as a shared instance.</summary>
     public static Rules Default { get; } = new();
 }

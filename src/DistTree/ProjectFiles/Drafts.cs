@@ -22,6 +22,12 @@ internal sealed class ProjectDraft
 
     /// <summary>The main file's <c>include</c> entries, in file order.</summary>
     public List<IncludeEntry> Includes { get; } = [];
+
+    /// <summary><c>rules: conductor_catalog:</c>, the path as written and where its key is; null when not given.</summary>
+    public IncludeEntry? CatalogFile { get; set; }
+
+    /// <summary><c>rules: grounding_table:</c>, the path as written and where its key is; null when not given.</summary>
+    public IncludeEntry? GroundingTableFile { get; set; }
 }
 
 /// <summary>One entry of an <c>include</c> list: the path as written and where it is written.</summary>

@@ -17,6 +17,7 @@ internal static class ProjectKeys
     [
         "code", "supply", "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "lighting_limit_percent", "branch_current",
         "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c", "method", "motor_start_limit_percent",
+        "conductor_catalog", "grounding_table",
     ];
 
     public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];

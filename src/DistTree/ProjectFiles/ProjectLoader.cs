@@ -105,6 +105,7 @@ public static class ProjectLoader
         var includes = new IncludeReader(bag, reader, main.Source);
         includes.Add(new SourceFile(file, main.FullPath, main.Identity, length, Convert.ToHexStringLower(hash), Path.GetFileName(main.FullPath)), hash);
         includes.ReadAll(file, main.FullPath, draft.Includes);
+        draft.Rules = new TableFileReader(bag, includes, main.Source).Read(draft.Rules, file, main.FullPath, draft.CatalogFile, draft.GroundingTableFile);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
             bag.Error(root.Location, ProjectMessages.NoEquipmentWithIncludes());

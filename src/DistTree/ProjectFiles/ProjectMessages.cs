@@ -57,6 +57,22 @@ internal static partial class ProjectMessages
     /// <summary>An included file that cannot be read, and why.</summary>
     public static string CannotReadInclude(string shown, string why) => $"cannot read the included file '{shown}': {why}";
 
+    /// <summary>A data file's path (<paramref name="key"/>: conductor_catalog, grounding_table) that is empty or absolute.</summary>
+    public static string DataFileNotRelative(string key, string path) =>
+        $"'{key}' is a path relative to the project file ('tables/{key}.tsv'); found '{path}'";
+
+    /// <summary>A data file's path that leaves the project's folder, as written or through a symbolic link.</summary>
+    public static string DataFileOutside(string key, string path) =>
+        $"'{path}' is outside the project's folder (as written or through a symbolic link); the file '{key}' names must be in the project file's folder or below it";
+
+    /// <summary>A data file that cannot be read, and why.</summary>
+    public static string CannotReadDataFile(string key, string shown, string why) => $"cannot read the file '{key}' names, '{shown}': {why}";
+
+    /// <summary>A data file over <see cref="ProjectLimits.MaxFileBytes"/>.</summary>
+    public static string DataFileTooLarge(string shown, long size) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"the file '{shown}' has {size:N0} bytes; a file a project reads may have at most {ProjectLimits.MaxFileBytes:N0} (64 MiB, see docs/limits.md)");
+
     /// <summary>Why a folder named as a file cannot be read.</summary>
     public static string IsAFolder() => "it is a folder, not a file";
 

@@ -73,7 +73,7 @@ internal sealed class SizingProblem
         var options = new RunOption[]?[nodes.Count];
         var transformerSteps = new int[nodes.Count];
         var unresolvable = new List<UnresolvableLimit>();
-        var protection = CodeRules.For(project.Rules.Code, catalog);
+        var protection = CodeRules.For(project.Rules, catalog);
         foreach (var row in solution.Runs)
         {
             if (row.Kind == RunResultKind.Transformer)

@@ -70,7 +70,9 @@ public sealed class Upsizer
     // One plan at the given drop factors, and its proof: the tree solved again with it applied.
     private Attempted Attempt(Solution before, int? maxSteps, Dictionary<int, double> factors, List<UnresolvableLimit> transformerOverloads)
     {
-        var problem = SizingProblem.Build(before, _catalog, maxSteps, factors);
+        // The project's own catalogue, where it brings one, is the one its solve and this proof use (see DropSolver).
+        var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        var problem = SizingProblem.Build(before, catalog, maxSteps, factors);
         var (choice, cost) = FrontierSolver.Solve(problem);
         if (double.IsInfinity(cost))
         {
@@ -78,7 +80,7 @@ public sealed class Upsizer
         }
 
         var picks = Picks(problem, choice);
-        var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = _catalog }).Solution;
+        var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = catalog }).Solution;
         return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
     }
 

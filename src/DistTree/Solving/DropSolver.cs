@@ -37,13 +37,14 @@ public sealed class DropSolver
         var frame = PhaseFrame.Of(network);
         var phases = PhaseCurrents.Solve(network, frame, sums.Power, assigned, AnyContinuous(network));
         var motors = LargestMotors.Of(network, sums, assigned);
-        var code = CodeRules.For(network.Project.Rules.Code, _catalog);
+        var catalog = network.Project.Rules.ConductorCatalog ?? _catalog;
+        var code = CodeRules.For(network.Project.Rules, catalog);
 
         // Each run's figures and drops and each transformer's regulation, in rows; then the load flow on the same
         // impedances, whose drops are recorded beside the percent sum's. A run's findings follow from its drop: on
         // the percent sum they are found with its figures; on the load flow, once it is solved.
         using var runs = new RunRows(sums.Has, n);
-        var findings = RunDrops.Solve(_catalog, code, network, sums, phases, motors, runs);
+        var findings = RunDrops.Solve(catalog, code, network, sums, phases, motors, runs);
         if (motors is not null)
         {
             Scratch.Return(motors, n * 3);
@@ -92,7 +93,7 @@ public sealed class DropSolver
             Summary = new SolutionSummary(endPoints.Count, runCount, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
             Panels = Panels(network, solved.Phases),
-            CatalogName = _catalog.SourceName,
+            CatalogName = code.Catalog.SourceName,
             Code = code,
         };
     }

@@ -29,7 +29,7 @@ public static class RunElectrics
     /// <param name="currentA">Line current of the whole run (all sets).</param>
     /// <param name="currentCarrying">The current-carrying conductors in its raceway (above 3, its ampacity is adjusted).</param>
     public static RunFigures Compute(ConductorCatalog catalog, Rules rules, Run run, ConductorSize size, int sets, double frequencyHz, double currentA, int currentCarrying = 3) =>
-        Compute(CodeRules.For(rules.Code, catalog), rules, run, size, sets, frequencyHz, currentA, currentCarrying);
+        Compute(CodeRules.For(rules, catalog), rules, run, size, sets, frequencyHz, currentA, currentCarrying);
 
     /// <summary>
     /// Computes the figures of a run carrying <paramref name="currentA"/> with the ampacity and its corrections of

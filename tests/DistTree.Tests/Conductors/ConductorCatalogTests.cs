@@ -1,4 +1,5 @@
 using DistTree.Conductors;
+using DistTree.Diagnostics;
 
 namespace DistTree.Tests.Conductors;
 
@@ -111,9 +112,10 @@ public sealed class ConductorCatalogTests
     {
         var text = "size\tper\tx_pvc\tx_steel\trpvc_cu\trsteel_cu\trpvc_al\trsteel_al\tr20_cu\tr20_al\tcu60\tcu75\tcu90\tal60\tal75\tal90\tins_mm\tocpd_cu\tocpd_al\n";
 
-        var e = Assert.Throws<FormatException>(() => ConductorCatalog.Load(new StringReader(text), "mine.tsv"));
+        var e = Assert.Throws<DataFileException>(() => ConductorCatalog.Load(new StringReader(text), "mine.tsv"));
 
         Assert.StartsWith("mine.tsv:1: expected the columns", e.Message, StringComparison.Ordinal);
+        Assert.Equal((1, 1), (e.Line, e.Column));
         Assert.Contains("add the aluminium-conduit columns ral_cu and ral_al", e.Message, StringComparison.Ordinal);
     }
 
@@ -248,7 +250,8 @@ public sealed class ConductorCatalogTests
     [Fact]
     public void Load_BadHeader_NamesTheLine()
     {
-        var e = Assert.Throws<FormatException>(() => ConductorCatalog.Load(new StringReader("# x\nsize\tper\n"), "mine.tsv"));
+        var e = Assert.Throws<DataFileException>(() => ConductorCatalog.Load(new StringReader("# x\nsize\tper\n"), "mine.tsv"));
         Assert.StartsWith("mine.tsv:2:", e.Message, StringComparison.Ordinal);
+        Assert.Equal(("mine.tsv", 2, 1), (e.SourceName, e.Line, e.Column));
     }
 }

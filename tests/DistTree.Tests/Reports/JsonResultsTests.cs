@@ -10,7 +10,8 @@ namespace DistTree.Tests.Reports;
 
 public sealed class JsonResultsTests
 {
-    private static readonly JsonSchema Schema =
+    /// <summary>The results schema, loaded once (JsonSchema.Net registers a schema by its $id: one instance for every test).</summary>
+    internal static readonly JsonSchema Schema =
         JsonSchema.FromText(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "results.schema.json")));
 
     private static Solution SolveProject(string name) =>

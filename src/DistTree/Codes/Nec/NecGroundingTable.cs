@@ -41,6 +41,12 @@ internal static class NecGroundingTable
     private static readonly (double Copper, double Aluminum)[] Areas =
         [.. Rows.Select(r => (AreaCmil(r.Copper), AreaCmil(r.Aluminum)))];
 
+    /// <summary>The table as the rule set's own grounding table (<see cref="CodeRules.OwnGroundingTable"/>): the same rows and areas.</summary>
+    internal static GroundingTable Table { get; } = new(
+        "NEC Table 250.122",
+        ["NEC 2020 Table 250.122, minimum size of equipment grounding conductors (recalled from memory, not read: verify against the edition in force)"],
+        [.. Rows.Select((r, i) => new GroundingTableRow(r.DeviceA, new GroundingTableSize(r.Copper, Areas[i].Copper), new GroundingTableSize(r.Aluminum, Areas[i].Aluminum)))]);
+
     /// <summary>
     /// The row of a device of <paramref name="deviceA"/> amperes: the first whose rating is not below it, or -1 above
     /// the last row (6000 A).

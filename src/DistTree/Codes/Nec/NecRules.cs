@@ -123,17 +123,17 @@ public sealed class NecRules : CodeRules
     };
 
     /// <inheritdoc/>
+    public override GroundingTable OwnGroundingTable => NecGroundingTable.Table;
+
+    /// <summary>
+    /// The table's size (NEC Table 250.122, or the project's own table in its place), increased by 250.122(B) and limited
+    /// by 250.122(A) as the class describes.
+    /// </summary>
     public override ConductorSize? MinimumGroundSize(in GroundingCase ground)
     {
-        var row = NecGroundingTable.RowOf(ground.OcpdA);
-        if (row < 0)
-        {
-            return null;
-        }
-
         // 250.122(B): in proportion to the lines' area over the smallest that would do, where they are larger.
         var line = ground.LineSize;
-        var requiredCmil = NecGroundingTable.AreaCmil(row, ground.Material);
+        var requiredCmil = ground.TableSize.AreaCmil;
         if (ground.SufficientSize is { } least && line.AreaCmil > least.AreaCmil * (1 + Tolerance))
         {
             requiredCmil *= line.AreaCmil / least.AreaCmil;
@@ -282,11 +282,11 @@ public sealed class NecRules : CodeRules
     {
         var conductors = run.Conductors;
         var device = conductors.OcpdA ?? 0;
-        var row = NecGroundingTable.RowOf(device);
-        var table = row < 0 ? least.Text : NecGroundingTable.SizeText(row, conductors.Material);
+        var table = GroundingTableInForce?.SizeFor(device, conductors.Material)?.Text ?? least.Text;
+        var whose = ProjectGroundingTable is null ? "the table's" : "the project's table's";
         var why = table == least.Text
-            ? FormattableString.Invariant($"the table's size for a {device:0} A device")
-            : FormattableString.Invariant($"the table's {table} for a {device:0} A device, increased in proportion to lines of {conductors.Size.Text}, larger than the load needs");
+            ? FormattableString.Invariant($"{whose} size for a {device:0} A device")
+            : FormattableString.Invariant($"{whose} {table} for a {device:0} A device, increased in proportion to lines of {conductors.Size.Text}, larger than the load needs");
         return Finding.Written(
             FindingKind.GroundingConductor,
             Cite(CodeCheck.GroundingConductor),

@@ -69,7 +69,13 @@ internal sealed class RulesReader(SectionContext context)
         }
 
         context.Draft.Rules = ReadSolving(m, rules);
+        context.Draft.CatalogFile = FilePath(m, "conductor_catalog");
+        context.Draft.GroundingTableFile = FilePath(m, "grounding_table");
     }
+
+    // A data file the project brings: its path as written, located at its key (the loader reads it; see TableFileReader).
+    private IncludeEntry? FilePath(in MappingReader m, string key) =>
+        m.Optional(key) is { } node && Values.Text(node, $"'{key}'") is { } path ? new IncludeEntry(path.Trim(), m.KeyLocation(key)) : null;
 
     /// <summary>Reads the <c>defaults</c> section, when given; every default it does not state stays the standard one.</summary>
     public void ReadDefaults(MappingReader? section)

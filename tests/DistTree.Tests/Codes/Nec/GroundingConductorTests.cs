@@ -99,9 +99,9 @@ public sealed class GroundingConductorTests
         ConductorSize? sufficient = sufficientIndex % (series.Count + 1) is var i && i == series.Count ? null : series[i];
         var deviceA = 1 + (device.Get % 6000);
         var material = aluminum ? Material.Aluminum : Material.Copper;
-        var least = Rules.MinimumGroundSize(new GroundingCase(deviceA, material, line, sufficient))!.Value;
         var row = NecGroundingTable.RowOf(deviceA);
         var table = NecGroundingTable.AreaCmil(row, material);
+        var least = Rules.MinimumGroundSize(new GroundingCase(deviceA, material, line, sufficient, new GroundingTableSize(NecGroundingTable.SizeText(row, material), table)))!.Value;
         return (least <= line && least.Series == line.Series && least.AreaCmil >= Math.Min(table, line.AreaCmil) * (1 - 1e-9)).ToProperty();
     }
 
