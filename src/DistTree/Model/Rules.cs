@@ -41,6 +41,9 @@ public enum ElectricalCode
 {
     /// <summary>The National Electrical Code (NFPA 70).</summary>
     Nec,
+
+    /// <summary>The Canadian Electrical Code, Part I (CSA C22.1).</summary>
+    Cec,
 }
 
 /// <summary>Which method's figures the findings rest on.</summary>

@@ -27,7 +27,7 @@ public static class Words
         "transformer_drop", [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)]);
 
     /// <summary><c>rules: code</c>: the code whose rule set judges the project.</summary>
-    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec)]);
+    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec), ("cec", ElectricalCode.Cec)]);
 
     /// <summary><c>rules: method</c>.</summary>
     public static WordTable<SolutionMethod> Method { get; } = new(
