@@ -1,4 +1,6 @@
+using System.Text.Json;
 using DistTree.Model;
+using DistTree.Reports;
 using DistTree.Solving;
 using DistTree.Tests.Solving;
 
@@ -79,5 +81,18 @@ public sealed class CecProjectTests
         Assert.Equal("NEC 210.19(A)(1) Informational Note No. 4", Assert.Single(Nec.AllFindings, f => f.Kind == FindingKind.BranchDrop).Reference);
         Assert.Equal("CEC Rule 8-102(1)(c)", Assert.Single(Cec.AllFindings, f => f.Kind == FindingKind.BranchDrop).Reference);
         Assert.Equal("CEC Rule 8-102(1)(b)", Assert.Single(Cec.AllFindings, f => f.Kind == FindingKind.TotalDrop).Reference);
+    }
+
+    // The results name the code by its word and edition, pass the results schema (whose code enum names cec), and the
+    // caution names the code assumed.
+    [Fact]
+    public void JsonResults_CodeCec_NamedAndValid()
+    {
+        using var doc = JsonDocument.Parse(JsonResults.Write(Cec));
+        var rules = doc.RootElement.GetProperty("rules");
+        Assert.Equal(("cec", "CEC 2021"), (rules.GetProperty("code").GetString(), rules.GetProperty("code_edition").GetString()));
+        var schema = Json.Schema.JsonSchema.FromText(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "results.schema.json")));
+        Assert.True(schema.Evaluate(doc.RootElement).IsValid);
+        Assert.Contains("assume CEC 2021", Caution.For(ElectricalCode.Cec), StringComparison.Ordinal);
     }
 }
