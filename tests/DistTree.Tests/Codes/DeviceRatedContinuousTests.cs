@@ -1,3 +1,4 @@
+using DistTree.Comparing;
 using DistTree.Solving;
 using DistTree.Tests.ProjectFiles;
 using DistTree.Tests.Solving;
@@ -69,4 +70,19 @@ public sealed class DeviceRatedContinuousTests
             ProjectText.Minimal(circuit: "poles: 1\n        ocpd: 20\n        load: { va: 1000 }\n        run: { length: 20, size: 12 AWG, device_rated_continuous: often }"),
             "often",
             "'device_rated_continuous' of the run of circuit 'LP1/1' must be true or false; found 'often'");
+
+    // A revision that marks a circuit's device names the change in the comparison; an unmarked run writes no field, so
+    // comparisons of projects that never use the key read as before.
+    [Fact]
+    public void Compare_MarkAdded_IsAFieldChange()
+    {
+        static string Project(string extra) => SolverHarness.OneCircuit("120/240", "metric",
+            $"{{ id: \"1\", poles: 1, ocpd: 20, continuous: true, load: {{ amps: 10 }}, run: {{ length: 5, size: 10 AWG{extra} }} }}");
+        var comparison = RevisionComparer.Compare(
+            SolverHarness.Solve(Project(""), "old.yaml"), SolverHarness.Solve(Project(", device_rated_continuous: true"), "new.yaml"));
+        var circuit = Assert.Single(comparison.Circuits);
+        var field = Assert.Single(circuit.Fields);
+        Assert.Equal((null, "true"), (field.Before, field.After));
+        Assert.EndsWith("device_rated_continuous", field.Field, StringComparison.Ordinal);
+    }
 }

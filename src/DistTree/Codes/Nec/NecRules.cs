@@ -34,6 +34,10 @@ namespace DistTree.Codes.Nec;
 /// (an inverse-time breaker assumed) may be at most 250 % of the full-load current, or the next standard rating above
 /// that (NEC 430.52(C)(1) and Table 430.52, Exception No. 1); 240.4(B) and (D) do not apply (NEC 240.4(G)), nor does
 /// 210.20(A).</item>
+/// <item>Conductors counted for the adjustment (NEC 310.15(E)): a neutral that carries only the unbalanced current
+/// of the other conductors of its circuit is not counted (a three-phase four-wire feeder, a three-wire single-phase
+/// one); it is counted on a two-wire circuit and on two lines and the neutral of a three-phase wye (310.15(E)(2)).
+/// One counted because most of the load is nonlinear (310.15(E)(3)) is not modelled.</item>
 /// <item>Air-conditioning equipment given by its nameplate (Article 440): the conductors' ampacity at least the
 /// minimum circuit ampacity (NEC 440.35, marked per 440.4(B)); the device at most the maximum overcurrent device
 /// (NEC 440.22(C)); 240.4(B) and (D) and 210.20(A) do not apply.</item>
