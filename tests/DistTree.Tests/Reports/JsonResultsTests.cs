@@ -10,7 +10,9 @@ namespace DistTree.Tests.Reports;
 
 public sealed class JsonResultsTests
 {
-    private static readonly JsonSchema Schema =
+    // The results schema, read once: the schema library registers a schema by its $id, so every test that validates
+    // results uses this one.
+    internal static readonly JsonSchema Schema =
         JsonSchema.FromText(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "schema", "results.schema.json")));
 
     private static Solution SolveProject(string name) =>
