@@ -1,3 +1,4 @@
+using DistTree.Codes.Cec;
 using DistTree.Codes.Nec;
 using DistTree.Conductors;
 using DistTree.Model;
@@ -37,6 +38,12 @@ public abstract class CodeRules
 
     /// <summary>How the clause numbers were taken: read from the text, or recalled (and so to be verified).</summary>
     public abstract string ClauseSource { get; }
+
+    /// <summary>
+    /// What the code calls the conductor that bonds equipment to the supply's grounded point, as findings and plans
+    /// name it: the NEC's equipment grounding conductor, the CEC's bonding conductor.
+    /// </summary>
+    public virtual string GroundingConductorTerm => "equipment grounding conductor";
 
     /// <summary>The limits and choices a project under this code starts from (its own keys override them).</summary>
     public abstract Rules Defaults { get; }
@@ -84,12 +91,14 @@ public abstract class CodeRules
     public static CodeRules For(ElectricalCode code, ConductorCatalog catalog) => code switch
     {
         ElectricalCode.Nec => new NecRules(catalog),
+        ElectricalCode.Cec => new CecRules(catalog),
     };
 
     /// <summary>The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue.</summary>
     public static Rules DefaultsOf(ElectricalCode code) => code switch
     {
         ElectricalCode.Nec => NecRules.RuleDefaults,
+        ElectricalCode.Cec => CecRules.RuleDefaults,
     };
 
     /// <summary>
@@ -99,12 +108,14 @@ public abstract class CodeRules
     public static Rules DefaultsOf(ElectricalCode code, SupplyKind supply) => code switch
     {
         ElectricalCode.Nec => NecRules.RuleDefaults,
+        ElectricalCode.Cec => CecRules.RuleDefaults,
     };
 
     /// <summary>The short name and edition of <paramref name="code"/>: <c>NEC 2020</c>.</summary>
     public static string Describe(ElectricalCode code) => code switch
     {
         ElectricalCode.Nec => NecRules.Described,
+        ElectricalCode.Cec => CecRules.Described,
     };
 
     /// <summary>

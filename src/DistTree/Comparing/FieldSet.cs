@@ -107,7 +107,7 @@ internal sealed class FieldSet
             ? a is null && b is null
             : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
               Nullable.Equals(a.NeutralSize, b.NeutralSize) && Nullable.Equals(a.GroundSize, b.GroundSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
-              Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed;
+              Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous;
 
     /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
     public static List<FieldChange> Differences(FieldSet before, FieldSet after)
@@ -211,6 +211,10 @@ internal sealed class FieldSet
             .Number($"{prefix}.ocpd_a", run.OcpdA)
             .Number($"{prefix}.limit_percent", run.LimitPercent)
             .Text($"{prefix}.fixed", run.Fixed ? "true" : "false");
+        if (run.DeviceRatedContinuous)
+        {
+            Text($"{prefix}.device_rated_continuous", "true");
+        }
     }
 
     private FieldSet Text(string name, string text)

@@ -41,6 +41,9 @@ public enum ElectricalCode
 {
     /// <summary>The National Electrical Code (NFPA 70).</summary>
     Nec,
+
+    /// <summary>The Canadian Electrical Code, Part I (CSA C22.1).</summary>
+    Cec,
 }
 
 /// <summary>Who supplies the installation, where a code's limits depend on it (IEC 60364-5-52 Annex G).</summary>

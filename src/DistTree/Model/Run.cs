@@ -56,6 +56,13 @@ public sealed record Run
     /// <summary>A limit for this run alone in percent, overriding the rules' feeder or branch limit.</summary>
     public double? LimitPercent { get; init; }
 
+    /// <summary>
+    /// The overcurrent device and its assembly are marked for continuous operation at 100 % of their rating
+    /// (<c>device_rated_continuous</c>): the continuous load then counts at 100 %, not 125 %, in the lines' design
+    /// current (NEC 210.19(A)(1) and 215.2(A)(1) Exception No. 1; CEC Rule 8-104; recalled).
+    /// </summary>
+    public bool DeviceRatedContinuous { get; init; }
+
     /// <summary>Pinned by the user: upsizing must keep this size.</summary>
     public bool Fixed { get; init; }
 

@@ -198,7 +198,7 @@ public sealed class Upsizer
                 DropPercentBefore = was.DropPercent,
                 DropPercentAfter = afterRows[index].DropPercent,
                 CostAdded = option.Cost,
-                GroundingNote = GroundingNote(before.Code.Cite(CodeCheck.GroundingConductor), option.Sets, least, stated, increase),
+                GroundingNote = GroundingNote(before.Code, run.Conductors.OcpdA is not null, option.Sets, least, stated, increase),
                 GroundMinSize = least?.Text,
                 GroundSize = stated?.Text,
                 GroundMustIncrease = increase,
@@ -209,12 +209,16 @@ public sealed class Upsizer
         return changes;
     }
 
-    // What the new size needs of the grounding conductor, with the clause the code in force cites.
-    private static string GroundingNote(string clause, int sets, ConductorSize? least, ConductorSize? stated, bool increase)
+    // What the new size needs of the grounding conductor, with the clause the code in force cites: none without a device,
+    // nor where the rule set does not hold the code's table (the CEC's Table 16).
+    private static string GroundingNote(CodeRules code, bool hasDevice, int sets, ConductorSize? least, ConductorSize? stated, bool increase)
     {
+        var clause = code.Cite(CodeCheck.GroundingConductor);
         if (least is not { } minimum)
         {
-            return $"no minimum without an overcurrent device ({clause})";
+            return hasDevice
+                ? $"no minimum: the table of the {code.GroundingConductorTerm}'s size is not held ({clause})"
+                : $"no minimum without an overcurrent device ({clause})";
         }
 
         var each = sets > 1 ? " in each set" : "";

@@ -27,7 +27,7 @@ public static class Words
         "transformer_drop", [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)]);
 
     /// <summary><c>rules: code</c>: the code whose rule set judges the project.</summary>
-    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec)]);
+    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec), ("cec", ElectricalCode.Cec)]);
 
     /// <summary><c>rules: supply</c>.</summary>
     public static WordTable<SupplyKind> Supply { get; } = new("supply", [("public", SupplyKind.Public), ("private", SupplyKind.Private)]);

@@ -71,6 +71,7 @@ internal sealed class RunReader(SectionContext context)
 
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
+        var ratedContinuous = m.Optional("device_rated_continuous") is { } ratedNode && (Values.Bool(ratedNode, subject.Of("'device_rated_continuous' of ")) ?? false);
         if (!sharingOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
@@ -92,6 +93,7 @@ internal sealed class RunReader(SectionContext context)
             OcpdA = ocpd ?? circuitOcpdA,
             LimitPercent = limit,
             Fixed = isFixed,
+            DeviceRatedContinuous = ratedContinuous,
             Location = m.Node.Location,
             SizeLocation = sizeNode!.Location,
         };

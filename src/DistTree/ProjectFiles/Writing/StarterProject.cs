@@ -27,12 +27,14 @@ public static class StarterProject
     public static UnitSystem DefaultUnits(ElectricalCode code, ElectricalSystem system) => code switch
     {
         ElectricalCode.Nec => DefaultUnits(system),
+        ElectricalCode.Cec => UnitSystem.Metric,
     };
 
     /// <summary>The service system a starter under <paramref name="code"/> has unless told otherwise: the code's usual building's.</summary>
     public static ElectricalSystem DefaultSystem(ElectricalCode code) => ElectricalSystem.Find(code switch
     {
         ElectricalCode.Nec => "208Y/120",
+        ElectricalCode.Cec => "600Y/347",
     })!;
 
     /// <summary>The starter project's text (ending in a newline) for the given units and service system, under the NEC.</summary>
@@ -159,10 +161,16 @@ public static class StarterProject
         public static StarterProfile Of(ElectricalCode code, ElectricalSystem system) => code switch
         {
             ElectricalCode.Nec => IsIec(system) ? Metric : Imperial,
+            ElectricalCode.Cec => system.Name == "600Y/347" ? Canadian : IsIec(system) ? Metric : Imperial,
         };
 
         // The NEC's usual building; invented placeholder figures, sized within every limit.
         private static StarterProfile Imperial { get; } = new(60, "4 AWG", 60, "12 AWG", 20, null);
+
+        // The CEC's usual building: a 600Y/347 V service, the 120 V circuits through a 45 kVA 600 V delta to
+        // 208Y/120 V dry-type transformer (its primary feeder 6 AWG on 60 A: 43 A rated; its secondary 3/0 AWG on 150 A:
+        // 125 A rated); invented placeholder figures.
+        private static StarterProfile Canadian { get; } = new(60, "3/0 AWG", 150, "12 AWG", 20, new StarterTransformer("600D", ElectricalSystem.Find("208Y/120")!, 45, 3.8, 1.6, "6 AWG", 60));
 
         // A building of 230/400 V practice: mm² sizes and IEC device ratings.
         private static StarterProfile Metric { get; } = new(50, "16 mm2", 63, "2.5 mm2", 16, null);

@@ -243,7 +243,9 @@ internal sealed class RunDrops
     {
         var index = run.Target.Index;
         var i = _phases.Currents.AsSpan(index * 3, 3);
-        var c = _continuous is null ? default : _continuous.AsSpan(index * 3, 3);
+        // A device marked for continuous operation at 100 % (device_rated_continuous): the continuous part counts as
+        // the rest does, so the lines' design current takes none of it apart.
+        var c = _continuous is null || run.Conductors.DeviceRatedContinuous ? default : _continuous.AsSpan(index * 3, 3);
         var m = _motors is null ? default : _motors.AsSpan(index * 3, 3);
         var duty = (_sums.Has[index] & (Has.Motor | Has.Nameplate)) != 0 ? CircuitDuty.Of(run) : default;
         var equipmentA = duty.Kind == DutyKind.General ? null : _code.EquipmentDesignCurrentA(duty);
