@@ -1,3 +1,4 @@
+using DistTree.Codes.Iec;
 using DistTree.Codes.Nec;
 using DistTree.Conductors;
 using DistTree.Model;
@@ -48,22 +49,43 @@ public abstract class CodeRules
     public abstract string AmpacitySource { get; }
 
     /// <summary>
-    /// The factor a tabulated ampacity (30 °C ambient, not more than three current-carrying conductors) is corrected
-    /// by for a conductor rated <paramref name="ratedC"/> at <paramref name="ambientC"/> among
-    /// <paramref name="currentCarrying"/> current-carrying conductors in its raceway, as the code gives it.
+    /// The factor a tabulated ampacity (30 °C ambient, no grouping) is corrected by for a conductor rated
+    /// <paramref name="ratedC"/> at <paramref name="ambientC"/> in a raceway or group whose count is
+    /// <paramref name="currentCarrying"/>, as the code counts it (<see cref="CurrentCarryingConductors"/>: current-carrying
+    /// conductors under the NEC, grouped circuits under IEC 60364).
     /// </summary>
     public abstract double AmpacityFactor(double ratedC, double ambientC, int currentCarrying);
 
     /// <summary>
-    /// A conductor's own ampacity Iz, amperes: the catalogue's column for its insulation times
-    /// <see cref="AmpacityFactor"/>; null where the table has no figure.
+    /// The largest count of <see cref="CurrentCarryingConductors"/>' kind that the code makes no grouping adjustment for
+    /// (three conductors under the NEC, one circuit under IEC 60364): a run at or below it shares its figures with every
+    /// run of its conductor.
     /// </summary>
-    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarrying = 3) =>
-        Catalog.TableAmpacityA(size, material, insulationC) * AmpacityFactor(ConductorCatalog.RatedTemperatureC(size, insulationC), ambientC, Math.Max(1, currentCarrying));
+    public abstract int UngroupedCount { get; }
+
+    /// <summary>
+    /// The tabulated ampacity, amperes (30 °C ambient, no grouping), of <paramref name="size"/> in
+    /// <paramref name="material"/> with insulation rated <paramref name="insulationC"/>, installed as
+    /// <paramref name="installation"/> says; null where the table has no figure. By default the catalogue's column for
+    /// the insulation, which has one figure whatever the installation.
+    /// </summary>
+    public virtual double? TableAmpacityA(ConductorSize size, Material material, int insulationC, Installation installation) =>
+        Catalog.TableAmpacityA(size, material, insulationC);
+
+    /// <summary>
+    /// A conductor's own ampacity Iz, amperes: <see cref="TableAmpacityA"/> for its <paramref name="installation"/> (null:
+    /// <see cref="Installation.Catalogue"/>) times <see cref="AmpacityFactor"/>; null where the table has no figure.
+    /// </summary>
+    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarrying = 3, Installation? installation = null) =>
+        TableAmpacityA(size, material, insulationC, installation ?? Installation.Catalogue)
+        * AmpacityFactor(ConductorCatalog.RatedTemperatureC(size, insulationC), ambientC, Math.Max(1, currentCarrying));
 
     /// <summary>The allowable ampacity, amperes: <see cref="ThermalAmpacityA"/> limited by the terminal rating's column (see <see cref="ConductorCatalog"/>).</summary>
-    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3) =>
-        Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying));
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3, Installation? installation = null) =>
+        Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying, installation));
+
+    /// <summary>What the code calls the conductor that bonds equipment to earth, for the findings' sentences.</summary>
+    public virtual string GroundingConductorTerm => "equipment grounding conductor";
 
     /// <summary>The clause a finding of <paramref name="check"/> cites, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
     public abstract string Cite(CodeCheck check);
@@ -72,18 +94,21 @@ public abstract class CodeRules
     public static CodeRules For(ElectricalCode code, ConductorCatalog catalog) => code switch
     {
         ElectricalCode.Nec => new NecRules(catalog),
+        ElectricalCode.Iec => new IecRules(catalog),
     };
 
     /// <summary>The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue.</summary>
     public static Rules DefaultsOf(ElectricalCode code) => code switch
     {
         ElectricalCode.Nec => NecRules.RuleDefaults,
+        ElectricalCode.Iec => IecRules.RuleDefaults,
     };
 
     /// <summary>The short name and edition of <paramref name="code"/>: <c>NEC 2020</c>.</summary>
     public static string Describe(ElectricalCode code) => code switch
     {
         ElectricalCode.Nec => NecRules.Described,
+        ElectricalCode.Iec => IecRules.Described,
     };
 
     /// <summary>
@@ -113,8 +138,8 @@ public abstract class CodeRules
     /// </summary>
     public bool Carries(double designCurrentA, double ampacityA) => !(designCurrentA > ampacityA + Tolerance);
 
-    /// <summary>True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/> (amperes).</summary>
-    public abstract bool DevicePermits(double ocpdA, double ampacityA);
+    /// <summary>True when a <paramref name="device"/> of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/> (amperes).</summary>
+    public abstract bool DevicePermits(double ocpdA, double ampacityA, DeviceType device);
 
     /// <summary>True when a device of <paramref name="ocpdA"/> amperes may protect <paramref name="sets"/> parallel sets of <paramref name="size"/> under the small-conductor rule.</summary>
     public abstract bool SmallConductorPermits(double ocpdA, ConductorSize size, Material material, int sets);
@@ -125,19 +150,20 @@ public abstract class CodeRules
     /// <summary>
     /// True when <paramref name="sets"/> sets of <paramref name="size"/> with an allowable ampacity of
     /// <paramref name="ampacityA"/> (all sets) meet every conductor rule here for a design current of
-    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none), on a
-    /// run serving <paramref name="duty"/>: where the duty's own rules set the largest device
+    /// <paramref name="designCurrentA"/> under a <paramref name="device"/> of <paramref name="ocpdA"/> (amperes; null for
+    /// none), on a run serving <paramref name="duty"/>: where the duty's own rules set the largest device
     /// (<see cref="EquipmentMaxDeviceA"/>), those replace the general device rules.
     /// </summary>
-    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, in CircuitDuty duty) =>
+    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, DeviceType device, in CircuitDuty duty) =>
         Carries(designCurrentA, ampacityA)
         && (ocpdA is not { } ocpd || (EquipmentMaxDeviceA(duty) is { } maxA
             ? !(ocpd > maxA + Tolerance)
-            : DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
+            : DevicePermits(ocpd, ampacityA, device) && SmallConductorPermits(ocpd, size, material, sets)));
 
     /// <summary>
-    /// The current-carrying conductors of one set of <paramref name="run"/>, as the code counts them for the
-    /// ampacity adjustment: its lines, and its neutral where the code counts it.
+    /// What one set of <paramref name="run"/> adds to the count of its raceway or group, as the code's grouping
+    /// adjustment counts (see <see cref="AmpacityFactor"/>): under the NEC its current-carrying conductors (its lines,
+    /// and its neutral where the code counts it); under IEC 60364 one circuit.
     /// </summary>
     public abstract int CurrentCarryingConductors(NetworkRun run);
 
@@ -178,12 +204,12 @@ public abstract class CodeRules
         foreach (var size in ConductorSize.All)
         {
             if (size.Series != series || !Catalog.Contains(size)
-                || AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, currentCarrying) is not { } oneSetA)
+                || AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, currentCarrying, conductors.Installation) is not { } oneSetA)
             {
                 continue;
             }
 
-            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets, duty))
+            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets, conductors.DeviceType, duty))
             {
                 return size;
             }

@@ -41,6 +41,9 @@ public enum ElectricalCode
 {
     /// <summary>The National Electrical Code (NFPA 70).</summary>
     Nec,
+
+    /// <summary>IEC 60364, low-voltage electrical installations (parts 4-43, 5-52 and 5-54).</summary>
+    Iec,
 }
 
 /// <summary>Which method's figures the findings rest on.</summary>

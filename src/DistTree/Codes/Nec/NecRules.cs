@@ -32,7 +32,8 @@ namespace DistTree.Codes.Nec;
 /// 430.248 and 430.250, see <see cref="MotorTables"/>), the stated amperes for <c>fla</c>. A motor branch circuit's
 /// conductors carry 125 % of it (NEC 430.22), whatever its <c>continuous</c> flag says; a feeder's line carries 125 %
 /// of the largest motor's full-load current on that line plus the rest (NEC 430.24). A motor branch circuit's device
-/// (an inverse-time breaker assumed) may be at most 250 % of the full-load current, or the next standard rating above
+/// (an inverse-time breaker assumed, whatever <c>device_type</c> says: Table 430.52's fuse columns are not modelled)
+/// may be at most 250 % of the full-load current, or the next standard rating above
 /// that (NEC 430.52(C)(1) and Table 430.52, Exception No. 1); 240.4(B) and (D) do not apply (NEC 240.4(G)), nor does
 /// 210.20(A).</item>
 /// <item>Air-conditioning equipment given by its nameplate (Article 440): the conductors' ampacity at least the
@@ -98,6 +99,9 @@ public sealed class NecRules : CodeRules
     /// <summary>NEC 310.15(B)(1)'s ambient factor times 310.15(C)(1)'s adjustment (see <see cref="Ampacity"/>).</summary>
     public override double AmpacityFactor(double ratedC, double ambientC, int currentCarrying) =>
         Ampacity.AmbientFactor(ratedC, ambientC) * Ampacity.AdjustmentFactor(currentCarrying);
+
+    /// <summary>NEC 310.15(C)(1) adjusts above three current-carrying conductors.</summary>
+    public override int UngroupedCount => 3;
 
     /// <inheritdoc/>
     public override string Cite(CodeCheck check) => check switch
@@ -179,8 +183,9 @@ public sealed class NecRules : CodeRules
     /// <summary>
     /// True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/>
     /// (amperes): the rating does not exceed the ampacity, or (800 A and less) it is the next standard rating above it.
+    /// NEC 240.4 reads a fuse and a breaker alike, so <paramref name="device"/> does not change it.
     /// </summary>
-    public override bool DevicePermits(double ocpdA, double ampacityA)
+    public override bool DevicePermits(double ocpdA, double ampacityA, DeviceType device)
     {
         if (ocpdA <= ampacityA + Tolerance)
         {
@@ -220,7 +225,7 @@ public sealed class NecRules : CodeRules
                 (findings ??= []).Add(AmpacityFinding(run, figures, ampacity));
             }
 
-            if (maxDeviceA is null && conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity))
+            if (maxDeviceA is null && conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity, conductors.DeviceType))
             {
                 (findings ??= []).Add(Finding.Written(
                     FindingKind.OcpdAboveAmpacity,
@@ -293,7 +298,7 @@ public sealed class NecRules : CodeRules
             run.Id,
             ground.AreaMm2,
             least.AreaMm2,
-            $"{Words.Noun(run.Kind)} {run.Id}: the stated {ground.Text} equipment grounding conductor is smaller than the {least.Text} it needs ({why})",
+            $"{Words.Noun(run.Kind)} {run.Id}: the stated {ground.Text} {GroundingConductorTerm} is smaller than the {least.Text} it needs ({why})",
             conductors.Location);
     }
 
