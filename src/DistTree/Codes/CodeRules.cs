@@ -84,6 +84,12 @@ public abstract class CodeRules
     public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3, Installation? installation = null) =>
         Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying, installation));
 
+    /// <summary>The design-current and device rule as a formula, for the report's method; a subscript is written <c>_{…}</c>.</summary>
+    public abstract string DesignCurrentFormula { get; }
+
+    /// <summary>What the formula's terms are and how the device is judged, in a sentence or two, for the report's method.</summary>
+    public abstract string DesignCurrentRule { get; }
+
     /// <summary>What the code calls the conductor that bonds equipment to earth, for the findings' sentences.</summary>
     public virtual string GroundingConductorTerm => "equipment grounding conductor";
 

@@ -8,6 +8,13 @@ namespace DistTree.Codes.Iec;
 public sealed partial class IecRules
 {
     /// <inheritdoc/>
+    public override string DesignCurrentFormula => "I_{B} ≤ I_{n} ≤ I_{z}; I_{2} ≤ 1.45 · I_{z}";
+
+    /// <inheritdoc/>
+    public override string DesignCurrentRule =>
+        "IB is the load's current (no factor for a continuous load or a motor; a motor's is its full-load current); Iz the table's current-carrying capacity for the run's reference method and loaded conductors, of all sets, corrected for ambient and grouping; In the device's rated current; I2 its conventional operating current (1.45 In for a circuit-breaker, 1.6 In for a gG fuse from 16 A).";
+
+    /// <inheritdoc/>
     internal override List<Finding>? AddFindings(List<Finding>? findings, NetworkRun run, in CurrentFigures figures)
     {
         var conductors = run.Conductors;

@@ -41,7 +41,7 @@ namespace DistTree.Codes.Nec;
 /// (NEC 440.22(C)); 240.4(B) and (D) and 210.20(A) do not apply.</item>
 /// </list>
 /// </summary>
-public sealed class NecRules : CodeRules
+public sealed partial class NecRules : CodeRules
 {
     /// <summary>The short name and edition, as the outputs name the code assumed.</summary>
     internal const string Described = "NEC 2020";

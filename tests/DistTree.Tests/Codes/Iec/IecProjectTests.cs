@@ -110,6 +110,9 @@ public sealed class IecProjectTests
         Assert.Equal(DeviceType.Fuse, ProjectLoader.Parse(fuse, "t.yaml").Equipment[0].Circuits[0].Run.DeviceType);
     }
 
+    /// <summary>A valid project under code: iec with one 2.5 mm² circuit (invented data).</summary>
+    internal static string Sample => Project();
+
     // A 400Y/230 50 Hz panel P under code: iec on a 16 mm² feeder with a 63 A breaker, with the given circuits.
     private static string Project(params string[] circuits) => OnFeeder("length: 10, size: 16 mm2, ocpd: 63", circuits);
 
