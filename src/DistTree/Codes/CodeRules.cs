@@ -90,6 +90,9 @@ public abstract class CodeRules
     /// <summary>What the formula's terms are and how the device is judged, in a sentence or two, for the report's method.</summary>
     public abstract string DesignCurrentRule { get; }
 
+    /// <summary>What <see cref="CurrentCarryingConductors"/> counts, after the count in a run's description: <c>current-carrying</c> (conductors) under the NEC.</summary>
+    public abstract string GroupingUnit { get; }
+
     /// <summary>What the code calls the conductor that bonds equipment to earth, for the findings' sentences.</summary>
     public virtual string GroundingConductorTerm => "equipment grounding conductor";
 

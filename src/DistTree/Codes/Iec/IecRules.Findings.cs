@@ -7,6 +7,9 @@ namespace DistTree.Codes.Iec;
 /// <summary>The findings of IEC 60364's conductor and device rules (see <see cref="IecRules"/>; clauses from memory).</summary>
 public sealed partial class IecRules
 {
+    /// <summary>Table B.52.17 counts circuits.</summary>
+    public override string GroupingUnit => "grouped circuits";
+
     /// <inheritdoc/>
     public override string DesignCurrentFormula => "I_{B} ≤ I_{n} ≤ I_{z}; I_{2} ≤ 1.45 · I_{z}";
 

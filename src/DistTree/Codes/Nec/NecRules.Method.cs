@@ -4,6 +4,9 @@ namespace DistTree.Codes.Nec;
 public sealed partial class NecRules
 {
     /// <inheritdoc/>
+    public override string GroupingUnit => "current-carrying";
+
+    /// <inheritdoc/>
     public override string DesignCurrentFormula => "I_{design} = 1.25 · I_{continuous} + I_{other} + 0.25 · I_{largest motor} ≤ I_{z}";
 
     /// <inheritdoc/>

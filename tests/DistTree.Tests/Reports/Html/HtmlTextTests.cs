@@ -28,4 +28,15 @@ public sealed class HtmlTextTests
         Assert.DoesNotContain("I<sub>design</sub>", html, StringComparison.Ordinal);
         Assert.Contains("Table B.52.17", html, StringComparison.Ordinal);
     }
+
+    // The run's description gives its grouping count in the code's unit: under IEC, circuits (Table B.52.17, memory),
+    // shown from two on; under the NEC, current-carrying conductors from four on.
+    [Fact]
+    public void Render_IecGroupedRun_NamesGroupedCircuits()
+    {
+        var yaml = IecProjectTests.Sample.Replace("size: 2.5 mm2 }", "size: 2.5 mm2, current_carrying: 3 }", StringComparison.Ordinal);
+        var html = HtmlReport.Render(ReportFixtures.SolveText(yaml), HtmlReportOptions.Default);
+        Assert.Contains("2.5 mm2 cu, 3 grouped circuits", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(", 3 current-carrying", html, StringComparison.Ordinal);
+    }
 }
