@@ -9,6 +9,31 @@ namespace DistTree.Reports.Html;
 internal static class HtmlText
 {
     /// <summary>
+    /// Escapes text for HTML element content only (never an attribute): the characters that would act
+    /// (<see cref="DisplayText"/>), then <c>&amp;</c>, <c>&lt;</c> and <c>&gt;</c>; quotes stay as written.
+    /// </summary>
+    public static string Content(string? text)
+    {
+        text = DisplayText.Escape(text);
+        return text.AsSpan().IndexOfAny("&<>") < 0 ? text : text.Replace("&", "&amp;", StringComparison.Ordinal).Replace("<", "&lt;", StringComparison.Ordinal).Replace(">", "&gt;", StringComparison.Ordinal);
+    }
+
+    /// <summary>A formula for element content (<see cref="Content"/>), each subscript written <c>_{…}</c> set as <c>&lt;sub&gt;</c>.</summary>
+    public static string Formula(string text)
+    {
+        var escaped = Content(text);
+        var sb = new StringBuilder(escaped.Length + 16);
+        var at = 0;
+        while (escaped.IndexOf("_{", at, StringComparison.Ordinal) is var open and >= 0 && escaped.IndexOf('}', open) is var close and >= 0)
+        {
+            sb.Append(escaped, at, open - at).Append("<sub>").Append(escaped, open + 2, close - open - 2).Append("</sub>");
+            at = close + 1;
+        }
+
+        return sb.Append(escaped, at, escaped.Length - at).ToString();
+    }
+
+    /// <summary>
     /// Escapes text for HTML element content and quoted attribute values: first the characters that would act rather
     /// than show (control characters, separators, direction marks, unpaired surrogates) as visible <c>\u001B</c>
     /// (<see cref="DisplayText"/>), then HTML's own.

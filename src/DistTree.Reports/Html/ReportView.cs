@@ -16,6 +16,8 @@ internal sealed record ReportView
     public required string Caution { get; init; }
     public required string CodeTitle { get; init; }
     public required string AmpacitySource { get; init; }
+    public required string DesignCurrentFormula { get; init; }
+    public required string DesignCurrentRule { get; init; }
     public required string Css { get; init; }
     public required string VerdictClass { get; init; }
     public required string VerdictText { get; init; }

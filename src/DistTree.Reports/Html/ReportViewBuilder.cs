@@ -41,6 +41,8 @@ internal static class ReportViewBuilder
             Caution = Escape(Caution.For(s.Project.Rules.Code)),
             CodeTitle = Escape($"{s.Code.Title} ({s.Code.ClauseSource})"),
             AmpacitySource = Escape(s.Code.AmpacitySource),
+            DesignCurrentFormula = Formula(s.Code.DesignCurrentFormula),
+            DesignCurrentRule = Content(s.Code.DesignCurrentRule),
             Css = css,
             VerdictClass = SummaryViewBuilder.VerdictClass(s),
             VerdictText = SummaryViewBuilder.VerdictText(s),

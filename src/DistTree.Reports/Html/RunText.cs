@@ -7,7 +7,7 @@ namespace DistTree.Reports.Html;
 /// <summary>How the page names a run, its kind and conductors, and a list of finding codes: shared by the paths, the tree, the panels and the plan.</summary>
 internal static class RunText
 {
-    /// <summary>The run's conductors (<c>2× 3/0 Cu</c>; with <c>, 6 current-carrying</c> where a shared raceway derates it), or "regulation" for a transformer's row; escaped.</summary>
+    /// <summary>The run's conductors (<c>2× 3/0 Cu</c>; with <c>, 6 current-carrying</c>, or under IEC <c>, 3 grouped circuits</c>, where a shared raceway derates it), or "regulation" for a transformer's row; escaped.</summary>
     public static string Conductor(RunResult r)
     {
         if (r.Kind == RunResultKind.Transformer || r.Size is null)
@@ -15,9 +15,10 @@ internal static class RunText
             return "regulation";
         }
 
-        // A raceway shared by more than three current-carrying conductors derates the run's ampacity: the count shows.
+        // A raceway shared by more than the code leaves unadjusted (three current-carrying conductors under the NEC, one
+        // circuit under IEC 60364) derates the run's ampacity: the count shows, in the code's unit.
         var sets = r.Sets > 1 ? $"{r.Sets}× " : "";
-        var shared = r.CurrentCarryingConductors is > 3 and var n ? $", {n} current-carrying" : "";
+        var shared = r.CurrentCarryingConductors is { } n && n > r.Code.UngroupedCount ? $", {n} {r.Code.GroupingUnit}" : "";
         return Escape($"{sets}{r.Size} {r.Material}{shared}");
     }
 

@@ -1,4 +1,5 @@
 using DistTree.Codes.Cec;
+using DistTree.Codes.Iec;
 using DistTree.Codes.Nec;
 using DistTree.Conductors;
 using DistTree.Model;
@@ -55,22 +56,49 @@ public abstract class CodeRules
     public abstract string AmpacitySource { get; }
 
     /// <summary>
-    /// The factor a tabulated ampacity (30 °C ambient, not more than three current-carrying conductors) is corrected
-    /// by for a conductor rated <paramref name="ratedC"/> at <paramref name="ambientC"/> among
-    /// <paramref name="currentCarrying"/> current-carrying conductors in its raceway, as the code gives it.
+    /// The factor a tabulated ampacity (30 °C ambient, no grouping) is corrected by for a conductor rated
+    /// <paramref name="ratedC"/> at <paramref name="ambientC"/> in a raceway or group whose count is
+    /// <paramref name="currentCarrying"/>, as the code counts it (<see cref="CurrentCarryingConductors"/>: current-carrying
+    /// conductors under the NEC, grouped circuits under IEC 60364).
     /// </summary>
     public abstract double AmpacityFactor(double ratedC, double ambientC, int currentCarrying);
 
     /// <summary>
-    /// A conductor's own ampacity Iz, amperes: the catalogue's column for its insulation times
-    /// <see cref="AmpacityFactor"/>; null where the table has no figure.
+    /// The largest count of <see cref="CurrentCarryingConductors"/>' kind that the code makes no grouping adjustment for
+    /// (three conductors under the NEC, one circuit under IEC 60364): a run at or below it shares its figures with every
+    /// run of its conductor.
     /// </summary>
-    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarrying = 3) =>
-        Catalog.TableAmpacityA(size, material, insulationC) * AmpacityFactor(ConductorCatalog.RatedTemperatureC(size, insulationC), ambientC, Math.Max(1, currentCarrying));
+    public abstract int UngroupedCount { get; }
+
+    /// <summary>
+    /// The tabulated ampacity, amperes (30 °C ambient, no grouping), of <paramref name="size"/> in
+    /// <paramref name="material"/> with insulation rated <paramref name="insulationC"/>, installed as
+    /// <paramref name="installation"/> says; null where the table has no figure. By default the catalogue's column for
+    /// the insulation, which has one figure whatever the installation.
+    /// </summary>
+    public virtual double? TableAmpacityA(ConductorSize size, Material material, int insulationC, Installation installation) =>
+        Catalog.TableAmpacityA(size, material, insulationC);
+
+    /// <summary>
+    /// A conductor's own ampacity Iz, amperes: <see cref="TableAmpacityA"/> for its <paramref name="installation"/> (null:
+    /// <see cref="Installation.Catalogue"/>) times <see cref="AmpacityFactor"/>; null where the table has no figure.
+    /// </summary>
+    public double? ThermalAmpacityA(ConductorSize size, Material material, int insulationC, double ambientC, int currentCarrying = 3, Installation? installation = null) =>
+        TableAmpacityA(size, material, insulationC, installation ?? Installation.Catalogue)
+        * AmpacityFactor(ConductorCatalog.RatedTemperatureC(size, insulationC), ambientC, Math.Max(1, currentCarrying));
 
     /// <summary>The allowable ampacity, amperes: <see cref="ThermalAmpacityA"/> limited by the terminal rating's column (see <see cref="ConductorCatalog"/>).</summary>
-    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3) =>
-        Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying));
+    public double? AllowableAmpacityA(ConductorSize size, Material material, int insulationC, int terminalC, double ambientC, int currentCarrying = 3, Installation? installation = null) =>
+        Catalog.AllowableAmpacityA(size, material, insulationC, terminalC, ThermalAmpacityA(size, material, insulationC, ambientC, currentCarrying, installation));
+
+    /// <summary>The design-current and device rule as a formula, for the report's method; a subscript is written <c>_{…}</c>.</summary>
+    public abstract string DesignCurrentFormula { get; }
+
+    /// <summary>What the formula's terms are and how the device is judged, in a sentence or two, for the report's method.</summary>
+    public abstract string DesignCurrentRule { get; }
+
+    /// <summary>What <see cref="CurrentCarryingConductors"/> counts, after the count in a run's description: <c>current-carrying</c> (conductors) under the NEC.</summary>
+    public abstract string GroupingUnit { get; }
 
     /// <summary>The clause a finding of <paramref name="check"/> cites, e.g. <c>NEC 215.2(A)(1)</c>.</summary>
     public abstract string Cite(CodeCheck check);
@@ -92,6 +120,7 @@ public abstract class CodeRules
     {
         ElectricalCode.Nec => new NecRules(catalog),
         ElectricalCode.Cec => new CecRules(catalog),
+        ElectricalCode.Iec => new IecRules(catalog),
     };
 
     /// <summary>The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue.</summary>
@@ -99,6 +128,7 @@ public abstract class CodeRules
     {
         ElectricalCode.Nec => NecRules.RuleDefaults,
         ElectricalCode.Cec => CecRules.RuleDefaults,
+        ElectricalCode.Iec => IecRules.RuleDefaults,
     };
 
     /// <summary>
@@ -109,6 +139,7 @@ public abstract class CodeRules
     {
         ElectricalCode.Nec => NecRules.RuleDefaults,
         ElectricalCode.Cec => CecRules.RuleDefaults,
+        ElectricalCode.Iec => IecRules.DefaultsFor(supply),
     };
 
     /// <summary>The short name and edition of <paramref name="code"/>: <c>NEC 2020</c>.</summary>
@@ -116,6 +147,7 @@ public abstract class CodeRules
     {
         ElectricalCode.Nec => NecRules.Described,
         ElectricalCode.Cec => CecRules.Described,
+        ElectricalCode.Iec => IecRules.Described,
     };
 
     /// <summary>
@@ -145,8 +177,8 @@ public abstract class CodeRules
     /// </summary>
     public bool Carries(double designCurrentA, double ampacityA) => !(designCurrentA > ampacityA + Tolerance);
 
-    /// <summary>True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/> (amperes).</summary>
-    public abstract bool DevicePermits(double ocpdA, double ampacityA);
+    /// <summary>True when a <paramref name="device"/> of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/> (amperes).</summary>
+    public abstract bool DevicePermits(double ocpdA, double ampacityA, DeviceType device);
 
     /// <summary>True when a device of <paramref name="ocpdA"/> amperes may protect <paramref name="sets"/> parallel sets of <paramref name="size"/> under the small-conductor rule.</summary>
     public abstract bool SmallConductorPermits(double ocpdA, ConductorSize size, Material material, int sets);
@@ -157,21 +189,29 @@ public abstract class CodeRules
     /// <summary>
     /// True when <paramref name="sets"/> sets of <paramref name="size"/> with an allowable ampacity of
     /// <paramref name="ampacityA"/> (all sets) meet every conductor rule here for a design current of
-    /// <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/> (amperes; null for none), on a
-    /// run serving <paramref name="duty"/>: where the duty's own rules set the largest device
+    /// <paramref name="designCurrentA"/> under a <paramref name="device"/> of <paramref name="ocpdA"/> (amperes; null for
+    /// none), on a run serving <paramref name="duty"/>: where the duty's own rules set the largest device
     /// (<see cref="EquipmentMaxDeviceA"/>), those replace the general device rules.
     /// </summary>
-    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, in CircuitDuty duty) =>
+    public bool Meets(double designCurrentA, double? ocpdA, ConductorSize size, Material material, int sets, double ampacityA, DeviceType device, in CircuitDuty duty) =>
         Carries(designCurrentA, ampacityA)
         && (ocpdA is not { } ocpd || (EquipmentMaxDeviceA(duty) is { } maxA
             ? !(ocpd > maxA + Tolerance)
-            : DevicePermits(ocpd, ampacityA) && SmallConductorPermits(ocpd, size, material, sets)));
+            : DevicePermits(ocpd, ampacityA, device) && SmallConductorPermits(ocpd, size, material, sets)));
 
     /// <summary>
-    /// The current-carrying conductors of one set of <paramref name="run"/>, as the code counts them for the
-    /// ampacity adjustment: its lines, and its neutral where the code counts it.
+    /// What one set of <paramref name="run"/> adds to the count of its raceway or group, as the code's grouping
+    /// adjustment counts (see <see cref="AmpacityFactor"/>): under the NEC its current-carrying conductors (its lines,
+    /// and its neutral where the code counts it); under IEC 60364 one circuit.
     /// </summary>
     public abstract int CurrentCarryingConductors(NetworkRun run);
+
+    /// <summary>
+    /// True where the code sizes the grounding (protective) conductor by the lines' size rather than by the device's rating
+    /// (IEC 60364-5-54 Table 54.2): <see cref="MinimumGroundSize(in GroundingCase)"/> is then asked without a table's size,
+    /// unless the project brings a table, which replaces the rule.
+    /// </summary>
+    public virtual bool SizesGroundingByLines => false;
 
     /// <summary>The rule set's own table of grounding conductors by device rating, or null where it holds none.</summary>
     public virtual GroundingTable? OwnGroundingTable => null;
@@ -209,11 +249,17 @@ public abstract class CodeRules
     /// under <paramref name="rules"/> (ambient and terminal rating) in a raceway of <paramref name="currentCarrying"/>
     /// current-carrying conductors, serving <paramref name="duty"/> (a motor's or air conditioning's device rules), or null
     /// where none is given: no device stated, no table in force (<see cref="GroundingTableInForce"/>), or no size in it for
-    /// the device (above its last row, or a blank cell).
+    /// the device (above its last row, or a blank cell). A rule set that sizes the conductor by the lines
+    /// (<see cref="SizesGroundingByLines"/>) needs neither device nor table unless the project brings a table.
     /// </summary>
     public ConductorSize? MinimumGroundSize(Run conductors, ConductorSize size, int sets, double designCurrentA, Rules rules, int currentCarrying = 3, in CircuitDuty duty = default)
     {
         ArgumentNullException.ThrowIfNull(conductors);
+        if (SizesGroundingByLines && ProjectGroundingTable is null)
+        {
+            return MinimumGroundSize(new GroundingCase(conductors.OcpdA ?? 0, conductors.Material, size, null, default));
+        }
+
         return conductors.OcpdA is not { } ocpd || GroundingTableInForce?.SizeFor(ocpd, conductors.Material) is not { } tableSize
             ? null
             : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, size, SmallestSufficientSize(designCurrentA, ocpd, conductors, size.Series, sets, rules, currentCarrying, duty), tableSize));
@@ -234,12 +280,12 @@ public abstract class CodeRules
         foreach (var size in ConductorSize.All)
         {
             if (size.Series != series || !Catalog.Contains(size)
-                || AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, currentCarrying) is not { } oneSetA)
+                || AllowableAmpacityA(size, conductors.Material, conductors.InsulationC, rules.TerminalC, rules.AmbientC, currentCarrying, conductors.Installation) is not { } oneSetA)
             {
                 continue;
             }
 
-            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets, duty))
+            if (Meets(designCurrentA, ocpdA, size, conductors.Material, sets, oneSetA * sets, conductors.DeviceType, duty))
             {
                 return size;
             }

@@ -60,12 +60,26 @@ public abstract class NorthAmericanRules : CodeRules
         DutyKind.AirConditioning => duty.MaximumDeviceA,
     };
 
+    /// <summary>NEC 310.15(C)(1) and CEC Table 5C adjust above three current-carrying conductors.</summary>
+    public override int UngroupedCount => 3;
+
+    /// <inheritdoc/>
+    public override string GroupingUnit => "current-carrying";
+
+    /// <inheritdoc/>
+    public override string DesignCurrentFormula => "I_{design} = 1.25 · I_{continuous} + I_{other} + 0.25 · I_{largest motor} ≤ I_{z}";
+
+    /// <inheritdoc/>
+    public override string DesignCurrentRule =>
+        "The allowable ampacity of all sets, corrected for ambient and limited by the terminal rating; the overcurrent device may not exceed what the conductors permit. A motor's branch circuit takes 1.25 times its full-load current and its device by the motor rules; air-conditioning equipment given by its nameplate takes its minimum circuit ampacity and maximum overcurrent device.";
+
     /// <summary>
     /// True when a device of <paramref name="ocpdA"/> may protect conductors of <paramref name="ampacityA"/>
     /// (amperes): the rating does not exceed the ampacity, or (at <see cref="NextSizeUpMaxA"/> and less, where the code
-    /// allows it) it is the next standard rating above it.
+    /// allows it) it is the next standard rating above it. Both codes read a fuse and a breaker alike here, so
+    /// <paramref name="device"/> does not change it.
     /// </summary>
-    public override bool DevicePermits(double ocpdA, double ampacityA)
+    public override bool DevicePermits(double ocpdA, double ampacityA, DeviceType device)
     {
         if (ocpdA <= ampacityA + Tolerance)
         {
@@ -105,7 +119,7 @@ public abstract class NorthAmericanRules : CodeRules
                 (findings ??= []).Add(AmpacityFinding(run, figures, ampacity));
             }
 
-            if (maxDeviceA is null && conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity))
+            if (maxDeviceA is null && conductors.OcpdA is { } ocpd && !DevicePermits(ocpd, ampacity, conductors.DeviceType))
             {
                 var nextUp = NextSizeUpMaxA is null ? "" : " (and not the next standard rating above it)";
                 (findings ??= []).Add(Finding.Written(

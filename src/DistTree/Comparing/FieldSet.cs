@@ -107,7 +107,7 @@ internal sealed class FieldSet
             ? a is null && b is null
             : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
               Nullable.Equals(a.NeutralSize, b.NeutralSize) && Nullable.Equals(a.GroundSize, b.GroundSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
-              Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous;
+              a.DeviceType == b.DeviceType && a.InstallationMethod == b.InstallationMethod && Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous;
 
     /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
     public static List<FieldChange> Differences(FieldSet before, FieldSet after)
@@ -205,6 +205,17 @@ internal sealed class FieldSet
         if (run.CurrentCarrying is { } carrying)
         {
             Number($"{prefix}.current_carrying", carrying);
+        }
+
+        // The device's kind and the installation method where not their defaults (a breaker, method B1).
+        if (run.DeviceType != DeviceType.Breaker)
+        {
+            Text($"{prefix}.device_type", Words.DeviceType.Of(run.DeviceType));
+        }
+
+        if (run.InstallationMethod != InstallationMethod.B1)
+        {
+            Text($"{prefix}.installation_method", Words.InstallationMethod.Of(run.InstallationMethod));
         }
 
         this

@@ -34,4 +34,29 @@ public static class Ampacity
         <= 40 => 0.40,
         _ => 0.35,
     };
+
+    // IEC 60364-5-52 Table B.52.17, row 1 (memory): the largest number of circuits of each column, and its factor.
+    private static readonly (int Circuits, double Factor)[] GroupingRows =
+        [(1, 1.00), (2, 0.80), (3, 0.70), (4, 0.65), (5, 0.60), (6, 0.57), (7, 0.54), (8, 0.52), (9, 0.50), (12, 0.45), (16, 0.41), (20, 0.38)];
+
+    /// <summary>
+    /// Reduction for grouping, IEC 60364-5-52 Table B.52.17 row 1 (bunched in air, on a surface, embedded or enclosed;
+    /// memory, verify before relying) by the number of circuits: 1: 1.00, 2: 0.80, 3: 0.70, 4: 0.65, 5: 0.60, 6: 0.57,
+    /// 7: 0.54, 8: 0.52, 9: 0.50, 12: 0.45, 16: 0.41, 20: 0.38. A count between two columns takes the next column up
+    /// (10 and 11 circuits: 0.45), the safe side; above 20, the table's last factor, 0.38 (the table goes no further).
+    /// </summary>
+    /// <param name="circuits">How many circuits (each parallel set one) are grouped.</param>
+    public static double GroupingFactor(int circuits)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(circuits, 1);
+        foreach (var (most, factor) in GroupingRows)
+        {
+            if (circuits <= most)
+            {
+                return factor;
+            }
+        }
+
+        return GroupingRows[^1].Factor;
+    }
 }

@@ -44,6 +44,9 @@ public enum ElectricalCode
 
     /// <summary>The Canadian Electrical Code, Part I (CSA C22.1).</summary>
     Cec,
+
+    /// <summary>IEC 60364, low-voltage electrical installations (parts 4-43, 5-52 and 5-54).</summary>
+    Iec,
 }
 
 /// <summary>Who supplies the installation, where a code's limits depend on it (IEC 60364-5-52 Annex G).</summary>

@@ -53,6 +53,25 @@ public sealed record Run
     /// <summary>Overcurrent device rating in amperes protecting the run, if stated.</summary>
     public double? OcpdA { get; init; }
 
+    /// <summary>The kind of that device (<c>device_type</c>): a circuit-breaker unless stated.</summary>
+    public DeviceType DeviceType { get; init; } = DeviceType.Breaker;
+
+    /// <summary>
+    /// The reference method of installation (<c>installation_method</c>), which column of IEC 60364-5-52's tables gives
+    /// the ampacity under <c>rules: code: iec</c>: B1 unless stated. The NEC's table has one column and ignores it.
+    /// </summary>
+    public InstallationMethod InstallationMethod { get; init; } = InstallationMethod.B1;
+
+    /// <summary>
+    /// The conductors of the run's circuit that carry the load current in normal service, as IEC 60364-5-52's tables
+    /// count them: 2 for a single-phase or two-wire circuit, 3 for a three-phase one. Set by the loader from the circuit's
+    /// poles or the feeder's system; 3 where not set.
+    /// </summary>
+    public int LoadedConductors { get; init; } = 3;
+
+    /// <summary>How the run is installed, as the ampacity tables read it.</summary>
+    public Installation Installation => new(InstallationMethod, LoadedConductors);
+
     /// <summary>A limit for this run alone in percent, overriding the rules' feeder or branch limit.</summary>
     public double? LimitPercent { get; init; }
 

@@ -32,7 +32,7 @@ internal static class ProjectKeys
         ["id", "kind", "from", "feeder", "demand_factor", "circuits", .. TransformerOnly];
 
     public static readonly string[] Run =
-        ["length", "size", "neutral_size", "ground_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "limit_percent", "fixed", "device_rated_continuous"];
+        ["length", "size", "neutral_size", "ground_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "device_type", "installation_method", "limit_percent", "fixed", "device_rated_continuous"];
 
     public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "category", "load", "points", "continuous", "run"];
 

@@ -148,7 +148,7 @@ public static class ProjectLoader
                     Phases = c.StatedPhases ?? numbered,
                     PhaseSource = c.StatedPhases is not null ? PhaseSource.Stated : numbered is not null ? PhaseSource.Numbered : PhaseSource.Balanced,
                     Continuous = c.Continuous,
-                    Run = c.Run!,
+                    Run = c.Run! with { LoadedConductors = supply.Phases == 3 ? 3 : 2 },
                     Location = c.Location,
                 };
             }
@@ -159,7 +159,7 @@ public static class ProjectLoader
                 Kind = d.Kind!.Value,
                 From = d.From!,
                 System = system,
-                Feeder = d.Feeder,
+                Feeder = d.Feeder is { } feeder ? feeder with { LoadedConductors = PhaseRules.Lines(system) == 3 ? 3 : 2 } : null,
                 DemandFactor = d.DemandFactor,
                 Transformer = d.Transformer,
                 Circuits = circuits,

@@ -192,6 +192,14 @@ internal static partial class ProjectMessages
     public static string RacewayTwice(Subject run) =>
         $"{run} names a shared raceway ('raceway_id') and states its current-carrying conductors ('current_carrying'): give one (a named raceway counts the conductors of every run in it)";
 
+    /// <summary>An AWG or kcmil size under <c>rules: code: iec</c>, whose current-carrying capacity tables are by mm².</summary>
+    public static string SizeNotMetricUnderIec(Subject what, Conductors.ConductorSize size) =>
+        $"{what} is {size}, but IEC 60364-5-52's current-carrying capacity tables are by mm2 ('rules: code: iec'): give a metric size (e.g. 2.5 mm2)";
+
+    /// <summary>An <c>installation_method</c> under a code whose ampacity table has no reference methods.</summary>
+    public static string InstallationMethodNotUnderCode(Subject run, string code) =>
+        $"'installation_method' of {run} chooses a column of IEC 60364-5-52's tables, which 'rules: code: {code}' does not read: remove it, or use 'rules: code: iec'";
+
     /// <summary>A motor load (<c>hp</c> or <c>fla</c>) whose circuit states a category other than motor or hvac.</summary>
     public static string MotorCategory(Subject circuit, LoadCategory stated) =>
         $"'category' of {circuit} is {Words.LoadCategory.Of(stated)}, but its load is a motor (given in {MotorQuantityList}): a motor's category is {Words.LoadCategory.Of(LoadCategory.Motor)} or {Words.LoadCategory.Of(LoadCategory.Hvac)}";

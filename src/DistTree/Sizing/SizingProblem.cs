@@ -206,7 +206,7 @@ internal sealed class SizingProblem
             return size == conductors.Size && sets == conductors.Sets;
         }
 
-        return protection.Meets(row.DesignCurrentA, row.OcpdA, size, conductors.Material, sets, ampacity, CircuitDuty.Of(run));
+        return protection.Meets(row.DesignCurrentA, row.OcpdA, size, conductors.Material, sets, ampacity, conductors.DeviceType, CircuitDuty.Of(run));
     }
 
     // Material: area × length × current-carrying conductors × sets (mm²·m); with a price table, price × length × conductors × sets.

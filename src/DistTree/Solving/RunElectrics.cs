@@ -62,7 +62,7 @@ public static class RunElectrics
     internal static ConductorBasis BasisOf(CodeRules code, Rules rules, Run run, ConductorSize size, double frequencyHz, int currentCarrying = 3)
     {
         var catalog = code.Catalog;
-        var thermal = code.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC, currentCarrying);
+        var thermal = code.ThermalAmpacityA(size, run.Material, run.InsulationC, rules.AmbientC, currentCarrying, run.Installation);
         return new ConductorBasis(
             thermal,
             ConductorCatalog.RatedTemperatureC(size, run.InsulationC),
@@ -71,17 +71,19 @@ public static class RunElectrics
     }
 
     /// <summary>
-    /// The conductor bases of one solve, one per size, material, insulation rating (60, 75, 90 °C) and raceway,
-    /// each worked out when first asked for: the rules and the frequency are the solve's. Threads may ask at once;
+    /// The conductor bases of one solve, one per size, material, insulation rating (60, 75, 90 °C), raceway, reference
+    /// method and loaded conductors (2 or 3), each worked out when first asked for: the rules and the frequency are the solve's. Threads may ask at once;
     /// two that work out the same basis get equal ones, each kept whole in a box of its own.
     /// </summary>
     internal sealed class Bases(CodeRules code, Rules rules, double frequencyHz)
     {
-        private readonly StrongBox<ConductorBasis>?[] _bases = new StrongBox<ConductorBasis>?[ConductorSize.All.Count * 2 * 3 * 3];
+        private const int Methods = 5;
+
+        private readonly StrongBox<ConductorBasis>?[] _bases = new StrongBox<ConductorBasis>?[ConductorSize.All.Count * 2 * 3 * 3 * Methods * 2];
 
         public ConductorBasis Of(Run run, int currentCarrying)
         {
-            if (currentCarrying > 3)
+            if (currentCarrying > code.UngroupedCount)
             {
                 // Adjusted for a shared raceway: few runs, each worked out on its own.
                 return BasisOf(code, rules, run, run.Size, frequencyHz, currentCarrying);
@@ -94,13 +96,15 @@ public static class RunElectrics
                 90 => 2,
                 _ => -1,
             };
-            if (rating < 0)
+            var method = (int)run.InstallationMethod;
+            var loaded = run.LoadedConductors - 2;
+            if (rating < 0 || method is < 0 or >= Methods || loaded is not (0 or 1))
             {
-                return BasisOf(code, rules, run, run.Size, frequencyHz);
+                return BasisOf(code, rules, run, run.Size, frequencyHz, currentCarrying);
             }
 
-            var key = ((((run.Size.Index * 2) + (int)run.Material) * 3) + rating) * 3 + (int)run.Raceway;
-            return (_bases[key] ??= new StrongBox<ConductorBasis>(BasisOf(code, rules, run, run.Size, frequencyHz))).Value;
+            var key = ((((((((run.Size.Index * 2) + (int)run.Material) * 3) + rating) * 3) + (int)run.Raceway) * Methods) + method) * 2 + loaded;
+            return (_bases[key] ??= new StrongBox<ConductorBasis>(BasisOf(code, rules, run, run.Size, frequencyHz, currentCarrying))).Value;
         }
     }
 }

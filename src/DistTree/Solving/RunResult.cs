@@ -89,6 +89,9 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>The neutral's design current in amperes, as the code in force counts it, or null where the run has no neutral.</summary>
     public double? NeutralDesignCurrentA => Run is null ? null : Row.NeutralDesignCurrentA;
 
+    /// <summary>The rule set that judged the run (its grouping count's unit and threshold, for the outputs).</summary>
+    public Codes.CodeRules Code => _rows.Code;
+
     /// <summary>
     /// The current-carrying conductors in the run's raceway that its ampacity is adjusted for (above 3): as stated,
     /// the sum of the runs sharing its named raceway, or its own set's as the code counts them; null for a transformer.

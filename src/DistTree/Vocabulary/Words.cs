@@ -27,7 +27,7 @@ public static class Words
         "transformer_drop", [("count", TransformerDropMode.Count), ("new_origin", TransformerDropMode.NewOrigin)]);
 
     /// <summary><c>rules: code</c>: the code whose rule set judges the project.</summary>
-    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec), ("cec", ElectricalCode.Cec)]);
+    public static WordTable<ElectricalCode> Code { get; } = new("code", [("nec", ElectricalCode.Nec), ("cec", ElectricalCode.Cec), ("iec", ElectricalCode.Iec)]);
 
     /// <summary><c>rules: supply</c>.</summary>
     public static WordTable<SupplyKind> Supply { get; } = new("supply", [("public", SupplyKind.Public), ("private", SupplyKind.Private)]);
@@ -42,6 +42,17 @@ public static class Words
     /// <summary>A run's <c>raceway</c>.</summary>
     public static WordTable<Raceway> Raceway { get; } = new(
         "raceway", [("pvc", Conductors.Raceway.Pvc), ("aluminum", Conductors.Raceway.Aluminum), ("steel", Conductors.Raceway.Steel)]);
+
+    /// <summary>A run's <c>installation_method</c>: a reference method of IEC 60364-5-52, its letter in lower case (<c>b1</c>).</summary>
+    public static WordTable<InstallationMethod> InstallationMethod { get; } = new(
+        "installation_method",
+        [
+            ("a1", Model.InstallationMethod.A1), ("b1", Model.InstallationMethod.B1), ("b2", Model.InstallationMethod.B2),
+            ("c", Model.InstallationMethod.C), ("e", Model.InstallationMethod.E),
+        ]);
+
+    /// <summary>A run's <c>device_type</c>.</summary>
+    public static WordTable<DeviceType> DeviceType { get; } = new("device_type", [("breaker", Model.DeviceType.Breaker), ("fuse", Model.DeviceType.Fuse)]);
 
     /// <summary>An equipment's <c>kind</c>.</summary>
     public static WordTable<EquipmentKind> EquipmentKind { get; } = new(

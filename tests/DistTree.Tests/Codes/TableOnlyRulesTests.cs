@@ -64,7 +64,15 @@ public sealed class TableOnlyRulesTests
 
         public override double? EquipmentMaxDeviceA(in CircuitDuty duty) => null;
 
-        public override bool DevicePermits(double ocpdA, double ampacityA) => ocpdA <= ampacityA;
+        public override bool DevicePermits(double ocpdA, double ampacityA, DeviceType device) => ocpdA <= ampacityA;
+
+        public override int UngroupedCount => 3;
+
+        public override string GroupingUnit => "current-carrying";
+
+        public override string DesignCurrentFormula => "I_{design} = I";
+
+        public override string DesignCurrentRule => "none";
 
         public override bool SmallConductorPermits(double ocpdA, ConductorSize size, Material material, int sets) => true;
 

@@ -212,6 +212,16 @@ public sealed class RevisionComparerTests
         Assert.Equal([new FieldChange("run.neutral_size", null, "10 AWG")], change.Fields);
     }
 
+    // A fuse stated where a breaker was the default: the run's device_type is listed, from none.
+    [Fact]
+    public void Compare_DeviceTypeStated_ListsTheRunFieldFromNone()
+    {
+        var after = ComparisonProjects.Shared().Replace("length: 18, size: 12 AWG", "length: 18, size: 12 AWG, device_type: fuse", StringComparison.Ordinal);
+
+        var change = Assert.Single(Compare(ComparisonProjects.Shared(), after).Circuits);
+        Assert.Equal([new FieldChange("run.device_type", null, "fuse")], change.Fields);
+    }
+
     // A stated category where there was none: the field moves from its default (other, for a load not a motor).
     [Fact]
     public void Compare_CategoryStated_ListsTheCircuitField()

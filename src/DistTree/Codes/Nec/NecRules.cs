@@ -31,7 +31,8 @@ namespace DistTree.Codes.Nec;
 /// 430.248 and 430.250, see <see cref="MotorTables"/>), the stated amperes for <c>fla</c>. A motor branch circuit's
 /// conductors carry 125 % of it (NEC 430.22), whatever its <c>continuous</c> flag says; a feeder's line carries 125 %
 /// of the largest motor's full-load current on that line plus the rest (NEC 430.24). A motor branch circuit's device
-/// (an inverse-time breaker assumed) may be at most 250 % of the full-load current, or the next standard rating above
+/// (an inverse-time breaker assumed, whatever <c>device_type</c> says: Table 430.52's fuse columns are not modelled)
+/// may be at most 250 % of the full-load current, or the next standard rating above
 /// that (NEC 430.52(C)(1) and Table 430.52, Exception No. 1); 240.4(B) and (D) do not apply (NEC 240.4(G)), nor does
 /// 210.20(A).</item>
 /// <item>Conductors counted for the adjustment (NEC 310.15(E)): a neutral that carries only the unbalanced current

@@ -69,10 +69,11 @@ internal sealed class RunReader(SectionContext context)
             ocpdLocation = m.KeyLocation("ocpd");
         }
 
+        var (deviceType, method, installationOk) = Installation(m, subject);
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
         var ratedContinuous = m.Optional("device_rated_continuous") is { } ratedNode && (Values.Bool(ratedNode, subject.Of("'device_rated_continuous' of ")) ?? false);
-        if (!sharingOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
+        if (!sharingOk || !installationOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
             return null;
@@ -91,6 +92,8 @@ internal sealed class RunReader(SectionContext context)
             RacewayId = racewayId,
             CurrentCarrying = currentCarrying,
             OcpdA = ocpd ?? circuitOcpdA,
+            DeviceType = deviceType,
+            InstallationMethod = method,
             LimitPercent = limit,
             Fixed = isFixed,
             DeviceRatedContinuous = ratedContinuous,
@@ -114,6 +117,38 @@ internal sealed class RunReader(SectionContext context)
         }
 
         return (id, count, (idNode is null || id is not null) && (countNode is null || count is not null));
+    }
+
+    // The device's kind ('device_type', any code) and the reference method of installation ('installation_method', read
+    // by IEC 60364-5-52's tables only: refused under another code, whose table would silently ignore it). Ok is false
+    // where a value was refused.
+    private (DeviceType Device, InstallationMethod Method, bool Ok) Installation(in MappingReader m, Subject subject)
+    {
+        var ok = true;
+        var device = DeviceType.Breaker;
+        if (m.Optional("device_type") is { } deviceNode)
+        {
+            var read = Values.Choice(deviceNode, subject.Of("'device_type' of "), "device_type", Words.DeviceType.Pairs);
+            ok = read is not null;
+            device = read ?? device;
+        }
+
+        var method = InstallationMethod.B1;
+        if (m.Optional("installation_method") is { } methodNode)
+        {
+            var read = Values.Choice(methodNode, subject.Of("'installation_method' of "), "installation_method", Words.InstallationMethod.Pairs);
+            var code = context.Draft.Rules.Code;
+            if (read is not null && code != ElectricalCode.Iec)
+            {
+                Bag.Error(m.KeyLocation("installation_method"), ProjectMessages.InstallationMethodNotUnderCode(subject, Words.Code.Of(code)));
+                read = null;
+            }
+
+            ok &= read is not null;
+            method = read ?? method;
+        }
+
+        return (device, method, ok);
     }
 
     // A second size of the run ('neutral_size', 'ground_size'): read as the size is, and in the same series (AWG and
@@ -149,6 +184,12 @@ internal sealed class RunReader(SectionContext context)
         {
             parsed.Ok = ConductorSize.TryParse(text, out parsed.Size, out parsed.Error);
             _sizes.Add(text, parsed);
+        }
+
+        if (parsed.Ok && parsed.Size.Kind != SizeKind.Metric && context.Draft.Rules.Code == ElectricalCode.Iec)
+        {
+            Bag.Error(node.Location, ProjectMessages.SizeNotMetricUnderIec(what, parsed.Size));
+            return null;
         }
 
         if (parsed.Ok)

@@ -28,6 +28,7 @@ public static class StarterProject
     {
         ElectricalCode.Nec => DefaultUnits(system),
         ElectricalCode.Cec => UnitSystem.Metric,
+        ElectricalCode.Iec => UnitSystem.Metric,
     };
 
     /// <summary>The service system a starter under <paramref name="code"/> has unless told otherwise: the code's usual building's.</summary>
@@ -35,6 +36,7 @@ public static class StarterProject
     {
         ElectricalCode.Nec => "208Y/120",
         ElectricalCode.Cec => "600Y/347",
+        ElectricalCode.Iec => "400Y/230",
     })!;
 
     /// <summary>The starter project's text (ending in a newline) for the given units and service system, under the NEC.</summary>
@@ -162,6 +164,7 @@ public static class StarterProject
         {
             ElectricalCode.Nec => IsIec(system) ? Metric : Imperial,
             ElectricalCode.Cec => system.Name == "600Y/347" ? Canadian : IsIec(system) ? Metric : Imperial,
+            ElectricalCode.Iec => Metric,
         };
 
         // The NEC's usual building; invented placeholder figures, sized within every limit.

@@ -209,7 +209,7 @@ internal sealed class RunDrops
 
         var (designA, designLine, motorA, neutralA, fromEquipment) = DesignCurrents(run);
         double? neutralAmpacityA = neutralA is null ? null
-            : conductors.NeutralSize is { } neutralSize ? _code.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, carrying) * conductors.Sets
+            : conductors.NeutralSize is { } neutralSize ? _code.AllowableAmpacityA(neutralSize, conductors.Material, conductors.InsulationC, _rules.TerminalC, _rules.AmbientC, carrying, conductors.Installation) * conductors.Sets
             : figures.AmpacityA;
         row = new RunRow
         {

@@ -86,8 +86,8 @@ public sealed class CecRulesTests
     [InlineData(1000, 1000, true)]
     public void DevicePermits_Rule14104_NoNextSizeUp(double ocpdA, double ampacityA, bool expected)
     {
-        Assert.Equal(expected, Rules.DevicePermits(ocpdA, ampacityA));
-        Assert.True(CodeRules.For(ElectricalCode.Nec, ConductorCatalog.Standard).DevicePermits(ocpdA, ampacityA));
+        Assert.Equal(expected, Rules.DevicePermits(ocpdA, ampacityA, DeviceType.Breaker));
+        Assert.True(CodeRules.For(ElectricalCode.Nec, ConductorCatalog.Standard).DevicePermits(ocpdA, ampacityA, DeviceType.Breaker));
     }
 
     // Rule 14-104(2) (recalled; the catalogue's ocpd columns): 14 AWG copper 15 A, 12 AWG 20 A, 10 AWG 30 A; 12 AWG
@@ -173,11 +173,11 @@ public sealed class CecRulesTests
     [Fact]
     public void AddFindings_DeviceAboveAmpacity_CitesRule14104()
     {
-        Assert.False(Rules.Meets(60, 70, ConductorSize.Parse("6 AWG"), Material.Copper, 1, 65, default));
+        Assert.False(Rules.Meets(60, 70, ConductorSize.Parse("6 AWG"), Material.Copper, 1, 65, DeviceType.Breaker, default));
         var found = Assert.Single(Rules.AddFindings(null, RunOf("6 AWG", 70), new CurrentFigures(60, 'A', 65, null, null))!);
         Assert.Equal((FindingKind.OcpdAboveAmpacity, "CEC Rule 14-104(1)"), (found.Kind, found.Reference));
         Assert.Equal("branch circuit P/1: the 70 A overcurrent device is above the 1×6 AWG ampacity of 65 A", found.Message);
-        Assert.True(Rules.Meets(60, 60, ConductorSize.Parse("6 AWG"), Material.Copper, 1, 65, default));
+        Assert.True(Rules.Meets(60, 60, ConductorSize.Parse("6 AWG"), Material.Copper, 1, 65, DeviceType.Breaker, default));
         Assert.Null(Rules.AddFindings(null, RunOf("6 AWG", 60), new CurrentFigures(60, 'A', 65, null, null)));
     }
 

@@ -2,6 +2,7 @@ using System.Numerics;
 using DistTree.Codes;
 using DistTree.Codes.Nec;
 using DistTree.Conductors;
+using DistTree.Model;
 using DistTree.Network;
 using DistTree.ProjectFiles;
 using DistTree.Solving;
@@ -45,10 +46,10 @@ public sealed class NecRulesTests
     [InlineData(1000, 1000, true)]
     [InlineData(6000, 6500, true)]
     public void DevicePermits_NextSizeUpRule(double ocpdA, double ampacityA, bool expected) =>
-        Assert.Equal(expected, Rules.DevicePermits(ocpdA, ampacityA));
+        Assert.Equal(expected, Rules.DevicePermits(ocpdA, ampacityA, DeviceType.Breaker));
 
     [Fact]
-    public void DevicePermits_WithinTolerance_IsAtTheAmpacity() => Assert.True(Rules.DevicePermits(30 + 1e-10, 30));
+    public void DevicePermits_WithinTolerance_IsAtTheAmpacity() => Assert.True(Rules.DevicePermits(30 + 1e-10, 30, DeviceType.Breaker));
 
     // NEC 240.4(D) (read; the catalogue's ocpd columns): 14 AWG copper 15 A, 12 AWG copper 20 A, 10 AWG copper 30 A,
     // 12 AWG aluminium 15 A, 10 AWG aluminium 25 A; parallel sets share the device, so the limit scales with them;
@@ -198,7 +199,7 @@ public sealed class NecRulesTests
     public void Meets_AgreesWithAddFindings(string size, int sets, double? ocpdA, double designA, double ampacityA, bool meets, string[] codes)
     {
         var run = RunOf(size, sets, ocpdA);
-        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA, default));
+        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, sets, ampacityA, DeviceType.Breaker, default));
         var findings = Rules.AddFindings(null, run, Figures(designA, ampacityA));
         Assert.Equal(codes, findings?.Select(f => f.Code) ?? []);
         Assert.Equal(meets, findings is null);
@@ -221,7 +222,7 @@ public sealed class NecRulesTests
     {
         var duty = mcaA > 0 ? new CircuitDuty(DutyKind.AirConditioning, fullLoadA, mcaA, mocpA) : new CircuitDuty(DutyKind.Motor, fullLoadA, 0, 0);
         var designA = Rules.EquipmentDesignCurrentA(duty)!.Value;
-        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, 1, ampacityA, duty));
+        Assert.Equal(meets, Rules.Meets(designA, ocpdA, ConductorSize.Parse(size), Material.Copper, 1, ampacityA, DeviceType.Breaker, duty));
         var findings = Rules.AddFindings(null, RunOf(size, 1, ocpdA), new CurrentFigures(designA, 'A', ampacityA, null, null, fullLoadA, duty));
         Assert.Equal(references, findings?.Select(f => f.Reference) ?? []);
         Assert.Equal(meets, findings is null);

@@ -1,0 +1,45 @@
+namespace DistTree.Model;
+
+/// <summary>
+/// A reference method of installation of IEC 60364-5-52 (Table B.52.1, memory), choosing the column of its
+/// current-carrying capacity tables (<c>installation_method</c>; read under <c>rules: code: iec</c> only).
+/// </summary>
+public enum InstallationMethod
+{
+    /// <summary>A1: insulated conductors in conduit in a thermally insulated wall.</summary>
+    A1,
+
+    /// <summary>B1: insulated conductors in conduit on a wooden or masonry wall (the catalogue's metric columns).</summary>
+    B1,
+
+    /// <summary>B2: a multi-core cable in conduit on a wooden or masonry wall.</summary>
+    B2,
+
+    /// <summary>C: a single- or multi-core cable on a wooden or masonry wall.</summary>
+    C,
+
+    /// <summary>E: a multi-core cable in free air (on a perforated tray or ladder).</summary>
+    E,
+}
+
+/// <summary>The kind of overcurrent device ahead of a run (<c>device_type</c>), as the rules that depend on it tell them apart.</summary>
+public enum DeviceType
+{
+    /// <summary>A circuit-breaker (under the NEC an inverse-time breaker; under IEC one to IEC 60898-1 or 60947-2).</summary>
+    Breaker,
+
+    /// <summary>A fuse (under IEC a gG fuse to IEC 60269-2).</summary>
+    Fuse,
+}
+
+/// <summary>
+/// How a run is installed, as a code's ampacity table reads it: the reference method and the loaded conductors of its
+/// circuit (2 for a single-phase or two-wire circuit, 3 for a three-phase one).
+/// </summary>
+/// <param name="Method">The reference method of installation.</param>
+/// <param name="LoadedConductors">The conductors that carry the load current in normal service, 2 or 3.</param>
+public readonly record struct Installation(InstallationMethod Method, int LoadedConductors)
+{
+    /// <summary>What the conductor catalogue's metric columns hold: method B1, three loaded conductors.</summary>
+    public static Installation Catalogue { get; } = new(InstallationMethod.B1, 3);
+}
