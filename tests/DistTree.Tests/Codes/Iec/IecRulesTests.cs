@@ -136,12 +136,29 @@ public sealed class IecRulesTests
         Assert.Equal("IEC 60364-5-52 525, Annex G", Rules.Cite(CodeCheck.TotalDrop));
     }
 
-    // The seam: the code's word chooses this rule set, its placeholder limits (5 %) and its name.
+    // IEC 60364-5-52 Annex G, Table G.52.1 (memory): from the origin to the point of use, lighting 3 % and other uses
+    // 5 % on a public low-voltage supply, 6 % and 8 % on a private one; + 0.005 % per metre beyond 100 m, at most
+    // + 0.5 %. Annex G sets no per-run limit: those default to the largest total an end point can have.
+    [Theory]
+    [InlineData(SupplyKind.Public, 3, 5)]
+    [InlineData(SupplyKind.Private, 6, 8)]
+    public void DefaultsOf_AnnexG_LimitsByCategoryAndSupply(SupplyKind supply, double lighting, double other)
+    {
+        var rules = CodeRules.DefaultsOf(ElectricalCode.Iec, supply);
+        Assert.Equal(supply, rules.Supply);
+        Assert.Equal(lighting, rules.TotalLimitFor(LoadCategory.Lighting, 80));
+        Assert.Equal(other, rules.TotalLimitFor(LoadCategory.Receptacle, 80));
+        Assert.Equal(other + 0.25, rules.TotalLimitFor(LoadCategory.Motor, 150), 12);
+        Assert.Equal(lighting + 0.5, rules.TotalLimitFor(LoadCategory.Lighting, 400), 12);
+        Assert.Equal((other + 0.5, other + 0.5), (rules.FeederLimitPercent, rules.BranchLimitPercent));
+    }
+
+    // The seam: the code's word chooses this rule set, its limits (a public supply's unless told) and its name.
     [Fact]
     public void For_Iec_IsTheIecRuleSet()
     {
         Assert.IsType<IecRules>(CodeRules.For(ElectricalCode.Iec, ConductorCatalog.Standard));
-        Assert.Equal((5.0, 5.0, 5.0), (CodeRules.DefaultsOf(ElectricalCode.Iec).FeederLimitPercent, CodeRules.DefaultsOf(ElectricalCode.Iec).BranchLimitPercent, CodeRules.DefaultsOf(ElectricalCode.Iec).TotalLimitPercent));
+        Assert.Equal(CodeRules.DefaultsOf(ElectricalCode.Iec, SupplyKind.Public), CodeRules.DefaultsOf(ElectricalCode.Iec));
         Assert.Equal("IEC 60364", CodeRules.Describe(ElectricalCode.Iec));
         Assert.Equal("protective conductor", Rules.GroundingConductorTerm);
         Assert.Equal("equipment grounding conductor", new NecRules(ConductorCatalog.Standard).GroundingConductorTerm);
