@@ -57,7 +57,7 @@ public static class ComparisonConsole
             o.WriteLine("Project changes:");
             foreach (var f in c.ProjectChanges)
             {
-                o.WriteLine($"  {f.Field}: {f.Before ?? "-"} -> {f.After ?? "-"}");
+                o.WriteLine($"  {f.Label}: {f.BeforeText ?? "-"} -> {f.AfterText ?? "-"}");
             }
         }
     }
@@ -113,7 +113,7 @@ public static class ComparisonConsole
         {
             var mark = e.Change switch { ChangeKind.Added => "+", ChangeKind.Removed => "-", _ => "~" };
             var detail = e.Change == ChangeKind.Changed
-                ? string.Join("; ", e.Fields.Select(f => $"{f.Field} {f.Before ?? "-"} -> {f.After ?? "-"}"))
+                ? string.Join("; ", e.Fields.Select(f => $"{f.Label} {f.BeforeText ?? "-"} -> {f.AfterText ?? "-"}"))
                 : ComparisonText.Change(e.Change);
             o.WriteLine($"  {mark} {e.Id,-14} {detail}");
         }

@@ -42,11 +42,11 @@ public static class ComparisonMarkdown
 
     private static void WriteElements(StringBuilder o, Comparison c, int rows)
     {
-        var changes = c.ProjectChanges.Select(f => ("project", "changed", $"{f.Field}: {f.Before ?? "-"} → {f.After ?? "-"}"))
+        var changes = c.ProjectChanges.Select(f => ("project", "changed", $"{f.Label}: {f.BeforeText ?? "-"} → {f.AfterText ?? "-"}"))
             .Concat(c.Equipment.Concat(c.Circuits).Select(e => (e.Id, ComparisonText.Change(e.Change), e.Change == ChangeKind.Changed
-                ? string.Join("; ", e.Fields.Select(f => $"{f.Field}: {f.Before ?? "-"} → {f.After ?? "-"}"))
+                ? string.Join("; ", e.Fields.Select(f => $"{f.Label}: {f.BeforeText ?? "-"} → {f.AfterText ?? "-"}"))
                 : string.Join("; ", e.Fields.Where(f => f.Field is "kind" or "from" or "name" or "load.value" or "run.size" or "feeder.size")
-                    .Select(f => $"{f.Field}: {f.After ?? f.Before}")))))
+                    .Select(f => $"{f.Label}: {f.AfterText ?? f.BeforeText}")))))
             .ToArray();
         if (changes.Length == 0)
         {

@@ -111,7 +111,7 @@ internal static class ComparisonViewBuilder
     private static string Shown(double points) => ComparisonText.Signed(points, 2);
 
     private static FieldRow Field(FieldChange f) =>
-        new(Escape(f.Field), f.Before is null ? "–" : Escape(f.Before), f.After is null ? "–" : Escape(f.After), f.Before is not null && f.After is not null);
+        new(Escape(f.Label), f.BeforeText is null ? "–" : Escape(f.BeforeText), f.AfterText is null ? "–" : Escape(f.AfterText), f.BeforeText is not null && f.AfterText is not null);
 
     private static string? More(int total, int shown, string what) =>
         total > shown ? $"{Count(total - shown)} more {what}; the comparison document (--json) lists all." : null;

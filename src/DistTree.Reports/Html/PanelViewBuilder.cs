@@ -1,5 +1,6 @@
 using DistTree.Model;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 using static DistTree.Reports.Html.HtmlText;
 
 namespace DistTree.Reports.Html;
@@ -109,7 +110,7 @@ internal static class PanelViewBuilder
             run?.MaxLengthTotalM < run?.LengthM,
             circuit is { Points.Count: > 0 } c ? $"{Count(c.Points.Count)} points" : "",
             circuit is { Points.Count: > 0 } d
-                ? $"{Count(d.Points.Count)} loads along the run, the farthest at {Metres(d.Points[^1].AtM)} m; the drop is computed span by span"
+                ? $"{Count(d.Points.Count)} loads along the run, the farthest at {LengthText.Of(d.Points[^1].AtM, s.Project.Units)}; the drop is computed span by span"
                 : "",
             Bands.Class(Bands.Of(e)),
             RunText.Codes(findings));

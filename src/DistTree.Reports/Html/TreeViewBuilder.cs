@@ -1,6 +1,7 @@
 using DistTree.Diagnostics;
 using DistTree.Network;
 using DistTree.Solving;
+using DistTree.Vocabulary;
 using static DistTree.Reports.Html.HtmlText;
 
 namespace DistTree.Reports.Html;
@@ -105,7 +106,7 @@ internal static class TreeViewBuilder
         }
 
         return s.IncomingRun(node.Index) is { } r
-            ? $"{RunText.Conductor(r)} · {Metres(r.LengthM)} m · {Percent(r.DropPercent)} %"
+            ? $"{RunText.Conductor(r)} · {LengthText.Of(r.LengthM, s.Project.Units)} · {Percent(r.DropPercent)} %"
             : "at its source";
     }
 

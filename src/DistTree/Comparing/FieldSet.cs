@@ -16,7 +16,8 @@ internal sealed class FieldSet
     {
         var r = p.Rules;
         var set = new FieldSet()
-            .Text("name", p.Name)
+            .Text("project.name", p.Name)
+            .Text("project.description", p.Description.Length == 0 ? "none" : p.Description)
             .Text("rules.code", Words.Code.Of(r.Code))
             .Number("rules.feeder_limit_percent", r.FeederLimitPercent)
             .Number("rules.branch_limit_percent", r.BranchLimitPercent)
@@ -78,7 +79,7 @@ internal sealed class FieldSet
             .Number("poles", c.Poles)
             .Number("voltage_v", c.Supply.VoltageV)
             .Text("load.kind", c.Load.Kind.ToString().ToLowerInvariant())
-            .Number("load.value", c.Load.Value)
+            .Number("load.value", c.Load.Value, Load.UnitOf(c.Load.Kind))
             .Number("load.pf", c.Load.PowerFactor)
             .Text("category", Words.LoadCategory.Of(c.Category))
             .Number("load.mca_a", c.Load.MinimumCircuitA)
@@ -109,8 +110,11 @@ internal sealed class FieldSet
               Nullable.Equals(a.NeutralSize, b.NeutralSize) && Nullable.Equals(a.GroundSize, b.GroundSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
               a.DeviceType == b.DeviceType && a.InstallationMethod == b.InstallationMethod && Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous;
 
-    /// <summary>The fields that differ between two sets built by the same factory (missing fields count as null).</summary>
-    public static List<FieldChange> Differences(FieldSet before, FieldSet after)
+    /// <summary>
+    /// The fields that differ between two sets built by the same factory (missing fields count as null), lengths shown
+    /// to people in <paramref name="shown"/> (the newer revision's units).
+    /// </summary>
+    public static List<FieldChange> Differences(FieldSet before, FieldSet after, UnitSystem shown)
     {
         var changes = new List<FieldChange>();
         var b = before._fields;
@@ -128,7 +132,7 @@ internal sealed class FieldSet
             {
                 if (Differs(b[i], a[i]))
                 {
-                    changes.Add(new FieldChange(a[i].Name, b[i].Display, a[i].Display));
+                    changes.Add(Change(b[i], a[i], shown));
                 }
             }
 
@@ -147,11 +151,11 @@ internal sealed class FieldSet
             seen.Add(f.Name);
             if (!old.TryGetValue(f.Name, out var was))
             {
-                changes.Add(new FieldChange(f.Name, null, f.Display));
+                changes.Add(Change(null, f, shown));
             }
             else if (Differs(was, f))
             {
-                changes.Add(new FieldChange(f.Name, was.Display, f.Display));
+                changes.Add(Change(was, f, shown));
             }
         }
 
@@ -159,16 +163,28 @@ internal sealed class FieldSet
         {
             if (!seen.Contains(f.Name))
             {
-                changes.Add(new FieldChange(f.Name, f.Display, null));
+                changes.Add(Change(f, null, shown));
             }
         }
 
         return changes;
     }
 
-    /// <summary>Every field as added (before null) or as removed (after null).</summary>
-    public List<FieldChange> All(bool added) =>
-        _fields.Select(f => added ? new FieldChange(f.Name, null, f.Display) : new FieldChange(f.Name, f.Display, null)).ToList();
+    /// <summary>Every field as added (before null) or as removed (after null), lengths shown to people in <paramref name="shown"/>.</summary>
+    public List<FieldChange> All(bool added, UnitSystem shown) =>
+        _fields.Select(f => added ? Change(null, f, shown) : Change(f, null, shown)).ToList();
+
+    // A change of one field: its JSON text (lengths in metres, as before) and its text for people.
+    private static FieldChange Change(Field? before, Field? after, UnitSystem shown)
+    {
+        var field = (after ?? before)!.Value;
+        return new FieldChange(field.Name, before?.Display, after?.Display)
+        {
+            Label = field.Length ? field.Name[..^LengthSuffix.Length] : field.Name,
+            BeforeText = before?.Shown(shown),
+            AfterText = after?.Shown(shown),
+        };
+    }
 
     private static bool Differs(Field before, Field after) =>
         before.Number is { } b && after.Number is { } a
@@ -178,7 +194,7 @@ internal sealed class FieldSet
     // Lengths are compared in metres; for a project in feet the text adds the length in feet.
     private void AddRun(string prefix, Run run, UnitSystem units)
     {
-        _fields.Add(new Field($"{prefix}.length_m", null, run.LengthM, units == UnitSystem.Imperial));
+        _fields.Add(new Field(prefix + ".length" + LengthSuffix, null, run.LengthM, units == UnitSystem.Imperial) { Length = true });
         this
             .Text($"{prefix}.size", run.Size.Text);
         if (run.NeutralSize is { } neutral)
@@ -234,19 +250,36 @@ internal sealed class FieldSet
         return this;
     }
 
-    private FieldSet Number(string name, double? value)
+    private FieldSet Number(string name, double? value, string? unit = null)
     {
-        _fields.Add(new Field(name, value is null ? "none" : null, value, false));
+        _fields.Add(new Field(name, value is null ? "none" : null, value, false) { Unit = unit });
         return this;
     }
 
+    // The suffix of a length's name in JSON; for people the values carry their unit and the name drops it.
+    private const string LengthSuffix = "_m";
+
     private static string Format(double value) => value.ToString("G10", CultureInfo.InvariantCulture);
 
-    /// <summary>A field: text, or a number formatted only when shown (with feet beside metres for a project in feet).</summary>
+    /// <summary>
+    /// A field: text, or a number formatted only when shown. <see cref="Display"/> is the JSON's text (a length in
+    /// metres, with feet beside for a project in feet); <see cref="Shown"/> the text for people (a length in the
+    /// units given, a number with its <see cref="Unit"/>).
+    /// </summary>
     private readonly record struct Field(string Name, string? Text, double? Number, bool Feet)
     {
+        /// <summary>True for a length, m: shown in the units of the newer revision.</summary>
+        public bool Length { get; init; }
+
+        /// <summary>The unit written after the number for people (a load's VA, kVA, kW, A or hp), or null.</summary>
+        public string? Unit { get; init; }
+
         public string Display => Number is { } v
             ? Format(v) + (Feet ? $" ({(v / UnitFactors.MetresPerFoot).ToString("0.##", CultureInfo.InvariantCulture)} ft)" : "")
+            : Text ?? "none";
+
+        public string Shown(UnitSystem units) => Number is { } v
+            ? Length ? LengthText.Precise(v, units) : Unit is null ? Format(v) : Format(v) + " " + Unit
             : Text ?? "none";
     }
 }

@@ -1,3 +1,4 @@
+using DistTree.Model;
 using DistTree.Solving;
 
 namespace DistTree.Comparing;
@@ -16,12 +17,12 @@ public static class RevisionComparer
         ArgumentNullException.ThrowIfNull(before);
         ArgumentNullException.ThrowIfNull(after);
 
-        var projectChanges = FieldSet.Differences(FieldSet.ForProject(before.Project), FieldSet.ForProject(after.Project));
+        var projectChanges = FieldSet.Differences(FieldSet.ForProject(before.Project), FieldSet.ForProject(after.Project), after.Project.Units);
         var equipment = CompareElements(
-            before.Project.Equipment, after.Project.Equipment, e => e.Id, FieldSet.SameDesign, e => FieldSet.ForEquipment(e, before.Project.Units), e => FieldSet.ForEquipment(e, after.Project.Units));
+            before.Project.Equipment, after.Project.Equipment, e => e.Id, FieldSet.SameDesign, e => FieldSet.ForEquipment(e, before.Project.Units), e => FieldSet.ForEquipment(e, after.Project.Units), after.Project.Units);
         var circuits = CompareElements(
             before.Project.Equipment.SelectMany(e => e.Circuits), after.Project.Equipment.SelectMany(e => e.Circuits), c => c.FullId, FieldSet.SameDesign,
-            c => FieldSet.ForCircuit(c, before.Project.Units), c => FieldSet.ForCircuit(c, after.Project.Units));
+            c => FieldSet.ForCircuit(c, before.Project.Units), c => FieldSet.ForCircuit(c, after.Project.Units), after.Project.Units);
 
         var beforeRuns = RunsByKey(before.Runs);
         var afterRuns = RunsByKey(after.Runs);
@@ -31,7 +32,7 @@ public static class RevisionComparer
             .Where(r => r.Kind != RunResultKind.Branch && r.LoadingMoved)
             .OrderBy(r => Group(r.Status))
             .ThenByDescending(r => SortKey(r.MarginA?.Change ?? 0))
-            .ThenBy(r => r.Id, StringComparer.Ordinal)
+            .ThenBy(r => r.Id, NaturalOrder.Instance)
             .ThenBy(r => r.Kind)
             .ToArray();
 
@@ -65,9 +66,9 @@ public static class RevisionComparer
     {
         var endPoints = endPointCounts.Affected;
         var rise = endPoints.Where(e => e.TotalDropPercent.Change > ComparisonTolerance.PercentPoints)
-            .OrderByDescending(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
+            .OrderByDescending(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, NaturalOrder.Instance).FirstOrDefault();
         var fall = endPoints.Where(e => e.TotalDropPercent.Change < -ComparisonTolerance.PercentPoints)
-            .OrderBy(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, StringComparer.Ordinal).FirstOrDefault();
+            .OrderBy(e => e.TotalDropPercent.Change).ThenBy(e => e.Id, NaturalOrder.Instance).FirstOrDefault();
         return new ComparisonSummary
         {
             ProjectChanges = projectChanges,
@@ -95,7 +96,7 @@ public static class RevisionComparer
     private static RevisionInfo Info(Solution s) => new(s.Project.Name, s.Project.File, s.Project.Sha256, s.Summary, s.Project.Rules.Code);
 
     private static List<ElementChange> CompareElements<T>(
-        IEnumerable<T> before, IEnumerable<T> after, Func<T, string> id, Func<T, T, bool> same, Func<T, FieldSet> fieldsBefore, Func<T, FieldSet> fieldsAfter)
+        IEnumerable<T> before, IEnumerable<T> after, Func<T, string> id, Func<T, T, bool> same, Func<T, FieldSet> fieldsBefore, Func<T, FieldSet> fieldsAfter, UnitSystem shown)
     {
         var old = new Dictionary<string, T>(StringComparer.Ordinal);
         foreach (var item in before)
@@ -116,7 +117,7 @@ public static class RevisionComparer
                     continue;
                 }
 
-                var differences = FieldSet.Differences(fieldsBefore(was), fieldsAfter(item));
+                var differences = FieldSet.Differences(fieldsBefore(was), fieldsAfter(item), shown);
                 if (differences.Count > 0)
                 {
                     changes.Add(new ElementChange(key, ChangeKind.Changed, differences));
@@ -124,7 +125,7 @@ public static class RevisionComparer
             }
             else
             {
-                changes.Add(new ElementChange(key, ChangeKind.Added, fieldsAfter(item).All(added: true)));
+                changes.Add(new ElementChange(key, ChangeKind.Added, fieldsAfter(item).All(added: true, shown)));
             }
         }
 
@@ -132,11 +133,11 @@ public static class RevisionComparer
         {
             if (!matched.Contains(key))
             {
-                changes.Add(new ElementChange(key, ChangeKind.Removed, fieldsBefore(was).All(added: false)));
+                changes.Add(new ElementChange(key, ChangeKind.Removed, fieldsBefore(was).All(added: false, shown)));
             }
         }
 
-        changes.Sort((a, b) => string.CompareOrdinal(a.Id, b.Id));
+        changes.Sort((a, b) => NaturalOrder.Instance.Compare(a.Id, b.Id));
         return changes;
     }
 
@@ -200,7 +201,7 @@ public static class RevisionComparer
         return (deltas
             .OrderBy(d => Group(d.Status))
             .ThenByDescending(d => SortKey(d.DropPercent.Change))
-            .ThenBy(d => d.Id, StringComparer.Ordinal)
+            .ThenBy(d => d.Id, NaturalOrder.Instance)
             .ThenBy(d => d.Kind)
             .ToArray(), compared);
     }
@@ -252,7 +253,7 @@ public static class RevisionComparer
         return (deltas
             .OrderBy(d => Group(d.Status))
             .ThenByDescending(d => SortKey(d.TotalDropPercent.Change))
-            .ThenBy(d => d.Id, StringComparer.Ordinal)
+            .ThenBy(d => d.Id, NaturalOrder.Instance)
             .ToArray(), compared);
     }
 
@@ -298,7 +299,7 @@ public static class RevisionComparer
         }
 
         return from.Where(f => !keys.Contains((f.Kind, f.Subject)))
-            .OrderBy(f => f.Subject, StringComparer.Ordinal)
+            .OrderBy(f => f.Subject, NaturalOrder.Instance)
             .ThenBy(f => f.Code, StringComparer.Ordinal)
             .ThenBy(f => f.Value)
             .ToArray();

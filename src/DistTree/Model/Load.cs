@@ -62,6 +62,17 @@ public sealed record Load(LoadKind Kind, double Value, double PowerFactor)
     /// <summary>True for a motor load (<c>hp</c> or <c>fla</c>).</summary>
     public bool IsMotor => IsMotorKind(Kind);
 
+    /// <summary>The unit symbol of a stated <paramref name="kind"/>, as people read it after the number: VA, kVA, kW, A, hp (full-load amperes: A).</summary>
+    public static string UnitOf(LoadKind kind) => kind switch
+    {
+        LoadKind.Va => "VA",
+        LoadKind.Kva => "kVA",
+        LoadKind.Kw => "kW",
+        LoadKind.Amps => "A",
+        LoadKind.Hp => "hp",
+        LoadKind.Fla => "A",
+    };
+
     /// <summary>True for the quantities a motor is given in (<c>hp</c> or <c>fla</c>): such a load needs its power factor and may state how it starts.</summary>
     public static bool IsMotorKind(LoadKind kind) => kind is LoadKind.Hp or LoadKind.Fla;
 

@@ -35,6 +35,9 @@ public sealed record Project
     /// <summary>The project's name.</summary>
     public required string Name { get; init; }
 
+    /// <summary>The project's description as written (<c>project: description</c>), or empty when it has none.</summary>
+    public string Description { get; init; } = "";
+
     /// <summary>The project file's path as given.</summary>
     public required string File { get; init; }
 

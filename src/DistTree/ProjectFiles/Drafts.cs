@@ -8,6 +8,8 @@ internal sealed class ProjectDraft
 {
     public string? Name { get; set; }
 
+    public string Description { get; set; } = "";
+
     public UnitSystem Units { get; set; } = UnitSystem.Metric;
 
     public Rules Rules { get; set; } = Rules.Default;

@@ -170,6 +170,7 @@ public static class ProjectLoader
         return new Project
         {
             Name = draft.Name!,
+            Description = draft.Description,
             File = file,
             Sha256 = sha256,
             Units = draft.Units,

@@ -1,3 +1,4 @@
+using System.Globalization;
 using DistTree.Model;
 using DistTree.ProjectFiles.Yaml;
 using DistTree.Vocabulary;
@@ -134,9 +135,12 @@ internal static partial class ProjectMessages
     /// <summary><c>ocpd</c> on a circuit and on its run.</summary>
     public static string OcpdTwice(Subject circuit) => $"'ocpd' is given both on {circuit} and on its run; give it once";
 
-    /// <summary>A point farther along than its run is long.</summary>
-    public static string PointBeyondRun(Subject circuit, double atM, double lengthM) =>
-        $"the farthest point of {circuit} is {Format(atM)} m along a run of {Format(lengthM)} m; a point lies on its run";
+    /// <summary>A point farther along than its run is long; lengths in the project's <paramref name="units"/>.</summary>
+    public static string PointBeyondRun(Subject circuit, double atM, double lengthM, UnitSystem units) => units switch
+    {
+        UnitSystem.Metric => $"the farthest point of {circuit} is {Format(atM)} m along a run of {Format(lengthM)} m; a point lies on its run",
+        UnitSystem.Imperial => $"the farthest point of {circuit} is {LengthText.Precise(atM, units)} along a run of {LengthText.Precise(lengthM, units)}; a point lies on its run",
+    };
 
     /// <summary><c>points</c> that is not a sequence of one or more.</summary>
     public static string PointsNotSequence(Subject circuit, SourceNode found) =>
@@ -180,9 +184,12 @@ internal static partial class ProjectMessages
     /// <summary>Both a code letter and a locked-rotor multiple.</summary>
     public static string CodeLetterAndMultiple(Subject load) => $"{load} gives both 'code_letter' and 'lrc_multiple'; give one";
 
-    /// <summary>A branch run longer than is likely (a warning); <paramref name="lengthText"/> is the length in metres as written.</summary>
-    public static string LongBranch(Subject run, string lengthText) =>
-        $"{run} is {lengthText} m long, more than 609.6 m (2000 ft); check the length";
+    /// <summary>A branch run longer than is likely (a warning), <paramref name="lengthM"/> in the project's <paramref name="units"/>.</summary>
+    public static string LongBranch(Subject run, double lengthM, UnitSystem units) => units switch
+    {
+        UnitSystem.Metric => $"{run} is {lengthM.ToString("0.##", CultureInfo.InvariantCulture)} m long, more than 609.6 m (2000 ft); check the length",
+        UnitSystem.Imperial => $"{run} is {LengthText.Precise(lengthM, units)} long, more than 2000 ft (609.6 m); check the length",
+    };
 
     /// <summary>A second size of a run (<c>neutral_size</c>, <c>ground_size</c>) of the other series than the lines' size (mm² against AWG or kcmil).</summary>
     public static string SeriesUnlikeLines(string key, Subject run, Conductors.ConductorSize size, Conductors.ConductorSize lines) =>

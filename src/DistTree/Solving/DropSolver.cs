@@ -55,7 +55,7 @@ public sealed class DropSolver
         LoadFlowDrops.Record(network, phases, runs, flow, voltages);
         if (network.Project.Rules.Method != SolutionMethod.PercentSum)
         {
-            findings += RunFindings.OnLoadFlow(network.NodeArray, runs, code);
+            findings += RunFindings.OnLoadFlow(network.NodeArray, runs, code, network.Project.Units);
         }
 
         // The end points' totals, findings and motor starts; then each run's reach from them.

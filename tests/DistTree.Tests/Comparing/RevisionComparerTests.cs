@@ -103,7 +103,8 @@ public sealed class RevisionComparerTests
 
         var change = Assert.Single(c.Equipment);
         Assert.Equal(("LP1", ChangeKind.Changed), (change.Id, change.Change));
-        Assert.Equal([new FieldChange("feeder.length_m", "40", "55")], change.Fields);
+        // The JSON's field and values stay in metres; people read the length with its unit (a metric project: m).
+        Assert.Equal([new FieldChange("feeder.length_m", "40", "55") { Label = "feeder.length", BeforeText = "40 m", AfterText = "55 m" }], change.Fields);
         Assert.Empty(c.Circuits);
         // Only the drop moved: LP1's current and margin did not, so it is not an upstream run whose loading moved.
         Assert.True(c.Runs.Single(r => r.Id == "LP1").DropPercent.Change > 0);
@@ -123,7 +124,7 @@ public sealed class RevisionComparerTests
         var removed = Assert.Single(c.Circuits);
         Assert.Equal(("LP1/2", ChangeKind.Removed), (removed.Id, removed.Change));
         Assert.Contains(new FieldChange("run.size", "12 AWG", null), removed.Fields);
-        Assert.Contains(new FieldChange("load.value", "1200", null), removed.Fields);
+        Assert.Contains(new FieldChange("load.value", "1200", null) { BeforeText = "1200 VA" }, removed.Fields);
         Assert.All(removed.Fields, f => Assert.Null(f.After));
         Assert.Equal([new FieldChange("circuits", "3", "2")], Assert.Single(c.Equipment).Fields);
         Assert.Equal(3, c.Summary.EndPointsCompared);

@@ -273,7 +273,8 @@ public sealed class ProjectLoaderTests
         Assert.Equal(
             [
                 "t.yaml:13:20: warning: the demand factor of 'LP1' is 1.25, above 1: it raises the load it applies to",
-                "t.yaml:18:24: warning: the run of circuit 'LP1/1' is 640.08 m long, more than 609.6 m (2000 ft); check the length",
+                // 2100 ft as written (640.08 m, 1 ft = 0.3048 m exactly, NIST SP 811 Appendix B.8), in the project's feet.
+                "t.yaml:18:24: warning: the run of circuit 'LP1/1' is 2100 ft long, more than 2000 ft (609.6 m); check the length",
             ],
             project.Warnings.Select(w => w.ToString()));
     }

@@ -61,7 +61,7 @@ public sealed class HtmlReportSectionsTests
         Assert.Equal("added", elements["SUB/1"]);
         Assert.Equal("added", elements["SUB"]);
         Assert.Equal("changed", elements["LP1/2"]);
-        Assert.Contains("run.length_m 18 → 210", section.QuerySelectorAll("table.elements tbody tr").Single(r => r.QuerySelector("td")!.TextContent == "LP1/2").TextContent, StringComparison.Ordinal);
+        Assert.Contains("run.length 18 m → 210 m", section.QuerySelectorAll("table.elements tbody tr").Single(r => r.QuerySelector("td")!.TextContent == "LP1/2").TextContent, StringComparison.Ordinal);
 
         var failing = section.QuerySelectorAll("#cmp-newly-failing tbody tr").ToArray();
         var row = Assert.Single(failing, r => r.QuerySelector("td")!.TextContent == "LP1/2");

@@ -170,7 +170,7 @@ internal sealed class CircuitReader(SectionContext context, RunReader runs, Load
 
         if (draft.Points.Count > 0 && draft.Run is { } withPoints && draft.Points[^1].AtM > withPoints.LengthM + 1e-9)
         {
-            Bag.Error(draft.PointsLocation!, ProjectMessages.PointBeyondRun(full, draft.Points[^1].AtM, withPoints.LengthM));
+            Bag.Error(draft.PointsLocation!, ProjectMessages.PointBeyondRun(full, draft.Points[^1].AtM, withPoints.LengthM, context.Draft.Units));
         }
     }
 

@@ -128,7 +128,7 @@ internal sealed class ProjectReader
 
         if (m.Optional("description") is { } description)
         {
-            Values.Text(description, "'description'");
+            _context.Draft.Description = Values.Text(description, "'description'") ?? "";
         }
     }
 

@@ -1,4 +1,3 @@
-using System.Globalization;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
@@ -42,7 +41,7 @@ internal sealed class RunReader(SectionContext context)
         var length = lengthNode is null ? null : Values.LengthM(lengthNode, subject.Of("'length' of "), context.Draft.Units);
         if (branch && length > LongBranchM)
         {
-            Bag.Warning(lengthNode!.Location, ProjectMessages.LongBranch(subject, length.Value.ToString("0.##", CultureInfo.InvariantCulture)));
+            Bag.Warning(lengthNode!.Location, ProjectMessages.LongBranch(subject, length.Value, context.Draft.Units));
         }
 
         var sizeNode = m.Required("size", ProjectMessages.KeyHints.Size);

@@ -18,6 +18,7 @@ internal sealed class RunDrops
 {
     private readonly ConductorCatalog _catalog;
     private readonly CodeRules _code;
+    private readonly UnitSystem _units;
     private readonly Rules _rules;
     private readonly double _frequencyHz;
     private readonly RunElectrics.Bases _bases;
@@ -36,6 +37,7 @@ internal sealed class RunDrops
         _sharedCounts = RacewayCounts.Of(network, code);
         _catalog = catalog;
         _code = code;
+        _units = network.Project.Units;
         _continuous = phases.ContinuousCurrents;
         _motors = motors;
         _rules = network.Project.Rules;
@@ -158,7 +160,7 @@ internal sealed class RunDrops
                 SolveRun(ref row, run, moments.AsSpan(r * 3, 3));
                 if (_findingsWithRuns)
                 {
-                    found += (findings[r] = RunFindings.Of(ref row, run, _code))?.Count ?? 0;
+                    found += (findings[r] = RunFindings.Of(ref row, run, _code, _units))?.Count ?? 0;
                 }
 
                 lengthM[r] = run.Conductors.LengthM;

@@ -1,5 +1,6 @@
 using DistTree.Codes;
 using DistTree.Conductors;
+using DistTree.Model;
 using DistTree.Network;
 using DistTree.Vocabulary;
 
@@ -12,8 +13,11 @@ namespace DistTree.Solving.Passes;
 /// </summary>
 internal static class RunFindings
 {
-    /// <summary>The findings of <paramref name="run"/>, whose figures are <paramref name="r"/>, or null for none.</summary>
-    public static List<Finding>? Of(ref RunRow r, NetworkRun run, CodeRules code)
+    /// <summary>
+    /// The findings of <paramref name="run"/>, whose figures are <paramref name="r"/>, or null for none; a length in
+    /// their sentences is in the project's <paramref name="units"/>.
+    /// </summary>
+    public static List<Finding>? Of(ref RunRow r, NetworkRun run, CodeRules code, UnitSystem units)
     {
         List<Finding>? findings = null;
         var conductors = run.Conductors;
@@ -29,7 +33,7 @@ internal static class RunFindings
                 run.Id,
                 r.DropPercent,
                 limit,
-                $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {conductors.LengthM:0.0} m of {size}) exceeds its {limit:0.##} % limit",
+                $"{what} {run.Id}: drop {r.DropPercent:0.00} % ({r.DropV:0.0} V of {r.VoltageV:0} V at {r.CurrentA:0.0} A over {new LengthText(conductors.LengthM, units)} of {size}) exceeds its {limit:0.##} % limit",
                 conductors.Location));
         }
 
@@ -38,8 +42,8 @@ internal static class RunFindings
             r.GroundMinIndex == 0 ? null : ConductorSize.All[r.GroundMinIndex - 1]));
     }
 
-    /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core; gives their number.</summary>
-    public static int OnLoadFlow(NetworkNode[] nodes, RunRows runs, CodeRules code)
+    /// <summary>Finds every run's findings into <paramref name="runs"/>, on every core, lengths in <paramref name="units"/>; gives their number.</summary>
+    public static int OnLoadFlow(NetworkNode[] nodes, RunRows runs, CodeRules code, UnitSystem units)
     {
         var (rows, findings) = (runs.Rows, runs.Findings);
         var count = 0;
@@ -51,7 +55,7 @@ internal static class RunFindings
                 ref var row = ref rows[r];
                 if (!row.IsTransformer)
                 {
-                    found += (findings[r] = Of(ref row, nodes[row.Node].Incoming!, code))?.Count ?? 0;
+                    found += (findings[r] = Of(ref row, nodes[row.Node].Incoming!, code, units))?.Count ?? 0;
                 }
             }
 
