@@ -138,6 +138,27 @@ public sealed class InitCommandTests
         Assert.Empty(Directory.GetFileSystemEntries(folder.Path));
     }
 
+    // Each code's starter: its usual service system and units, its rule set, and (CEC) the 120 V circuits through a 600 V
+    // delta to 208Y/120 V dry-type transformer; each analyzes with no finding (exit 0).
+    [Theory]
+    [InlineData("nec", "208Y/120", UnitSystem.Imperial, "208Y/120")]
+    [InlineData("cec", "600Y/347", UnitSystem.Metric, "208Y/120")]
+    [InlineData("iec", "400Y/230", UnitSystem.Metric, "400Y/230")]
+    public void Init_Code_WritesTheCodesUsualBuildingWithinLimits(string code, string service, UnitSystem units, string panelSystem)
+    {
+        using var folder = new TempFolder();
+        var path = folder.File("starter.yaml");
+
+        var written = CliRunner.Run("init", "--code", code, "--output", path);
+
+        Assert.Equal(0, written.ExitCode);
+        var project = ProjectLoader.Load(path);
+        Assert.Contains($"under {DistTree.Codes.CodeRules.Describe(project.Rules.Code)} on {service}", written.Out, StringComparison.Ordinal);
+        Assert.Equal((code, service, units), (DistTree.Vocabulary.Words.Code.Of(project.Rules.Code), project.Service.System.Name, project.Units));
+        Assert.Equal(panelSystem, project.Equipment.Single(e => e.Id == "LP1").System.Name);
+        Assert.Equal(0, CliRunner.Run("check", path).ExitCode);
+    }
+
     [Fact]
     public void Init_StandardOutput_WritesTheProjectOnly()
     {
