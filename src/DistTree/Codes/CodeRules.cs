@@ -213,6 +213,14 @@ public abstract class CodeRules
     /// </summary>
     public virtual bool SizesGroundingByLines => false;
 
+    /// <summary>
+    /// True when conductors of <paramref name="size"/> may be run in parallel sets. By default 1/0 AWG (53.5 mm²) and
+    /// larger: NEC 310.10(G)(1) and CEC Rule 12-108 (both recalled, not read); a rule set without a minimum says so.
+    /// </summary>
+    public virtual bool ParallelSetsAllowed(ConductorSize size) => size.AreaCmil >= ParallelMinimum.AreaCmil * (1 - Tolerance);
+
+    private static readonly ConductorSize ParallelMinimum = ConductorSize.Parse("1/0 AWG");
+
     /// <summary>The rule set's own table of grounding conductors by device rating, or null where it holds none.</summary>
     public virtual GroundingTable? OwnGroundingTable => null;
 

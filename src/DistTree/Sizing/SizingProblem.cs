@@ -179,6 +179,11 @@ internal sealed class SizingProblem
             for (var sets = conductors.Sets; sets <= maxSets; sets++)
             {
                 var isPresent = s == conductors.Size && sets == conductors.Sets;
+                if (sets > 1 && !isPresent && !protection.ParallelSetsAllowed(s))
+                {
+                    continue; // the code allows no parallel sets of a conductor this small: not a buildable choice
+                }
+
                 var cost = Cost(conductors, s, sets, run.Supply, project.Sizing);
                 if (cost is null && !isPresent)
                 {

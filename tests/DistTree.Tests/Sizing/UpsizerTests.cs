@@ -104,6 +104,40 @@ public sealed class UpsizerTests
         Assert.Contains(plan.Changes, c => c.RunId == "P" && c.SetsAfter > 1);
     }
 
+    // NEC 310.10(G)(1) (recalled): conductors in parallel are 1/0 AWG and larger. Two sets of 2 AWG would be the least
+    // copper for this long 60 A feeder, but no one may install them: the plan takes one larger set (or 1/0 AWG and up).
+    [Fact]
+    public void Plan_MaxSets_NeverProposesParallelSetsBelowOneOught()
+    {
+        var yaml = """
+            disttree: 1
+            project: { name: Sets, units: imperial }
+            sizing: { max_sets: 4 }
+            service: { id: SVC, system: 480Y/277 }
+            equipment:
+              - id: P
+                kind: panelboard
+                from: SVC
+                feeder: { length: 900, size: 4 AWG, sets: 1, ocpd: 70 }
+                circuits:
+                  - { id: "1", poles: 3, ocpd: 70, load: { amps: 55, pf: 0.9 }, run: { length: 10, size: 4 AWG } }
+            """;
+        var plan = PlanFor(yaml);
+        Assert.Contains(plan.Before.AllFindings, f => f.Code == "feeder_drop");
+        Assert.False(plan.After.HasFindings);
+        var feeder = Assert.Single(plan.Changes, c => c.RunId == "P");
+        Assert.True(feeder.SetsAfter == 1 || ConductorSize.Parse(feeder.SizeAfter) >= ConductorSize.Parse("1/0 AWG"), $"{feeder.SetsAfter} × {feeder.SizeAfter}");
+    }
+
+    // Every parallel set the demo's plan proposes is of a size the code allows in parallel.
+    [Fact]
+    public void Plan_Demo_ParallelSetsOnlyWhereTheCodeAllowsThem()
+    {
+        var before = SolverHarness.Solve(File.ReadAllText(Demo), Demo);
+        var plan = Upsizer.Standard.Plan(before);
+        Assert.All(plan.Changes.Where(c => c.SetsAfter > c.SetsBefore), c => Assert.True(ConductorSize.Parse(c.SizeAfter) >= ConductorSize.Parse("1/0 AWG"), c.RunId));
+    }
+
     [Fact]
     public void Plan_PriceTable_MinimisesPriceAndNamesTheCurrency()
     {

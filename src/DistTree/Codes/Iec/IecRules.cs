@@ -113,6 +113,12 @@ public sealed partial class IecRules : CodeRules
     /// <inheritdoc/>
     public override string GroundingConductorTerm => "protective conductor";
 
+    /// <summary>
+    /// IEC 60364-5-52 523.7 (memory) asks parallel conductors to share the load equally (same material, cross-section,
+    /// length and route) but sets no smallest size: any size may be run in parallel.
+    /// </summary>
+    public override bool ParallelSetsAllowed(ConductorSize size) => true;
+
     /// <summary>Table 54.2 sizes the protective conductor by the line conductors' cross-section.</summary>
     public override bool SizesGroundingByLines => true;
 
