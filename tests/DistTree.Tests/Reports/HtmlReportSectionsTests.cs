@@ -37,13 +37,20 @@ public sealed class HtmlReportSectionsTests
         var verdict = after.QuerySelector(".verdict")!;
         Assert.Equal(plan.After.HasFindings ? "verdict verdict-fail" : "verdict verdict-pass", verdict.ClassName);
         // Every change of the plan has its row, with its sizes before and after.
-        var rows = doc.QuerySelectorAll("#plan table.plan tr.change").ToArray();
+        var rows = doc.QuerySelectorAll("#plan table.plan tr.plan-change").ToArray();
         Assert.Equal(plan.Changes.Count, rows.Length);
         for (var i = 0; i < rows.Length; i++)
         {
             Assert.Equal(plan.Changes[i].RunId, rows[i].QuerySelector("td")!.TextContent);
             Assert.Contains($"{plan.Changes[i].SizeBefore} → {plan.Changes[i].SizeAfter}", rows[i].TextContent, StringComparison.Ordinal);
+
+            // A table row, not the comparison's inline badge (.change is display: inline-block, which collapses a row).
+            Assert.DoesNotContain("change", rows[i].ClassList);
         }
+
+        // The total names its unit.
+        var total = doc.QuerySelector("#plan table.plan tr.row-total")!.QuerySelectorAll("td")[1].TextContent;
+        Assert.EndsWith(" mm2·m", total, StringComparison.Ordinal);
     }
 
     [Fact]

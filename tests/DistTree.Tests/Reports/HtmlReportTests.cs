@@ -300,7 +300,7 @@ public sealed class HtmlReportTests
         var plan = Upsizer.Standard.Plan(ReportFixtures.Demo);
         Assert.NotEmpty(plan.Changes);
         var doc = ReportFixtures.RenderDemo(new HtmlReportOptions { Plan = plan });
-        var runs = doc.QuerySelectorAll("#plan table.plan tbody tr.change td:first-child").Select(td => td.TextContent).ToArray();
+        var runs = doc.QuerySelectorAll("#plan table.plan tbody tr.plan-change td:first-child").Select(td => td.TextContent).ToArray();
         Assert.Equal(plan.Changes.Select(c => c.RunId), runs);
         Assert.Equal(plan.Unresolvable.Count, doc.QuerySelectorAll("#plan .unresolvable li").Length);
     }
