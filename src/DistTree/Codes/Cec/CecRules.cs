@@ -81,7 +81,7 @@ public sealed class CecRules : NorthAmericanRules
 
     /// <inheritdoc/>
     public override string ClauseSource =>
-        "rule numbers recalled from the 2021 edition, not read from it: verify them against the edition in force; not held: Tables 2 and 4 (ampacities), 16 (bonding conductors: none is checked) and 44 and 45 (motor full-load currents)";
+        "rule numbers recalled from the 2021 edition, not read from it: verify them against the edition in force; not held: Tables 2 and 4 (ampacities), 16 (bonding conductors: checked only against a table the project brings) and 44 and 45 (motor full-load currents)";
 
     /// <inheritdoc/>
     public override string GroundingConductorTerm => "bonding conductor";
