@@ -30,8 +30,7 @@ public static class ConsoleReport
         foreach (var e in s.WorstEndPoints(worst))
         {
             rank++;
-            var mark = e.Findings.Count > 0 ? "over" : "ok";
-            o.WriteLine(F($"  {rank,3}. {e.Id,-14} {e.TotalDropPercent,6:0.00} %  {mark,-4}  {Truncate(e.Name, 40)}"));
+            o.WriteLine(F($"  {rank,3}. {e.Id,-14} {e.TotalDropPercent,6:0.00} % of {e.LimitPercent:0.##} %  {Truncate(e.Name, 40)}  {PathVerdict(s, e)}"));
             var shares = e.RunIndices.Zip(e.RunSharesPercent).Select(p => F($"{Label(s.Runs[p.First])} {p.Second:0.00}"));
             o.WriteLine($"        {string.Join("  +  ", shares)}");
             o.WriteLine($"        reach {unit}  {string.Join("  +  ", e.RunIndices.Select(r => Reach(s.Runs[r], s.Project.Units)))}");
@@ -92,6 +91,17 @@ public static class ConsoleReport
         {
             o.WriteLine($"  {f.Location}: {f.Code}: {f.Message} [{f.Reference}]");
         }
+    }
+
+    // What the path fails, by the codes of its findings (the end point's, then its runs', service side first, each
+    // once), or "ok": a path over its total limit and one that fails another check say which.
+    private static string PathVerdict(Solution s, EndPointResult e)
+    {
+        var failed = e.Findings.Select(f => f.Code)
+            .Concat(e.RunIndices.SelectMany(r => s.Runs[r].Findings).Select(f => f.Code))
+            .Distinct(StringComparer.Ordinal)
+            .ToArray();
+        return failed.Length == 0 ? "ok" : "fails: " + string.Join(", ", failed);
     }
 
     // A run's reach by its own limit and by the total's, of its length, in the project's length unit; "over" where

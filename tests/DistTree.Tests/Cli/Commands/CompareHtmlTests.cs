@@ -65,7 +65,7 @@ public sealed class CompareHtmlTests : IDisposable
         Assert.Equal(0, r.ExitCode);
         Assert.Contains("The plan was proved", r.Out, StringComparison.Ordinal);
         var doc = ReportFixtures.Parse(File.ReadAllText(output));
-        Assert.NotEmpty(doc.QuerySelectorAll("#plan table.plan tr.change"));
+        Assert.NotEmpty(doc.QuerySelectorAll("#plan table.plan tr.plan-change"));
         Assert.NotNull(doc.QuerySelector("#plan .after-plan"));
         // The report is of the design before the plan: its findings are still listed.
         Assert.NotEmpty(doc.QuerySelectorAll("#findings table.finding-list tbody tr"));
