@@ -49,7 +49,10 @@ internal sealed record ScheduleView(
 /// <summary>One facing row (odd space left, even right), or a gap of empty spaces (<see cref="Gap"/> not null).</summary>
 internal sealed record ScheduleRowView(ScheduleSideView Left, ScheduleSideView Right, string? Gap);
 
-/// <summary>One space of a schedule: a circuit shown on its first space, a further space of a multi-pole circuit, or nothing.</summary>
+/// <summary>
+/// One space of a schedule: a circuit shown on its first space, a further space of a multi-pole circuit, or nothing.
+/// <see cref="LineVa"/> is each line the circuit is on with its load (<c>A: 1 200</c>), one a line (joined by <c>&lt;br&gt;</c>).
+/// </summary>
 internal sealed record ScheduleSideView(
     string Space,
     string Circuit,
@@ -57,7 +60,6 @@ internal sealed record ScheduleSideView(
     string Poles,
     string DeviceA,
     string Conductor,
-    string Lines,
     string LineVa,
     string TakenBy,
     bool Empty);

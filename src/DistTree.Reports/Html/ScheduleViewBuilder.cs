@@ -5,7 +5,7 @@ namespace DistTree.Reports.Html;
 
 /// <summary>
 /// A panel's schedule for the page (<see cref="PanelSchedule"/>): each circuit on its first space with its id, name,
-/// poles, device, conductors, lines and load per line (VA), a further space of a multi-pole circuit marked as taken
+/// poles, device, conductors, and each line it is on with its load (VA), a further space of a multi-pole circuit marked as taken
 /// by it; at the foot the panel's load per line, connected load and neutral current, all the solution's.
 /// </summary>
 internal static class ScheduleViewBuilder
@@ -25,7 +25,7 @@ internal static class ScheduleViewBuilder
         var space = Count(cell.Space);
         return cell.Circuit is { } c
             ? Circuit(space, c, cell.TakenBy)
-            : new ScheduleSideView(space, "", "", "", "", "", "", "", cell.TakenBy is { } t ? $"taken by circuit {Escape(t.Id)}" : "", cell.TakenBy is null);
+            : new ScheduleSideView(space, "", "", "", "", "", "", cell.TakenBy is { } t ? $"taken by circuit {Escape(t.Id)}" : "", cell.TakenBy is null);
     }
 
     private static ScheduleSideView Circuit(string space, ScheduleCircuit c, ScheduleCircuit? takenBy) => new(
@@ -35,8 +35,7 @@ internal static class ScheduleViewBuilder
         Count(c.Poles),
         c.DeviceA is { } d ? Limit(d) : "–",
         RunText.Conductor(c.Run),
-        Escape(c.Lines),
-        string.Join(" · ", Enumerable.Range(0, c.LineVa.Count).Where(c.IsOn).Select(x => $"{Line(x)} {VoltAmperes(c.LineVa[x])}")),
+        string.Join("<br>", Enumerable.Range(0, c.LineVa.Count).Where(c.IsOn).Select(x => $"{Line(x)}: {VoltAmperes(c.LineVa[x])}")),
         takenBy is null ? "" : $"also taken by circuit {Escape(takenBy.Id)}",
         false);
 
