@@ -87,7 +87,7 @@ public static class ScheduleCsv
         Line(sb, Columns);
         foreach (var c in p.Circuits)
         {
-            string[] lineVa = [.. Enumerable.Range(0, 3).Select(x => x < p.Lines && c.IsOn(x) ? Va(c.LineVa[x]) : "")];
+            string[] lineVa = [.. Enumerable.Range(0, 3).Select(x => x < c.LineVa.Count && c.IsOn(x) ? Va(c.LineVa[x]) : "")];
             Line(sb,
             [
                 "circuit", p.Panel.Id, c.FirstSpace is { } f ? Count(f) : "", c.FirstSpace is { } s ? (s % 2 == 1 ? "left" : "right") : "",
