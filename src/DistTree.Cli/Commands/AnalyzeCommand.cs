@@ -4,9 +4,9 @@ using DistTree.Reports;
 namespace DistTree.Cli.Commands;
 
 /// <summary>
-/// <c>disttree analyze FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--sarif PATH|-] [--worst N]</c>: the
+/// <c>disttree analyze FILE [--json PATH|-] [--html [PATH]] [--schedules DIR] [--date TEXT] [--sarif PATH|-] [--worst N]</c>: the
 /// summary, the worst paths with each run's share of the drop, and every finding; optionally the results
-/// document, the HTML review report and a SARIF log; exit 0 within limits, 1 a limit exceeded, 2 bad input.
+/// document, the HTML review report, the panel schedules as CSV and a SARIF log; exit 0 within limits, 1 a limit exceeded, 2 bad input.
 /// </summary>
 internal static class AnalyzeCommand
 {
@@ -20,13 +20,14 @@ internal static class AnalyzeCommand
             HelpName = "PATH",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        var schedules = ScheduleOutput.Create();
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
         var sarif = new Option<string?>("--sarif") { Description = FindingsOutput.SarifDescription, HelpName = "PATH" };
         var worst = new Option<int>("--worst") { Description = "How many worst paths to show (console and HTML), 1 to 1,000.", DefaultValueFactory = _ => 10 };
         var command = new Command("analyze", "Solve the voltage drop of every run and end point; print the worst paths and every finding.\n" +
             "Example: disttree analyze projects/quillfeather-medical.yaml --json reports/results.json --html")
         {
-            file, json, html, date, sarif, worst,
+            file, json, html, schedules, date, sarif, worst,
         };
         command.SetAction(parsed =>
         {
@@ -38,12 +39,16 @@ internal static class AnalyzeCommand
             var htmlPath = parsed.GetResult(html) is null ? null : parsed.GetValue(html) ?? DefaultHtmlPath(path);
             (string, string?)[] outputs = [("--json", jsonPath), ("--html", htmlPath), ("--sarif", sarifPath)];
             OptionChecks.Outputs(outputs);
+            var schedulesFolder = parsed.GetValue(schedules);
+            ScheduleOutput.CheckName(schedulesFolder);
 
             Solving.Solution solution;
+            (IReadOnlyList<Reports.Schedules.ScheduleFile> Files, (string Option, string? Path)[] Targets) schedulesPrepared;
             using (var status = context.Status())
             {
                 solution = Pipeline.Solve(context, path, status);
-                OutputTarget.CheckAll(solution.Project.Files, outputs);
+                schedulesPrepared = ScheduleOutput.Prepare(schedulesFolder, solution);
+                OutputTarget.CheckAll(solution.Project.Files, [.. outputs, .. schedulesPrepared.Targets]);
                 if (jsonPath is not null)
                 {
                     status.Report($"writing the results of {solution.Runs.Count:N0} runs");
@@ -57,6 +62,7 @@ internal static class AnalyzeCommand
                 OutputFile.Write(context, htmlPath, HtmlReport.Render(solution, options), solution.Project.Files);
             }
 
+            ScheduleOutput.Write(context, schedulesPrepared, solution.Project.Files);
             FindingsOutput.WriteSarif(context, sarifPath, solution, path);
             if (jsonPath != "-" && htmlPath != "-" && sarifPath != "-")
             {

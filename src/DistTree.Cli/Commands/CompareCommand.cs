@@ -25,13 +25,15 @@ internal static class CompareCommand
             HelpName = "PATH",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        var schedules = ScheduleOutput.Create();
+        schedules.Description = "Write each panel's schedule of the new revision as a CSV file, DIR/<panel id>.csv (the folder is made if missing; see docs/schedules.md).";
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
         var rows = new Option<int>("--rows") { Description = "How many end points and runs to list on the console and in Markdown, 1 to 1,000.", DefaultValueFactory = _ => 20 };
         var command = new Command("compare", "Compare two revisions of a design: what changed, and what it does to every end point and run downstream.\n" +
             "Example: disttree compare projects/old.yaml projects/new.yaml\n" +
             "Example: disttree compare projects/quillfeather-medical.yaml --against HEAD --markdown -")
         {
-            files, against, json, markdown, html, date, rows,
+            files, against, json, markdown, html, schedules, date, rows,
         };
         command.SetAction(parsed =>
         {
@@ -44,11 +46,15 @@ internal static class CompareCommand
 
             (string, string?)[] outputs = [("--json", jsonPath), ("--markdown", markdownPath), ("--html", htmlPath)];
             OptionChecks.Outputs(outputs);
+            var schedulesFolder = parsed.GetValue(schedules);
+            ScheduleOutput.CheckName(schedulesFolder);
 
             var (before, after) = SolveBoth(context, paths, revision);
             IReadOnlyList<SourceFile> inputs = [.. before.Project.Files, .. after.Project.Files];
-            OutputTarget.CheckAll(inputs, outputs);
+            var schedulesPrepared = ScheduleOutput.Prepare(schedulesFolder, after);
+            OutputTarget.CheckAll(inputs, [.. outputs, .. schedulesPrepared.Targets]);
             var comparison = RevisionComparer.Compare(before, after);
+            ScheduleOutput.Write(context, schedulesPrepared, inputs);
             WriteOutputs(context, comparison, after, new Outputs(jsonPath, markdownPath, htmlPath, parsed.GetValue(date), count), inputs);
             return comparison.HasNewFindings ? ExitCodes.LimitExceeded : ExitCodes.Ok;
         });

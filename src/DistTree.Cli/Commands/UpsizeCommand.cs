@@ -5,7 +5,7 @@ using DistTree.Sizing;
 namespace DistTree.Cli.Commands;
 
 /// <summary>
-/// <c>disttree upsize FILE [--json PATH|-] [--html [PATH]] [--date TEXT] [--apply OUT.yaml|OUT/] [--max-sets N]</c>: the least-material set of
+/// <c>disttree upsize FILE [--json PATH|-] [--html [PATH]] [--schedules DIR] [--date TEXT] [--apply OUT.yaml|OUT/] [--max-sets N]</c>: the least-material set of
 /// conductor upsizes that brings the tree within its limits, proved by re-solving; exit 0 when the plan
 /// clears every finding, 1 when some limit no size can fix remains, 2 bad input.
 /// </summary>
@@ -21,13 +21,14 @@ internal static class UpsizeCommand
             HelpName = "PATH",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        var schedules = ScheduleOutput.Create();
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
         var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) values edited, to OUT.yaml; or to a folder (OUT/), a copy of every file of the project, each edited where its sizes are.", HelpName = "OUT.yaml|OUT/" };
         var maxSets = new Option<int?>("--max-sets") { Description = "Let feeders take up to N parallel sets, 1 to 40 (overrides sizing: max_sets).", HelpName = "N" };
         var command = new Command("upsize", "Find the least-material conductor upsizes that bring every run and end point within its limits.\n" +
             "Example: disttree upsize projects/quillfeather-medical.yaml --apply fixed.yaml")
         {
-            file, json, html, date, apply, maxSets,
+            file, json, html, schedules, date, apply, maxSets,
         };
         command.SetAction(parsed =>
         {
@@ -37,9 +38,13 @@ internal static class UpsizeCommand
             var applyPath = parsed.GetValue(apply);
             (string, string?)[] outputs = [("--json", jsonPath), ("--html", htmlPath)];
             OptionChecks.Outputs([.. outputs, ("--apply", applyPath)]);
+            var schedulesFolder = parsed.GetValue(schedules);
+            ScheduleOutput.CheckName(schedulesFolder);
 
             var before = WithMaxSets(Pipeline.Solve(context, path), parsed.GetValue(maxSets));
             var inputs = before.Project.Files;
+            var schedulesPrepared = ScheduleOutput.Prepare(schedulesFolder, before);
+            outputs = [.. outputs, .. schedulesPrepared.Targets];
             OutputTarget.CheckAll(inputs, outputs);
             var plan = Upsizer.Standard.Plan(before);
 
@@ -61,6 +66,8 @@ internal static class UpsizeCommand
                 var options = new HtmlReportOptions { Plan = plan, Date = parsed.GetValue(date) };
                 OutputFile.Write(context, htmlPath, HtmlReport.Render(before, options), inputs);
             }
+
+            ScheduleOutput.Write(context, schedulesPrepared, inputs);
 
             if (jsonPath != "-" && htmlPath != "-" && applyPath != "-")
             {

@@ -1,4 +1,5 @@
 using DistTree.Model;
+using DistTree.Reports.Schedules;
 using DistTree.Solving;
 using DistTree.Vocabulary;
 using static DistTree.Reports.Html.HtmlText;
@@ -6,7 +7,8 @@ using static DistTree.Reports.Html.HtmlText;
 namespace DistTree.Reports.Html;
 
 /// <summary>
-/// The panels section: each panelboard's branch circuits, worst total first, with their runs' figures and
+/// The panels section: each panelboard's schedule (<see cref="ScheduleViewBuilder"/>, left out in a large project), then
+/// its branch circuits, worst total first, with their runs' figures and
 /// totals as the solver gave them (by both methods). In a large project each panel lists its worst circuits
 /// and counts the rest.
 /// </summary>
@@ -19,6 +21,7 @@ internal static class PanelViewBuilder
     public static PanelView[] Build(Solution s, NodeRollup below, bool large)
     {
         var nodes = s.Network.Nodes;
+        var schedules = large ? new Dictionary<int, PanelSchedule>() : PanelSchedules.Of(s).ToDictionary(p => p.NodeIndex);
         var panels = new List<PanelView>();
         for (var i = 0; i < nodes.Count; i++)
         {
@@ -41,7 +44,10 @@ internal static class PanelViewBuilder
                 var byTotal = b.TotalDropPercent.CompareTo(a.TotalDropPercent);
                 return byTotal != 0 ? byTotal : string.CompareOrdinal(a.Id, b.Id);
             });
-            panels.Add(PanelOf(s, below, i, circuits, large));
+            panels.Add(PanelOf(s, below, i, circuits, large) with
+            {
+                Schedule = schedules.TryGetValue(i, out var schedule) ? ScheduleViewBuilder.Build(schedule) : null,
+            });
         }
 
         return panels.ToArray();
@@ -49,7 +55,7 @@ internal static class PanelViewBuilder
 
     /// <summary>The note on a large project's tables, or null.</summary>
     public static string? Rule(Solution s, bool large) => large
-        ? $"This project has {Count(s.EndPoints.Count)} end points (more than {ReportViewBuilder.LargeProjectEndPoints:#,0}): each panel lists its {LargeProjectRowsPerPanel} worst circuits, and a closing line counts the rest and how many of them exceed a limit. The JSON results (--json) list every circuit."
+        ? $"This project has {Count(s.EndPoints.Count)} end points (more than {ReportViewBuilder.LargeProjectEndPoints:#,0}): each panel lists its {LargeProjectRowsPerPanel} worst circuits, and a closing line counts the rest and how many of them exceed a limit. The JSON results (--json) list every circuit. The panel schedules are left out here: --schedules DIR writes each panel's as a CSV file."
         : null;
 
     /// <summary>The link to the table of the panel that feeds the end point, in the page.</summary>

@@ -8,7 +8,10 @@ namespace DistTree.Reports.Html;
 internal static class RunText
 {
     /// <summary>The run's conductors (<c>2× 3/0 Cu</c>; with <c>, 6 current-carrying</c>, or under IEC <c>, 3 grouped circuits</c>, where a shared raceway derates it), or "regulation" for a transformer's row; escaped.</summary>
-    public static string Conductor(RunResult r)
+    public static string Conductor(RunResult r) => Escape(ConductorText(r));
+
+    /// <summary>The text of <see cref="Conductor"/>, not escaped (for the schedules' CSV).</summary>
+    public static string ConductorText(RunResult r)
     {
         if (r.Kind == RunResultKind.Transformer || r.Size is null)
         {
@@ -19,7 +22,7 @@ internal static class RunText
         // circuit under IEC 60364) derates the run's ampacity: the count shows, in the code's unit.
         var sets = r.Sets > 1 ? $"{r.Sets}× " : "";
         var shared = r.CurrentCarryingConductors is { } n && n > r.Code.UngroupedCount ? $", {n} {r.Code.GroupingUnit}" : "";
-        return Escape($"{sets}{r.Size} {r.Material}{shared}");
+        return $"{sets}{r.Size} {r.Material}{shared}";
     }
 
     /// <summary>The kind in words.</summary>

@@ -92,7 +92,7 @@ public sealed class DropSolver
             EndPoints = endPoints,
             Summary = new SolutionSummary(endPoints.Count, runCount, findings, worst?.TotalDropPercent ?? 0.0, worst?.Id),
             LoadFlow = flow,
-            Panels = Panels(network, solved.Phases),
+            Panels = Panels(network, solved.Phases, solved.Power),
             CatalogName = code.Catalog.SourceName,
             Code = code,
         };
@@ -100,7 +100,7 @@ public sealed class DropSolver
 
     // Each panel's phase loads, in node order. Only a node with children can be a panel with circuits, so the end
     // points (nearly all the nodes) are passed over without reading them.
-    private static PanelResult[] Panels(DistributionNetwork network, PhaseFlow phases)
+    private static PanelResult[] Panels(DistributionNetwork network, PhaseFlow phases, ComplexPower[] power)
     {
         var (nodes, childStarts) = (network.NodeArray, network.Levels.ChildStarts);
         var panels = new List<PanelResult>();
@@ -108,7 +108,13 @@ public sealed class DropSolver
         {
             if (childStarts[i + 1] > childStarts[i] && nodes[i].Equipment is { Circuits.Count: > 0 })
             {
-                panels.Add(phases.Panel(nodes[i]));
+                var connected = ComplexPower.Zero;
+                for (var child = childStarts[i]; child < childStarts[i + 1]; child++)
+                {
+                    connected += power[child];
+                }
+
+                panels.Add(phases.Panel(nodes[i]) with { ConnectedVa = connected.VoltAmperes });
             }
         }
 

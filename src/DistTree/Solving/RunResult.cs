@@ -107,6 +107,31 @@ public readonly struct RunResult : IEquatable<RunResult>
     /// <summary>The current in each line (A, B, C; as many as the run's system has), amperes; empty for a transformer.</summary>
     public IReadOnlyList<double> LineCurrentsA => Run is { } run ? _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.System)) : [];
 
+    /// <summary>
+    /// The apparent power on each line (A, B, C; as many as the run's system has), VA: the line's current times the
+    /// system's line-to-neutral voltage, as <see cref="PanelResult.LineVa"/> counts a panel's (a 2-pole circuit's load is
+    /// so shared between its two lines); empty for a transformer.
+    /// </summary>
+    public IReadOnlyList<double> LineVa
+    {
+        get
+        {
+            if (Run is not { } run)
+            {
+                return [];
+            }
+
+            var v = LineVoltages.LineToNeutralV(run.System);
+            var currents = _rows.Phases.LineCurrentsA(NodeIndex, PhaseRules.Lines(run.System));
+            for (var x = 0; x < currents.Length; x++)
+            {
+                currents[x] *= v;
+            }
+
+            return currents;
+        }
+    }
+
     /// <summary>Neutral current in amperes (Ia + Ib + Ic), or null on a system without a neutral or for a transformer.</summary>
     public double? NeutralCurrentA => Run is { System.HasNeutral: true } ? _rows.Phases.NeutralCurrentA(NodeIndex) : null;
 

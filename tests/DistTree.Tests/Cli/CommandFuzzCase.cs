@@ -11,7 +11,7 @@ namespace DistTree.Tests.Cli;
 /// </summary>
 /// <param name="Files">The files to write into the case's folder (path relative to it, text), the project's main file first.</param>
 /// <param name="Args">The command line, paths absolute.</param>
-/// <param name="Outputs">The full paths the command may create (the outputs it was asked for); every other file stays as it was.</param>
+/// <param name="Outputs">The full paths the command may create (the outputs it was asked for; a path ending in a separator, any new file under that folder); every other file stays as it was.</param>
 /// <param name="Project">Which project, and how its text was mutated.</param>
 /// <param name="ExactToStandardOutput">True when JSON (results or SARIF) or the applied project goes to standard output: each carries the text exactly (JSON escapes control characters only).</param>
 internal sealed record CommandFuzzCase(
@@ -174,6 +174,7 @@ internal sealed record CommandFuzzCase(
                     Maybe(0.15, "--date", () => Value(Dates));
                     Maybe(0.3, "--sarif", () => OutputPath("sarif", exact: true));
                     Maybe(0.3, "--worst", () => Value(Counts));
+                    Maybe(0.15, "--schedules", SchedulesFolder);
                     break;
                 case < 40:
                     _args.AddRange(["check", File()]);
@@ -282,6 +283,28 @@ internal sealed record CommandFuzzCase(
             {
                 Outputs.Add(Path.GetFullPath(path));
             }
+            return path;
+        }
+
+        // The folder --schedules writes into: a new one, or in a case with odd options one that must be refused or is odd.
+        // Every file under it may be an output (an entry ending in a separator in Outputs).
+        private string SchedulesFolder()
+        {
+            var path = (odd ? rng.Next(100) : 0) switch
+            {
+                < 60 => Path.Combine(folder, "schedules"),
+                < 68 => folder, // the case's own folder: the schedules land beside the project
+                < 76 => main, // a file: refused
+                < 82 => "-", // refused
+                < 88 => "", // refused
+                < 94 => Path.Combine(folder, "s c\u001Bh \u2713"),
+                _ => Path.Combine(main, "under"), // under a file
+            };
+            if (path.Length > 0 && path != "-")
+            {
+                Outputs.Add(Path.GetFullPath(path).TrimEnd(Path.DirectorySeparatorChar) + Path.DirectorySeparatorChar);
+            }
+
             return path;
         }
 

@@ -86,7 +86,7 @@ public sealed partial class CommandFuzzTests(ITestOutputHelper output)
 
         var after = Hashes(folder);
         problems.AddRange(before.Where(b => !after.TryGetValue(b.Key, out var hash) || hash != b.Value).Select(b => $"{b.Key} changed or removed"));
-        problems.AddRange(after.Keys.Where(f => !before.ContainsKey(f) && !fuzz.Outputs.Contains(f)).Select(f => $"{f} left behind"));
+        problems.AddRange(after.Keys.Where(f => !before.ContainsKey(f) && !IsOutput(fuzz, f)).Select(f => $"{f} left behind"));
         if (problems.Count == 0)
         {
             return (null, result.ExitCode);
@@ -94,6 +94,11 @@ public sealed partial class CommandFuzzTests(ITestOutputHelper output)
 
         return ($"{string.Join("; ", problems)}\n--- standard error ---\n{Cut(result.Error)}\n--- standard output ---\n{Cut(result.Out)}{Rethrown(fuzz, folder, result)}", result.ExitCode);
     }
+
+    // True when the case asked for the file: by its path, or as a schedule (NAME.csv) right in a folder it named.
+    private static bool IsOutput(CommandFuzzCase fuzz, string file) =>
+        fuzz.Outputs.Contains(file) || (file.EndsWith(".csv", StringComparison.Ordinal)
+            && fuzz.Outputs.Contains(Path.GetDirectoryName(file) + Path.DirectorySeparatorChar));
 
     // Writes the case's files into a fresh folder; returns the hash of each.
     private static Dictionary<string, string> Prepare(CommandFuzzCase fuzz, string folder)

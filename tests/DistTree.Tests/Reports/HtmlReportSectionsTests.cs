@@ -139,7 +139,7 @@ public sealed class HtmlReportSectionsTests
         foreach (var panel in doc.QuerySelectorAll("section.panel"))
         {
             var panelId = panel.QuerySelector("h3 .id")!.TextContent;
-            foreach (var row in panel.QuerySelectorAll("tbody tr:not(.row-more)"))
+            foreach (var row in panel.QuerySelectorAll("table.circuits tbody tr:not(.row-more)"))
             {
                 var e = s.EndPoints.Single(x => x.Id == $"{panelId}/{row.QuerySelector("td")!.TextContent}");
                 Assert.Equal(P(e.TotalDropPercent), row.QuerySelector("td.total")!.TextContent);
@@ -178,7 +178,7 @@ public sealed class HtmlReportSectionsTests
         foreach (var panel in doc.QuerySelectorAll("section.panel"))
         {
             var panelId = panel.QuerySelector("h3 .id")!.TextContent;
-            foreach (var row in panel.QuerySelectorAll("tbody tr").Where(r => r.QuerySelector(".tag") is not null))
+            foreach (var row in panel.QuerySelectorAll("table.circuits tbody tr").Where(r => r.QuerySelector(".tag") is not null))
             {
                 var id = $"{panelId}/{row.QuerySelector("td")!.TextContent}";
                 tagged.Add(id);

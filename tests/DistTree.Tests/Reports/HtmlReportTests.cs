@@ -19,7 +19,7 @@ public sealed class HtmlReportTests
         foreach (var panel in doc.QuerySelectorAll("section.panel"))
         {
             var panelId = panel.QuerySelector("h3 .id")!.TextContent;
-            foreach (var row in panel.QuerySelectorAll("tbody tr:not(.row-more)"))
+            foreach (var row in panel.QuerySelectorAll("table.circuits tbody tr:not(.row-more)"))
             {
                 var cells = row.QuerySelectorAll("td");
                 // The name cell holds the name, and a tag for a circuit with loads along its run.
@@ -252,7 +252,7 @@ public sealed class HtmlReportTests
         Assert.Equal(2, panels.Length);
         foreach (var panel in panels)
         {
-            var rows = panel.QuerySelectorAll("tbody tr:not(.row-more)").ToArray();
+            var rows = panel.QuerySelectorAll("table.circuits tbody tr:not(.row-more)").ToArray();
             Assert.Equal(10, rows.Length);
             Assert.Equal("1001", rows[0].QuerySelector("td")!.TextContent);
             var more = panel.QuerySelector("tr.row-more")!.TextContent;
