@@ -303,6 +303,32 @@ public abstract class CodeRules
     }
 
     /// <summary>
+    /// Adds to <paramref name="findings"/> (made when first needed) a finding where the neutral's design current in
+    /// <paramref name="figures"/> is above its ampacity, named in the code's words (<paramref name="capacityTerm"/>: the
+    /// NEC's <c>ampacity</c>, IEC 60364's <c>current-carrying capacity</c>). Gives the list, or null while there is none.
+    /// </summary>
+    private protected List<Finding>? AddNeutralFinding(List<Finding>? findings, NetworkRun run, in CurrentFigures figures, string capacityTerm)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        if (figures is not { NeutralCurrentA: { } neutralA, NeutralAmpacityA: { } neutralAmpacity } || Carries(neutralA, neutralAmpacity))
+        {
+            return findings;
+        }
+
+        var conductors = run.Conductors;
+        var neutralSize = (conductors.NeutralSize ?? conductors.Size).Text;
+        (findings ??= []).Add(Finding.Written(
+            FindingKind.NeutralAmpacity,
+            Cite(CodeCheck.NeutralAmpacity),
+            run.Id,
+            neutralA,
+            neutralAmpacity,
+            $"{Vocabulary.Words.Noun(run.Kind)} {run.Id}: the neutral carries {neutralA:0.0} A, above the {conductors.Sets}×{neutralSize} {capacityTerm} of {neutralAmpacity:0.#} A",
+            conductors.Location));
+        return findings;
+    }
+
+    /// <summary>
     /// Adds to <paramref name="findings"/> (made when first needed) a finding for each conductor or device rule
     /// <paramref name="run"/> breaks with the figures <paramref name="figures"/>. Gives the list, or null while there is none.
     /// </summary>

@@ -1,5 +1,4 @@
 using System.Security.Cryptography;
-using System.Text;
 using DistTree.Diagnostics;
 using DistTree.ProjectFiles.Sections;
 using DistTree.ProjectFiles.Yaml;
@@ -16,8 +15,6 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader, IProjectFileSource? source)
 {
-    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
-
     /// <summary>SHA-256 of every file read, the main file's first.</summary>
     public List<byte[]> Hashes { get; } = [];
 
@@ -256,21 +253,13 @@ internal sealed class IncludeReader(DiagnosticBag bag, ProjectReader reader, IPr
         }
 
         bag.AddFile(shown);
-        string text;
-        try
+        if (ProjectLoader.DecodeOrReport(bag, shown, bytes) is not { } text)
         {
-            text = StrictUtf8.GetString(bytes);
-        }
-        catch (DecoderFallbackException)
-        {
-            var (location, message) = ProjectLoader.Utf8Error(shown, bytes);
-            bag.Error(location, message);
             return null;
         }
 
         var hash = Hash(bytes);
         Add(file with { Sha256 = Convert.ToHexStringLower(hash) }, hash);
-        text = text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text;
         var root = SourceTreeReader.Read(text, shown, bag);
         if (root is null || root is SourceScalar { IsNull: true })
         {

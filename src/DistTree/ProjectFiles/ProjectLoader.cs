@@ -258,6 +258,25 @@ public static class ProjectLoader
         return ProjectException.At(location, message);
     }
 
+    /// <summary>
+    /// The text of a file the project reads (an included file, a table it brings), decoded as UTF-8 without its byte-order
+    /// mark; null, with a located error in <paramref name="bag"/>, where its bytes are not UTF-8.
+    /// </summary>
+    internal static string? DecodeOrReport(DiagnosticBag bag, string shown, byte[] bytes)
+    {
+        try
+        {
+            var text = StrictUtf8.GetString(bytes);
+            return text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text;
+        }
+        catch (DecoderFallbackException)
+        {
+            var (location, message) = Utf8Error(shown, bytes);
+            bag.Error(location, message);
+            return null;
+        }
+    }
+
     /// <summary>Where bytes that are not UTF-8 first fail to decode (line, and column in characters) and the message saying so, with the byte's offset.</summary>
     internal static (SourceLocation Location, string Message) Utf8Error(string file, byte[] bytes)
     {

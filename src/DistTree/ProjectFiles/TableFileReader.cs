@@ -1,4 +1,3 @@
-using System.Text;
 using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
@@ -16,8 +15,6 @@ namespace DistTree.ProjectFiles;
 /// </summary>
 internal sealed class TableFileReader(DiagnosticBag bag, IncludeReader files, IProjectFileSource? source)
 {
-    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
-
     /// <summary>
     /// <paramref name="rules"/> with the files of <paramref name="catalog"/> and <paramref name="groundingTable"/> (null:
     /// not given) read, relative to the main file <paramref name="mainFile"/> (its name in diagnostics) at <paramref name="mainPath"/>.
@@ -91,21 +88,14 @@ internal sealed class TableFileReader(DiagnosticBag bag, IncludeReader files, IP
         }
 
         bag.AddFile(shown);
-        string text;
-        try
+        if (ProjectLoader.DecodeOrReport(bag, shown, bytes) is not { } text)
         {
-            text = StrictUtf8.GetString(bytes);
-        }
-        catch (DecoderFallbackException)
-        {
-            var (location, message) = ProjectLoader.Utf8Error(shown, bytes);
-            bag.Error(location, message);
             return null;
         }
 
         var hash = IncludeReader.Hash(bytes);
         files.Add(new SourceFile(shown, full, identity, size, Convert.ToHexStringLower(hash), inProject), hash);
-        return (shown, text.Length > 0 && text[0] == '\uFEFF' ? text[1..] : text);
+        return (shown, text);
     }
 
     // The path: relative to the main file, inside its folder (every symbolic link followed, when read from disk).

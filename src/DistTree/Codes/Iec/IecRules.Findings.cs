@@ -43,18 +43,7 @@ public sealed partial class IecRules
             }
         }
 
-        if (figures is { NeutralCurrentA: { } neutralA, NeutralAmpacityA: { } neutralAmpacity } && !Carries(neutralA, neutralAmpacity))
-        {
-            var neutralSize = (conductors.NeutralSize ?? conductors.Size).Text;
-            (findings ??= []).Add(Finding.Written(
-                FindingKind.NeutralAmpacity,
-                Cite(CodeCheck.NeutralAmpacity),
-                run.Id,
-                neutralA,
-                neutralAmpacity,
-                $"{what} {run.Id}: the neutral carries {neutralA:0.0} A, above the {sets}×{neutralSize} current-carrying capacity of {neutralAmpacity:0.#} A",
-                conductors.Location));
-        }
+        findings = AddNeutralFinding(findings, run, figures, "current-carrying capacity");
 
         if (conductors.GroundSize is { } ground && figures.GroundMinSize is { } least && ground.AreaCmil < least.AreaCmil * (1 - Tolerance))
         {
