@@ -135,6 +135,12 @@ public sealed class HtmlReportSectionsTests
         Assert.Contains($"converged in {s.LoadFlow.Iterations} sweeps (tolerance 1e-6 pu)", line, StringComparison.Ordinal);
         Assert.Equal("load flow %", doc.QuerySelector("section.panel table.circuits th.other")!.TextContent);
 
+        // Beside the table, one line says what each method is: the load flow is unbalanced, not "exact".
+        var lede = string.Concat(doc.QuerySelectorAll("#panels .lede").Select(p => p.TextContent));
+        Assert.Contains("The percent sum adds each run's drop by the effective-impedance formula", lede, StringComparison.Ordinal);
+        Assert.Contains("the load flow solves every line and neutral of the tree together, unbalanced", lede, StringComparison.Ordinal);
+        Assert.DoesNotContain("exact", doc.QuerySelector("#panels")!.TextContent, StringComparison.OrdinalIgnoreCase);
+
         var checkedRows = 0;
         foreach (var panel in doc.QuerySelectorAll("section.panel"))
         {
