@@ -10,7 +10,8 @@ internal sealed record TreeView(
     string FlagX,
     IReadOnlyList<TreeNodeView> Nodes,
     IReadOnlyList<TreeEdge> Edges,
-    string Note);
+    string Note,
+    bool PrintWide);
 
 /// <summary>A feeder's line in the drawing, marked by the band of the node it feeds.</summary>
 internal sealed record TreeEdge(string D, string Band);

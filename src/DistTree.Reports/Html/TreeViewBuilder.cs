@@ -47,8 +47,14 @@ internal static class TreeViewBuilder
 
         var width = (Margin * 2) + (layout.MaxDepth * ColW) + NodeW;
         var height = (Margin * 2) + ((layout.Rows - 1) * RowH) + NodeH;
-        return new TreeView(layout.MaxDepth <= FitDepth ? "fit" : "scroll", Coordinate(width), Coordinate(height), Coordinate(NodeW), Coordinate(NodeH), Coordinate(NodeW - 10), views, edges, Note(layout));
+        return new TreeView(
+            layout.MaxDepth <= FitDepth ? "fit" : "scroll", Coordinate(width), Coordinate(height), Coordinate(NodeW), Coordinate(NodeH), Coordinate(NodeW - 10), views, edges, Note(layout),
+            width > PortraitPrintWidthPx);
     }
+
+    // The width of a Letter or A4 portrait page's text, in CSS pixels (7.5 in at 96 px/in): a wider drawing is printed on
+    // a landscape page of its own, so that it is scaled down less and its text stays legible.
+    private const double PortraitPrintWidthPx = 720;
 
     private static string Note(TreeLayout layout)
     {

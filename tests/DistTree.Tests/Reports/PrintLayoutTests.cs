@@ -1,4 +1,6 @@
 using System.Text.RegularExpressions;
+using DistTree.Reports;
+using DistTree.Tests.Solving;
 
 namespace DistTree.Tests.Reports;
 
@@ -23,6 +25,7 @@ public sealed class PrintLayoutTests
     [InlineData(@"#panels, #motors, #findings, #plan, #method \{ break-before: page;")]
     [InlineData(@"section\.panel \+ section\.panel \{ break-before: page;")]
     [InlineData(@"h2 \{ break-after: avoid;")]
+    [InlineData(@"#tree\.tree-wide \{ page: wide-tree; \}")]
     public void Render_PrintRules_KeepHeadingsWithTheirContentAndPanelsOneToAPage(string rule) =>
         Assert.Matches(new Regex(rule), PrintRules());
 
@@ -32,5 +35,17 @@ public sealed class PrintLayoutTests
         var doc = ReportFixtures.RenderDemo();
         Assert.All(new[] { "tree", "panels", "findings", "method" }, id => Assert.NotNull(doc.GetElementById(id)));
         Assert.True(doc.QuerySelectorAll("section.panel").Length > 1);
+    }
+
+    // The demo's drawing (1,208 px) is wider than a portrait page's text (720 px): it prints on a landscape page, at
+    // about 0.8 of its size instead of 0.6; the small office's fits the portrait page.
+    [Fact]
+    public void Render_WideTree_PrintsOnALandscapePage()
+    {
+        Assert.Equal("tree-wide", ReportFixtures.RenderDemo().GetElementById("tree")!.ClassName);
+        Assert.Contains("@page wide-tree { size: landscape; }", ReportFixtures.RenderDemo().DocumentElement.OuterHtml, StringComparison.Ordinal);
+        var small = ReportFixtures.Parse(HtmlReport.Render(
+            SolverHarness.Solve(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "projects", "small-office.yaml"))), HtmlReportOptions.Default));
+        Assert.True(string.IsNullOrEmpty(small.GetElementById("tree")!.ClassName));
     }
 }
