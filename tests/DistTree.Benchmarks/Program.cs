@@ -23,9 +23,16 @@ using DistTree.Solving;
 // point, Analysis.
 // Or: builds PROJECT ROUNDS [one-thread] FOLDER FOLDER… to time the solve of several builds in one process (see
 // BuildComparison and DEVELOPERS.md, Performance).
+// Or: startup COMMAND [ROUNDS] [PROJECT] to time fresh processes of --version and check in turn (StartupBenchmark).
 if (args is ["builds", .. var buildArguments])
 {
     BuildComparison.Run(buildArguments);
+    return;
+}
+
+if (args is ["startup", .. var startupArguments])
+{
+    StartupBenchmark.Run(startupArguments, RepositoryRoot());
     return;
 }
 
