@@ -83,23 +83,26 @@ public sealed class UpsizerTests
         Assert.Contains("parallel sets", u.Message, StringComparison.Ordinal);
     }
 
+    // An imperial 480Y/277 panel P on a feeder whose run is the flow mapping's keys given, with one 3-pole circuit
+    // drawing the amperes given under the device given, on 10 ft of the size given; the feeder may take up to four sets.
+    private static string FeederWithSets(string feeder, int ocpdA, int amps, string size) => $$"""
+        disttree: 1
+        project: { name: Sets, units: imperial }
+        sizing: { max_sets: 4 }
+        service: { id: SVC, system: 480Y/277 }
+        equipment:
+          - id: P
+            kind: panelboard
+            from: SVC
+            feeder: { {{feeder}} }
+            circuits:
+              - { id: "1", poles: 3, ocpd: {{ocpdA}}, load: { amps: {{amps}}, pf: 0.9 }, run: { length: 10, size: {{size}} } }
+        """;
+
     [Fact]
     public void Plan_MaxSets_LetsAFeederTakeParallelSets()
     {
-        var yaml = """
-            disttree: 1
-            project: { name: Sets, units: imperial }
-            sizing: { max_sets: 4 }
-            service: { id: SVC, system: 480Y/277 }
-            equipment:
-              - id: P
-                kind: panelboard
-                from: SVC
-                feeder: { length: 1400, size: 500 kcmil, sets: 1, ocpd: 600 }
-                circuits:
-                  - { id: "1", poles: 3, ocpd: 500, load: { amps: 350, pf: 0.9 }, run: { length: 10, size: 500 kcmil } }
-            """;
-        var plan = PlanFor(yaml);
+        var plan = PlanFor(FeederWithSets("length: 1400, size: 500 kcmil, sets: 1, ocpd: 600", 500, 350, "500 kcmil"));
         Assert.False(plan.After.HasFindings);
         Assert.Contains(plan.Changes, c => c.RunId == "P" && c.SetsAfter > 1);
     }
@@ -109,20 +112,7 @@ public sealed class UpsizerTests
     [Fact]
     public void Plan_MaxSets_NeverProposesParallelSetsBelowOneOught()
     {
-        var yaml = """
-            disttree: 1
-            project: { name: Sets, units: imperial }
-            sizing: { max_sets: 4 }
-            service: { id: SVC, system: 480Y/277 }
-            equipment:
-              - id: P
-                kind: panelboard
-                from: SVC
-                feeder: { length: 900, size: 4 AWG, sets: 1, ocpd: 70 }
-                circuits:
-                  - { id: "1", poles: 3, ocpd: 70, load: { amps: 55, pf: 0.9 }, run: { length: 10, size: 4 AWG } }
-            """;
-        var plan = PlanFor(yaml);
+        var plan = PlanFor(FeederWithSets("length: 900, size: 4 AWG, sets: 1, ocpd: 70", 70, 55, "4 AWG"));
         Assert.Contains(plan.Before.AllFindings, f => f.Code == "feeder_drop");
         Assert.False(plan.After.HasFindings);
         var feeder = Assert.Single(plan.Changes, c => c.RunId == "P");
