@@ -95,7 +95,9 @@ public sealed class PhaseFramePropertyTests
     public void Generator_Trees_CoverEveryConnectionKind()
     {
         var seen = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var tree in PhaseFrameTree.Arbitrary.Generator.Sample(300, 30))
+        // A fixed seed: the same trees every run, so coverage is a fact of the generator, not of the draw (30 unseeded
+        // trees missed a connection kind about one run in twenty).
+        foreach (var tree in PhaseFrameTree.Arbitrary.Generator.Sample(300, new Rnd(20261205UL), 60))
         {
             var project = Analysis.Parse(tree.ToYaml(), "test.yaml").Project;
             seen.Add($"service {project.Service.System.Name}{(project.Service.AvailableFaultCurrentKa is null ? "" : " with fault level")}");
