@@ -123,13 +123,11 @@ public abstract class CodeRules
         ElectricalCode.Iec => new IecRules(catalog),
     };
 
-    /// <summary>The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue.</summary>
-    public static Rules DefaultsOf(ElectricalCode code) => code switch
-    {
-        ElectricalCode.Nec => NecRules.RuleDefaults,
-        ElectricalCode.Cec => CecRules.RuleDefaults,
-        ElectricalCode.Iec => IecRules.RuleDefaults,
-    };
+    /// <summary>
+    /// The defaults of <paramref name="code"/>'s rule set (its limits), without a catalogue: where they depend on the
+    /// supply, a public supply's.
+    /// </summary>
+    public static Rules DefaultsOf(ElectricalCode code) => DefaultsOf(code, SupplyKind.Public);
 
     /// <summary>
     /// The defaults of <paramref name="code"/>'s rule set for an installation of <paramref name="supply"/>; the same as

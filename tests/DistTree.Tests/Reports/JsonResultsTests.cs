@@ -84,16 +84,18 @@ public sealed class JsonResultsTests
         Assert.Equal(JsonValueKind.Null, doc.RootElement.GetProperty("end_points")[0].GetProperty("total_drop_percent_load_flow").ValueKind);
     }
 
+    // The results of a 208Y/120 panel at the service with the circuits given (SolverHarness.OneCircuit's flow mappings).
+    private static JsonDocument ResultsOf(string circuits) =>
+        JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric", circuits))));
+
     // A neutral size is written on its run only where the project states one, so results of a project without
     // one keep their bytes; the document still passes the results schema.
     [Fact]
     public void Write_NeutralSizeStated_WrittenOnThatRunOnly()
     {
-        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+        using var doc = ResultsOf(
             "{ id: \"1\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG, neutral_size: 10 AWG } }\n"
             + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }");
-
-        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
 
         var runs = doc.RootElement.GetProperty("runs").EnumerateArray().ToDictionary(r => r.GetProperty("id").GetString()!);
         Assert.Equal("10 AWG", runs["P/1"].GetProperty("neutral_size").GetString());
@@ -106,13 +108,11 @@ public sealed class JsonResultsTests
     [Fact]
     public void Write_Category_EveryEndPointItsStatedOrDefaultWord()
     {
-        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+        using var doc = ResultsOf(
             "{ id: \"1\", poles: 1, category: ev_charger, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }\n"
             + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }\n"
             + "      - { id: \"3\", poles: 3, load: { hp: 3, pf: 0.85 }, run: { length: 10, size: 12 AWG } }\n"
             + "      - { id: \"4\", poles: 3, category: hvac, load: { fla: 10, pf: 0.85 }, run: { length: 10, size: 12 AWG } }");
-
-        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
 
         var categories = doc.RootElement.GetProperty("end_points").EnumerateArray()
             .ToDictionary(e => e.GetProperty("id").GetString()!, e => e.GetProperty("category").GetString());
@@ -125,11 +125,9 @@ public sealed class JsonResultsTests
     [Fact]
     public void Write_GroundSizes_StatedOnThatRunOnlyAndTheMinimumOnEvery()
     {
-        var yaml = DistTree.Tests.Solving.SolverHarness.OneCircuit("208Y/120", "metric",
+        using var doc = ResultsOf(
             "{ id: \"1\", poles: 1, ocpd: 20, load: { va: 1000 }, run: { length: 10, size: 12 AWG, ground_size: 12 AWG } }\n"
             + "      - { id: \"2\", poles: 1, load: { va: 1000 }, run: { length: 10, size: 12 AWG } }");
-
-        using var doc = JsonDocument.Parse(JsonResults.Write(DistTree.Tests.Solving.SolverHarness.Solve(yaml)));
 
         var runs = doc.RootElement.GetProperty("runs").EnumerateArray().ToDictionary(r => r.GetProperty("id").GetString()!);
         Assert.Equal("12 AWG", runs["P/1"].GetProperty("ground_size").GetString());
