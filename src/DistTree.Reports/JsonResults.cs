@@ -56,7 +56,7 @@ public static partial class JsonResults
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
-                WriteRun(w, run);
+                WriteRun(w, run, run.Kind == RunResultKind.Transformer ? null : solution.Faults?.FarEndAt(run.NodeIndex));
                 FlushEvery(w);
             }
 
@@ -74,10 +74,11 @@ public static partial class JsonResults
             }
 
             w.WriteEndArray();
+            WriteEquipment(w, solution.Faults);
             w.WriteStartArray("end_points"u8);
             foreach (var e in solution.EndPoints)
             {
-                WriteEndPoint(w, e, solution.Project.Service.AvailableFaultCurrentKa is not null);
+                WriteEndPoint(w, e, solution.Project.Service.HasSourceImpedance);
                 FlushEvery(w);
             }
 
@@ -167,6 +168,16 @@ public static partial class JsonResults
             w.WriteNumber("fault_x_r", faultXOverR);
         }
 
+        if (s.Project.Service is { UtilityTransformerKva: { } kva, UtilityTransformerImpedancePercent: { } percent, FaultXOverR: { } transformerXOverR })
+        {
+            w.WriteNumber("utility_transformer_kva", kva);
+            w.WriteNumber("utility_transformer_impedance_percent", percent);
+            w.WriteNumber("fault_x_r", transformerXOverR);
+        }
+
+        w.WriteNumber("fault_voltage_factor_max", r.FaultVoltageFactorMax);
+        w.WriteNumber("fault_voltage_factor_min", r.FaultVoltageFactorMin);
+
         // The tables the project brings, only when it brings them: each named by its file and its header (its source).
         if (r.ConductorCatalog is { } catalog)
         {
@@ -214,7 +225,7 @@ public static partial class JsonResults
         w.WriteEndObject();
     }
 
-    private static void WriteRun(Utf8JsonWriter w, RunResult r)
+    private static void WriteRun(Utf8JsonWriter w, RunResult r, FarEndFault? farEnd)
     {
         w.WriteStartObject();
         w.WriteString("id"u8, r.Id);
@@ -263,6 +274,7 @@ public static partial class JsonResults
         Number(w, "max_length_m"u8, r.MaxLengthM, 2);
         Number(w, "max_length_total_m"u8, r.MaxLengthTotalM, 2);
         w.WriteBoolean("counts_in_total"u8, r.CountsInTotal);
+        WriteFarEnd(w, farEnd);
         WriteFindings(w, r.Findings);
         w.WriteEndObject();
     }

@@ -68,8 +68,25 @@ internal static class SummaryViewBuilder
             FindingKind.NeutralAmpacity => ("neutral's ampacity", t.WithNeutral, "–"),
             FindingKind.DeviceBelowLoad => ("device rating", t.WithOcpd, "–"),
             FindingKind.GroundingConductor => ("minimum for the device", t.WithGround, "–"),
+            FindingKind.InterruptingRating => ("stated rating", s.Faults?.Equipment.Count(e => e.InterruptingKa is not null) ?? 0, "–"),
+            FindingKind.FaultClearing => ("instantaneous trip", FarEndsChecked(s), "–"),
         };
         return LimitRowOf(FindingKinds.Of(kind).Check, limit, checkedCount, over, worst);
+    }
+
+    // How many runs' far ends were judged: those whose device's instantaneous trip is known.
+    private static int FarEndsChecked(Solution s)
+    {
+        var count = 0;
+        foreach (var r in s.Runs)
+        {
+            if (r.Kind != RunResultKind.Transformer && s.Faults?.FarEndAt(r.NodeIndex) is { TripCurrentA: not null })
+            {
+                count++;
+            }
+        }
+
+        return count;
     }
 
     private static LimitRow LimitRowOf(string name, string limit, int checkedCount, int over, string worst)

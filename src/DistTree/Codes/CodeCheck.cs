@@ -59,4 +59,10 @@ public enum CodeCheck
 
     /// <summary>A stated equipment grounding conductor smaller than the run needs.</summary>
     GroundingConductor,
+
+    /// <summary>Equipment rated below the fault current available at it.</summary>
+    InterruptingRating,
+
+    /// <summary>A far-end fault too small to trip the run's device without delay (automatic disconnection).</summary>
+    FaultClearing,
 }

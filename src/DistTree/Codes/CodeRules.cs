@@ -14,7 +14,7 @@ namespace DistTree.Codes;
 /// asks the rule set to judge it. <c>rules: code:</c> chooses one (<see cref="For(ElectricalCode, ConductorCatalog)"/>); nothing outside a rule set
 /// knows a clause number.
 /// </summary>
-public abstract class CodeRules
+public abstract partial class CodeRules
 {
     /// <summary>A figure breaks a rule when it is over its limit by more than this.</summary>
     protected const double Tolerance = 1e-9;

@@ -36,6 +36,10 @@ internal sealed class FieldSet
             .Number("service.frequency_hz", p.Service.FrequencyHz)
             .Number("service.available_fault_current_ka", p.Service.AvailableFaultCurrentKa)
             .Number("service.fault_x_r", p.Service.FaultXOverR)
+            .Number("service.utility_transformer_kva", p.Service.UtilityTransformerKva)
+            .Number("service.utility_transformer_impedance_percent", p.Service.UtilityTransformerImpedancePercent)
+            .Number("rules.fault_voltage_factor_max", r.FaultVoltageFactorMax)
+            .Number("rules.fault_voltage_factor_min", r.FaultVoltageFactorMin)
             .Text("defaults.material", Words.Material.Of(p.Defaults.Material))
             .Number("defaults.insulation_c", p.Defaults.InsulationC)
             .Text("defaults.raceway", Words.Raceway.Of(p.Defaults.Raceway));
@@ -55,6 +59,11 @@ internal sealed class FieldSet
         }
 
         set.Number("demand_factor", e.DemandFactor);
+        if (e.InterruptingKa is { } rating)
+        {
+            set.Number("interrupting_ka", rating);
+        }
+
         if (e.Transformer is { } t)
         {
             set.Number("transformer.kva", t.Kva)
@@ -96,6 +105,7 @@ internal sealed class FieldSet
     public static bool SameDesign(Equipment a, Equipment b) =>
         a.Kind == b.Kind && string.Equals(a.From, b.From, StringComparison.Ordinal) && a.System == b.System &&
         SameRun(a.Feeder, b.Feeder) && a.DemandFactor.Equals(b.DemandFactor) && a.Transformer == b.Transformer &&
+        Nullable.Equals(a.InterruptingKa, b.InterruptingKa) &&
         a.Circuits.Count == b.Circuits.Count;
 
     /// <summary>True when two circuits hold exactly the same design (locations aside).</summary>
@@ -108,7 +118,8 @@ internal sealed class FieldSet
             ? a is null && b is null
             : a.LengthM.Equals(b.LengthM) && a.Size == b.Size && a.Sets == b.Sets && a.Material == b.Material &&
               Nullable.Equals(a.NeutralSize, b.NeutralSize) && Nullable.Equals(a.GroundSize, b.GroundSize) && a.InsulationC == b.InsulationC && a.Raceway == b.Raceway && Nullable.Equals(a.OcpdA, b.OcpdA) &&
-              a.DeviceType == b.DeviceType && a.InstallationMethod == b.InstallationMethod && Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous;
+              a.DeviceType == b.DeviceType && a.InstallationMethod == b.InstallationMethod && Nullable.Equals(a.LimitPercent, b.LimitPercent) && a.Fixed == b.Fixed && a.DeviceRatedContinuous == b.DeviceRatedContinuous &&
+              Nullable.Equals(a.Trip, b.Trip);
 
     /// <summary>
     /// The fields that differ between two sets built by the same factory (missing fields count as null), lengths shown
@@ -232,6 +243,11 @@ internal sealed class FieldSet
         if (run.InstallationMethod != InstallationMethod.B1)
         {
             Text($"{prefix}.installation_method", Words.InstallationMethod.Of(run.InstallationMethod));
+        }
+
+        if (run.Trip is { } trip)
+        {
+            Text($"{prefix}.trip", trip.Name);
         }
 
         this

@@ -63,6 +63,12 @@ public sealed record Equipment
     /// <summary>Branch circuits (panelboards and switchboards; never transformers or splitters).</summary>
     public IReadOnlyList<Circuit> Circuits { get; init; } = [];
 
+    /// <summary>
+    /// The short-circuit current its devices can interrupt, or the assembly's short-circuit current rating, kA
+    /// (<c>interrupting_ka</c>), or null where the project states none.
+    /// </summary>
+    public double? InterruptingKa { get; init; }
+
     /// <summary>Where the equipment is in the project file.</summary>
     public SourceLocation Location { get; init; } = SourceLocation.None;
 

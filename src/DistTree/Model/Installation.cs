@@ -43,3 +43,24 @@ public readonly record struct Installation(InstallationMethod Method, int Loaded
     /// <summary>What the conductor catalogue's metric columns hold: method B1, three loaded conductors.</summary>
     public static Installation Catalogue { get; } = new(InstallationMethod.B1, 3);
 }
+
+/// <summary>
+/// The current at which a circuit-breaker trips without intended delay, as a multiple of its rating (<c>trip</c>): IEC
+/// 60898-1's curve classes B, C and D take the top of their bands (5, 10 and 20 times the rating, the current that is sure
+/// to trip them; recalled, not read), or the multiple stated for a breaker's instantaneous trip.
+/// </summary>
+/// <param name="Name">The class as written (<c>B</c>, <c>C</c>, <c>D</c>), or the stated multiple's text (<c>8x</c>).</param>
+/// <param name="Multiple">The multiple of the device's rating.</param>
+public readonly record struct TripSetting(string Name, double Multiple)
+{
+    /// <summary>IEC 60898-1's curve classes and the top of their instantaneous bands (recalled).</summary>
+    public static IReadOnlyList<(string Word, TripSetting Value)> Classes { get; } =
+    [
+        ("B", new TripSetting("B", 5)),
+        ("C", new TripSetting("C", 10)),
+        ("D", new TripSetting("D", 20)),
+    ];
+
+    /// <summary>A stated multiple, named by its figure.</summary>
+    public static TripSetting Stated(double multiple) => new(FormattableString.Invariant($"{multiple:0.##}x"), multiple);
+}

@@ -25,8 +25,24 @@ public sealed record Service(string Id, ElectricalSystem System, double Frequenc
     /// </summary>
     public double? AvailableFaultCurrentKa { get; init; }
 
-    /// <summary>The X/R ratio of the utility's source impedance; read with <see cref="AvailableFaultCurrentKa"/>.</summary>
+    /// <summary>
+    /// The X/R ratio of the utility's source impedance; read with <see cref="AvailableFaultCurrentKa"/> or with
+    /// <see cref="UtilityTransformerKva"/>.
+    /// </summary>
     public double? FaultXOverR { get; init; }
+
+    /// <summary>
+    /// The rating of the utility's transformer that feeds the service, kVA, where the project gives it in place of an
+    /// available fault current (with <see cref="UtilityTransformerImpedancePercent"/> and <see cref="FaultXOverR"/>): the
+    /// transformer is then taken on an infinite primary bus.
+    /// </summary>
+    public double? UtilityTransformerKva { get; init; }
+
+    /// <summary>The percent impedance of the utility's transformer; read with <see cref="UtilityTransformerKva"/>.</summary>
+    public double? UtilityTransformerImpedancePercent { get; init; }
+
+    /// <summary>True when the project gives the utility's source impedance, by its fault current or its transformer.</summary>
+    public bool HasSourceImpedance => AvailableFaultCurrentKa is not null || UtilityTransformerKva is not null;
 }
 
 /// <summary>A loaded, validated project: the model every later stage reads.</summary>

@@ -153,6 +153,15 @@ public sealed record Rules
     public SolutionMethod Method { get; init; } = SolutionMethod.PercentSum;
 
     /// <summary>
+    /// The voltage factor c of the maximum short-circuit currents (<c>fault_voltage_factor_max</c>): 1.05 for low-voltage
+    /// systems of +6 % tolerance, 1.10 for +10 % (IEC 60909-0 Table 1; recalled, not read).
+    /// </summary>
+    public double FaultVoltageFactorMax { get; init; } = 1.05;
+
+    /// <summary>The voltage factor c of the minimum short-circuit currents (<c>fault_voltage_factor_min</c>): 0.95 (IEC 60909-0 Table 1; recalled).</summary>
+    public double FaultVoltageFactorMin { get; init; } = 0.95;
+
+    /// <summary>
     /// The conductor catalogue the project brings (<c>rules: conductor_catalog:</c>), read by the loader; it takes the
     /// place of the analysis's own for the whole analysis. Null: none brought.
     /// </summary>

@@ -57,6 +57,12 @@ public sealed record Run
     public DeviceType DeviceType { get; init; } = DeviceType.Breaker;
 
     /// <summary>
+    /// How fast the device trips on a large fault (<c>trip</c>), or null for the rule set's default (see
+    /// <c>CodeRules.InstantaneousTripA</c>).
+    /// </summary>
+    public TripSetting? Trip { get; init; }
+
+    /// <summary>
     /// The reference method of installation (<c>installation_method</c>), which column of IEC 60364-5-52's tables gives
     /// the ampacity under <c>rules: code: iec</c>: B1 unless stated. The NEC's table has one column and ignores it.
     /// </summary>

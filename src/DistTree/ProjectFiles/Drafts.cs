@@ -60,6 +60,8 @@ internal sealed class EquipmentDraft(SourceLocation location)
 
     public double DemandFactor { get; set; } = 1.0;
 
+    public double? InterruptingKa { get; set; }
+
     /// <summary>Transformer data; null when not a transformer or when it could not be read.</summary>
     public TransformerData? Transformer { get; set; }
 

@@ -17,22 +17,22 @@ internal static class ProjectKeys
     [
         "code", "supply", "feeder_limit_percent", "branch_limit_percent", "total_limit_percent", "lighting_limit_percent", "branch_current",
         "conductor_temperature", "transformer_drop", "ambient_c", "terminal_c", "method", "motor_start_limit_percent",
-        "conductor_catalog", "grounding_table",
+        "conductor_catalog", "grounding_table", "fault_voltage_factor_max", "fault_voltage_factor_min",
     ];
 
     public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];
 
     public static readonly string[] Sizing = ["max_sets", "prices", "currency", "resolution_percent"];
 
-    public static readonly string[] Service = ["id", "system", "frequency_hz", "available_fault_current_ka", "fault_x_r"];
+    public static readonly string[] Service = ["id", "system", "frequency_hz", "available_fault_current_ka", "fault_x_r", "utility_transformer_kva", "utility_transformer_impedance_percent"];
 
     public static readonly string[] TransformerOnly = ["kva", "primary", "secondary", "impedance_percent", "x_r", "tap_percent", "phase"];
 
     public static readonly string[] Equipment =
-        ["id", "kind", "from", "feeder", "demand_factor", "circuits", .. TransformerOnly];
+        ["id", "kind", "from", "feeder", "demand_factor", "interrupting_ka", "circuits", .. TransformerOnly];
 
     public static readonly string[] Run =
-        ["length", "size", "neutral_size", "ground_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "device_type", "installation_method", "limit_percent", "fixed", "device_rated_continuous"];
+        ["length", "size", "neutral_size", "ground_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "device_type", "trip", "installation_method", "limit_percent", "fixed", "device_rated_continuous"];
 
     public static readonly string[] Circuit = ["id", "name", "poles", "phase", "ocpd", "category", "load", "points", "continuous", "run"];
 

@@ -161,6 +161,7 @@ public static class ProjectLoader
                 System = system,
                 Feeder = d.Feeder is { } feeder ? feeder with { LoadedConductors = PhaseRules.Lines(system) == 3 ? 3 : 2 } : null,
                 DemandFactor = d.DemandFactor,
+                InterruptingKa = d.InterruptingKa,
                 Transformer = d.Transformer,
                 Circuits = circuits,
                 Location = d.Location,

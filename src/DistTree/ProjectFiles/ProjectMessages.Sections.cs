@@ -66,7 +66,11 @@ internal static partial class ProjectMessages
 
     /// <summary>One of the utility's fault current and X/R without the other.</summary>
     public static string FaultKeyAlone(string given, string missing) =>
-        $"'{given}' of the service needs '{missing}' with it: the utility's source is given by its fault current and its X/R ratio together";
+        $"'{given}' of the service needs '{missing}' with it: the utility's source is given by its fault current and its X/R ratio together, or by its transformer's kVA, %Z and X/R together";
+
+    /// <summary>The utility's source given both by its fault current and by its transformer.</summary>
+    public static string SourceGivenTwice(string current, string transformer) =>
+        $"'{transformer}' and '{current}' of the service both give the utility's source: keep one (the fault current the utility states, or its transformer's nameplate)";
 
     /// <summary>An id holding '/', which joins a panel's id and a circuit's.</summary>
     public static string IdWithSlash(string id) => $"the id '{id}' must not contain '/' (it joins a panel's id and a circuit's: LP1/3)";

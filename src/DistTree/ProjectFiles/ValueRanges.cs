@@ -67,6 +67,18 @@ public static class ValueRanges
     /// <summary>The X/R ratio of the utility's source impedance: above 0, at most 100.</summary>
     public static readonly NumberRange FaultXOverR = NumberRange.AboveUpTo(0, 100, "");
 
+    /// <summary>A voltage factor c of a short-circuit calculation: 0.8 to 1.2 (IEC 60909-0 uses 0.95 to 1.10 at low voltage).</summary>
+    public static readonly NumberRange VoltageFactor = NumberRange.Closed(0.8, 1.2, "");
+
+    /// <summary>The rating of the utility's transformer at the service, kVA: 5 to 10,000.</summary>
+    public static readonly NumberRange UtilityKva = NumberRange.Closed(5, 10_000, "kVA");
+
+    /// <summary>An equipment's interrupting or short-circuit current rating, kA: 1 to 300.</summary>
+    public static readonly NumberRange InterruptingKa = NumberRange.Closed(1, 300, "kA");
+
+    /// <summary>A breaker's instantaneous trip as a multiple of its rating: above 1, at most 50.</summary>
+    public static readonly NumberRange TripMultiple = NumberRange.AboveUpTo(1, 50, "");
+
     /// <summary>A demand factor: above 0, at most 2 (above 1 is a warning: it raises the load it applies to).</summary>
     public static readonly NumberRange DemandFactor = NumberRange.AboveUpTo(0, 2, "");
 
@@ -147,12 +159,17 @@ public static class ValueRanges
         ("rules", "motor_start_limit_percent", LimitPercent),
         ("rules", "conductor_temperature", ConductorTemperatureC),
         ("rules", "ambient_c", AmbientC),
+        ("rules", "fault_voltage_factor_max", VoltageFactor),
+        ("rules", "fault_voltage_factor_min", VoltageFactor),
         ("sizing", "max_sets", MaxSetsRange),
         ("sizing", "resolution_percent", ResolutionPercent),
         ("sizing", "prices", Price),
         ("service", "frequency_hz", FrequencyHz),
         ("service", "available_fault_current_ka", AvailableFaultCurrentKa),
         ("service", "fault_x_r", FaultXOverR),
+        ("service", "utility_transformer_kva", UtilityKva),
+        ("service", "utility_transformer_impedance_percent", ImpedancePercent),
+        ("equipment", "interrupting_ka", InterruptingKa),
         ("equipment", "demand_factor", DemandFactor),
         ("equipment", "kva", Kva),
         ("equipment", "impedance_percent", ImpedancePercent),
@@ -164,6 +181,7 @@ public static class ValueRanges
         ("run", "current_carrying", CurrentCarrying),
         ("run", "ocpd", OcpdA),
         ("run", "limit_percent", LimitPercent),
+        ("run", "trip", TripMultiple),
         ("point", "at", LengthM),
         .. Words.LoadQuantity.Pairs.Select(p => ("load", p.Word, Of(p.Value))),
         ("load", "pf", PowerFactor),

@@ -56,6 +56,7 @@ public sealed class Upsizer
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
         unresolvable.AddRange(GroundsLeft(after, changes));
+        unresolvable.AddRange(FaultsLeft(after));
         return new UpsizePlan
         {
             Changes = changes,
@@ -161,7 +162,8 @@ public sealed class Upsizer
     private static Finding? LeftOver(Solution after, List<UnresolvableLimit> unresolvable)
     {
         var known = new HashSet<string>(unresolvable.Select(u => u.Subject), StringComparer.Ordinal);
-        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor) && !known.Contains(f.Subject));
+        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor or FindingKind.InterruptingRating or FindingKind.FaultClearing)
+            && !known.Contains(f.Subject));
     }
 
     // The proof: re-solved, nothing a conductor choice can fix is left over a limit. Where it is not, the user is told
@@ -235,6 +237,14 @@ public sealed class Upsizer
             .Where(f => f.Kind == FindingKind.GroundingConductor && !changed.Contains(f.Subject))
             .Select(f => new UnresolvableLimit(f.Subject, $"{f.Message}: a larger line size cannot fix this; increase the grounding conductor"));
     }
+
+    // What the plan leaves of the short-circuit checks: equipment rated below its fault current (no conductor fixes that),
+    // and far ends whose fault is too small to trip their device.
+    private static IEnumerable<UnresolvableLimit> FaultsLeft(Solution after) => after.AllFindings
+        .Where(f => f.Kind is FindingKind.InterruptingRating or FindingKind.FaultClearing)
+        .Select(f => new UnresolvableLimit(f.Subject, f.Kind == FindingKind.InterruptingRating
+            ? $"{f.Message}: conductor sizes cannot fix this; it needs equipment of a higher rating"
+            : $"{f.Message}: the plan does not size for fault clearing; a larger grounding conductor or lines, a shorter run, or a device that trips lower would"));
 
     // A plan, what it reports as unfixable, and its proof.
     private sealed record Attempted(Dictionary<int, RunOption> Picks, List<UnresolvableLimit> Unresolvable, Solution After);

@@ -62,7 +62,11 @@ public sealed class DropSolver
         var points = EndPointTotals.Solve(network, sums, phases, runs, flow, voltages, code);
         Reach.Add(network, runs, points.EndPoints.Rows);
         var solved = new SolvedRows(network, phases, sums.Power, new SolvedRuns(runs.Rows, runs.Findings), points.EndPoints, code);
-        return Result(network, solved, runs.Count, findings + points.Findings, points.Worst, flow, code);
+
+        // The short-circuit study on the same impedances: the maximum at every piece of equipment, the minimum at every
+        // run's far end (its findings join the run's).
+        var (faults, faultFindings) = FaultSolver.Solve(network, frame, solved, runs.IncomingRow, code);
+        return Result(network, solved, runs.Count, findings + points.Findings + faultFindings, points.Worst, flow, code) with { Faults = faults };
     }
 
     // True when any load of the tree is continuous (its currents' continuous part is then worked out too).

@@ -35,6 +35,12 @@ public enum FindingKind
 
     /// <summary>A stated equipment grounding conductor is smaller than the run needs.</summary>
     GroundingConductor,
+
+    /// <summary>Equipment's stated interrupting or short-circuit current rating is below the fault current available at it.</summary>
+    InterruptingRating,
+
+    /// <summary>A fault at a run's far end draws less current than trips its device without delay.</summary>
+    FaultClearing,
 }
 
 /// <summary>

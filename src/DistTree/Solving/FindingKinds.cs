@@ -62,5 +62,13 @@ public static class FindingKinds
             kind, "grounding_conductor", "Equipment grounding conductor below its minimum", "Equipment grounding conductor", "GroundingConductor",
             "A run's stated equipment grounding conductor is smaller than the minimum for its device and lines.", "mm2",
             "the stated grounding conductor's area", "the minimum's area"),
+        FindingKind.InterruptingRating => new(
+            kind, "interrupting_rating", "Available fault current above the equipment's rating", "Interrupting rating", "InterruptingRating",
+            "The short-circuit current available at a piece of equipment is above its stated interrupting or short-circuit current rating.", "kA",
+            "the largest available fault current", "the stated rating"),
+        FindingKind.FaultClearing => new(
+            kind, "fault_clearing", "Far-end fault too small to trip the device without delay", "Fault clearing at the far end", "FaultClearing",
+            "The minimum fault current at a run's far end is below the current that trips its overcurrent device without delay.", "A",
+            "the minimum far-end fault current", "the device's instantaneous trip current"),
     };
 }

@@ -42,8 +42,12 @@ public sealed record Solution
     /// <summary>The rule set that judged the project (its code, edition and clauses).</summary>
     public required Codes.CodeRules Code { get; init; }
 
-    /// <summary>Every finding, runs' first then end points', in network order.</summary>
-    public IEnumerable<Finding> AllFindings => Runs.SelectMany(r => r.Findings).Concat(EndPoints.SelectMany(e => e.Findings));
+    /// <summary>The short-circuit study: the fault currents at every piece of equipment and at every run's far end.</summary>
+    public FaultStudy? Faults { get; init; }
+
+    /// <summary>Every finding, runs' first, then end points', then equipment's, each in network order.</summary>
+    public IEnumerable<Finding> AllFindings =>
+        Runs.SelectMany(r => r.Findings).Concat(EndPoints.SelectMany(e => e.Findings)).Concat(Faults?.Findings ?? []);
 
     /// <summary>True when any limit is exceeded.</summary>
     public bool HasFindings => Summary.Findings > 0;

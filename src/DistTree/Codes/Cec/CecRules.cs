@@ -139,6 +139,8 @@ public sealed class CecRules : NorthAmericanRules
         CodeCheck.TransformerLoading => "nameplate rating (common practice; no CEC rule)",
         CodeCheck.MotorStart => "starting voltage (common practice; no CEC rule)",
         CodeCheck.GroundingConductor => "CEC Rule 10-616 and Table 16",
+        CodeCheck.InterruptingRating => "CEC Rule 14-012(a)",
+        CodeCheck.FaultClearing => "CEC Rule 14-010(a)",
     };
 
     /// <inheritdoc/>

@@ -154,6 +154,8 @@ public sealed partial class IecRules : CodeRules
         CodeCheck.TransformerLoading => "nameplate rating (common practice; no IEC 60364 clause)",
         CodeCheck.MotorStart => "starting voltage (common practice; no IEC 60364 limit)",
         CodeCheck.GroundingConductor => "IEC 60364-5-54 543.1.2, Table 54.2",
+        CodeCheck.InterruptingRating => "IEC 60364-4-43 434.5.1",
+        CodeCheck.FaultClearing => "IEC 60364-4-41 411.4.4",
     };
 
     /// <summary>

@@ -118,6 +118,8 @@ public sealed class NecRules : NorthAmericanRules
         CodeCheck.TransformerLoading => "nameplate rating (common practice; no NEC clause)",
         CodeCheck.MotorStart => "starting voltage (common practice; no NEC clause)",
         CodeCheck.GroundingConductor => "NEC 250.122",
+        CodeCheck.InterruptingRating => "NEC 110.9 and 110.10",
+        CodeCheck.FaultClearing => "NEC 250.4(A)(5)",
     };
 
     /// <inheritdoc/>

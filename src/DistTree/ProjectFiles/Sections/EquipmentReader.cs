@@ -90,6 +90,11 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             }
         }
 
+        if (m.Optional("interrupting_ka") is { } ratingNode)
+        {
+            draft.InterruptingKa = Values.InRange(ratingNode, quoted.Of("'interrupting_ka' of "), ValueRanges.InterruptingKa);
+        }
+
         ReadTransformer(m, draft, name);
         circuits.ReadList(m, draft, name);
         return draft;

@@ -11,8 +11,8 @@ namespace DistTree.ProjectFiles.Sections;
 /// </summary>
 internal readonly struct MappingReader
 {
-    /// <summary>The most keys a mapping may be allowed (ProjectKeys.Equipment has 12).</summary>
-    private const int MaxAllowed = 16;
+    /// <summary>The most keys a mapping may be allowed (ProjectKeys.Run and ProjectKeys.Rules have 17 each).</summary>
+    private const int MaxAllowed = 24;
 
     private readonly string[] _allowed;
     private readonly DiagnosticBag _bag;

@@ -158,15 +158,35 @@ internal sealed class ProjectReader
         var frequency = m.Optional("frequency_hz") is { } hz ? Values.InRange(hz, "'frequency_hz'", ValueRanges.FrequencyHz) : 60;
         var faultKa = ServiceValue(m, "available_fault_current_ka", ValueRanges.AvailableFaultCurrentKa, out var faultKaOk);
         var faultXr = ServiceValue(m, "fault_x_r", ValueRanges.FaultXOverR, out var faultXrOk);
-        var paired = Paired(m, "available_fault_current_ka", "fault_x_r") && Paired(m, "fault_x_r", "available_fault_current_ka");
-        if (id is not null && system is not null && frequency is not null && faultKaOk && faultXrOk && paired)
+        var utilityKva = ServiceValue(m, "utility_transformer_kva", ValueRanges.UtilityKva, out var utilityKvaOk);
+        var utilityZ = ServiceValue(m, "utility_transformer_impedance_percent", ValueRanges.ImpedancePercent, out var utilityZOk);
+        if (id is not null && system is not null && frequency is not null && faultKaOk && faultXrOk && utilityKvaOk && utilityZOk && SourceKeysAgree(m))
         {
             _context.Draft.Service = new Service(id, system, frequency.Value, m.Node.Location)
             {
                 AvailableFaultCurrentKa = faultKa,
                 FaultXOverR = faultXr,
+                UtilityTransformerKva = utilityKva,
+                UtilityTransformerImpedancePercent = utilityZ,
             };
         }
+    }
+
+    // The utility's source is given one way or none: an available fault current with its X/R, or the utility transformer's
+    // kVA and %Z with the X/R; a key of one way alone, or of both ways, is an error at the key.
+    private bool SourceKeysAgree(in MappingReader m)
+    {
+        const string Ka = "available_fault_current_ka", XR = "fault_x_r", Kva = "utility_transformer_kva", Z = "utility_transformer_impedance_percent";
+        if (m.Optional(Ka) is not null && m.Optional(Kva) is not null)
+        {
+            Bag.Error(m.KeyLocation(Kva), ProjectMessages.SourceGivenTwice(Ka, Kva));
+            return false;
+        }
+
+        var byTransformer = m.Optional(Kva) is not null || m.Optional(Z) is not null;
+        return byTransformer
+            ? Paired(m, Kva, Z) && Paired(m, Z, Kva) && Paired(m, Kva, XR)
+            : Paired(m, Ka, XR) && Paired(m, XR, Ka);
     }
 
     // An optional figure of the service, in its range; ok is false when given and wrong.

@@ -132,6 +132,16 @@ internal sealed class RulesReader(SectionContext context)
             rules = rules with { MotorStartLimitPercent = motorStart };
         }
 
+        if (context.InRange(m, "fault_voltage_factor_max", ValueRanges.VoltageFactor) is { } factorMax)
+        {
+            rules = rules with { FaultVoltageFactorMax = factorMax };
+        }
+
+        if (context.InRange(m, "fault_voltage_factor_min", ValueRanges.VoltageFactor) is { } factorMin)
+        {
+            rules = rules with { FaultVoltageFactorMin = factorMin };
+        }
+
         return rules;
     }
 

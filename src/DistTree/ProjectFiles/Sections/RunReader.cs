@@ -69,10 +69,11 @@ internal sealed class RunReader(SectionContext context)
         }
 
         var (deviceType, method, installationOk) = Installation(m, subject);
+        var (trip, tripOk) = Trip(m, subject);
         var limit = m.Optional("limit_percent") is { } limitNode ? Values.InRange(limitNode, subject.Of("'limit_percent' of "), ValueRanges.LimitPercent) : null;
         var isFixed = m.Optional("fixed") is { } fixedNode && (Values.Bool(fixedNode, subject.Of("'fixed' of ")) ?? false);
         var ratedContinuous = m.Optional("device_rated_continuous") is { } ratedNode && (Values.Bool(ratedNode, subject.Of("'device_rated_continuous' of ")) ?? false);
-        if (!sharingOk || !installationOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
+        if (!sharingOk || !installationOk || !tripOk || length is null || size is null || (neutralNode is not null && neutral is null) || (groundNode is not null && ground is null) || sets < 1 || material is null || insulation is null || raceway is null
             || (m.Optional("ocpd") is not null && ocpd is null) || (m.Optional("limit_percent") is not null && limit is null))
         {
             return null;
@@ -92,6 +93,7 @@ internal sealed class RunReader(SectionContext context)
             CurrentCarrying = currentCarrying,
             OcpdA = ocpd ?? circuitOcpdA,
             DeviceType = deviceType,
+            Trip = trip,
             InstallationMethod = method,
             LimitPercent = limit,
             Fixed = isFixed,
@@ -116,6 +118,26 @@ internal sealed class RunReader(SectionContext context)
         }
 
         return (id, count, (idNode is null || id is not null) && (countNode is null || count is not null));
+    }
+
+    // How fast the device trips on a large fault ('trip'): a curve class of IEC 60898-1 (B, C, D) or a number, the multiple
+    // of the rating at which a breaker trips without delay. A fuse takes a stated multiple only (its clearing current is
+    // read from its own curve). Ok is false where the value was refused.
+    private (TripSetting? Trip, bool Ok) Trip(in MappingReader m, Subject subject)
+    {
+        if (m.Optional("trip") is not { } node)
+        {
+            return (null, true);
+        }
+
+        var what = subject.Of("'trip' of ");
+        if (node is SourceScalar { IsPlain: true } scalar && ValueReader.IsNumberText(scalar.Value))
+        {
+            return Values.InRange(node, what, ValueRanges.TripMultiple) is { } multiple ? (TripSetting.Stated(multiple), true) : (null, false);
+        }
+
+        var curve = Values.Choice(node, what, "trip", TripSetting.Classes);
+        return (curve, curve is not null);
     }
 
     // The device's kind ('device_type', any code) and the reference method of installation ('installation_method', read

@@ -23,7 +23,8 @@ internal sealed class PhaseFrame
 
     /// <summary>
     /// The utility's impedance in each line ahead of the service (Ω), from its available fault current and X/R: three
-    /// phases V_LL/(√3·I_sc); single-phase the loop V/I_sc, split between two lines; zero for a stiff source.
+    /// phases V_LL/(√3·I_sc); single-phase the loop V/I_sc, split between two lines; or from its transformer's nameplate,
+    /// %Z·V²/S the same way; zero for a stiff source.
     /// </summary>
     public Complex SourceImpedance { get; }
 
@@ -66,14 +67,22 @@ internal sealed class PhaseFrame
     // The utility's impedance per line (see SourceImpedance).
     private static Complex Source(Service service)
     {
+        var system = service.System;
+        var lines = PhaseRules.Lines(system);
+        if (service is { UtilityTransformerKva: { } kva, UtilityTransformerImpedancePercent: { } percent, FaultXOverR: { } txr })
+        {
+            // The utility's transformer: %Z·V²/S per phase on three lines, else the loop's, split between two lines.
+            var loop = percent / 100.0 * system.NominalV * system.NominalV / (kva * 1000.0);
+            return Complex.FromPolarCoordinates(lines == 2 ? loop / 2 : loop, Math.Atan(txr));
+        }
+
         if (service is not { AvailableFaultCurrentKa: { } ka, FaultXOverR: { } xOverR })
         {
             return Complex.Zero;
         }
 
-        var system = service.System;
         var amperes = ka * 1000.0;
-        var ohms = PhaseRules.Lines(system) switch
+        var ohms = lines switch
         {
             3 => system.LineToLineV!.Value / (Math.Sqrt(3) * amperes),
             2 => system.NominalV / amperes / 2,

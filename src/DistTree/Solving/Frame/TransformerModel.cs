@@ -88,6 +88,18 @@ internal sealed class TransformerModel
     /// <summary>The part of the voltage the tap takes off the secondary, tap/(1 + tap) (negative for a raising tap).</summary>
     public double TapShare { get; }
 
+    /// <summary>
+    /// The leakage impedance referred to the secondary, ohms: per phase for three-phase, the full winding's for
+    /// single-phase (a centre-tapped winding's is <see cref="PrimarySideOhms"/> + 2·<see cref="HalfOhms"/>).
+    /// </summary>
+    public Complex LeakageOhms => _zt;
+
+    /// <summary>A centre-tapped winding's primary-side branch, referred to the full secondary winding, ohms (else zero).</summary>
+    public Complex PrimarySideOhms => _zp;
+
+    /// <summary>A centre-tapped winding's branch of each half, in the half's own ohms (else zero).</summary>
+    public Complex HalfOhms => _zh;
+
     /// <summary>The turn of the secondary's nominal voltages from the primary's: −30° for Dyn1.</summary>
     public Complex Rotation { get; }
 

@@ -1,0 +1,146 @@
+using System.Numerics;
+using DistTree.Codes;
+using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
+
+namespace DistTree.Solving;
+
+/// <summary>
+/// One run's impedances for a fault, ohms, all sets in parallel: a line, the neutral (where the run carries one) and the
+/// grounding conductor the line-to-ground loop returns through.
+/// </summary>
+/// <param name="Line">One line.</param>
+/// <param name="Neutral">The neutral, or zero where <paramref name="HasNeutral"/> is false.</param>
+/// <param name="Ground">The grounding conductor.</param>
+/// <param name="HasNeutral">True when the run carries a neutral (a node without a run passes its bus's on).</param>
+internal readonly record struct RunZ(Complex Line, Complex Neutral, Complex Ground, bool HasNeutral)
+{
+    /// <summary>No run: equipment standing at its source shares its bus.</summary>
+    public static RunZ None => new(Complex.Zero, Complex.Zero, Complex.Zero, true);
+}
+
+/// <summary>
+/// Every bus's impedances looking up to the source, ohms per phase (see <see cref="FaultSolver"/>): positive sequence,
+/// zero sequence by the neutral, zero sequence by the grounding conductors. Not a number where there is no such path
+/// (no neutral, or no grounded source).
+/// </summary>
+internal sealed class Sequences(int n)
+{
+    /// <summary>A missing path.</summary>
+    public static readonly Complex None = new(double.NaN, double.NaN);
+
+    public Complex[] Z1 { get; } = new Complex[n];
+
+    public Complex[] Z0n { get; } = new Complex[n];
+
+    public Complex[] Z0g { get; } = new Complex[n];
+
+    /// <summary>Node <paramref name="i"/>'s input: its parent's bus (<paramref name="upParent"/> the positive sequence there) and its run.</summary>
+    public void Through(int parent, int i, in RunZ z, Complex upParent)
+    {
+        Z1[i] = upParent + z.Line;
+        Z0n[i] = z.HasNeutral ? Z0n[parent] + z.Line + (3 * z.Neutral) : None;
+        Z0g[i] = Z0g[parent] + z.Line + (3 * z.Ground);
+    }
+
+    /// <summary>
+    /// Node <paramref name="i"/>'s bus behind its transformer, from its primary terminals: the leakage times
+    /// <paramref name="kT"/> (IEC 60909-0's correction, 1 for none). Dyn1: the positive sequence referred by the square of
+    /// the line-to-line ratio, the zero sequence the leakage alone (the delta holds it). Single-phase: the loop of the two
+    /// primary lines (or line and neutral) referred by the square of the turns ratio, then the winding's own loops.
+    /// </summary>
+    public void Transform(int i, TransformerModel model, ElectricalSystem secondary, double kT)
+    {
+        var k2 = model.Ratio * model.Ratio;
+        var zt = kT * model.LeakageOhms;
+        if (model.Connection == WindingConnection.DeltaWye)
+        {
+            Z1[i] = (Z1[i] * 3 * k2) + zt;
+            Z0n[i] = Z0g[i] = secondary.HasNeutral ? zt : None;
+            return;
+        }
+
+        var primaryLoop = model.Q == Functional.Neutral ? ((2 * Z1[i]) + Z0n[i]) / 3 : 2 * Z1[i];
+        var source = primaryLoop * k2;
+        switch (model.Connection)
+        {
+            case WindingConnection.OneLine:
+                Z1[i] = Z0n[i] = Z0g[i] = source + zt;
+                break;
+            case WindingConnection.TwoLines:
+                Z1[i] = (source + zt) / 2;
+                Z0n[i] = Z0g[i] = None;
+                break;
+            case WindingConnection.CentreTapped:
+                {
+                    var pair = source + zt;
+                    var half = (source / 4) + (kT * ((model.PrimarySideOhms / 4) + model.HalfOhms));
+                    Z1[i] = pair / 2;
+                    Z0n[i] = Z0g[i] = (3 * half) - pair;
+                    break;
+                }
+        }
+    }
+
+    /// <summary>True where <paramref name="z"/> is a path.</summary>
+    public static bool Has(Complex z) => !double.IsNaN(z.Real);
+}
+
+/// <summary>
+/// The runs' impedances for faults: each conductor's AC resistance at a temperature (20 °C for the maximum, its
+/// insulation's rating for the minimum) and its reactance, per the catalogue, times the length over the sets. The
+/// grounding conductor is the stated one, else the code's minimum for the run, else (no device or no table) the lines'
+/// size, which the far end says.
+/// </summary>
+internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] incomingRow, int n, double frequencyHz)
+{
+    private static readonly string[] Bases = ["stated", "the code's minimum", "the lines' size: state ground_size"];
+
+    private readonly ConductorCatalog _catalog = code.Catalog;
+
+    // Per node, its run's grounding conductor once worked out: the size's index + 1 and its basis, 0 until then.
+    private readonly int[] _ground = new int[n];
+    private readonly byte[] _groundBasis = new byte[n];
+
+    /// <summary>Run <paramref name="run"/>'s impedances (into node <paramref name="i"/>) at <paramref name="temperatureC"/>, or each conductor's rated temperature for null.</summary>
+    public RunZ Of(int i, NetworkRun run, double? temperatureC)
+    {
+        var c = run.Conductors;
+        var perSet = c.LengthM / 1000.0 / c.Sets;
+        var hasNeutral = HasNeutral(run);
+        var (ground, _) = Ground(i, run);
+        return new RunZ(
+            Ohms(c.Size, c, temperatureC) * perSet,
+            hasNeutral ? Ohms(c.NeutralSize ?? c.Size, c, temperatureC) * perSet : Complex.Zero,
+            Ohms(ground, c, temperatureC) * perSet,
+            hasNeutral);
+    }
+
+    /// <summary>The grounding conductor of each set of <paramref name="run"/> and whether it is stated, the code's minimum, or the lines' size.</summary>
+    public (ConductorSize Size, string Basis) Ground(int i, NetworkRun run)
+    {
+        if (_ground[i] == 0)
+        {
+            var c = run.Conductors;
+            var (size, basis) = c.GroundSize is { } stated
+                ? (stated, 0)
+                : incomingRow[i] >= 0 && new RunResult(solved, incomingRow[i]).GroundMinimum is { } least && _catalog.Contains(least)
+                    ? (least, 1)
+                    : (c.Size, 2);
+            (_ground[i], _groundBasis[i]) = (size.Index + 1, (byte)basis);
+        }
+
+        return (ConductorSize.All[_ground[i] - 1], Bases[_groundBasis[i]]);
+    }
+
+    /// <summary>True when <paramref name="run"/> carries a neutral: a feeder of a system with one, a 1-pole branch circuit.</summary>
+    public static bool HasNeutral(NetworkRun run) =>
+        run.System.HasNeutral && (run.Kind == RunKind.Feeder || run.Target.Circuit is { Poles: 1 });
+
+    private Complex Ohms(ConductorSize size, Run c, double? temperatureC)
+    {
+        var t = temperatureC ?? ConductorCatalog.RatedTemperatureC(size, c.InsulationC);
+        return new Complex(_catalog.AcResistanceOhmPerKm(size, c.Material, c.Raceway, t, frequencyHz), _catalog.ReactanceOhmPerKm(size, c.Raceway, frequencyHz));
+    }
+}
