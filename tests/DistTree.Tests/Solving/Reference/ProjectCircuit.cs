@@ -37,6 +37,12 @@ internal sealed partial class ProjectCircuit
         _buses = new Bus[analysis.Network.Nodes.Count];
     }
 
+    /// <summary>The lines and the neutral node (−1 for none) at the far end of end point <paramref name="id"/>'s run.</summary>
+    public (int[] Lines, int Neutral) EndOf(string id) => (_ends[id].Lines, _ends[id].Neutral);
+
+    /// <summary>The bus of the node at <paramref name="nodeIndex"/> (a transformer's: its secondary).</summary>
+    public Bus BusOf(int nodeIndex) => _buses[nodeIndex];
+
     /// <summary>The circuit built.</summary>
     public NodalCircuit Circuit { get; } = new();
 
