@@ -68,6 +68,10 @@ internal static partial class ProjectMessages
     public static string FaultKeyAlone(string given, string missing) =>
         $"'{given}' of the service needs '{missing}' with it: the utility's source is given by its fault current and its X/R ratio together, or by its transformer's kVA, %Z and X/R together";
 
+    /// <summary>A 'trip' that is neither a curve class nor a number.</summary>
+    public static string TripUnknown(Subject what, string found) =>
+        $"{what} must be a curve class of IEC 60898-1 (B, C or D) or the multiple of the device's rating at which it trips without delay (a number); found '{found}'";
+
     /// <summary>The utility's source given both by its fault current and by its transformer.</summary>
     public static string SourceGivenTwice(string current, string transformer) =>
         $"'{transformer}' and '{current}' of the service both give the utility's source: keep one (the fault current the utility states, or its transformer's nameplate)";

@@ -243,8 +243,8 @@ public sealed class ProjectLoaderElectricalKeysTests
     }
 
     [Theory]
-    [InlineData(", available_fault_current_ka: 22", "available_fault_current_ka", "'available_fault_current_ka' of the service needs 'fault_x_r' with it: the utility's source is given by its fault current and its X/R ratio together")]
-    [InlineData(", fault_x_r: 8", "fault_x_r", "'fault_x_r' of the service needs 'available_fault_current_ka' with it: the utility's source is given by its fault current and its X/R ratio together")]
+    [InlineData(", available_fault_current_ka: 22", "available_fault_current_ka", "'available_fault_current_ka' of the service needs 'fault_x_r' with it: the utility's source is given by its fault current and its X/R ratio together, or by its transformer's kVA, %Z and X/R together")]
+    [InlineData(", fault_x_r: 8", "fault_x_r", "'fault_x_r' of the service needs 'available_fault_current_ka' with it: the utility's source is given by its fault current and its X/R ratio together, or by its transformer's kVA, %Z and X/R together")]
     public void Parse_OneFaultKeyAlone_IsAnErrorNamingTheOther(string keys, string token, string message)
     {
         ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), keys), token, message);
@@ -259,6 +259,39 @@ public sealed class ProjectLoaderElectricalKeysTests
     public void Parse_FaultKeyOutOfRange_IsAnErrorAtTheValue(string keys, string token, string message)
     {
         ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), ", " + keys), token, message);
+    }
+
+    // --- the short-circuit study's keys (issue 23) ---
+
+    [Fact]
+    public void Parse_UtilityTransformerAndFaultKeys_AreRead()
+    {
+        var project = ProjectLoader.Parse(
+            Project("480Y/277", "  - { id: LP1, kind: panelboard, from: SVC, interrupting_ka: 22, feeder: { length: 20, size: 2 AWG, trip: D }, circuits: [ " + Circuit1 + " ] }\n",
+                ", utility_transformer_kva: 750, utility_transformer_impedance_percent: 5.5, fault_x_r: 5"),
+            "t.yaml");
+
+        Assert.Equal((750.0, 5.5, 5.0), (project.Service.UtilityTransformerKva!.Value, project.Service.UtilityTransformerImpedancePercent!.Value, project.Service.FaultXOverR!.Value));
+        Assert.Equal(22.0, project.Equipment[0].InterruptingKa);
+        Assert.Equal(new TripSetting("D", 20), project.Equipment[0].Feeder!.Trip);
+    }
+
+    [Theory]
+    [InlineData(", available_fault_current_ka: 22, fault_x_r: 5, utility_transformer_kva: 500, utility_transformer_impedance_percent: 5", "utility_transformer_kva",
+        "'utility_transformer_kva' and 'available_fault_current_ka' of the service both give the utility's source: keep one (the fault current the utility states, or its transformer's nameplate)")]
+    [InlineData(", utility_transformer_kva: 500, fault_x_r: 5", "utility_transformer_kva",
+        "'utility_transformer_kva' of the service needs 'utility_transformer_impedance_percent' with it: the utility's source is given by its fault current and its X/R ratio together, or by its transformer's kVA, %Z and X/R together")]
+    public void Parse_UtilitySourceGivenWrongly_IsAnErrorAtTheKey(string keys, string token, string message)
+    {
+        ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1), keys), token, message);
+    }
+
+    [Theory]
+    [InlineData("trip: E", "E", "'trip' of the feeder of 'LP1' must be a curve class of IEC 60898-1 (B, C or D) or the multiple of the device's rating at which it trips without delay (a number); found 'E'")]
+    [InlineData("trip: 0.5", "0.5", "'trip' of the feeder of 'LP1' must be greater than 1 and at most 50; found 0.5")]
+    public void Parse_TripNotAClassOrMultiple_IsAnErrorAtTheValue(string key, string token, string message)
+    {
+        ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG, " + key + " }", Circuit1)), token, message);
     }
 
     private static string Project(string system, string equipment, string serviceKeys = "") =>

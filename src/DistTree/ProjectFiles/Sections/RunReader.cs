@@ -136,8 +136,21 @@ internal sealed class RunReader(SectionContext context)
             return Values.InRange(node, what, ValueRanges.TripMultiple) is { } multiple ? (TripSetting.Stated(multiple), true) : (null, false);
         }
 
-        var curve = Values.Choice(node, what, "trip", TripSetting.Classes);
-        return (curve, curve is not null);
+        if (Values.Text(node, what) is not { } text)
+        {
+            return (null, false);
+        }
+
+        foreach (var (word, value) in TripSetting.Classes)
+        {
+            if (string.Equals(word, text, StringComparison.Ordinal))
+            {
+                return (value, true);
+            }
+        }
+
+        Bag.Error(node.Location, ProjectMessages.TripUnknown(what, text));
+        return (null, false);
     }
 
     // The device's kind ('device_type', any code) and the reference method of installation ('installation_method', read
