@@ -215,7 +215,7 @@ internal sealed class SizingProblem
     }
 
     // Material: area × length × current-carrying conductors × sets (mm²·m); with a price table, price × length × conductors × sets.
-    private static double? Cost(Run conductors, ConductorSize size, int sets, CircuitSupply supply, SizingOptions sizing)
+    internal static double? Cost(Run conductors, ConductorSize size, int sets, CircuitSupply supply, SizingOptions sizing)
     {
         var conductorsPerSet = supply.Phases == 3 ? 3 : 2;
         if (sizing.Prices.Count == 0)

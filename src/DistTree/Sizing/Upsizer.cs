@@ -53,6 +53,8 @@ public sealed class Upsizer
         }
 
         var (picks, unresolvable, after) = attempt;
+        var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, p => Analysis.Run(Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
         unresolvable.AddRange(GroundsLeft(after, changes));

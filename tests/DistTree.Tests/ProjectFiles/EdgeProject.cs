@@ -24,12 +24,17 @@ internal static partial class EdgeProject
         ["rules.motor_start_limit_percent"] = "15",
         ["rules.conductor_temperature"] = "75",
         ["rules.ambient_c"] = "30",
+        ["rules.fault_voltage_factor_max"] = "1.05",
+        ["rules.fault_voltage_factor_min"] = "0.95",
         ["sizing.max_sets"] = "4",
         ["sizing.resolution_percent"] = "0.01",
         ["sizing.prices"] = "3",
         ["service.frequency_hz"] = "60",
         ["service.available_fault_current_ka"] = "22",
         ["service.fault_x_r"] = "6",
+        ["service.utility_transformer_kva"] = "1500",
+        ["service.utility_transformer_impedance_percent"] = "5.75",
+        ["equipment.interrupting_ka"] = "65",
         ["equipment.demand_factor"] = "1",
         ["equipment.kva"] = "75",
         ["equipment.impedance_percent"] = "5",
@@ -40,6 +45,7 @@ internal static partial class EdgeProject
         ["run.current_carrying"] = "4",
         ["run.ocpd"] = "125",
         ["run.limit_percent"] = "2",
+        ["run.trip"] = "10",
         ["circuit.ocpd"] = "20",
         ["point.at"] = "10",
         ["load.va"] = "1000",
@@ -58,13 +64,14 @@ internal static partial class EdgeProject
     private const string Template = """
         disttree: 1
         project: { name: Edges, units: metric }
-        rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, lighting_limit_percent: {rules.lighting_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c} }
+        rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, lighting_limit_percent: {rules.lighting_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c}, fault_voltage_factor_max: {rules.fault_voltage_factor_max}, fault_voltage_factor_min: {rules.fault_voltage_factor_min} }
         sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
         service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz}, available_fault_current_ka: {service.available_fault_current_ka}, fault_x_r: {service.fault_x_r} }
         equipment:
           - id: MSB
             kind: switchboard
             from: SVC
+            interrupting_ka: {equipment.interrupting_ka}
           - id: MP
             kind: panelboard
             from: MSB
@@ -79,7 +86,7 @@ internal static partial class EdgeProject
             impedance_percent: {equipment.impedance_percent}
             x_r: {equipment.x_r}
             tap_percent: {equipment.tap_percent}
-            feeder: { length: {run.length}, size: 1 AWG, sets: {run.sets}, ocpd: {run.ocpd}, limit_percent: {run.limit_percent} }
+            feeder: { length: {run.length}, size: 1 AWG, sets: {run.sets}, ocpd: {run.ocpd}, limit_percent: {run.limit_percent}, trip: {run.trip} }
           - id: LP1
             kind: panelboard
             from: T1
@@ -96,12 +103,22 @@ internal static partial class EdgeProject
 
         """;
 
+    // The service's source by the utility's transformer in place of its fault current (the two are exclusive): the
+    // template a test of those keys fills.
+    private static readonly string UtilityTemplate = Template.Replace(
+        "available_fault_current_ka: {service.available_fault_current_ka}",
+        "utility_transformer_kva: {service.utility_transformer_kva}, utility_transformer_impedance_percent: {service.utility_transformer_impedance_percent}",
+        StringComparison.Ordinal);
+
+    private static string TemplateFor(IReadOnlyDictionary<string, double> values) =>
+        values.Keys.Any(k => k.StartsWith("service.utility_transformer_", StringComparison.Ordinal)) ? UtilityTemplate : Template;
+
     /// <summary>The marker of a key of <see cref="ValueRanges.All"/>.</summary>
     public static string Marker(string section, string key) => $"{section}.{key}";
 
     /// <summary>The project with the given markers' values in place of the plain ones.</summary>
     public static string Text(IReadOnlyDictionary<string, double> values) =>
-        MarkerPattern().Replace(Template, m =>
+        MarkerPattern().Replace(TemplateFor(values), m =>
         {
             var marker = m.Groups["marker"].Value;
             return values.TryGetValue(marker, out var v) ? Number(v) : Plain[marker];
@@ -110,7 +127,7 @@ internal static partial class EdgeProject
     /// <summary>The 1-based line and column at which the value of <paramref name="marker"/> stands in <see cref="Text"/> of <paramref name="values"/>.</summary>
     public static (int Line, int Column) Where(IReadOnlyDictionary<string, double> values, string marker)
     {
-        var text = MarkerPattern().Replace(Template, m =>
+        var text = MarkerPattern().Replace(TemplateFor(values), m =>
             m.Groups["marker"].Value == marker ? "\u0001" : values.TryGetValue(m.Groups["marker"].Value, out var v) ? Number(v) : Plain[m.Groups["marker"].Value]);
         var at = text.IndexOf('\u0001', StringComparison.Ordinal);
         var lineStart = text.LastIndexOf('\n', at) + 1;

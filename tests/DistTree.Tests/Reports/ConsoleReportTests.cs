@@ -28,7 +28,7 @@ public sealed class ConsoleReportTests
             "{ id: \"5\", poles: 1, ocpd: 20, load: { amps: 4 }, run: { length: 5, size: 12 AWG } }"));
 
         Assert.EndsWith("fails: ampacity, neutral_ampacity, device_below_load", PathLine(text, "P/1").TrimEnd(), StringComparison.Ordinal);
-        Assert.EndsWith("fails: total_drop, branch_drop", PathLine(text, "P/3").TrimEnd(), StringComparison.Ordinal);
+        Assert.EndsWith("fails: total_drop, branch_drop, fault_clearing", PathLine(text, "P/3").TrimEnd(), StringComparison.Ordinal);
         Assert.EndsWith("ok", PathLine(text, "P/5").TrimEnd(), StringComparison.Ordinal);
         Assert.Contains("% of 5 %", PathLine(text, "P/5"), StringComparison.Ordinal);
     }

@@ -21,7 +21,7 @@ public sealed class FindingKindsTests
             Assert.False(string.IsNullOrWhiteSpace(k.Value));
             Assert.False(string.IsNullOrWhiteSpace(k.Limit));
             Assert.EndsWith(".", k.Description, StringComparison.Ordinal);
-            Assert.Contains(k.Unit, new[] { "%", "A", "kVA", "mm2" });
+            Assert.Contains(k.Unit, new[] { "%", "A", "kA", "kVA", "mm2" });
         });
     }
 

@@ -76,10 +76,20 @@ internal sealed class GeneratedProjectWriter(int capacity)
         if (run.OcpdA is { } ocpd)
         {
             text.Append(CultureInfo.InvariantCulture, $", ocpd: {N(ocpd)}");
+
+            // A feeder breaker of 200 A and up, as a designer sets one: its adjustable instantaneous trip at 5 times its
+            // rating (common practice), so that a fault at the far end of a feeder on a transformer's secondary clears.
+            if (ocpd >= LowInstantaneousFromA)
+            {
+                text.Append(", trip: 5");
+            }
         }
 
         return text.Append(" }").ToString();
     }
+
+    // The smallest feeder device given a low instantaneous setting.
+    private const double LowInstantaneousFromA = 200;
 
     private static string N(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
 }
