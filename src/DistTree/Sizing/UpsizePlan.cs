@@ -66,6 +66,12 @@ public sealed record UpsizePlan
     /// <summary>Total cost of the changes (material added, or priced).</summary>
     public required double TotalCostAdded { get; init; }
 
+    /// <summary>
+    /// The part of <see cref="TotalCostAdded"/> that the far-end fault repair added after the optimum on the drop grid
+    /// (see <c>FarEndRepair</c>): the optimum itself is the rest.
+    /// </summary>
+    public double FarEndRepairCostAdded { get; init; }
+
     /// <summary>The cost unit: <c>mm2·m</c> of conductor, or the price table's currency.</summary>
     public required string CostUnit { get; init; }
 

@@ -54,7 +54,9 @@ public sealed class Upsizer
 
         var (picks, unresolvable, after) = attempt;
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        var optimumCost = picks.Values.Sum(o => o.Cost);
         (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, p => Analysis.Run(Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
+        var repairCost = picks.Values.Sum(o => o.Cost) - optimumCost;
         Verify(after, unresolvable);
         var changes = Changes(before, after, picks);
         unresolvable.AddRange(GroundsLeft(after, changes));
@@ -63,6 +65,7 @@ public sealed class Upsizer
         {
             Changes = changes,
             TotalCostAdded = changes.Sum(c => c.CostAdded),
+            FarEndRepairCostAdded = repairCost,
             CostUnit = before.Project.Sizing.Prices.Count == 0 ? "mm2·m" : (before.Project.Sizing.Currency.Length > 0 ? before.Project.Sizing.Currency : "price"),
             Unresolvable = unresolvable,
             Before = before,

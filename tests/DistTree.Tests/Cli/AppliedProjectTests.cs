@@ -111,7 +111,9 @@ public sealed class AppliedProjectTests
             .Replace(forms[0], forms[0].Replace("\"8\\x20AWG\"", "\"2 AWG\"", StringComparison.Ordinal).Replace("'10 AWG'", "'4 AWG'", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace(forms[1], forms[1].Replace("'12 AWG'", "'6 AWG'", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace(forms[2], forms[2].Replace("!!str 8 AWG", "!!str 6 AWG", StringComparison.Ordinal), StringComparison.Ordinal)
-            .Replace("run: { length: 250, size: 8 AWG, raceway: pvc }", "run: { length: 250, size: 3 AWG, raceway: pvc }", StringComparison.Ordinal);
+            .Replace("run: { length: 250, size: 8 AWG, raceway: pvc }", "run: { length: 250, size: 3 AWG, raceway: pvc }", StringComparison.Ordinal)
+            .Replace("run: { length: 600, size: 10 AWG, raceway: pvc }", "run: { length: 600, size: 8 AWG, raceway: pvc }", StringComparison.Ordinal)
+            .Replace("feeder: { length: 110, size: 3 AWG, ocpd: 100 }", "feeder: { length: 110, size: 2 AWG, ocpd: 100 }", StringComparison.Ordinal);
         Assert.Equal([.. Bom, .. Encoding.UTF8.GetBytes(expected)], File.ReadAllBytes(output));
         Assert.Equal(before, File.ReadAllBytes(input));
         Assert.Equal(0, CliRunner.Run("check", output).ExitCode);

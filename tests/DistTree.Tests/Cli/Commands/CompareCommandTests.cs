@@ -73,8 +73,8 @@ public sealed class CompareCommandTests : IDisposable
         var r = CliRunner.Run("compare", old, @new);
 
         Assert.Equal(1, r.ExitCode);
-        Assert.Contains("newly failing (branch_drop, total_drop)", r.Out, StringComparison.Ordinal);
-        Assert.Contains("New findings (2):", r.Out, StringComparison.Ordinal);
+        Assert.Contains("newly failing (branch_drop, fault_clearing, total_drop)", r.Out, StringComparison.Ordinal);
+        Assert.Contains("New findings (3):", r.Out, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -86,7 +86,7 @@ public sealed class CompareCommandTests : IDisposable
         var r = CliRunner.Run("compare", old, @new);
 
         Assert.Equal(0, r.ExitCode);
-        Assert.Contains("Resolved findings (2):", r.Out, StringComparison.Ordinal);
+        Assert.Contains("Resolved findings (3):", r.Out, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -51,7 +51,7 @@ public sealed class GeneratedProjectWriterTests
     {
         var writer = Start();
         writer.Feeder(new WrittenRun(120.25, ConductorSize.Parse("4/0 AWG"), 1, 225));
-        Assert.EndsWith("    feeder: { length: 120.25, size: 4/0 AWG, ocpd: 225 }\n", writer.ToString(), StringComparison.Ordinal);
+        Assert.EndsWith("    feeder: { length: 120.25, size: 4/0 AWG, ocpd: 225, trip: 5 }\n", writer.ToString(), StringComparison.Ordinal);
     }
 
     [Fact]
