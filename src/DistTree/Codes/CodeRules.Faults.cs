@@ -15,12 +15,25 @@ public abstract partial class CodeRules
     /// </summary>
     public const double DefaultTripMultiple = 10;
 
+    /// <summary>The current that trips <paramref name="conductors"/>' device without delay, amperes (see <see cref="InstantaneousTrip"/>), or null.</summary>
+    public double? InstantaneousTripA(Run conductors)
+    {
+        ArgumentNullException.ThrowIfNull(conductors);
+        return conductors switch
+        {
+            { OcpdA: null } => null,
+            { Trip: { } trip, OcpdA: { } ocpd } => trip.Multiple * ocpd,
+            { DeviceType: DeviceType.Fuse } => null,
+            { OcpdA: { } ocpd } => DefaultTripMultiple * ocpd,
+        };
+    }
+
     /// <summary>
     /// The current that trips <paramref name="conductors"/>' device without delay, amperes, and how it was taken; null where
     /// it is not known: no device stated, or a fuse without a stated multiple (a fuse's clearing current is read from its
     /// own time-current curve).
     /// </summary>
-    public virtual (double? TripA, string Basis) InstantaneousTrip(Run conductors)
+    public (double? TripA, string Basis) InstantaneousTrip(Run conductors)
     {
         ArgumentNullException.ThrowIfNull(conductors);
         if (conductors.OcpdA is not { } ocpd)

@@ -272,6 +272,24 @@ public abstract partial class CodeRules
     }
 
     /// <summary>
+    /// The table's grounding conductor for <paramref name="conductors"/>' device as <see cref="MinimumGroundSize(Run, ConductorSize, int, double, Rules, int, in CircuitDuty)"/>
+    /// gives it, but without any increase for lines larger than the load needs (NEC 250.122(B)): never larger than that
+    /// minimum, and found without sizing the lines for the load. Null where that gives none.
+    /// </summary>
+    internal ConductorSize? TableGroundSize(Run conductors)
+    {
+        ArgumentNullException.ThrowIfNull(conductors);
+        if (SizesGroundingByLines && ProjectGroundingTable is null)
+        {
+            return MinimumGroundSize(new GroundingCase(conductors.OcpdA ?? 0, conductors.Material, conductors.Size, null, default));
+        }
+
+        return conductors.OcpdA is not { } ocpd || GroundingTableInForce?.SizeFor(ocpd, conductors.Material) is not { } tableSize
+            ? null
+            : MinimumGroundSize(new GroundingCase(ocpd, conductors.Material, conductors.Size, null, tableSize));
+    }
+
+    /// <summary>
     /// The smallest size of <paramref name="series"/> in the catalogue whose <paramref name="sets"/> sets, of the material and
     /// insulation of <paramref name="conductors"/>, meet every conductor rule here (<see cref="Meets"/>) for a design current
     /// of <paramref name="designCurrentA"/> under a device of <paramref name="ocpdA"/>, their ampacity worked out as the solver

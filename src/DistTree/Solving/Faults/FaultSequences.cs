@@ -25,16 +25,25 @@ internal readonly record struct RunZ(Complex Line, Complex Neutral, Complex Grou
 /// zero sequence by the neutral, zero sequence by the grounding conductors. Not a number where there is no such path
 /// (no neutral, or no grounded source).
 /// </summary>
-internal sealed class Sequences(int n)
+internal sealed class Sequences(int n) : IDisposable
 {
     /// <summary>A missing path.</summary>
     public static readonly Complex None = new(double.NaN, double.NaN);
 
-    public Complex[] Z1 { get; } = new Complex[n];
+    // Rented (Solving/Scratch): every node's are written, parent first, before they are read.
+    public Complex[] Z1 { get; } = Scratch.RentToFill<Complex>(n);
 
-    public Complex[] Z0n { get; } = new Complex[n];
+    public Complex[] Z0n { get; } = Scratch.RentToFill<Complex>(n);
 
-    public Complex[] Z0g { get; } = new Complex[n];
+    public Complex[] Z0g { get; } = Scratch.RentToFill<Complex>(n);
+
+    /// <summary>Gives the arrays back.</summary>
+    public void Dispose()
+    {
+        Scratch.Return(Z1, n);
+        Scratch.Return(Z0n, n);
+        Scratch.Return(Z0g, n);
+    }
 
     /// <summary>Node <paramref name="i"/>'s input: its parent's bus (<paramref name="upParent"/> the positive sequence there) and its run.</summary>
     public void Through(int parent, int i, in RunZ z, Complex upParent)
@@ -95,21 +104,31 @@ internal sealed class Sequences(int n)
 /// </summary>
 internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] incomingRow, int n, double frequencyHz)
 {
-    private static readonly string[] Bases = ["stated", "the code's minimum", "the lines' size: state ground_size"];
-
     private readonly ConductorCatalog _catalog = code.Catalog;
 
     // Per node, its run's grounding conductor once worked out: the size's index + 1 and its basis, 0 until then.
     private readonly int[] _ground = new int[n];
     private readonly byte[] _groundBasis = new byte[n];
+    private readonly bool[] _groundExact = new bool[n];
 
-    /// <summary>Run <paramref name="run"/>'s impedances (into node <paramref name="i"/>) at <paramref name="temperatureC"/>, or each conductor's rated temperature for null.</summary>
-    public RunZ Of(int i, NetworkRun run, double? temperatureC)
+    // The code's minimum by what it reads: a large tree repeats a few devices, sizes and loads.
+    private readonly Dictionary<GroundKey, ConductorSize?> _minimums = [];
+
+    // Each conductor's impedance per km by size, metal, raceway and insulation rating (60, 75, 90 °C), at 20 °C and at
+    // its rated temperature, once worked out (NaN until then).
+    private readonly Complex[] _ohms = Filled(ConductorSize.All.Count * 2 * 3 * 3 * 2);
+
+    /// <summary>
+    /// Run <paramref name="run"/>'s impedances (into node <paramref name="i"/>) at <paramref name="temperatureC"/>, or each
+    /// conductor's rated temperature for null; its grounding conductor the code's minimum (<paramref name="exact"/>) or,
+    /// where the project states none, at first the table's size without the increase for large lines (see <see cref="Ground"/>).
+    /// </summary>
+    public RunZ Of(int i, NetworkRun run, double? temperatureC, bool exact)
     {
         var c = run.Conductors;
         var perSet = c.LengthM / 1000.0 / c.Sets;
         var hasNeutral = HasNeutral(run);
-        var (ground, _) = Ground(i, run);
+        var (ground, _) = Ground(i, run, exact);
         return new RunZ(
             Ohms(c.Size, c, temperatureC) * perSet,
             hasNeutral ? Ohms(c.NeutralSize ?? c.Size, c, temperatureC) * perSet : Complex.Zero,
@@ -117,30 +136,85 @@ internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] inc
             hasNeutral);
     }
 
-    /// <summary>The grounding conductor of each set of <paramref name="run"/> and whether it is stated, the code's minimum, or the lines' size.</summary>
-    public (ConductorSize Size, string Basis) Ground(int i, NetworkRun run)
+    /// <summary>
+    /// The grounding conductor of each set of <paramref name="run"/> and whether it is stated (0), the code's minimum (1),
+    /// or the lines' size (2). Where the project states none and <paramref name="exact"/> is false, the table's size without
+    /// NEC 250.122(B)'s increase for lines larger than the load needs (never larger than the minimum, so a far end that
+    /// clears with it clears with the minimum; one that does not is worked out again exactly): sizing the lines for the load
+    /// is most of the cost of the minimum, and few far ends need it. The last worked out is kept.
+    /// </summary>
+    public (ConductorSize Size, byte Basis) Ground(int i, NetworkRun run, bool exact = false)
     {
-        if (_ground[i] == 0)
+        if (_ground[i] == 0 || (exact && !_groundExact[i]))
         {
             var c = run.Conductors;
+            var least = c.GroundSize is not null || incomingRow[i] < 0 ? null
+                : exact ? Minimum(run, new RunResult(solved, incomingRow[i])) : code.TableGroundSize(c);
             var (size, basis) = c.GroundSize is { } stated
                 ? (stated, 0)
-                : incomingRow[i] >= 0 && new RunResult(solved, incomingRow[i]).GroundMinimum is { } least && _catalog.Contains(least)
-                    ? (least, 1)
-                    : (c.Size, 2);
-            (_ground[i], _groundBasis[i]) = (size.Index + 1, (byte)basis);
+                : least is { } found && _catalog.Contains(found) ? (found, 1) : (c.Size, 2);
+            (_ground[i], _groundBasis[i], _groundExact[i]) = (size.Index + 1, (byte)basis, exact || basis == 0);
         }
 
-        return (ConductorSize.All[_ground[i] - 1], Bases[_groundBasis[i]]);
+        return (ConductorSize.All[_ground[i] - 1], _groundBasis[i]);
     }
+
+    /// <summary>True when node <paramref name="i"/>'s grounding conductor is its stated one or the code's exact minimum.</summary>
+    public bool GroundIsExact(int i) => _groundExact[i];
 
     /// <summary>True when <paramref name="run"/> carries a neutral: a feeder of a system with one, a 1-pole branch circuit.</summary>
     public static bool HasNeutral(NetworkRun run) =>
         run.System.HasNeutral && (run.Kind == RunKind.Feeder || run.Target.Circuit is { Poles: 1 });
 
+    // The code's minimum grounding conductor of a run that states none, as its row gives it (RunResult.GroundMinimum).
+    private ConductorSize? Minimum(NetworkRun run, RunResult row)
+    {
+        var c = run.Conductors;
+        var duty = CircuitDuty.Of(run);
+        var carrying = row.CurrentCarryingConductors ?? 3;
+        var key = new GroundKey(c.OcpdA ?? -1, c.Size.Index, c.Sets, c.Material, c.InsulationC, c.InstallationMethod, c.LoadedConductors, c.DeviceType, row.DesignCurrentA, carrying, duty);
+        if (!_minimums.TryGetValue(key, out var least))
+        {
+            least = row.GroundMinimum;
+            _minimums[key] = least;
+        }
+
+        return least;
+    }
+
     private Complex Ohms(ConductorSize size, Run c, double? temperatureC)
     {
+        var rating = c.InsulationC switch
+        {
+            60 => 0,
+            75 => 1,
+            90 => 2,
+            _ => -1,
+        };
+        var key = ((((((size.Index * 2) + (int)c.Material) * 3) + (int)c.Raceway) * 3) + rating) * 2 + (temperatureC is null ? 1 : 0);
+        if (rating >= 0 && (temperatureC is null || temperatureC == FaultSolver.ColdC) && !double.IsNaN(_ohms[key].Real))
+        {
+            return _ohms[key];
+        }
+
         var t = temperatureC ?? ConductorCatalog.RatedTemperatureC(size, c.InsulationC);
-        return new Complex(_catalog.AcResistanceOhmPerKm(size, c.Material, c.Raceway, t, frequencyHz), _catalog.ReactanceOhmPerKm(size, c.Raceway, frequencyHz));
+        var ohms = new Complex(_catalog.AcResistanceOhmPerKm(size, c.Material, c.Raceway, t, frequencyHz), _catalog.ReactanceOhmPerKm(size, c.Raceway, frequencyHz));
+        if (rating >= 0 && (temperatureC is null || temperatureC == FaultSolver.ColdC))
+        {
+            _ohms[key] = ohms;
+        }
+
+        return ohms;
     }
+
+    private static Complex[] Filled(int length)
+    {
+        var a = new Complex[length];
+        Array.Fill(a, Sequences.None);
+        return a;
+    }
+
+    // What the code's minimum grounding conductor of a run reads (see CodeRules.MinimumGroundSize).
+    private readonly record struct GroundKey(
+        double OcpdA, int SizeIndex, int Sets, Material Material, int InsulationC, InstallationMethod Method, int Loaded, DeviceType Device, double DesignA, int Carrying, CircuitDuty Duty);
 }

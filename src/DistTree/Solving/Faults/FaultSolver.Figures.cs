@@ -37,9 +37,8 @@ internal static partial class FaultSolver
             return null;
         }
 
-        var (trip, basis) = code.InstantaneousTrip(run.Conductors);
         var (ground, groundBasis) = impedances.Ground(i, run);
-        return new FarEndFault(least, kind, trip, basis, ground.Text, groundBasis);
+        return new FarEndFault(least, kind, code.InstantaneousTripA(run.Conductors), run.Conductors, code, ground, groundBasis);
     }
 
     private static void Consider(double currentA, FaultKind of, ref double least, ref FaultKind kind)

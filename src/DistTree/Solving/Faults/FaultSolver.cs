@@ -31,8 +31,8 @@ internal static partial class FaultSolver
     // IEC 60909-0's R/X of low-voltage motors (groups of motors with their cables): 0.42 (recalled).
     private const double MotorROverX = 0.42;
 
-    // The conductor temperature of the maximum currents (IEC 60909-0: 20 °C).
-    private const double ColdC = 20;
+    /// <summary>The conductor temperature of the maximum currents (IEC 60909-0: 20 °C).</summary>
+    internal const double ColdC = 20;
 
     /// <summary>
     /// The study of <paramref name="network"/> (its frame <paramref name="frame"/>, its solved rows and each node's incoming
@@ -45,24 +45,49 @@ internal static partial class FaultSolver
         var n = nodes.Length;
         var rules = network.Project.Rules;
         var impedances = new RunImpedances(code, solved, incomingRow, n, network.Project.Service.FrequencyHz);
-        var (source, hot, cold) = (FaultSource.Of(network.Project.Service, rules.FaultVoltageFactorMax), new Sequences(n), new Sequences(n));
+        var source = FaultSource.Of(network.Project.Service, rules.FaultVoltageFactorMax);
+        using var hot = new Sequences(n);
+        using var cold = new Sequences(n);
         source.Seed(hot, cold);
 
         // Maximum: the motors' admittance below every bus, bottom-up; then each bus's impedance looking up, top-down.
         var below = MotorAdmittances(network, frame, impedances, rules.FaultVoltageFactorMax);
-        var farEnds = new FarEndFault?[n];
+        var farEnds = new FarEndRow[n];
         var findings = 0;
         for (var i = 1; i < n; i++)
         {
             var node = nodes[i];
             var parent = node.ParentIndex;
             var run = node.Incoming;
-            cold.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, ColdC), ExcludingOwn(cold.Z1[parent], below, parent, i));
-            hot.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, null), hot.Z1[parent]);
+
+            // A feeder's grounding conductor is the code's minimum at once (its figures reach the equipment below); an end
+            // point's at first the table's, made exact only where its far end does not clear with it.
+            var exact = node.Circuit is null;
+            cold.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, ColdC, exact), ExcludingOwn(cold.Z1[parent], below, parent, i));
+            hot.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, null, exact), hot.Z1[parent]);
             if (run is not null)
             {
                 var farEnd = FarEnd(node, run, hot, i, impedances, code, rules.FaultVoltageFactorMin);
-                farEnds[i] = farEnd;
+                if (farEnd is { Clears: false } && !impedances.GroundIsExact(i))
+                {
+                    hot.Through(parent, i, impedances.Of(i, run, null, exact: true), hot.Z1[parent]);
+                    farEnd = FarEnd(node, run, hot, i, impedances, code, rules.FaultVoltageFactorMin);
+                }
+
+                if (farEnd is { } end)
+                {
+                    var (ground, basis) = impedances.Ground(i, run);
+                    farEnds[i] = new FarEndRow
+                    {
+                        MinimumA = end.MinimumCurrentA,
+                        TripA = end.TripCurrentA ?? double.NaN,
+                        GroundIndex = (short)ground.Index,
+                        Kind = end.Kind,
+                        GroundBasis = basis,
+                        Present = true,
+                    };
+                }
+
                 if (farEnd is { Clears: false } f)
                 {
                     var row = incomingRow[i];
@@ -80,7 +105,7 @@ internal static partial class FaultSolver
         }
 
         var equipment = Equipment(network, cold, below, code, rules.FaultVoltageFactorMax, ref findings);
-        return (new FaultStudy(source.Kind, rules.FaultVoltageFactorMax, rules.FaultVoltageFactorMin, equipment, farEnds, MotorMultiple), findings);
+        return (new FaultStudy(source.Kind, rules.FaultVoltageFactorMax, rules.FaultVoltageFactorMin, equipment, farEnds, MotorMultiple, nodes, code), findings);
     }
 
     // K_T of IEC 60909-0 eq. (12a): 0.95·c_max/(1 + 0.6·x_T), x_T the transformer's reactance in per unit (recalled).
@@ -141,7 +166,7 @@ internal static partial class FaultSolver
 
             if (node.Incoming is { } incoming)
             {
-                into += impedances.Of(i, incoming, ColdC).Line;
+                into += impedances.Of(i, incoming, ColdC, exact: false).Line;
             }
 
             var feeds = 1.0 / into;

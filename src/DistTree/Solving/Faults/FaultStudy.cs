@@ -1,3 +1,4 @@
+using DistTree.Conductors;
 using DistTree.Model;
 
 namespace DistTree.Solving;
@@ -65,18 +66,47 @@ public sealed record EquipmentFault(
 
 /// <summary>
 /// The minimum short-circuit current at the load end of one feeder or branch circuit, and the current that trips its
-/// device without delay.
+/// device without delay. The words of its basis are written when read (a solve of 100,000 runs writes none).
 /// </summary>
-/// <param name="MinimumCurrentA">The smallest bolted fault current at the far end, amperes (conductors hot, the minimum voltage factor, no motors).</param>
-/// <param name="Kind">Which fault gives it.</param>
-/// <param name="TripCurrentA">The current that trips the device without delay, amperes; null where it is not known (no device, or a fuse without a stated multiple).</param>
-/// <param name="TripBasis">How the trip current was taken: <c>C (10 × 20 A)</c>, <c>default 10 × 20 A</c>, or why there is none.</param>
-/// <param name="GroundSize">The grounding conductor the line-to-ground loop returns through, each set.</param>
-/// <param name="GroundBasis">Whether that conductor is <c>stated</c>, the code's <c>minimum</c>, or <c>the lines' size</c> where neither is known.</param>
-public readonly record struct FarEndFault(
-    double MinimumCurrentA, FaultKind Kind, double? TripCurrentA, string TripBasis, string GroundSize, string GroundBasis)
+public readonly record struct FarEndFault
 {
-    /// <summary>True when the device is known and the minimum current trips it without delay.</summary>
+    private static readonly string[] GroundBases = ["stated", "the code's minimum", "the lines' size: state ground_size"];
+
+    private readonly Run _conductors;
+    private readonly Codes.CodeRules _code;
+    private readonly ConductorSize _ground;
+    private readonly byte _groundBasis;
+
+    internal FarEndFault(double minimumCurrentA, FaultKind kind, double? tripCurrentA, Run conductors, Codes.CodeRules code, ConductorSize ground, byte groundBasis)
+    {
+        MinimumCurrentA = minimumCurrentA;
+        Kind = kind;
+        TripCurrentA = tripCurrentA;
+        _conductors = conductors;
+        _code = code;
+        _ground = ground;
+        _groundBasis = groundBasis;
+    }
+
+    /// <summary>The smallest bolted fault current at the far end, amperes (conductors hot, the minimum voltage factor, no motors).</summary>
+    public double MinimumCurrentA { get; }
+
+    /// <summary>Which fault gives it.</summary>
+    public FaultKind Kind { get; }
+
+    /// <summary>The current that trips the device without delay, amperes; null where it is not known (no device, or a fuse without a stated multiple).</summary>
+    public double? TripCurrentA { get; }
+
+    /// <summary>How the trip current was taken: <c>C: 10 × the 20 A breaker</c>, <c>default 10 × …</c>, or why there is none.</summary>
+    public string TripBasis => _code.InstantaneousTrip(_conductors).Basis;
+
+    /// <summary>The grounding conductor the line-to-ground loop returns through, each set.</summary>
+    public string GroundSize => _ground.Text;
+
+    /// <summary>Whether that conductor is <c>stated</c>, the code's minimum, or the lines' size where neither is known.</summary>
+    public string GroundBasis => GroundBases[_groundBasis];
+
+    /// <summary>True when the device is known and the minimum current trips it without delay, or the device is not known.</summary>
     public bool Clears => TripCurrentA is not { } trip || !(MinimumCurrentA < trip);
 }
 
@@ -86,10 +116,14 @@ public readonly record struct FarEndFault(
 /// </summary>
 public sealed class FaultStudy
 {
-    private readonly FarEndFault?[] _farEnds;
+    private readonly FarEndRow[] _farEnds;
+    private readonly Network.NetworkNode[] _nodes;
+    private readonly Codes.CodeRules _code;
 
-    internal FaultStudy(FaultSourceKind source, double factorMax, double factorMin, IReadOnlyList<EquipmentFault> equipment, FarEndFault?[] farEnds, double motorMultiple)
+    internal FaultStudy(FaultSourceKind source, double factorMax, double factorMin, IReadOnlyList<EquipmentFault> equipment, FarEndRow[] farEnds, double motorMultiple, Network.NetworkNode[] nodes, Codes.CodeRules code)
     {
+        _nodes = nodes;
+        _code = code;
         Source = source;
         VoltageFactorMax = factorMax;
         VoltageFactorMin = factorMin;
@@ -117,7 +151,10 @@ public sealed class FaultStudy
     public IEnumerable<Finding> Findings => Equipment.SelectMany(e => e.Findings);
 
     /// <summary>The far end of the run into the node at <paramref name="nodeIndex"/>, or null where no run comes into it.</summary>
-    public FarEndFault? FarEndAt(int nodeIndex) => _farEnds[nodeIndex];
+    public FarEndFault? FarEndAt(int nodeIndex) =>
+        _farEnds[nodeIndex] is { Present: true } row && _nodes[nodeIndex].Incoming is { } run
+            ? new FarEndFault(row.MinimumA, row.Kind, double.IsNaN(row.TripA) ? null : row.TripA, run.Conductors, _code, ConductorSize.All[row.GroundIndex], row.GroundBasis)
+            : null;
 
     /// <summary>The equipment at <paramref name="nodeIndex"/>, or null where that node is no equipment.</summary>
     public EquipmentFault? EquipmentAt(int nodeIndex)
@@ -132,4 +169,18 @@ public sealed class FaultStudy
 
         return null;
     }
+}
+
+/// <summary>
+/// A far end as the study keeps it: plain numbers only, so that an array of 100,000 is one block the collector never
+/// scans (see <see cref="FaultStudy.FarEndAt"/>, which makes the <see cref="FarEndFault"/> when asked).
+/// </summary>
+internal struct FarEndRow
+{
+    public double MinimumA;
+    public double TripA; // NaN where the trip current is not known
+    public short GroundIndex;
+    public FaultKind Kind;
+    public byte GroundBasis;
+    public bool Present;
 }
