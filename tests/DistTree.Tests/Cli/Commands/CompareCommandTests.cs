@@ -168,7 +168,7 @@ public sealed class CompareCommandTests : IDisposable
         Assert.Equal(1, r.ExitCode);
         var document = Markdown.Parse(r.Out, new MarkdownPipelineBuilder().UsePipeTables().Build());
         var tables = document.Descendants<Table>().ToArray();
-        Assert.Equal(3, tables.Length); // elements, end points, upstream runs
+        Assert.Equal(4, tables.Length); // elements, end points, upstream runs, fault currents (SUB added)
         var endPoints = tables[1];
         var header = (TableRow)endPoints[0];
         Assert.True(header.IsHeader);
