@@ -60,9 +60,9 @@ public static class ComparisonText
     /// <summary>A fault current in kA to 0.01 kA, or a dash where the study has none.</summary>
     public static string Ka(double? ka) => ka is { } k ? k.ToString("0.00", CultureInfo.InvariantCulture) : "-";
 
-    /// <summary>A change of fault current: <c>+4.18 kA (+41.3 %)</c>, or a dash where either revision has no figure.</summary>
+    /// <summary>A change of fault current: <c>+4.18 kA, +41.3 %</c>, or a dash where either revision has no figure.</summary>
     public static string KaChange(double? changeKa, double? changePercent) => changeKa is { } c
-        ? Signed(c, 2) + " kA" + (changePercent is { } p ? " (" + Signed(p, 1) + " %)" : "")
+        ? Signed(c, 2) + " kA" + (changePercent is { } p ? ", " + Signed(p, 1) + " %" : "")
         : "-";
 
     /// <summary>

@@ -115,4 +115,22 @@ public sealed class FaultComparerTests
         Assert.DoesNotContain(c.Faults, f => f.Changed);
         Assert.True(c.IsUnchanged);
     }
+
+    // Closed form: a panel on one feeder from an infinite bus, with no motors, sees I = c·U_n/(√3·z·L) (IEC 60909-0, 2016,
+    // 6.1, with no source impedance): a feeder cut from 40 m to 10 m of the same conductor carries four times the current,
+    // a change of +300 %, three-phase and line to ground alike (the loop is the same conductors, four times shorter).
+    [Fact]
+    public void Compare_FeederQuarterAsLongFromAnInfiniteBus_FourTimesTheCurrent()
+    {
+        const string Circuit = "{ id: \"1\", poles: 1, ocpd: 20, load: { amps: 4 }, run: { length: 5, size: 12 AWG } }";
+        var (before, _, c) = Compare(
+            SolverHarness.PanelOnFeeder("length: 40, size: 1/0 AWG, ocpd: 150", Circuit),
+            SolverHarness.PanelOnFeeder("length: 10, size: 1/0 AWG, ocpd: 150", Circuit));
+
+        Assert.Equal(FaultSourceKind.InfiniteBus, before.Faults!.Source);
+        var p = c.Faults.Single(f => f.Id == "P");
+        Assert.Equal(300, p.ChangePercent!.Value, 6);
+        Assert.Equal(300, p.ChangeLgPercent!.Value, 6);
+        Assert.Equal(3 * p.Before!.AvailableFaultCurrentKa!.Value, p.ChangeKa!.Value, 9);
+    }
 }
