@@ -1,5 +1,6 @@
 using System.Globalization;
 using DistTree.Comparing;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -31,6 +32,7 @@ public static class ComparisonConsole
         WriteElements(o, "Circuits", c.Circuits);
         WriteEndPoints(o, c, rows);
         WriteUpstream(o, c, rows);
+        WriteFaults(o, c, rows);
         WriteFindings(o, "New findings", c.NewFindings);
         WriteFindings(o, "Resolved findings", c.ResolvedFindings);
         o.WriteLine();
@@ -95,6 +97,31 @@ public static class ComparisonConsole
         }
 
         More(o, c.UpstreamRuns.Count, rows);
+    }
+
+    // The equipment whose available fault current moved, was added or removed, one line each; the rest counted.
+    private static void WriteFaults(TextWriter o, Comparison c, int rows)
+    {
+        var changed = c.Faults.Where(f => f.Changed).ToArray();
+        if (changed.Length == 0)
+        {
+            return;
+        }
+
+        o.WriteLine();
+        o.WriteLine("Available fault current (kA, three-phase or bolted / line-to-ground; each revision's own study):");
+        foreach (var f in changed.Take(rows))
+        {
+            var rating = ComparisonText.FaultRating(f);
+            o.WriteLine(F($"  {f.Id,-14} {Words.EquipmentKind.Of(f.Kind),-11} {ComparisonText.FaultStatus(f),-9} 3ph {ComparisonText.Ka(f.Before?.AvailableFaultCurrentKa)} -> {ComparisonText.Ka(f.After?.AvailableFaultCurrentKa)} ({ComparisonText.KaChange(f.ChangeKa, f.ChangePercent)})  L-G {ComparisonText.Ka(f.Before?.AvailableFaultCurrentLgKa)} -> {ComparisonText.Ka(f.After?.AvailableFaultCurrentLgKa)} ({ComparisonText.KaChange(f.ChangeLgKa, f.ChangeLgPercent)}){(rating.Length > 0 ? "  " + rating : "")}"));
+        }
+
+        More(o, changed.Length, rows);
+        var same = c.Faults.Count - changed.Length;
+        if (same > 0)
+        {
+            o.WriteLine(F($"  {same} other{(same == 1 ? "" : "s")} unchanged"));
+        }
     }
 
     private static void WriteRevision(TextWriter o, string label, RevisionInfo r) =>

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using DistTree.Comparing;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -52,6 +53,7 @@ public static class ComparisonJson
             w.WriteEndArray();
             WriteRuns(w, "runs", c.Runs);
             WriteRuns(w, "upstream_runs", c.UpstreamRuns);
+            WriteFaults(w, c.Faults);
             WriteFindings(w, "new_findings", c.NewFindings);
             WriteFindings(w, "resolved_findings", c.ResolvedFindings);
             w.WriteEndObject();
@@ -99,6 +101,9 @@ public static class ComparisonJson
         NullableString(w, "largest_fall_end_point", s.LargestFallEndPoint);
         w.WriteNumber("new_findings", s.NewFindings);
         w.WriteNumber("resolved_findings", s.ResolvedFindings);
+        w.WriteNumber("faults_compared", s.FaultsCompared);
+        w.WriteNumber("faults_rose", s.FaultsRose);
+        w.WriteNumber("faults_newly_over_rating", s.FaultsNewlyOverRating);
         w.WriteEndObject();
     }
 
@@ -168,6 +173,37 @@ public static class ComparisonJson
             JsonResults.Number(w, "margin_change_a", r.MarginA?.Change, 3);
             Codes(w, "findings_before", r.FindingsBefore);
             Codes(w, "findings_after", r.FindingsAfter);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+    }
+
+    // Every piece of equipment in either revision, each revision's figures as its own study wrote them (kA to 3
+    // decimals, as the results document), the changes, and where the new figure exceeds a stated rating.
+    private static void WriteFaults(Utf8JsonWriter w, IReadOnlyList<FaultDelta> faults)
+    {
+        w.WriteStartArray("faults");
+        foreach (var f in faults)
+        {
+            w.WriteStartObject();
+            w.WriteString("id", f.Id);
+            w.WriteString("kind", Words.EquipmentKind.Of(f.Kind));
+            NullableString(w, "change", f.IsAdded ? ComparisonText.Change(ChangeKind.Added) : f.IsRemoved ? ComparisonText.Change(ChangeKind.Removed) : null);
+            w.WriteBoolean("moved", f.Moved);
+            w.WriteBoolean("rose", f.Rose);
+            JsonResults.Number(w, "available_fault_current_ka_before", f.Before?.AvailableFaultCurrentKa, 3);
+            JsonResults.Number(w, "available_fault_current_ka_after", f.After?.AvailableFaultCurrentKa, 3);
+            JsonResults.Number(w, "change_ka", f.ChangeKa, 3);
+            JsonResults.Number(w, "change_percent", f.ChangePercent, 2);
+            JsonResults.Number(w, "available_fault_current_lg_ka_before", f.Before?.AvailableFaultCurrentLgKa, 3);
+            JsonResults.Number(w, "available_fault_current_lg_ka_after", f.After?.AvailableFaultCurrentLgKa, 3);
+            JsonResults.Number(w, "change_lg_ka", f.ChangeLgKa, 3);
+            JsonResults.Number(w, "change_lg_percent", f.ChangeLgPercent, 2);
+            JsonResults.Number(w, "interrupting_ka_before", f.Before?.InterruptingKa, 2);
+            JsonResults.Number(w, "interrupting_ka_after", f.After?.InterruptingKa, 2);
+            w.WriteBoolean("over_rating_before", f.OverRatingBefore);
+            w.WriteBoolean("over_rating_after", f.OverRatingAfter);
             w.WriteEndObject();
         }
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using DistTree.Comparing;
 using DistTree.Diagnostics;
+using DistTree.Vocabulary;
 
 namespace DistTree.Reports;
 
@@ -31,6 +32,7 @@ public static class ComparisonMarkdown
             WriteElements(o, c, rows);
             WriteEndPoints(o, c, rows);
             WriteUpstream(o, c, rows);
+            WriteFaults(o, c, rows);
             WriteFindings(o, "New findings", c.NewFindings);
             WriteFindings(o, "Resolved findings", c.ResolvedFindings);
         }
@@ -100,6 +102,39 @@ public static class ComparisonMarkdown
         }
 
         More(o, c.UpstreamRuns.Count, rows);
+    }
+
+    // The equipment whose available fault current moved, was added or removed; the rest counted.
+    private static void WriteFaults(StringBuilder o, Comparison c, int rows)
+    {
+        var changed = c.Faults.Where(f => f.Changed).ToArray();
+        if (changed.Length == 0)
+        {
+            return;
+        }
+
+        Line(o, "");
+        Line(o, "| Equipment | Kind | Fault current | 3-phase kA before | 3-phase kA after | Change | L-G kA before | L-G kA after | Change | Rating |");
+        Line(o, "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | --- |");
+        foreach (var f in changed.Take(rows))
+        {
+            var status = ComparisonText.FaultStatus(f);
+            Line(o, $"| `{Code(f.Id)}` | {Words.EquipmentKind.Of(f.Kind)} | {(f.Rose ? $"**{status}**" : status)} | {ComparisonText.Ka(f.Before?.AvailableFaultCurrentKa)} | {ComparisonText.Ka(f.After?.AvailableFaultCurrentKa)} | {ComparisonText.KaChange(f.ChangeKa, f.ChangePercent)} | {ComparisonText.Ka(f.Before?.AvailableFaultCurrentLgKa)} | {ComparisonText.Ka(f.After?.AvailableFaultCurrentLgKa)} | {ComparisonText.KaChange(f.ChangeLgKa, f.ChangeLgPercent)} | {Rating(f)} |");
+        }
+
+        More(o, changed.Length, rows);
+        var same = c.Faults.Count - changed.Length;
+        if (same > 0)
+        {
+            Line(o, "");
+            Line(o, F($"Available fault current unchanged at {same} other piece{(same == 1 ? "" : "s")} of equipment."));
+        }
+    }
+
+    private static string Rating(FaultDelta f)
+    {
+        var text = ComparisonText.FaultRating(f);
+        return f.OverRatingAfter ? $"**{text}**" : text;
     }
 
     private static void WriteFindings(StringBuilder o, string title, IReadOnlyList<Solving.Finding> findings)

@@ -42,4 +42,44 @@ public static class ComparisonText
         $"circuits {s.CircuitsAdded} added, {s.CircuitsRemoved} removed, {s.CircuitsChanged} changed; " +
         $"{s.EndPointsAffected} of {s.EndPointsCompared} end points affected ({s.EndPointsNewlyFailing} newly failing, {s.EndPointsNewlyPassing} newly passing); " +
         $"findings {s.NewFindings} new, {s.ResolvedFindings} resolved");
+
+    /// <summary>For people: what happened to a piece of equipment's fault current: <c>added</c>, <c>removed</c>, <c>rose</c>, <c>fell</c> or <c>unchanged</c>.</summary>
+    public static string FaultStatus(FaultDelta d)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        return d switch
+        {
+            { IsAdded: true } => "added",
+            { IsRemoved: true } => "removed",
+            { Rose: true } => "rose",
+            { Moved: true } => "fell",
+            _ => "unchanged",
+        };
+    }
+
+    /// <summary>A fault current in kA to 0.01 kA, or a dash where the study has none.</summary>
+    public static string Ka(double? ka) => ka is { } k ? k.ToString("0.00", CultureInfo.InvariantCulture) : "-";
+
+    /// <summary>A change of fault current: <c>+4.18 kA, +41.3 %</c>, or a dash where either revision has no figure.</summary>
+    public static string KaChange(double? changeKa, double? changePercent) => changeKa is { } c
+        ? Signed(c, 2) + " kA" + (changePercent is { } p ? ", " + Signed(p, 1) + " %" : "")
+        : "-";
+
+    /// <summary>
+    /// The stated rating against the new revision's current: <c>rating 10 kA, over</c>, <c>rating 22 kA, ok</c>; empty
+    /// where none is stated.
+    /// </summary>
+    public static string FaultRating(FaultDelta d)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        var e = d.After ?? d.Before;
+        if (e?.InterruptingKa is not { } rating)
+        {
+            return "";
+        }
+
+        var over = d.IsRemoved ? d.OverRatingBefore : d.OverRatingAfter;
+        var verdict = over ? (d.OverRatingBefore || d.IsAdded ? "over" : "newly over") : "ok";
+        return string.Create(CultureInfo.InvariantCulture, $"rating {rating:0.##} kA, {verdict}");
+    }
 }

@@ -10,7 +10,7 @@ namespace DistTree.Reports;
 /// Formats a solution as plain text for a terminal: a summary, the worst paths, every finding. Text from the input
 /// (names, paths) is shown with its control characters escaped (<see cref="DisplayWriter"/>).
 /// </summary>
-public static class ConsoleReport
+public static partial class ConsoleReport
 {
     /// <summary>The full analysis text.</summary>
     public static void WriteAnalysis(TextWriter o, Solution s, int worst)
@@ -34,6 +34,7 @@ public static class ConsoleReport
             var shares = e.RunIndices.Zip(e.RunSharesPercent).Select(p => F($"{Label(s.Runs[p.First])} {p.Second:0.00}"));
             o.WriteLine($"        {string.Join("  +  ", shares)}");
             o.WriteLine($"        reach {unit}  {string.Join("  +  ", e.RunIndices.Select(r => Reach(s.Runs[r], s.Project.Units)))}");
+            WriteFarEnds(o, s, e);
         }
 
         o.WriteLine();
@@ -50,6 +51,7 @@ public static class ConsoleReport
             o.WriteLine();
         }
 
+        WriteFaults(o, s);
         WriteFindings(o, s);
         o.WriteLine();
         o.WriteLine($"Caution: {Caution.For(s.Project.Rules.Code)}");

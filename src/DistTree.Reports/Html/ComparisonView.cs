@@ -22,6 +22,9 @@ internal sealed record ComparisonView
     public string? LargestMore { get; init; }
     public required IReadOnlyList<UpstreamRow> Upstream { get; init; }
     public string? UpstreamMore { get; init; }
+    public required IReadOnlyList<FaultChangeRow> Faults { get; init; }
+    public string? FaultsMore { get; init; }
+    public string? FaultsUnchanged { get; init; }
     public required IReadOnlyList<FindingItem> NewFindings { get; init; }
     public required IReadOnlyList<FindingItem> ResolvedFindings { get; init; }
 }
@@ -46,3 +49,17 @@ internal sealed record UpstreamRow(
     string MarginClass,
     string DropChange,
     string Status);
+
+/// <summary>A piece of equipment whose available fault current moved, or which was added or removed.</summary>
+internal sealed record FaultChangeRow(
+    string Id,
+    string Kind,
+    string Status,
+    string Before,
+    string After,
+    string Change,
+    string LgBefore,
+    string LgAfter,
+    string LgChange,
+    string Rating,
+    string RatingClass);

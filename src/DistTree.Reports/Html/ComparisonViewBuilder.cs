@@ -21,6 +21,9 @@ internal static class ComparisonViewBuilder
     /// <summary>Upstream runs listed at most.</summary>
     public const int UpstreamRows = 20;
 
+    /// <summary>Equipment listed at most whose fault current moved, or which was added or removed.</summary>
+    public const int FaultRows = 100;
+
     /// <summary>Builds the section for <paramref name="c"/>; <paramref name="panelAnchor"/> gives the link to an end point's panel table in the report from its id, or "" where it has none.</summary>
     public static ComparisonView Build(Comparison c, Func<string, string> panelAnchor)
     {
@@ -36,6 +39,8 @@ internal static class ComparisonViewBuilder
             .ThenBy(e => e.Id, StringComparer.Ordinal)
             .ToArray();
         var upstream = c.UpstreamRuns.Take(UpstreamRows).Select(UpstreamRowOf).ToArray();
+        var faults = c.Faults.Where(f => f.Changed).ToArray();
+        var unchanged = c.Faults.Count - faults.Length;
 
         return new ComparisonView
         {
@@ -58,6 +63,9 @@ internal static class ComparisonViewBuilder
             LargestMore = More(largest.Length, Math.Min(largest.Length, LargestRows), "end points moved by 0.01 point or more"),
             Upstream = upstream,
             UpstreamMore = More(c.UpstreamRuns.Count, upstream.Length, "upstream runs moved"),
+            Faults = faults.Take(FaultRows).Select(FaultRowOf).ToArray(),
+            FaultsMore = More(faults.Length, Math.Min(faults.Length, FaultRows), "pieces of equipment whose fault current moved"),
+            FaultsUnchanged = unchanged > 0 && faults.Length > 0 ? $"Available fault current unchanged at {Count(unchanged)} other piece{(unchanged == 1 ? "" : "s")} of equipment." : null,
             NewFindings = c.NewFindings.Select(FindingGroupBuilder.Item).ToArray(),
             ResolvedFindings = c.ResolvedFindings.Select(FindingGroupBuilder.Item).ToArray(),
         };
@@ -107,6 +115,21 @@ internal static class ComparisonViewBuilder
         r.MarginA is { } k && k.After < 0 ? "cell-over" : "",
         ComparisonText.Signed(r.DropPercent.Change, 2),
         Escape(ComparisonText.StatusPhrase(r.Status, r.FindingsBefore, r.FindingsAfter)));
+
+    private static FaultChangeRow FaultRowOf(FaultDelta f) => new(
+        Escape(f.Id),
+        Vocabulary.Words.EquipmentKind.Of(f.Kind),
+        ComparisonText.FaultStatus(f),
+        Ka(f.Before?.AvailableFaultCurrentKa),
+        Ka(f.After?.AvailableFaultCurrentKa),
+        f.ChangeKa is null ? "–" : ComparisonText.KaChange(f.ChangeKa, f.ChangePercent),
+        Ka(f.Before?.AvailableFaultCurrentLgKa),
+        Ka(f.After?.AvailableFaultCurrentLgKa),
+        f.ChangeLgKa is null ? "–" : ComparisonText.KaChange(f.ChangeLgKa, f.ChangeLgPercent),
+        ComparisonText.FaultRating(f),
+        f.OverRatingAfter ? "cell-over" : "");
+
+    private static string Ka(double? ka) => ka is null ? "–" : ComparisonText.Ka(ka);
 
     private static string Shown(double points) => ComparisonText.Signed(points, 2);
 

@@ -99,7 +99,8 @@ internal static class HtmlText
     /// <summary>An integer.</summary>
     public static string Count(int value) => value.ToString(CultureInfo.InvariantCulture);
 
-    private static string Number(double value, string format)
+    /// <summary>A number in the invariant culture with <paramref name="format"/>.</summary>
+    public static string Number(double value, string format)
     {
         var text = value.ToString(format, CultureInfo.InvariantCulture);
         return text is "-0" or "-0.0" or "-0.00" ? text[1..] : text;

@@ -10,6 +10,9 @@ internal sealed record PanelView
     public required string Circuits { get; init; }
     public required string Worst { get; init; }
     public required string Band { get; init; }
+
+    /// <summary>The panel's available fault current in words (its study's figures), or null where the study has none.</summary>
+    public string? Fault { get; init; }
     public required IReadOnlyList<CircuitRow> Rows { get; init; }
     public string? More { get; init; }
 

@@ -23,6 +23,7 @@ internal static class PanelViewBuilder
         var nodes = s.Network.Nodes;
         var schedules = large ? new Dictionary<int, PanelSchedule>() : PanelSchedules.Of(s).ToDictionary(p => p.NodeIndex);
         var panels = new List<PanelView>();
+        var faults = FaultViewBuilder.ByNode(s);
         for (var i = 0; i < nodes.Count; i++)
         {
             if (below.OwnCircuits[i] == 0)
@@ -47,6 +48,7 @@ internal static class PanelViewBuilder
             panels.Add(PanelOf(s, below, i, circuits, large) with
             {
                 Schedule = schedules.TryGetValue(i, out var schedule) ? ScheduleViewBuilder.Build(schedule) : null,
+                Fault = FaultViewBuilder.Heading(faults.GetValueOrDefault(i)),
             });
         }
 

@@ -45,6 +45,7 @@ internal sealed record ReportView
     public required string LoadFlowText { get; init; }
     public required string LoadFlowClass { get; init; }
     public required string Tolerance { get; init; }
+    public FaultView? Faults { get; init; }
     public required IReadOnlyList<MotorRow> Motors { get; init; }
     public required string MotorLimit { get; init; }
     public string? MotorsMore { get; init; }
@@ -57,7 +58,7 @@ internal sealed record ReportView
 }
 
 /// <summary>The number of each section shown; null for a section the page leaves out.</summary>
-internal sealed record SectionNumbers(string Summary, string? Comparison, string Tree, string Worst, string Panels, string? Motors, string Findings, string? Plan, string Method);
+internal sealed record SectionNumbers(string Summary, string? Comparison, string Tree, string Worst, string Panels, string? Faults, string? Motors, string Findings, string? Plan, string Method);
 
 /// <summary>The grounding table the project brings: its file, what it replaces, and its header.</summary>
 internal sealed record GroundingTableView(string Name, string Replaces, IReadOnlyList<string> Header);

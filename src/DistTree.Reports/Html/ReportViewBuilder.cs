@@ -8,7 +8,7 @@ namespace DistTree.Reports.Html;
 /// Turns a solution into the escaped, formatted view the template prints, section by section: the header and
 /// summary (<see cref="SummaryViewBuilder"/>), the comparison (<see cref="ComparisonViewBuilder"/>), the tree
 /// (<see cref="TreeViewBuilder"/>), the worst paths (<see cref="PathsViewBuilder"/>), the panels
-/// (<see cref="PanelViewBuilder"/>), motor starting (<see cref="MotorRowBuilder"/>), the findings
+/// (<see cref="PanelViewBuilder"/>), the available fault current (<see cref="FaultViewBuilder"/>), motor starting (<see cref="MotorRowBuilder"/>), the findings
 /// (<see cref="FindingGroupBuilder"/>), the upsize plan (<see cref="PlanViewBuilder"/>) and the method and data
 /// (<see cref="MethodViewBuilder"/>). They select, sort and format the solver's figures; they compute no
 /// electrical figure. What is below each node is gathered once (<see cref="NodeRollup"/>), so the work grows
@@ -29,6 +29,7 @@ internal static class ReportViewBuilder
         var worst = SummaryViewBuilder.Worst(s);
         var findings = FindingGroupBuilder.ByKind(s);
         var motors = MotorRowBuilder.Motors(s);
+        var faults = FaultViewBuilder.Build(s, i => below.OwnCircuits[i] > 0 ? $"#panel-{Count(i)}" : "");
         return new ReportView
         {
             Title = Escape(options.Title ?? $"{p.Name} · voltage-drop review"),
@@ -64,7 +65,8 @@ internal static class ReportViewBuilder
             FindingsRule = FindingGroupBuilder.Rule(large),
             Plan = options.Plan is { } plan ? PlanViewBuilder.Build(plan) : null,
             Comparison = options.Comparison is { } comparison ? ComparisonViewBuilder.Build(comparison, id => PanelAnchor(s, id)) : null,
-            Num = Numbers(options, motors.Count > 0),
+            Faults = faults,
+            Num = Numbers(options, motors.Count > 0, faults is not null),
             MethodText = MethodViewBuilder.MethodName(rules.Method),
             OtherMethodText = MethodViewBuilder.MethodName(MethodViewBuilder.Other(rules.Method)),
             LoadFlowText = MethodViewBuilder.LoadFlowText(s.LoadFlow),
@@ -85,7 +87,7 @@ internal static class ReportViewBuilder
     // The link to the panel table of the end point with this id, or none where the page has no such end point.
     private static string PanelAnchor(Solution s, string id) => s.EndPointById(id) is { } e ? PanelViewBuilder.AnchorOf(s, e) : "";
 
-    private static SectionNumbers Numbers(HtmlReportOptions options, bool motors)
+    private static SectionNumbers Numbers(HtmlReportOptions options, bool motors, bool faults)
     {
         var n = 0;
         string Next() => Count(++n);
@@ -96,6 +98,7 @@ internal static class ReportViewBuilder
             Tree: Next(),
             Worst: Next(),
             Panels: Next(),
+            Faults: NextIf(faults),
             Motors: NextIf(motors),
             Findings: Next(),
             Plan: NextIf(options.Plan is not null),

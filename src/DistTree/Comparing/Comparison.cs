@@ -41,6 +41,12 @@ public sealed record Comparison
     /// </summary>
     public required IReadOnlyList<RunDelta> UpstreamRuns { get; init; }
 
+    /// <summary>
+    /// The available fault current at every switchboard, panelboard, transformer and splitter in either revision, each
+    /// revision's figures from its own short-circuit study (see <see cref="FaultDelta"/> for the order).
+    /// </summary>
+    public required IReadOnlyList<FaultDelta> Faults { get; init; }
+
     /// <summary>Findings present after and absent before by (kind, subject), by subject then code (ordinal).</summary>
     public required IReadOnlyList<Finding> NewFindings { get; init; }
 
@@ -50,8 +56,8 @@ public sealed record Comparison
     /// <summary>True when the new revision has a finding the old one did not (the gate a CI job checks).</summary>
     public bool HasNewFindings => NewFindings.Count > 0;
 
-    /// <summary>True when nothing differs: no field, figure or finding moved beyond <see cref="ComparisonTolerance"/>.</summary>
+    /// <summary>True when nothing differs: no field, figure (fault currents included) or finding moved beyond <see cref="ComparisonTolerance"/>.</summary>
     public bool IsUnchanged =>
         ProjectChanges.Count == 0 && Equipment.Count == 0 && Circuits.Count == 0 && EndPoints.Count == 0 &&
-        Runs.Count == 0 && NewFindings.Count == 0 && ResolvedFindings.Count == 0;
+        Runs.Count == 0 && NewFindings.Count == 0 && ResolvedFindings.Count == 0 && !Faults.Any(f => f.Moved);
 }

@@ -54,6 +54,15 @@ public sealed record ComparisonSummary
     /// <summary>The end point with that fall, or null.</summary>
     public string? LargestFallEndPoint { get; init; }
 
+    /// <summary>Switchboards, panelboards, transformers and splitters in both revisions whose fault currents were compared.</summary>
+    public required int FaultsCompared { get; init; }
+
+    /// <summary>Those of them whose three-phase or line-to-ground fault current rose (<see cref="FaultDelta.Rose"/>).</summary>
+    public required int FaultsRose { get; init; }
+
+    /// <summary>Equipment (in both revisions or added) whose fault current exceeds its stated rating in the new revision and did not in the old.</summary>
+    public required int FaultsNewlyOverRating { get; init; }
+
     /// <summary>Findings present after and absent before, by (kind, subject).</summary>
     public required int NewFindings { get; init; }
 

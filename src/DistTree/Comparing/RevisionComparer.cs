@@ -36,6 +36,7 @@ public static class RevisionComparer
             .ThenBy(r => r.Kind)
             .ToArray();
 
+        var faults = FaultComparer.Compare(before, after);
         var newFindings = Unmatched(after.AllFindings, before.AllFindings);
         var resolvedFindings = Unmatched(before.AllFindings, after.AllFindings);
 
@@ -51,7 +52,8 @@ public static class RevisionComparer
             UpstreamRuns = upstream,
             NewFindings = newFindings,
             ResolvedFindings = resolvedFindings,
-            Summary = Summarize(projectChanges.Count, equipment, circuits, (endPoints, endPointsCompared), (runs.Count, runsCompared), (newFindings.Length, resolvedFindings.Length)),
+            Faults = faults,
+            Summary = Summarize(projectChanges.Count, equipment, circuits, (endPoints, endPointsCompared), (runs.Count, runsCompared), (newFindings.Length, resolvedFindings.Length), faults),
         };
     }
 
@@ -62,7 +64,8 @@ public static class RevisionComparer
         List<ElementChange> circuits,
         (IReadOnlyList<EndPointDelta> Affected, int Compared) endPointCounts,
         (int Affected, int Compared) runCounts,
-        (int New, int Resolved) findings)
+        (int New, int Resolved) findings,
+        FaultDelta[] faults)
     {
         var endPoints = endPointCounts.Affected;
         var rise = endPoints.Where(e => e.TotalDropPercent.Change > ComparisonTolerance.PercentPoints)
@@ -90,6 +93,9 @@ public static class RevisionComparer
             LargestFallEndPoint = fall?.Id,
             NewFindings = findings.New,
             ResolvedFindings = findings.Resolved,
+            FaultsCompared = faults.Count(f => !f.IsAdded && !f.IsRemoved),
+            FaultsRose = faults.Count(f => f.Rose),
+            FaultsNewlyOverRating = faults.Count(f => f.OverRatingAfter && !f.OverRatingBefore),
         };
     }
 

@@ -237,7 +237,7 @@ public sealed class HtmlReportSectionsTests
         var comparison = SharedComparison(out var after);
         var doc = ReportFixtures.Parse(HtmlReport.Render(after, new HtmlReportOptions { Comparison = comparison, Plan = Upsizer.Standard.Plan(after) }));
         var ids = doc.QuerySelectorAll("main > section").Select(s => s.Id!).ToArray();
-        Assert.Equal(new[] { "summary", "comparison", "tree", "worst", "panels", "findings", "plan", "method" }, ids);
+        Assert.Equal(new[] { "summary", "comparison", "tree", "worst", "panels", "faults", "findings", "plan", "method" }, ids);
         var numbers = doc.QuerySelectorAll("main > section > h2 .num").Select(n => n.TextContent).ToArray();
         Assert.Equal(Enumerable.Range(1, ids.Length).Select(i => i.ToString(CultureInfo.InvariantCulture)), numbers);
         var toc = doc.QuerySelectorAll("nav.toc a").Select(a => a.GetAttribute("href")![1..]).ToArray();

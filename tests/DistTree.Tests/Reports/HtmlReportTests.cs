@@ -218,7 +218,9 @@ public sealed class HtmlReportTests
 
         var rows = doc.QuerySelectorAll("table.limits tbody tr").Select(r => r.QuerySelectorAll("td").Select(c => c.TextContent).ToArray()).ToArray();
         Assert.Equal(12, rows.Length);
-        foreach (var (name, kind) in new[] { ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad), ("Equipment grounding conductor", FindingKind.GroundingConductor), ("Interrupting rating", FindingKind.InterruptingRating), ("Fault clearing at the far end", FindingKind.FaultClearing) })
+        // The demo states no equipment rating (interrupting_ka): nothing to check there.
+        Assert.Equal(["Interrupting rating", "stated rating", "0", "0", "–", "nothing to check"], rows.Single(r => r[0] == "Interrupting rating"));
+        foreach (var (name, kind) in new[] { ("Fault clearing at the far end", FindingKind.FaultClearing), ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad), ("Equipment grounding conductor", FindingKind.GroundingConductor) })
         {
             var row = rows.Single(r => r[0] == name);
             var over = s.AllFindings.Count(f => f.Kind == kind);

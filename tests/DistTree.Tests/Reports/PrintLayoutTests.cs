@@ -22,7 +22,8 @@ public sealed class PrintLayoutTests
     [Theory]
     [InlineData(@"\.lede, \.legend \{ break-after: avoid;")]
     [InlineData(@"#tree, \.tree-frame \{ break-inside: avoid;")]
-    [InlineData(@"#panels, #motors, #findings, #plan, #method \{ break-before: page;")]
+    [InlineData(@"#panels, #faults, #motors, #findings, #plan, #method \{ break-before: page;")]
+    [InlineData(@"#faults \.fault-source, #faults \.method-line \{ break-after: avoid;")]
     [InlineData(@"section\.panel \+ section\.panel \{ break-before: page;")]
     [InlineData(@"h2 \{ break-after: avoid;")]
     [InlineData(@"#tree\.tree-wide \{ page: wide-tree; \}")]
@@ -33,7 +34,7 @@ public sealed class PrintLayoutTests
     public void Render_Demo_EverySectionTheRulesNameExists()
     {
         var doc = ReportFixtures.RenderDemo();
-        Assert.All(new[] { "tree", "panels", "findings", "method" }, id => Assert.NotNull(doc.GetElementById(id)));
+        Assert.All(new[] { "tree", "panels", "faults", "findings", "method" }, id => Assert.NotNull(doc.GetElementById(id)));
         Assert.True(doc.QuerySelectorAll("section.panel").Length > 1);
     }
 

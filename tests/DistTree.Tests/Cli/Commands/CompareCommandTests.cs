@@ -72,6 +72,8 @@ public sealed class CompareCommandTests : IDisposable
 
         var r = CliRunner.Run("compare", old, @new);
 
+        // 210 m of 12 AWG also leaves too little fault current at its far end to trip the 20 A breaker at once
+        // (about 120 V over 2 × 210 m at some 6.5 mΩ/m hot is below 50 A, against 10 × 20 A): fault_clearing.
         Assert.Equal(1, r.ExitCode);
         Assert.Contains("newly failing (branch_drop, fault_clearing, total_drop)", r.Out, StringComparison.Ordinal);
         Assert.Contains("New findings (3):", r.Out, StringComparison.Ordinal);
@@ -86,7 +88,7 @@ public sealed class CompareCommandTests : IDisposable
         var r = CliRunner.Run("compare", old, @new);
 
         Assert.Equal(0, r.ExitCode);
-        Assert.Contains("Resolved findings (3):", r.Out, StringComparison.Ordinal);
+        Assert.Contains("Resolved findings (3):", r.Out, StringComparison.Ordinal); // branch_drop, total_drop, fault_clearing
     }
 
     [Fact]
@@ -168,7 +170,7 @@ public sealed class CompareCommandTests : IDisposable
         Assert.Equal(1, r.ExitCode);
         var document = Markdown.Parse(r.Out, new MarkdownPipelineBuilder().UsePipeTables().Build());
         var tables = document.Descendants<Table>().ToArray();
-        Assert.Equal(3, tables.Length); // elements, end points, upstream runs
+        Assert.Equal(4, tables.Length); // elements, end points, upstream runs, fault currents (SUB added)
         var endPoints = tables[1];
         var header = (TableRow)endPoints[0];
         Assert.True(header.IsHeader);
