@@ -217,6 +217,7 @@ internal sealed class EndPointTotals
             LoadFlowTotalDropPercent = _voltages is null ? null : worstLf.LoadFlow,
             SourceSharePercent = _onLoadFlow ? worstLf.SourceLoadFlow : worstPs.SourcePercentSum,
             LoadFlowEndVoltageV = _voltages is null ? null : nominal.Of(_voltages.Bus(index)).Magnitude * Slots.NominalV(nominal, slotLf),
+            CountedSlot = (byte)counted,
         };
         _motorStarts[e] = start;
         _findings[e] = found;
