@@ -39,7 +39,7 @@ internal sealed record LimitMarks(string LimitX, string NearX, string NearWidth,
 /// <summary>One run's share of a path's bar.</summary>
 internal sealed record BarSegment(string X, string Width, string Kind, string Number, bool ShowNumber, string LabelX, string Title);
 
-/// <summary>One run's figures beneath a path's bar.</summary>
+/// <summary>One run's figures beneath a path's bar; <paramref name="Line"/> and <paramref name="CurrentA"/> are the line the end point's share in the run is read on and its current.</summary>
 internal sealed record PathRunRow(
     string Number,
     string Id,
@@ -48,6 +48,7 @@ internal sealed record PathRunRow(
     string Conductor,
     string LengthM,
     string LengthFt,
+    string Line,
     string CurrentA,
     string DropPercent,
     string LimitPercent,

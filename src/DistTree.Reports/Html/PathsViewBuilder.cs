@@ -51,7 +51,9 @@ internal static class PathsViewBuilder
         var segments = new List<BarSegment>();
         var rows = new List<PathRunRow>();
         var x = 0.0;
-        // Each run's share is the drop on this end point's own lines (a feeder's worst line may be another).
+        // Each run's share is the drop on this end point's own lines (a feeder's worst line may be another), and so are
+        // the line and current beside it (see EndPointResult.RunLineCurrents).
+        var lines = e.RunLineCurrents;
         foreach (var (i, share) in e.RunIndices.Zip(e.RunSharesPercent))
         {
             var number = rows.Count + 1;
@@ -66,7 +68,7 @@ internal static class PathsViewBuilder
                 Coordinate(x + (w / 2)),
                 Escape($"{number}. {r.Id} ({RunText.KindText(r.Kind)}): {Percent(share)} %")));
             x += w;
-            rows.Add(RunRowOf(r, number, share));
+            rows.Add(RunRowOf(r, number, share, lines[number - 1]));
         }
 
         var band = Bands.Of(e);
@@ -88,7 +90,7 @@ internal static class PathsViewBuilder
         };
     }
 
-    private static PathRunRow RunRowOf(RunResult r, int number, double share) => new(
+    private static PathRunRow RunRowOf(RunResult r, int number, double share, PathLineCurrent line) => new(
         Count(number),
         Escape(r.Id),
         RunText.KindClass(r.Kind),
@@ -96,7 +98,8 @@ internal static class PathsViewBuilder
         RunText.Conductor(r),
         r.Kind == RunResultKind.Transformer ? "–" : Metres(r.LengthM),
         r.Kind == RunResultKind.Transformer ? "–" : Feet(r.LengthM),
-        Amperes(r.CurrentA),
+        line.Line,
+        Amperes(line.CurrentA),
         Percent(share),
         r.LimitPercent is null ? "–" : Limit(r.LimitPercent),
         RunText.Codes(r.Findings),

@@ -31,12 +31,15 @@ public sealed class GroundingTable
     /// <summary>The column line of a grounding table file, tab-separated.</summary>
     public const string ColumnLine = "device_a\tcu\tal";
 
+    // The rows in an array, which SizeFor walks without compiling a generic enumerator at start (DEVELOPERS.md, Start-up).
+    private readonly GroundingTableRow[] _rows;
+
     /// <summary>A table named <paramref name="sourceName"/> with its <paramref name="header"/> lines and its <paramref name="rows"/> (ascending by rating).</summary>
     public GroundingTable(string sourceName, IReadOnlyList<string> header, IReadOnlyList<GroundingTableRow> rows)
     {
         SourceName = sourceName;
         Header = header;
-        Rows = rows;
+        _rows = rows as GroundingTableRow[] ?? [.. rows];
     }
 
     /// <summary>Where the table comes from: the rule set's table or the file the project named.</summary>
@@ -46,7 +49,7 @@ public sealed class GroundingTable
     public IReadOnlyList<string> Header { get; }
 
     /// <summary>The rows, ascending by <see cref="GroundingTableRow.DeviceA"/>.</summary>
-    public IReadOnlyList<GroundingTableRow> Rows { get; }
+    public IReadOnlyList<GroundingTableRow> Rows => _rows;
 
     /// <summary>
     /// The size the table names for a device of <paramref name="deviceA"/> amperes ahead of <paramref name="material"/>
@@ -54,7 +57,7 @@ public sealed class GroundingTable
     /// </summary>
     public GroundingTableSize? SizeFor(double deviceA, Material material)
     {
-        foreach (var row in Rows)
+        foreach (var row in _rows)
         {
             if (deviceA <= row.DeviceA + 1e-9)
             {

@@ -187,14 +187,14 @@ public sealed partial class ConductorCatalog
     private static CatalogRow?[] Interpolate(RawRow?[] raw)
     {
         var rows = new CatalogRow?[raw.Length];
-        var northAmerican = ConductorSize.InSeries(SizeSeries.NorthAmerican).Where(s => raw[s.Index] is not null).ToArray();
+        var northAmerican = Present(SizeSeries.NorthAmerican, raw);
         var cuPairs = Points(northAmerican, raw, r => r.RsteelCu / r.RpvcCu);
         var alPairs = Points(northAmerican, raw, r => r.RsteelAl / r.RpvcAl);
         var cuInAluminum = Points(northAmerican, raw, r => r.RalCu / r.RpvcCu);
         var alInAluminum = Points(northAmerican, raw, r => r.RalAl / r.RpvcAl);
         foreach (var series in new[] { SizeSeries.NorthAmerican, SizeSeries.Metric })
         {
-            var present = ConductorSize.InSeries(series).Where(s => raw[s.Index] is not null).ToArray();
+            var present = Present(series, raw);
             var xPvc = Points(present, raw, r => r.XPvc);
             var xSteel = Points(present, raw, r => r.XSteel);
             foreach (var size in present)
@@ -225,11 +225,53 @@ public sealed partial class ConductorCatalog
         return rows;
     }
 
-    private static (double AreaMm2, double Value)[] Points(IEnumerable<ConductorSize> sizes, RawRow?[] raw, Func<RawRow, double?> value) =>
-        sizes.Select(s => (s.AreaMm2, Value: value(raw[s.Index]!)))
-            .Where(p => p.Value is not null)
-            .Select(p => (p.AreaMm2, p.Value!.Value))
-            .ToArray();
+    // The sizes of a series the catalogue has a row for, smallest first. Plain loops over arrays, here and in Points:
+    // the catalogue is read on every run, and LINQ over these value types is compiled at start (DEVELOPERS.md, Start-up).
+    private static ConductorSize[] Present(SizeSeries series, RawRow?[] raw)
+    {
+        var sizes = ConductorSize.SeriesArray(series);
+        var count = 0;
+        foreach (var size in sizes)
+        {
+            count += raw[size.Index] is null ? 0 : 1;
+        }
+
+        var present = new ConductorSize[count];
+        count = 0;
+        foreach (var size in sizes)
+        {
+            if (raw[size.Index] is not null)
+            {
+                present[count++] = size;
+            }
+        }
+
+        return present;
+    }
+
+    // Per size with a value in the column, its area and the value.
+    private static (double AreaMm2, double Value)[] Points(ConductorSize[] sizes, RawRow?[] raw, Func<RawRow, double?> value)
+    {
+        var values = new double?[sizes.Length];
+        var count = 0;
+        for (var i = 0; i < sizes.Length; i++)
+        {
+            values[i] = value(raw[sizes[i].Index]!);
+            count += values[i] is null ? 0 : 1;
+        }
+
+        var points = new (double AreaMm2, double Value)[count];
+        count = 0;
+        for (var i = 0; i < sizes.Length; i++)
+        {
+            if (values[i] is { } v)
+            {
+                points[count++] = (sizes[i].AreaMm2, v);
+            }
+        }
+
+        return points;
+    }
 
     // Below the first point: belowFirst, or the first point's value when null. Above the last: the last's.
     private static double LogInterpolate((double AreaMm2, double Value)[] points, double areaMm2, double? belowFirst)

@@ -32,8 +32,10 @@ public readonly record struct ConductorSize : IComparable<ConductorSize>
     internal int Index => _index;
 
     /// <summary>Every size DistTree knows, North American first, each series ascending.</summary>
-    public static IReadOnlyList<ConductorSize> All { get; } =
-        Enumerable.Range(0, Table.Length).Select(i => new ConductorSize(i)).ToArray();
+    public static IReadOnlyList<ConductorSize> All => AllSizes;
+
+    // Every size, in a plain array: loops over it compile no generic code of the base library (see DEVELOPERS.md, Start-up).
+    private static readonly ConductorSize[] AllSizes = MakeAll();
 
     /// <summary>How the size is named.</summary>
     public SizeKind Kind => Table[_index].Kind;
@@ -61,8 +63,40 @@ public readonly record struct ConductorSize : IComparable<ConductorSize>
     }
 
     /// <summary>The sizes of a series, smallest first.</summary>
-    public static IReadOnlyList<ConductorSize> InSeries(SizeSeries series) =>
-        All.Where(s => s.Series == series).ToArray();
+    public static IReadOnlyList<ConductorSize> InSeries(SizeSeries series) => SeriesArray(series);
+
+    /// <summary>The sizes of a series, smallest first, as a new array.</summary>
+    internal static ConductorSize[] SeriesArray(SizeSeries series)
+    {
+        var count = 0;
+        foreach (var size in AllSizes)
+        {
+            count += size.Series == series ? 1 : 0;
+        }
+
+        var sizes = new ConductorSize[count];
+        count = 0;
+        foreach (var size in AllSizes)
+        {
+            if (size.Series == series)
+            {
+                sizes[count++] = size;
+            }
+        }
+
+        return sizes;
+    }
+
+    private static ConductorSize[] MakeAll()
+    {
+        var all = new ConductorSize[Table.Length];
+        for (var i = 0; i < all.Length; i++)
+        {
+            all[i] = new ConductorSize(i);
+        }
+
+        return all;
+    }
 
     /// <summary>Parses the forms people type; throws <see cref="FormatException"/> with a helpful message.</summary>
     public static ConductorSize Parse(string text) =>

@@ -1,13 +1,12 @@
 using DistTree.Model;
 using QuikGraph;
-using QuikGraph.Algorithms.Search;
 
 namespace DistTree.Network;
 
 /// <summary>
 /// Builds the distribution tree of a validated project as a QuikGraph graph (a node per service, equipment and
-/// branch circuit; a feed from each node's source to it), then numbers the nodes in the order of QuikGraph's
-/// breadth-first search from the service: the service is node 0, then each node's branch circuits in file order
+/// branch circuit; a feed from each node's source to it), then numbers the nodes in the order of a breadth-first
+/// search from the service: the service is node 0, then each node's branch circuits in file order
 /// and then the equipment it feeds in file order, so that every parent precedes its children.
 /// </summary>
 public static class NetworkBuilder
@@ -92,20 +91,30 @@ public static class NetworkBuilder
         }
     }
 
-    // The nodes in the order QuikGraph's breadth-first search (a queue, no recursion) first reaches them from the
-    // service, each numbered and told its parent as it is reached.
+    // The nodes in breadth-first order from the service (a queue, no recursion), each numbered and told its parent as it
+    // is first reached, each node's feeds out taken in the order they were added. A search of its own over the graph's
+    // feeds rather than QuikGraph's: that one keeps a colour per node in a dictionary of a value type, whose code is
+    // compiled at start (DEVELOPERS.md, Start-up). A node reached is placed; the tree has no other way into it.
     private static List<NetworkNode> ParentFirst(BidirectionalGraph<NetworkNode, NetworkFeed> graph, NetworkNode root, int expected)
     {
         var nodes = new List<NetworkNode>(expected) { root };
         root.Place(0, -1);
-        var search = new BreadthFirstSearchAlgorithm<NetworkNode, NetworkFeed>(graph, new QuikGraph.Collections.Queue<NetworkNode>(), new Dictionary<NetworkNode, GraphColor>(expected));
-        search.TreeEdge += feed =>
+        for (var next = 0; next < nodes.Count; next++)
         {
-            feed.Target.Place(nodes.Count, feed.Source.Index);
-            feed.Source.MutableChildren.Add(nodes.Count);
-            nodes.Add(feed.Target);
-        };
-        search.Compute(root);
+            var source = nodes[next];
+            foreach (var feed in graph.OutEdges(source))
+            {
+                if (feed.Target.ParentIndex != Unplaced || feed.Target == root)
+                {
+                    continue;
+                }
+
+                feed.Target.Place(nodes.Count, source.Index);
+                source.MutableChildren.Add(nodes.Count);
+                nodes.Add(feed.Target);
+            }
+        }
+
         return nodes;
     }
 

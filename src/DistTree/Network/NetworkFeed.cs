@@ -9,7 +9,7 @@ namespace DistTree.Network;
 /// </summary>
 /// <param name="source">The node on the service side.</param>
 /// <param name="target">The node fed.</param>
-public readonly struct NetworkFeed(NetworkNode source, NetworkNode target) : IEdge<NetworkNode>
+public sealed class NetworkFeed(NetworkNode source, NetworkNode target) : IEdge<NetworkNode>
 {
     /// <summary>The node on the service side.</summary>
     public NetworkNode Source { get; } = source;

@@ -74,7 +74,10 @@ internal sealed class TreeLevels
 
     private static LevelStep[] StepsOf(List<int> levelStarts)
     {
-        var steps = new List<LevelStep>();
+        // An array and a count, not a list: a list of these steps (a value type) is compiled at start (DEVELOPERS.md,
+        // Start-up). Each level adds at most two steps, a run of narrow levels before it and itself.
+        var steps = new LevelStep[2 * levelStarts.Count];
+        var count = 0;
         var narrowFrom = -1;
         for (var d = 1; d + 1 < levelStarts.Count; d++)
         {
@@ -87,19 +90,25 @@ internal sealed class TreeLevels
 
             if (narrowFrom >= 0)
             {
-                steps.Add(new LevelStep(narrowFrom, start, false));
+                steps[count++] = new LevelStep(narrowFrom, start, false);
                 narrowFrom = -1;
             }
 
-            steps.Add(new LevelStep(start, end, true));
+            steps[count++] = new LevelStep(start, end, true);
         }
 
         if (narrowFrom >= 0)
         {
-            steps.Add(new LevelStep(narrowFrom, levelStarts[^1], false));
+            steps[count++] = new LevelStep(narrowFrom, levelStarts[^1], false);
         }
 
-        return [.. steps];
+        var exact = new LevelStep[count];
+        for (var i = 0; i < count; i++)
+        {
+            exact[i] = steps[i];
+        }
+
+        return exact;
     }
 }
 

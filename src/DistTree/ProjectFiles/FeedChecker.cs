@@ -7,7 +7,7 @@ namespace DistTree.ProjectFiles;
 
 /// <summary>
 /// The checks that need the whole tree: duplicate ids, sources that do not exist; then, walking down
-/// the feeds from the service (QuikGraph's breadth-first search), each equipment's system and the checks
+/// the feeds from the service (a breadth-first search), each equipment's system and the checks
 /// that depend on it (a transformer's primary, the circuits a panel's system can give); then feed cycles
 /// and the equipment the service does not reach (QuikGraph's depth-first search along 'from').
 /// </summary>
@@ -83,38 +83,57 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         }
     }
 
-    // QuikGraph's breadth-first search (a queue, no recursion) down the feeds from the service: each piece of
-    // equipment takes its source's output system when first reached, in the order the loader has always checked
-    // them, each source's equipment in file order. Returns the equipment reached.
+    // A breadth-first search (a queue, no recursion) down the feeds from the service: each piece of equipment takes its
+    // source's output system when first reached, in the order the loader has always checked them, each source's
+    // equipment in file order. Returns the equipment reached. A search of its own rather than QuikGraph's, which keeps
+    // a colour per id in a dictionary of a value type, compiled on every run (DEVELOPERS.md, Start-up).
     private HashSet<EquipmentDraft> AssignSystems(Dictionary<string, EquipmentDraft> byId, Service service)
     {
-        // Vertices are ids; a feed from each defined source to the equipment it feeds, in file order (a dictionary
-        // enumerates in insertion order while nothing is removed).
-        var feeds = new AdjacencyGraph<string, SEquatableEdge<string>>(allowParallelEdges: true, byId.Count + 1);
-        feeds.AddVertex(service.Id);
-        feeds.AddVertexRange(byId.Keys);
+        // Per defined source, the equipment it feeds in file order (a dictionary enumerates in insertion order while
+        // nothing is removed).
+        var fed = new Dictionary<string, List<EquipmentDraft>>(byId.Count + 1, StringComparer.Ordinal);
         foreach (var draft in byId.Values)
         {
-            if (draft.From is { } from && feeds.ContainsVertex(from))
+            if (draft.From is { } from && (from == service.Id || byId.ContainsKey(from)))
             {
-                feeds.AddEdge(new SEquatableEdge<string>(from, draft.Id!));
+                if (!fed.TryGetValue(from, out var list))
+                {
+                    fed[from] = list = [];
+                }
+
+                list.Add(draft);
             }
         }
 
         var reached = new HashSet<EquipmentDraft>();
-        var search = new BreadthFirstSearchAlgorithm<string, SEquatableEdge<string>>(feeds);
-        search.TreeEdge += feed =>
+        var queue = new Queue<string>();
+        queue.Enqueue(service.Id);
+        while (queue.TryDequeue(out var source))
         {
-            var child = byId[feed.Target];
-            var output = feed.Source == service.Id ? service.System : byId[feed.Source].OutputSystem;
-            reached.Add(child);
-            child.System = output;
-            if (output is not null)
+            if (!fed.TryGetValue(source, out var children))
             {
-                child.System = CheckAgainstSystem(child, feed.Source, output);
+                continue;
             }
-        };
-        search.Compute(service.Id);
+
+            var output = source == service.Id ? service.System : byId[source].OutputSystem;
+            foreach (var child in children)
+            {
+                // The service's own id and equipment reached before are not entered again.
+                if (child.Id == service.Id || !reached.Add(child))
+                {
+                    continue;
+                }
+
+                child.System = output;
+                if (output is not null)
+                {
+                    child.System = CheckAgainstSystem(child, source, output);
+                }
+
+                queue.Enqueue(child.Id!);
+            }
+        }
+
         return reached;
     }
 
@@ -203,7 +222,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
     // piece of equipment is finished in the reverse of the walk, which is the order its error is reported in.
     private void CheckUnreached(Dictionary<string, EquipmentDraft> byId, HashSet<EquipmentDraft> reached, string serviceId)
     {
-        var unreached = new AdjacencyGraph<EquipmentDraft, SEquatableEdge<EquipmentDraft>>(allowParallelEdges: true);
+        var unreached = new AdjacencyGraph<EquipmentDraft, Edge<EquipmentDraft>>(allowParallelEdges: true);
         unreached.AddVertexRange(byId.Values.Where(draft => !reached.Contains(draft)));
         if (unreached.IsVerticesEmpty)
         {
@@ -214,7 +233,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         {
             if (draft.From is { } from && byId.TryGetValue(from, out var source) && unreached.ContainsVertex(source))
             {
-                unreached.AddEdge(new SEquatableEdge<EquipmentDraft>(draft, source));
+                unreached.AddEdge(new Edge<EquipmentDraft>(draft, source));
             }
         }
 
@@ -222,7 +241,7 @@ internal sealed class FeedChecker(DiagnosticBag bag)
         // The cycle each piece of equipment leads into, named by the member a walk entered it at; a member: itself.
         var cycleOf = new Dictionary<EquipmentDraft, EquipmentDraft>();
         EquipmentDraft? entry = null;
-        var search = new DepthFirstSearchAlgorithm<EquipmentDraft, SEquatableEdge<EquipmentDraft>>(unreached);
+        var search = new DepthFirstSearchAlgorithm<EquipmentDraft, Edge<EquipmentDraft>>(unreached);
         search.StartVertex += _ => entry = null;
         search.DiscoverVertex += walk.Add;
         search.BackEdge += feed =>

@@ -72,6 +72,14 @@ public readonly struct EndPointResult : IEquatable<EndPointResult>
     /// <summary>Each counted run's share of <see cref="TotalDropPercent"/>, percent, aligned with <see cref="RunIndices"/>: the drop on the end point's own lines.</summary>
     public IReadOnlyList<double> RunSharesPercent => new ArraySegment<double>(_rows.PathShares, Row.PathStart, Row.PathCount);
 
+    /// <summary>
+    /// Aligned with <see cref="RunIndices"/>, the line each run's share is read on and its current: of the lines the end
+    /// point's own voltage reads in that run (its line, its pair, its worst pair; above a delta-wye transformer the primary
+    /// lines of its winding; a transformer's secondary lines), the one whose own conductor makes the largest part of the
+    /// share (see <see cref="PathLineCurrent"/>). Worked out at each reading.
+    /// </summary>
+    public IReadOnlyList<PathLineCurrent> RunLineCurrents => PathLines.Of(_rows, _index);
+
     /// <summary>The circuit's nominal voltage in volts.</summary>
     public double VoltageV => Node.Circuit!.Supply.VoltageV;
 

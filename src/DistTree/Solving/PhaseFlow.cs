@@ -55,8 +55,21 @@ internal sealed class PhaseFlow
             va[x] = v * i[x].Magnitude;
         }
 
-        var average = va.Average();
-        var imbalance = lines < 2 || average <= 0 ? 0.0 : va.Max(s => Math.Abs(s - average)) / average * 100.0;
+        // Loops, not LINQ over doubles (compiled at start: DEVELOPERS.md, Start-up); the same sums in the same order.
+        var sum = 0.0;
+        foreach (var s in va)
+        {
+            sum += s;
+        }
+
+        var average = sum / lines;
+        var deviation = Math.Abs(va[0] - average);
+        for (var x = 1; x < lines; x++)
+        {
+            deviation = Math.Max(deviation, Math.Abs(va[x] - average));
+        }
+
+        var imbalance = lines < 2 || average <= 0 ? 0.0 : deviation / average * 100.0;
         return new PanelResult(node.Id, node.System.Name, va, node.System.HasNeutral ? (i[0] + i[1] + i[2]).Magnitude : null, imbalance);
     }
 

@@ -46,8 +46,36 @@ public sealed record Solution
     public FaultStudy? Faults { get; init; }
 
     /// <summary>Every finding, runs' first, then end points', then equipment's, each in network order.</summary>
-    public IEnumerable<Finding> AllFindings =>
-        Runs.SelectMany(r => r.Findings).Concat(EndPoints.SelectMany(e => e.Findings)).Concat(Faults?.Findings ?? []);
+    public IEnumerable<Finding> AllFindings
+    {
+        get
+        {
+            // Loops, not SelectMany over the result views (value types, compiled at start: DEVELOPERS.md, Start-up).
+            for (var i = 0; i < Runs.Count; i++)
+            {
+                foreach (var finding in Runs[i].Findings)
+                {
+                    yield return finding;
+                }
+            }
+
+            for (var i = 0; i < EndPoints.Count; i++)
+            {
+                foreach (var finding in EndPoints[i].Findings)
+                {
+                    yield return finding;
+                }
+            }
+
+            if (Faults is not null)
+            {
+                foreach (var finding in Faults.Findings)
+                {
+                    yield return finding;
+                }
+            }
+        }
+    }
 
     /// <summary>True when any limit is exceeded.</summary>
     public bool HasFindings => Summary.Findings > 0;

@@ -128,6 +128,9 @@ internal struct EndPointRow
     public double? LoadFlowTotalDropPercent;
     public double? LoadFlowEndVoltageV;
     public double SourceSharePercent;
+
+    /// <summary>The slot (see <see cref="Slots"/>) whose voltage <see cref="TotalDropPercent"/> is read in, for <see cref="PathLines"/>.</summary>
+    public byte CountedSlot;
 }
 
 /// <summary>A solution's runs or end points as a list of views: the view of an index is made when it is read.</summary>

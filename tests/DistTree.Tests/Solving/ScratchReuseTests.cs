@@ -5,9 +5,33 @@ using DistTree.Solving;
 
 namespace DistTree.Tests.Solving;
 
-/// <summary>The solver's scratch arrays come from a shared pool: a solve that reuses them gives the same results.</summary>
-public sealed class ScratchReuseTests
+/// <summary>
+/// The solver's scratch arrays come from a shared pool: a solve that reuses them gives the same results. The test
+/// projects are small, so every array is pooled here (<see cref="Scratch.PooledFromBytes"/> 0), not only the large ones.
+/// </summary>
+public sealed class ScratchReuseTests : IDisposable
 {
+    private readonly long _pooledFromBytes = Scratch.PooledFromBytes;
+
+    public ScratchReuseTests() => Scratch.PooledFromBytes = 0;
+
+    public void Dispose() => Scratch.PooledFromBytes = _pooledFromBytes;
+
+    [Fact]
+    public void Rent_BelowTheLargeObjectThreshold_MakesAnArrayOfItsOwn()
+    {
+        Scratch.PooledFromBytes = 85_000;
+
+        // 10,000 doubles (80,000 bytes) are made afresh and exactly as long; 20,000 (160,000 bytes) come from the pool,
+        // whose arrays are powers of two long (System.Buffers.ArrayPool<T>.Shared).
+        var (small, large) = (Scratch.Rent<double>(10_000), Scratch.Rent<double>(20_000));
+
+        Assert.Equal(10_000, small.Length);
+        Assert.Equal(32_768, large.Length);
+        Scratch.Return(small, 10_000);
+        Scratch.Return(large, 20_000);
+    }
+
     [Fact]
     public void Solve_AfterALargerSolve_GivesTheSameResults()
     {

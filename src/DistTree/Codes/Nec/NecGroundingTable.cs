@@ -38,14 +38,38 @@ internal static class NecGroundingTable
     ];
 
     // Per row, the copper and the aluminium areas in circular mils.
-    private static readonly (double Copper, double Aluminum)[] Areas =
-        [.. Rows.Select(r => (AreaCmil(r.Copper), AreaCmil(r.Aluminum)))];
+    private static readonly (double Copper, double Aluminum)[] Areas = MakeAreas();
 
     /// <summary>The table as the rule set's own grounding table (<see cref="CodeRules.OwnGroundingTable"/>): the same rows and areas.</summary>
     internal static GroundingTable Table { get; } = new(
         "NEC Table 250.122",
         ["NEC 2020 Table 250.122, minimum size of equipment grounding conductors (recalled from memory, not read: verify against the edition in force)"],
-        [.. Rows.Select((r, i) => new GroundingTableRow(r.DeviceA, new GroundingTableSize(r.Copper, Areas[i].Copper), new GroundingTableSize(r.Aluminum, Areas[i].Aluminum)))]);
+        MakeRows());
+
+    // Plain loops over arrays, here and in MakeRows: the table is made on every run, and LINQ over these tuples and rows
+    // (value types) is compiled at start (DEVELOPERS.md, Start-up).
+    private static (double Copper, double Aluminum)[] MakeAreas()
+    {
+        var areas = new (double Copper, double Aluminum)[Rows.Length];
+        for (var i = 0; i < Rows.Length; i++)
+        {
+            areas[i] = (AreaCmil(Rows[i].Copper), AreaCmil(Rows[i].Aluminum));
+        }
+
+        return areas;
+    }
+
+    private static GroundingTableRow[] MakeRows()
+    {
+        var rows = new GroundingTableRow[Rows.Length];
+        for (var i = 0; i < Rows.Length; i++)
+        {
+            var (deviceA, copper, aluminum) = Rows[i];
+            rows[i] = new GroundingTableRow(deviceA, new GroundingTableSize(copper, Areas[i].Copper), new GroundingTableSize(aluminum, Areas[i].Aluminum));
+        }
+
+        return rows;
+    }
 
     /// <summary>
     /// The row of a device of <paramref name="deviceA"/> amperes: the first whose rating is not below it, or -1 above

@@ -16,7 +16,9 @@ internal sealed class RunReader(SectionContext context)
     public const double LongBranchM = 2000 * UnitFactors.MetresPerFoot;
 
     // Each size text parsed, with its result: a file names a few sizes many times.
-    private readonly Dictionary<string, (bool Ok, ConductorSize Size, string Error)> _sizes = new(StringComparer.Ordinal);
+    // Each size text read, parsed once. The value is a class: a dictionary of a reference type runs the base library's
+    // precompiled shared code, where a tuple's would be compiled at start (DEVELOPERS.md, Start-up).
+    private readonly Dictionary<string, ParsedSize> _sizes = new(StringComparer.Ordinal);
 
     private DiagnosticBag Bag => context.Bag;
 
@@ -216,7 +218,8 @@ internal sealed class RunReader(SectionContext context)
 
         if (!_sizes.TryGetValue(text, out var parsed))
         {
-            parsed.Ok = ConductorSize.TryParse(text, out parsed.Size, out parsed.Error);
+            var ok = ConductorSize.TryParse(text, out var size, out var error);
+            parsed = new ParsedSize(ok, size, error);
             _sizes.Add(text, parsed);
         }
 
@@ -238,4 +241,6 @@ internal sealed class RunReader(SectionContext context)
     // The parallel sets: 1 unless stated; out of range is reported (0 then, and the run not made).
     private int Sets(in MappingReader m, Subject subject) =>
         m.Optional("sets") is { } setsNode ? Values.WholeInRange(setsNode, subject.Of("'sets' of "), ValueRanges.Sets) ?? 0 : 1;
+
+    private sealed record ParsedSize(bool Ok, ConductorSize Size, string Error);
 }

@@ -46,8 +46,8 @@ internal sealed class PhaseFrame
     {
         var (nodes, parents) = (network.NodeArray, network.ParentIndices);
         var models = new TransformerModel?[nodes.Length];
-        var rotation = GC.AllocateUninitializedArray<Complex>(nodes.Length);
-        var noLoad = GC.AllocateUninitializedArray<double>(nodes.Length);
+        var rotation = Scratch.Uninitialized<Complex>(nodes.Length);
+        var noLoad = Scratch.Uninitialized<double>(nodes.Length);
         (rotation[0], noLoad[0]) = (Complex.One, 1.0);
         for (var i = 1; i < nodes.Length; i++)
         {

@@ -14,6 +14,9 @@ namespace DistTree.Solving.Passes;
 /// </summary>
 internal sealed class EndPointTotals
 {
+    // The longest path whose scratch figures an end point keeps on the stack.
+    private const int StackPathRuns = 32;
+
     private readonly DistributionNetwork _network;
     private readonly NetworkNode[] _nodes;
     private readonly int[] _parents;
@@ -125,11 +128,11 @@ internal sealed class EndPointTotals
 
         _pathStart[_count] = used;
         Scratch.Return(counted, n);
-        _endPoints = GC.AllocateUninitializedArray<EndPointRow>(_count);
+        _endPoints = Scratch.Uninitialized<EndPointRow>(_count);
         _findings = new IReadOnlyList<Finding>?[_count];
         _motorStarts = new MotorStartResult?[_count];
-        _pathRuns = GC.AllocateUninitializedArray<int>(used);
-        _pathShares = GC.AllocateUninitializedArray<double>(used);
+        _pathRuns = Scratch.Uninitialized<int>(used);
+        _pathShares = Scratch.Uninitialized<double>(used);
     }
 
     // The end points start … end − 1. The worst of the range and its findings are merged into the whole under the
@@ -165,10 +168,11 @@ internal sealed class EndPointTotals
         var system = PhaseFrame.BusSystem(panel);
         var lines = PhaseRules.Lines(system);
         var slots = Slots.OfCircuit((int)_phases.Assigned[index] & ((1 << lines) - 1)) & Slots.Of(lines, system.HasNeutral);
-        var buffer = ArrayPool<double>.Shared.Rent(pathCount * 2);
+        // On the stack for a path of up to StackPathRuns runs (the pool of doubles is compiled at start: DEVELOPERS.md, Start-up).
+        var buffer = pathCount <= StackPathRuns ? stackalloc double[2 * StackPathRuns] : new double[pathCount * 2];
         var rowsBuffer = ArrayPool<int>.Shared.Rent(pathCount);
-        var ps = buffer.AsSpan(0, pathCount);
-        var lf = buffer.AsSpan(pathCount, pathCount);
+        var ps = buffer.Slice(0, pathCount);
+        var lf = buffer.Slice(pathCount, pathCount);
         var withSource = !_newOrigin || pathCount == _shares.AllRows(index);
         var (worstPs, worstLf, slotPs, slotLf) = (default(PathTotals), default(PathTotals), -1, -1);
         for (var slot = 0; slot < Slots.Count; slot++)
@@ -195,7 +199,6 @@ internal sealed class EndPointTotals
             _pathShares[first + pathCount - 1 - k] = _onLoadFlow ? lf[k] : ps[k];
         }
 
-        ArrayPool<double>.Shared.Return(buffer);
         ArrayPool<int>.Shared.Return(rowsBuffer);
 
         var total = _onLoadFlow ? worstLf.LoadFlow : worstPs.PercentSum;
@@ -214,6 +217,7 @@ internal sealed class EndPointTotals
             LoadFlowTotalDropPercent = _voltages is null ? null : worstLf.LoadFlow,
             SourceSharePercent = _onLoadFlow ? worstLf.SourceLoadFlow : worstPs.SourcePercentSum,
             LoadFlowEndVoltageV = _voltages is null ? null : nominal.Of(_voltages.Bus(index)).Magnitude * Slots.NominalV(nominal, slotLf),
+            CountedSlot = (byte)counted,
         };
         _motorStarts[e] = start;
         _findings[e] = found;

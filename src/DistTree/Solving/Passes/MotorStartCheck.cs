@@ -22,11 +22,12 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
         var nodes = network.NodeArray;
         var panel = nodes[network.ParentIndices[motor]];
         var count = shares.AllRows(motor);
-        var buffer = ArrayPool<double>.Shared.Rent(count * 3);
+        // On the stack for a path of up to 32 runs (the pool of doubles is compiled at start: DEVELOPERS.md, Start-up).
+        var buffer = count <= 32 ? stackalloc double[3 * 32] : new double[count * 3];
         var rows = ArrayPool<int>.Shared.Rent(count);
-        var ps = buffer.AsSpan(0, count);
-        var lf = buffer.AsSpan(count, count);
-        var extra = buffer.AsSpan(count * 2, count);
+        var ps = buffer.Slice(0, count);
+        var lf = buffer.Slice(count, count);
+        var extra = buffer.Slice(count * 2, count);
         var (terminal, dips) = (double.NegativeInfinity, Array.Empty<BusDip>());
         for (var slot = 0; slot < Slots.Count; slot++)
         {
@@ -44,7 +45,6 @@ internal sealed class MotorStartCheck(DistributionNetwork network, PhaseFlow pha
             }
         }
 
-        ArrayPool<double>.Shared.Return(buffer);
         ArrayPool<int>.Shared.Return(rows);
         return new MotorStartResult(lockedRotor.VoltAmperes, terminal, dips.Length > 0 ? dips[0].DipPercent : terminal, _limitPercent) { PathDips = dips };
     }

@@ -28,12 +28,12 @@ internal sealed class PhaseCurrents
 
     private PhaseCurrents(DistributionNetwork network, PhaseFrame frame, ComplexPower[] power, Phases[] assigned, bool anyContinuous)
     {
-        _continuous = anyContinuous ? GC.AllocateUninitializedArray<Complex>(network.NodeArray.Length * 3) : null;
+        _continuous = anyContinuous ? Scratch.Uninitialized<Complex>(network.NodeArray.Length * 3) : null;
         _network = network;
         _frame = frame;
         _power = power;
         _assigned = assigned;
-        _currents = GC.AllocateUninitializedArray<Complex>(network.NodeArray.Length * 3);
+        _currents = Scratch.Uninitialized<Complex>(network.NodeArray.Length * 3);
     }
 
     /// <summary>

@@ -23,7 +23,7 @@ internal sealed class PowerSums : IDisposable
 
         // The power is the solution's own; the rest are scratch. The pass fills them whole, so they are made
         // without clearing and their memory is first written on every core.
-        Power = GC.AllocateUninitializedArray<ComplexPower>(_n);
+        Power = Scratch.Uninitialized<ComplexPower>(_n);
         Continuous = Scratch.RentToFill<ComplexPower>(_n);
         Has = Scratch.RentToFill<Has>(_n);
         LockedRotor = Scratch.RentToFill<ComplexPower>(_n); // read only for a motor, and written there

@@ -24,7 +24,7 @@ internal sealed class RunRows : IDisposable
         }
 
         Count = count;
-        Rows = GC.AllocateUninitializedArray<RunRow>(count);
+        Rows = Scratch.Uninitialized<RunRow>(count);
         Findings = new IReadOnlyList<Finding>?[count];
         Moments = Scratch.RentToFill<System.Numerics.Complex>(count * 3);
         LengthM = Scratch.RentToFill<double>(count);
