@@ -52,8 +52,10 @@ public sealed class Upsizer
             attempt = Attempt(before, maxSteps, factors, transformerOverloads);
         }
 
-        var (picks, unresolvable, after) = attempt;
+        var (picks, unresolvable, after, problem) = attempt;
         Verify(after, unresolvable);
+        var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => MeetsAtStatedSize(problem, i), p => Analysis.Run(Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
         var changes = Changes(before, after, picks);
         unresolvable.AddRange(GroundsLeft(after, changes));
         return new UpsizePlan
@@ -81,7 +83,26 @@ public sealed class Upsizer
 
         var picks = Picks(problem, choice);
         var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = catalog }).Solution;
-        return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
+        return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after, problem);
+    }
+
+    /// <summary>
+    /// <paramref name="before"/>'s project with only <paramref name="changes"/> applied (each run's size and sets, and its stated
+    /// grounding conductor raised as the plan raises it), solved again: how a plan is proved, and how a test undoes part of it.
+    /// </summary>
+    internal Solution Resolve(Solution before, IEnumerable<UpsizeChange> changes)
+    {
+        var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        var nodeOf = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.Id, r => r.NodeIndex, StringComparer.Ordinal);
+        var picks = changes.ToDictionary(c => nodeOf[c.RunId], c => new RunOption(ConductorSize.Parse(c.SizeAfter), c.SetsAfter, c.DropPercentAfter, 0, c.CostAdded, true));
+        return Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = catalog }).Solution;
+    }
+
+    // True when node i's run meets its own limits at its stated size and sets (so undoing its change may pass).
+    private static bool MeetsAtStatedSize(SizingProblem problem, int i)
+    {
+        var present = problem.Network.Nodes[i].Incoming!.Conductors;
+        return problem.Options[i] is { } options && options.Any(o => o.MeetsRunLimits && o.Size == present.Size && o.Sets == present.Sets);
     }
 
     // The chosen size and sets per node, where they differ from the present ones.
@@ -237,5 +258,5 @@ public sealed class Upsizer
     }
 
     // A plan, what it reports as unfixable, and its proof.
-    private sealed record Attempted(Dictionary<int, RunOption> Picks, List<UnresolvableLimit> Unresolvable, Solution After);
+    private sealed record Attempted(Dictionary<int, RunOption> Picks, List<UnresolvableLimit> Unresolvable, Solution After, SizingProblem Problem);
 }

@@ -1,0 +1,87 @@
+using DistTree.Solving;
+
+namespace DistTree.Sizing;
+
+/// <summary>
+/// Makes a proved plan minimal on the solver's own figures. The optimiser prices a feeder at the worst of its lines for
+/// every end point below it and rounds each drop up to its grid, both on the safe side, so its plan may hold a change the
+/// design does not need. Each change whose run meets its own limits at its stated size is undone where the tree, solved
+/// again by the real solver (per line, with the neutral and the transformer connections), has no finding the plan's proof
+/// did not have. First all such changes at once, restoring the ones above each new finding until none is left; then each
+/// change still kept alone, most costly first. Undoing a change only ever raises drops below it, so a change that cannot be
+/// undone alone cannot be undone with another either.
+/// </summary>
+internal static class PlanPruner
+{
+    /// <summary>How many changes are tried alone, at most (each a solve of the whole tree): the most costly ones.</summary>
+    public const int MaxSingleTrials = 48;
+
+    /// <summary>
+    /// The picks with every change the design does not need undone, and their proof. <paramref name="undoable"/> says
+    /// which picks' runs meet their own limits at their stated size; <paramref name="solve"/> solves the project with
+    /// the picks given.
+    /// </summary>
+    public static (Dictionary<int, RunOption> Picks, Solution After) Prune(
+        Solution before, Dictionary<int, RunOption> picks, Solution after, Func<int, bool> undoable, Func<Dictionary<int, RunOption>, Solution> solve)
+    {
+        var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
+        var nodes = before.Network.Nodes;
+        var nodeOf = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            nodeOf.TryAdd(nodes[i].Id, i);
+        }
+
+        // All at once: the findings that come back name the changes above them, which are kept.
+        var undone = picks.Keys.Where(undoable).ToHashSet();
+        while (undone.Count > 0)
+        {
+            var trial = Without(picks, undone);
+            var solved = solve(trial);
+            var fresh = solved.AllFindings.Where(f => !left.Contains(Key(f))).ToList();
+            if (fresh.Count == 0)
+            {
+                (picks, after) = (trial, solved);
+                break;
+            }
+
+            var implicated = new HashSet<int>();
+            foreach (var f in fresh)
+            {
+                for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
+                {
+                    if (undone.Contains(i))
+                    {
+                        implicated.Add(i);
+                    }
+                }
+            }
+
+            if (implicated.Count == 0)
+            {
+                undone.Clear(); // a finding no undone change lies above: keep them all
+            }
+
+            undone.ExceptWith(implicated);
+        }
+
+        // Then each change still kept alone, most costly first.
+        var single = picks.Where(p => undoable(p.Key)).OrderByDescending(p => p.Value.Cost).ThenBy(p => p.Key).Select(p => p.Key).Take(MaxSingleTrials).ToArray();
+        foreach (var index in single)
+        {
+            var trial = Without(picks, new HashSet<int> { index });
+            var solved = solve(trial);
+            if (solved.AllFindings.All(f => left.Contains(Key(f))))
+            {
+                (picks, after) = (trial, solved);
+            }
+        }
+
+        return (picks, after);
+    }
+
+    private static Dictionary<int, RunOption> Without(Dictionary<int, RunOption> picks, HashSet<int> undone) =>
+        picks.Where(p => !undone.Contains(p.Key)).ToDictionary(p => p.Key, p => p.Value);
+
+    private static string Key(Finding f) => $"{f.Code} {f.Subject}";
+}
