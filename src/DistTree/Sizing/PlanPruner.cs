@@ -18,11 +18,11 @@ internal static class PlanPruner
 
     /// <summary>
     /// The picks with every change the design does not need undone, and their proof. <paramref name="undoable"/> says
-    /// which picks' runs meet their own limits at their stated size; <paramref name="solve"/> solves the project with
-    /// the picks given.
+    /// which run changes' runs meet their own limits at their stated size (a tap may always be tried at its stated
+    /// position); <paramref name="solve"/> solves the project with the picks given.
     /// </summary>
-    public static (Dictionary<int, RunOption> Picks, Solution After) Prune(
-        Solution before, Dictionary<int, RunOption> picks, Solution after, Func<int, bool> undoable, Func<Dictionary<int, RunOption>, Solution> solve)
+    public static (PlanPicks Picks, Solution After) Prune(
+        Solution before, PlanPicks picks, Solution after, Func<int, bool> undoable, Func<PlanPicks, Solution> solve)
     {
         var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
         var nodes = before.Network.Nodes;
@@ -32,11 +32,13 @@ internal static class PlanPruner
             nodeOf.TryAdd(nodes[i].Id, i);
         }
 
+        bool Candidate(int key) => key < 0 || undoable(key);
+
         // All at once: the findings that come back name the changes above them, which are kept.
-        var undone = picks.Keys.Where(undoable).ToHashSet();
+        var undone = picks.Keys.Select(k => k.Key).Where(Candidate).ToHashSet();
         while (undone.Count > 0)
         {
-            var trial = Without(picks, undone);
+            var trial = picks.Without(undone);
             var solved = solve(trial);
             var fresh = solved.AllFindings.Where(f => !left.Contains(Key(f))).ToList();
             if (fresh.Count == 0)
@@ -50,10 +52,7 @@ internal static class PlanPruner
             {
                 for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
                 {
-                    if (undone.Contains(i))
-                    {
-                        implicated.Add(i);
-                    }
+                    implicated.UnionWith(new[] { PlanPicks.KeyOfRun(i), PlanPicks.KeyOfTap(i) }.Where(undone.Contains));
                 }
             }
 
@@ -66,10 +65,10 @@ internal static class PlanPruner
         }
 
         // Then each change still kept alone, most costly first.
-        var single = picks.Where(p => undoable(p.Key)).OrderByDescending(p => p.Value.Cost).ThenBy(p => p.Key).Select(p => p.Key).Take(MaxSingleTrials).ToArray();
-        foreach (var index in single)
+        var single = picks.Keys.Where(k => Candidate(k.Key)).OrderByDescending(k => k.Cost).ThenBy(k => k.Key).Select(k => k.Key).Take(MaxSingleTrials).ToArray();
+        foreach (var key in single)
         {
-            var trial = Without(picks, new HashSet<int> { index });
+            var trial = picks.Without([key]);
             var solved = solve(trial);
             if (solved.AllFindings.All(f => left.Contains(Key(f))))
             {
@@ -79,9 +78,6 @@ internal static class PlanPruner
 
         return (picks, after);
     }
-
-    private static Dictionary<int, RunOption> Without(Dictionary<int, RunOption> picks, HashSet<int> undone) =>
-        picks.Where(p => !undone.Contains(p.Key)).ToDictionary(p => p.Key, p => p.Value);
 
     private static string Key(Finding f) => $"{f.Code} {f.Subject}";
 }

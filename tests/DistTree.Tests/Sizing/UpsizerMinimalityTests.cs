@@ -45,30 +45,30 @@ public sealed class UpsizerMinimalityTests
     internal static string? Undoable(UpsizePlan plan, bool pairs)
     {
         var left = plan.After.AllFindings.Select(Key).ToHashSet(StringComparer.Ordinal);
-        var changes = plan.Changes;
+        var (runs, taps) = (plan.Changes, plan.TapChanges);
+        var names = runs.Select(c => $"{c.RunId} ({c.SetsAfter} × {c.SizeAfter})").Concat(taps.Select(t => $"the tap of {t.TransformerId} ({t.TapPercentAfter} %)")).ToArray();
         bool Passes(params int[] undone)
         {
-            var kept = changes.Where((_, i) => !undone.Contains(i));
-            return Upsizer.Standard.Resolve(plan.Before, kept).AllFindings.All(f => left.Contains(Key(f)));
+            var keptRuns = runs.Where((_, i) => !undone.Contains(i));
+            var keptTaps = taps.Where((_, i) => !undone.Contains(runs.Count + i));
+            return Upsizer.Standard.Resolve(plan.Before, keptRuns, keptTaps).AllFindings.All(f => left.Contains(Key(f)));
         }
 
-        // Larger conductors never raise a drop, so a pair can be undone only where each of its changes passes its own
-        // limits at the stated size: undoing one alone is then checked first.
-        for (var a = 0; a < changes.Count; a++)
+        for (var a = 0; a < names.Length; a++)
         {
             if (Passes(a))
             {
-                return $"{changes[a].RunId} ({changes[a].SetsAfter} × {changes[a].SizeAfter}) can be undone";
+                return $"{names[a]} can be undone";
             }
         }
 
-        for (var a = 0; pairs && a < changes.Count; a++)
+        for (var a = 0; pairs && a < names.Length; a++)
         {
-            for (var b = a + 1; b < changes.Count; b++)
+            for (var b = a + 1; b < names.Length; b++)
             {
                 if (Passes(a, b))
                 {
-                    return $"{changes[a].RunId} and {changes[b].RunId} can be undone together";
+                    return $"{names[a]} and {names[b]} can be undone together";
                 }
             }
         }

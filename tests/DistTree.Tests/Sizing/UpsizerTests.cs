@@ -19,8 +19,10 @@ public sealed class UpsizerTests
         var before = SolverHarness.Solve(File.ReadAllText(Demo), Demo);
         var plan = Upsizer.Standard.Plan(before);
         Assert.True(before.HasFindings);
-        Assert.False(plan.After.HasFindings);
-        Assert.Empty(plan.Unresolvable);
+        // Two runs need more than their devices' terminals take (terminal-limits.tsv): a 50 A feeder 2 AWG, a 20 A branch 6 AWG.
+        Assert.Equal(["HG", "LP4/32"], plan.Unresolvable.Select(u => u.Subject).Order(StringComparer.Ordinal));
+        Assert.All(plan.Unresolvable, u => Assert.Contains("beyond the terminal limit of its", u.Message, StringComparison.Ordinal));
+        Assert.All(plan.After.AllFindings, f => Assert.Contains(f.Subject, plan.Unresolvable.Select(u => u.Subject)));
         Assert.NotEmpty(plan.Changes);
         Assert.All(plan.Changes, c => Assert.True(ConductorSize.Parse(c.SizeAfter) >= ConductorSize.Parse(c.SizeBefore) && c.SetsAfter >= c.SetsBefore));
         Assert.All(plan.Changes, c => Assert.True(c.CostAdded > 0));
@@ -79,7 +81,7 @@ public sealed class UpsizerTests
         // 120 V, 80 A, 3,000 ft: even 2000 kcmil drops about 4 % on one set (2 × 80 A × 0.914 km × 0.034 ohm/km).
         var plan = PlanFor(SolverHarness.OneCircuit("120/240", "imperial",
             "{ id: \"1\", poles: 1, ocpd: 100, load: { amps: 80 }, run: { length: 3000, size: 2 AWG } }"));
-        var u = Assert.Single(plan.Unresolvable, u => u.Subject == "P/1" && u.Message.Contains("branch circuit", StringComparison.Ordinal));
+        var u = Assert.Single(plan.Unresolvable, u => u.Subject == "P/1" && u.Message.StartsWith("branch circuit", StringComparison.Ordinal));
         Assert.Contains("parallel sets", u.Message, StringComparison.Ordinal);
     }
 
@@ -102,7 +104,7 @@ public sealed class UpsizerTests
     [Fact]
     public void Plan_MaxSets_LetsAFeederTakeParallelSets()
     {
-        var plan = PlanFor(FeederWithSets("length: 1400, size: 500 kcmil, sets: 1, ocpd: 600", 500, 350, "500 kcmil"));
+        var plan = PlanFor(FeederWithSets("length: 1400, size: 500 kcmil, sets: 1, ocpd: 600", 400, 300, "500 kcmil"));
         Assert.False(plan.After.HasFindings);
         Assert.Contains(plan.Changes, c => c.RunId == "P" && c.SetsAfter > 1);
     }
