@@ -35,6 +35,19 @@ public sealed class UpsizeCommandTests
         }
     }
 
+    // --apply writes conductor sizes only: a tap the plan sets is named on standard error, to be set by hand.
+    [Fact]
+    public void Upsize_ApplyAPlanWithATap_NamesTheTapToSetByHand()
+    {
+        using var folder = new TempFolder();
+        var project = folder.File("tap.yaml");
+        File.WriteAllText(project, Sizing.UpsizerRemedyTests.Transformer());
+        var result = CliRunner.Run("upsize", project, "--apply", folder.File("fixed.yaml"));
+        Assert.Equal(0, result.ExitCode);
+        Assert.Contains("not written: set tap_percent of 'T1' to -2.5 by hand (--apply writes conductor sizes only)", result.Error, StringComparison.Ordinal);
+        Assert.Equal(File.ReadAllBytes(project), File.ReadAllBytes(folder.File("fixed.yaml")));
+    }
+
     [Fact]
     public void Upsize_Json_HasThePlan()
     {
