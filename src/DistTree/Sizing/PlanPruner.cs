@@ -19,10 +19,12 @@ internal static class PlanPruner
     /// <summary>
     /// The picks with every change the design does not need undone, and their proof. <paramref name="undoable"/> says
     /// which run changes' runs meet their own limits at their stated size (a tap may always be tried at its stated
-    /// position); <paramref name="solve"/> solves the project with the picks given.
+    /// position); <paramref name="mayPass"/>, given a change's key and the proof at hand, is false only where undoing
+    /// it certainly leaves a finding (so it is not solved again); <paramref name="solve"/> solves the project with the
+    /// picks given.
     /// </summary>
     public static (PlanPicks Picks, Solution After) Prune(
-        Solution before, PlanPicks picks, Solution after, Func<int, bool> undoable, Func<PlanPicks, Solution> solve)
+        Solution before, PlanPicks picks, Solution after, Func<int, bool> undoable, Func<int, Solution, bool> mayPass, Func<PlanPicks, Solution> solve)
     {
         var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
         var nodes = before.Network.Nodes;
@@ -35,7 +37,8 @@ internal static class PlanPruner
         bool Candidate(int key) => key < 0 || undoable(key);
 
         // All at once: the findings that come back name the changes above them, which are kept.
-        var undone = picks.Keys.Select(k => k.Key).Where(Candidate).ToHashSet();
+        var proof = after;
+        var undone = picks.Keys.Select(k => k.Key).Where(k => Candidate(k) && mayPass(k, proof)).ToHashSet();
         while (undone.Count > 0)
         {
             var trial = picks.Without(undone);
@@ -68,6 +71,11 @@ internal static class PlanPruner
         var single = picks.Keys.Where(k => Candidate(k.Key)).OrderByDescending(k => k.Cost).ThenBy(k => k.Key).Select(k => k.Key).Take(MaxSingleTrials).ToArray();
         foreach (var key in single)
         {
+            if (!mayPass(key, after))
+            {
+                continue;
+            }
+
             var trial = picks.Without([key]);
             var solved = solve(trial);
             if (solved.AllFindings.All(f => left.Contains(Key(f))))

@@ -60,6 +60,44 @@ internal sealed class SizingProblem
     /// <summary>Per node index, a transformer's regulation in grid steps (0 elsewhere).</summary>
     public int[] TransformerSteps { get; }
 
+    /// <summary>The rule set the choices were judged by (its catalogue prices their figures).</summary>
+    public CodeRules? Protection { get; private init; }
+
+    /// <summary>
+    /// The least rise, over the voltages its own drop is the worst of, of node <paramref name="node"/>'s run's drop from
+    /// <paramref name="toSets"/> × <paramref name="toSize"/> back to <paramref name="fromSets"/> × <paramref name="fromSize"/>,
+    /// percent, by the percent sum: what undoing the change raises every end point below it by at least (where no
+    /// transformer lies between).
+    /// </summary>
+    public double LeastRise(int node, ConductorSize fromSize, int fromSets, ConductorSize toSize, int toSets)
+    {
+        var row = Solution.IncomingRun(node)!.Value;
+        var conductors = Network.Nodes[node].Incoming!.Conductors;
+        var rules = Solution.Project.Rules;
+        Span<double> unitR = stackalloc double[Slots.Count];
+        Span<double> unitX = stackalloc double[Slots.Count];
+        var own = row.UnitDrops(unitR, unitX);
+        (double R, double X) At(ConductorSize size, int sets)
+        {
+            var f = RunElectrics.Compute(Protection!, rules, conductors, size, sets, Solution.Project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
+            var ratio = (double)conductors.Sets / sets;
+            return (f.ResistanceOhmPerKm * ratio, f.ReactanceOhmPerKm * ratio);
+        }
+
+        var (rFrom, xFrom) = At(fromSize, fromSets);
+        var (rTo, xTo) = At(toSize, toSets);
+        var least = double.PositiveInfinity;
+        for (var slot = 0; slot < Slots.Count; slot++)
+        {
+            if ((own & (1 << slot)) != 0)
+            {
+                least = Math.Min(least, ((rFrom - rTo) * unitR[slot]) + ((xFrom - xTo) * unitX[slot]));
+            }
+        }
+
+        return double.IsFinite(least) ? least : 0.0;
+    }
+
     /// <summary>Per node index, a transformer's allowed taps (present tap first), or null where its tap is not a choice.</summary>
     public TapOption[]?[] Taps { get; }
 
@@ -126,7 +164,7 @@ internal sealed class SizingProblem
             (taps[row.NodeIndex], transformerSteps[row.NodeIndex]) = TapChoices(row, nodes[row.NodeIndex].Equipment!.Transformer!, budget * resolution, resolution, sizing.TapCost, project.Rules);
         }
 
-        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable);
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection };
         problem.ExcludeUnfixableEndPoints();
         return problem;
     }

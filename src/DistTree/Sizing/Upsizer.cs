@@ -55,7 +55,8 @@ public sealed class Upsizer
         var (picks, unresolvable, after, problem) = attempt;
         Verify(after, unresolvable);
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
-        (picks, after) = PlanPruner.Prune(before, picks, after, i => MeetsAtStatedSize(problem, i), p => Analysis.Run(PlanPicks.Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
+        var screen = new UndoScreen(problem, picks.Runs);
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => MeetsAtStatedSize(problem, i), screen.MayPass, p => Analysis.Run(PlanPicks.Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
         var changes = Changes(before, after, picks.Runs);
         var taps = TapChanges(before, after, picks.Taps);
         unresolvable.AddRange(GroundsLeft(after, changes));
