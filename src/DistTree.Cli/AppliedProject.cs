@@ -22,6 +22,9 @@ internal sealed class AppliedProject
 
     private readonly int _editedFiles;
 
+    // The taps the plan sets: --apply writes conductor sizes only, so it names them to be set by hand.
+    private IReadOnlyList<TapChange> _taps = [];
+
     private AppliedProject(string output, List<(string, SourceFile, byte[])> files, IReadOnlyList<SourceFile> inputs, int runs, int editedFiles)
     {
         Output = output;
@@ -43,6 +46,14 @@ internal sealed class AppliedProject
     /// <summary>Reads the project's files again, checks they are unchanged, and makes every edit; nothing is written yet.</summary>
     /// <exception cref="UsageException">A file changed since it was read; a change is in an included file and the output is not a folder.</exception>
     /// <exception cref="Diagnostics.ProjectException">A size is written in a form that cannot be rewritten (located).</exception>
+    public static AppliedProject Prepare(Project project, IReadOnlyList<UpsizeChange> changes, string output, IReadOnlyList<TapChange> taps)
+    {
+        var applied = Prepare(project, changes, output);
+        applied._taps = taps;
+        return applied;
+    }
+
+    /// <summary>As the overload with taps, for a plan that sets none.</summary>
     public static AppliedProject Prepare(Project project, IReadOnlyList<UpsizeChange> changes, string output)
     {
         var main = project.Files[0];
@@ -89,6 +100,11 @@ internal sealed class AppliedProject
 
         var files = _files.Count == 1 ? "" : $" in {_editedFiles} of its {_files.Count} files";
         context.Error.WriteLine($"wrote {DisplayText.Escape(Output)}: {Runs} runs changed{files}");
+        foreach (var t in _taps)
+        {
+            context.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"not written: set tap_percent of '{DisplayText.Escape(t.TransformerId)}' to {t.TapPercentAfter:0.#} by hand (--apply writes conductor sizes only)"));
+        }
     }
 
     // The file's bytes now, when they are still the bytes read at load time.

@@ -18,9 +18,14 @@ public static class PlanReport
         o.WriteLine($"  file   {p.File} (sha256 {p.Sha256[..12]}…)");
         o.WriteLine(F($"  before {plan.Before.Summary.Findings} findings, worst total {plan.Before.Summary.WorstTotalDropPercent:0.00} %; after {plan.After.Summary.Findings} findings, worst total {plan.After.Summary.WorstTotalDropPercent:0.00} %"));
         o.WriteLine();
-        if (plan.Changes.Count == 0)
+        if (plan.Changes.Count == 0 && plan.TapChanges.Count == 0)
         {
             o.WriteLine("No run needs a larger size.");
+        }
+        else if (plan.Changes.Count == 0)
+        {
+            o.WriteLine("No run needs a larger size.");
+            WriteTaps(o, plan);
         }
         else
         {
@@ -36,7 +41,8 @@ public static class PlanReport
                 }
             }
 
-            o.WriteLine(F($"Total added: {plan.TotalCostAdded:0.#} {plan.CostUnit} over {plan.Changes.Count} runs."));
+            o.WriteLine(F($"Total added: {plan.TotalCostAdded:0.#} {plan.CostUnit} over {plan.Changes.Count} runs{(plan.TapChanges.Count > 0 ? " and the taps below" : "")}."));
+            WriteTaps(o, plan);
         }
 
         if (plan.Unresolvable.Count > 0)
@@ -52,6 +58,23 @@ public static class PlanReport
         o.WriteLine();
         o.WriteLine("The plan was proved by solving the tree again with it applied.");
         o.WriteLine($"Caution: {Caution.For(plan.After.Project.Rules.Code)}");
+    }
+
+    // The taps the plan sets, one line each, with the transformer's regulation before and after and what setting it costs.
+    private static void WriteTaps(TextWriter o, UpsizePlan plan)
+    {
+        if (plan.TapChanges.Count == 0)
+        {
+            return;
+        }
+
+        o.WriteLine();
+        o.WriteLine("Transformer taps to set:");
+        foreach (var t in plan.TapChanges)
+        {
+            var cost = t.CostAdded > 0 ? F($"{t.CostAdded:0.#} {plan.CostUnit}") : "free";
+            o.WriteLine(F($"  {t.TransformerId}: tap_percent {t.TapPercentBefore:0.#} → {t.TapPercentAfter:0.#} (regulation {t.RegulationPercentBefore:0.00} % → {t.RegulationPercentAfter:0.00} %), {cost}"));
+        }
     }
 
     /// <summary>Writes the <c>upsize_plan</c> property.</summary>
@@ -91,6 +114,22 @@ public static class PlanReport
 
             w.WriteNumber("line", c.SizeLocation.Line);
             w.WriteNumber("column", c.SizeLocation.Column);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteStartArray("tap_changes");
+        foreach (var t in plan.TapChanges)
+        {
+            w.WriteStartObject();
+            w.WriteString("transformer", t.TransformerId);
+            JsonResults.Number(w, "tap_percent_before", t.TapPercentBefore, 2);
+            JsonResults.Number(w, "tap_percent_after", t.TapPercentAfter, 2);
+            JsonResults.Number(w, "regulation_percent_before", t.RegulationPercentBefore, 4);
+            JsonResults.Number(w, "regulation_percent_after", t.RegulationPercentAfter, 4);
+            JsonResults.Number(w, "cost_added", t.CostAdded, 3);
+            w.WriteNumber("line", t.Location.Line);
+            w.WriteNumber("column", t.Location.Column);
             w.WriteEndObject();
         }
 

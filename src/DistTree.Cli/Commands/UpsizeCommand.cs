@@ -49,7 +49,7 @@ internal static class UpsizeCommand
             var plan = Upsizer.Standard.Plan(before);
 
             // The copy is read, checked and edited before anything is written, so that a refusal writes nothing.
-            var applied = applyPath is null ? null : AppliedProject.Prepare(before.Project, plan.Changes, applyPath);
+            var applied = applyPath is null ? null : AppliedProject.Prepare(before.Project, plan.Changes, applyPath, plan.TapChanges);
             if (applied is not null)
             {
                 OutputTarget.CheckAll(inputs, [.. outputs, .. applied.Targets]);

@@ -12,7 +12,14 @@ internal sealed record PlanView(
     string WorstAfterId,
     string VerdictAfterClass,
     string VerdictAfterText,
-    IReadOnlyList<LabelValue> Unresolvable);
+    IReadOnlyList<LabelValue> Unresolvable)
+{
+    /// <summary>The transformers whose taps the plan sets.</summary>
+    public IReadOnlyList<TapRow> Taps { get; init; } = [];
+}
+
+/// <summary>One transformer's tap to set.</summary>
+internal sealed record TapRow(string Transformer, string TapBefore, string TapAfter, string RegulationBefore, string RegulationAfter, string Cost, string Location);
 
 /// <summary>One run's change.</summary>
 internal sealed record PlanRow(

@@ -20,7 +20,19 @@ internal static class PlanViewBuilder
         plan.After.HasFindings
             ? $"After the plan {Count(plan.After.Summary.Findings)} finding{(plan.After.Summary.Findings == 1 ? " remains" : "s remain")}"
             : "After the plan every run and end point is within its limits",
-        plan.Unresolvable.Select(u => new LabelValue(Escape(u.Subject), Escape(u.Message))).ToArray());
+        plan.Unresolvable.Select(u => new LabelValue(Escape(u.Subject), Escape(u.Message))).ToArray())
+    {
+        Taps = [.. plan.TapChanges.Select(t => new TapRow(
+            Escape(t.TransformerId),
+            Tap(t.TapPercentBefore),
+            Tap(t.TapPercentAfter),
+            Percent(t.RegulationPercentBefore),
+            Percent(t.RegulationPercentAfter),
+            Metres(t.CostAdded),
+            Escape(Where(t.Location))))],
+    };
+
+    private static string Tap(double percent) => percent.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
 
     private static PlanRow RowOf(UpsizeChange c) => new(
         Escape(c.RunId),

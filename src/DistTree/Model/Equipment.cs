@@ -34,6 +34,15 @@ public sealed record TransformerData(double Kva, ElectricalSystem Secondary, dou
     /// default), BC or CA. Not read for a three-phase transformer or a single-phase primary.
     /// </summary>
     public Phases PrimaryPhases { get; init; } = Phases.AB;
+
+    /// <summary>
+    /// How far from 0 the upsizer may set the tap (<c>tap_range_percent</c>), percent, in 2.5 % steps: 5 (the default, the
+    /// common ±2 × 2.5 % taps), 2.5, or 0 (the tap stays as stated).
+    /// </summary>
+    public double TapRangePercent { get; init; } = 5;
+
+    /// <summary>The nameplate's tap positions, percent: ±2 × 2.5 % (common practice).</summary>
+    public static IReadOnlyList<double> TapSteps { get; } = [-5, -2.5, 0, 2.5, 5];
 }
 
 /// <summary>A switchboard, panelboard, transformer or splitter, fed from its source by an optional feeder.</summary>

@@ -17,6 +17,15 @@ public sealed record SizingOptions
     /// <summary>The grid in percentage points on which the optimiser rounds drop budgets up (the safe side).</summary>
     public double ResolutionPercent { get; init; } = 0.001;
 
+    /// <summary>
+    /// The table of the largest conductor a device's terminals accept that the project brings (<c>sizing: terminal_table</c>),
+    /// read by the loader; null for the embedded one (<see cref="Conductors.TerminalTable.Standard"/>).
+    /// </summary>
+    public Conductors.TerminalTable? TerminalTable { get; init; }
+
+    /// <summary>What setting a transformer's tap to another position costs, in the plan's cost unit (<c>sizing: tap_cost</c>); 0: free.</summary>
+    public double TapCost { get; init; }
+
     /// <summary>The defaults: keep sets, minimise material, 0.001 percentage points.</summary>
     public static SizingOptions Default { get; } = new();
 }

@@ -30,6 +30,9 @@ internal sealed class ProjectDraft
 
     /// <summary><c>rules: grounding_table:</c>, the path as written and where its key is; null when not given.</summary>
     public IncludeEntry? GroundingTableFile { get; set; }
+
+    /// <summary><c>sizing: terminal_table:</c>, the path as written and where its key is; null when not given.</summary>
+    public IncludeEntry? TerminalTableFile { get; set; }
 }
 
 /// <summary>One entry of an <c>include</c> list: the path as written and where it is written.</summary>

@@ -105,7 +105,9 @@ public static class ProjectLoader
         var includes = new IncludeReader(bag, reader, main.Source);
         includes.Add(new SourceFile(file, main.FullPath, main.Identity, length, Convert.ToHexStringLower(hash), Path.GetFileName(main.FullPath)), hash);
         includes.ReadAll(file, main.FullPath, draft.Includes);
-        draft.Rules = new TableFileReader(bag, includes, main.Source).Read(draft.Rules, file, main.FullPath, draft.CatalogFile, draft.GroundingTableFile);
+        var tables = new TableFileReader(bag, includes, main.Source);
+        draft.Rules = tables.Read(draft.Rules, file, main.FullPath, draft.CatalogFile, draft.GroundingTableFile);
+        draft.Sizing = tables.ReadSizing(draft.Sizing, file, main.FullPath, draft.TerminalTableFile);
         if (draft.Equipment.Count == 0 && draft.Includes.Count > 0 && !bag.HasErrors)
         {
             bag.Error(root.Location, ProjectMessages.NoEquipmentWithIncludes());

@@ -107,6 +107,10 @@ internal static partial class ProjectMessages
     public static string TapNotAStep(string name, double tap) =>
         $"'tap_percent' of '{name}' is {Format(tap)}; taps come in 2.5 % steps: -5, -2.5, 0, 2.5 or 5";
 
+    /// <summary>A transformer's <c>tap_range_percent</c> that is not 0, 2.5 or 5.</summary>
+    public static string TapRangeNotAStep(string name, double range) =>
+        $"'tap_range_percent' of '{name}' is {Format(range)}; the upsizer sets taps in 2.5 % steps, so the range is 0, 2.5 or 5";
+
     /// <summary>A transformer's <c>phase</c> that is not two lines.</summary>
     public static string TransformerPhaseNotTwoLines(string name, string text) =>
         $"'phase' of '{name}' is '{text}'; a single-phase transformer's primary is across two lines: AB, BC or CA";

@@ -36,6 +36,18 @@ internal sealed class TableFileReader(DiagnosticBag bag, IncludeReader files, IP
         return rules;
     }
 
+    /// <summary><paramref name="sizing"/> with the file of <paramref name="terminalTable"/> (null: not given) read, as <see cref="Read"/> reads the rules' files.</summary>
+    public SizingOptions ReadSizing(SizingOptions sizing, string mainFile, string mainPath, IncludeEntry? terminalTable)
+    {
+        if (terminalTable is { } t && Text(t, "terminal_table", mainFile, mainPath) is var (tableName, tableText)
+            && Parse(() => TerminalTable.Load(new StringReader(tableText), tableName)) is { } table)
+        {
+            sizing = sizing with { TerminalTable = table };
+        }
+
+        return sizing;
+    }
+
     // The file's own errors, located in it.
     private T? Parse<T>(Func<T> load)
         where T : class

@@ -52,6 +52,12 @@ public static class ValueRanges
     /// <summary>A price per metre of one conductor: above 0, at most a million (the sums stay finite).</summary>
     public static readonly NumberRange Price = NumberRange.AboveUpTo(0, 1_000_000, "");
 
+    /// <summary><c>sizing: tap_cost</c>: what setting a transformer's tap costs, in the plan's cost unit (0: free).</summary>
+    public static readonly NumberRange TapCost = NumberRange.Closed(0, 1_000_000_000, "");
+
+    /// <summary>A transformer's <c>tap_range_percent</c>: how far from 0 the optimiser may set its tap, in 2.5 % steps.</summary>
+    public static readonly NumberRange TapRangePercent = NumberRange.Closed(0, 5, "%");
+
     /// <summary>
     /// The supply frequency, Hz: mains frequencies, 50 and 60 with room (the catalogue's reactances are at 60 Hz and
     /// scale with it; the skin and proximity effect follow IEC 60287-1-1, which is for power frequencies).
@@ -170,6 +176,7 @@ public static class ValueRanges
             ("sizing", "max_sets", MaxSetsRange),
             ("sizing", "resolution_percent", ResolutionPercent),
             ("sizing", "prices", Price),
+            ("sizing", "tap_cost", TapCost),
             ("service", "frequency_hz", FrequencyHz),
             ("service", "available_fault_current_ka", AvailableFaultCurrentKa),
             ("service", "fault_x_r", FaultXOverR),
@@ -181,6 +188,7 @@ public static class ValueRanges
             ("equipment", "impedance_percent", ImpedancePercent),
             ("equipment", "x_r", XOverR),
             ("equipment", "tap_percent", TapPercent),
+            ("equipment", "tap_range_percent", TapRangePercent),
             ("circuit", "ocpd", OcpdA),
             ("run", "length", LengthM),
             ("run", "sets", Sets),

@@ -7,7 +7,8 @@ namespace DistTree.Sizing;
 /// Makes a plan clear the far-end fault checks (issue 23): after the optimum on the drop grid, each run whose minimum
 /// far-end fault still does not trip its device without delay takes the next larger size of its lines (its grounding
 /// conductor following as the code sizes it: NEC 250.122(B)'s proportion, IEC Table 54.2, or a stated one raised to its
-/// minimum), round by round, each round proved by solving the tree again, until none is left or no larger size helps.
+/// minimum), round by round, each round proved by solving the tree again, until none is left or no larger size helps; never
+/// beyond what its device's terminals accept (<see cref="TerminalTable"/>).
 /// A larger conductor only lowers every loop impedance, so a round never undoes another's work. Greedy, not proven least:
 /// the plan is least on the drop grid, and then the smallest step up that each failing far end needs.
 /// </summary>
@@ -20,10 +21,11 @@ internal static class FarEndRepair
     /// The picks with every failing far end's run raised until it clears (or can go no larger), and their proof; the
     /// picks and proof unchanged where no far end fails. <paramref name="solve"/> solves the project with picks applied.
     /// </summary>
-    public static (Dictionary<int, RunOption> Picks, Solution After) Repair(
-        Solution before, Dictionary<int, RunOption> picks, Solution after, ConductorCatalog catalog, Func<Dictionary<int, RunOption>, Solution> solve)
+    public static (PlanPicks Picks, Solution After) Repair(
+        Solution before, PlanPicks picks, Solution after, ConductorCatalog catalog, Func<PlanPicks, Solution> solve)
     {
         var nodes = before.Network.Nodes;
+        var terminals = before.Project.Sizing.TerminalTable ?? TerminalTable.Standard;
         for (var round = 0; round < MaxRounds; round++)
         {
             var raised = false;
@@ -36,15 +38,16 @@ internal static class FarEndRepair
 
                 var run = nodes[r.NodeIndex].Incoming!;
                 var conductors = run.Conductors;
-                var (size, sets) = picks.TryGetValue(r.NodeIndex, out var o) ? (o.Size, o.Sets) : (conductors.Size, conductors.Sets);
+                var (size, sets) = picks.Runs.TryGetValue(r.NodeIndex, out var o) ? (o.Size, o.Sets) : (conductors.Size, conductors.Sets);
                 if (conductors.Fixed || Next(size, catalog) is not { } next
+                    || (conductors.OcpdA is { } ocpd && !terminals.Accepts(ocpd, next, sets))
                     || SizingProblem.Cost(conductors, next, sets, run.Supply, before.Project.Sizing) is not { } cost)
                 {
-                    continue;
+                    continue; // pinned, the largest size, beyond its device's terminals, or unpriced: left unresolved
                 }
 
                 var present = SizingProblem.Cost(conductors, conductors.Size, conductors.Sets, run.Supply, before.Project.Sizing) ?? 0.0;
-                picks[r.NodeIndex] = new RunOption(next, sets, r.DropPercent, 0, cost - present, MeetsRunLimits: true);
+                picks.Runs[r.NodeIndex] = new RunOption(next, sets, r.DropPercent, 0, cost - present, MeetsRunLimits: true);
                 raised = true;
             }
 

@@ -10,13 +10,17 @@ namespace DistTree.Sizing;
 internal static class FrontierSolver
 {
     /// <summary>The chosen option index per node (−1 without a run), and the total cost; cost is +∞ when infeasible.</summary>
-    public static (int[] Choice, double Cost) Solve(SizingProblem problem)
+    public static (int[] Choice, double Cost) Solve(SizingProblem problem) => Solve(problem, out _);
+
+    /// <summary>As <see cref="Solve(SizingProblem)"/>, with the chosen tap index per node in <paramref name="tapChoice"/> (−1 where the tap is no choice).</summary>
+    public static (int[] Choice, double Cost) Solve(SizingProblem problem, out int[] tapChoice)
     {
         var nodes = problem.Network.Nodes;
         var n = nodes.Count;
         var b = problem.BudgetSteps;
         var bus = new double[]?[n];
         var choices = new short[]?[n];
+        var tapChoices = new short[]?[n];
 
         // A subtree with no end point left in the budget puts no limit on the drops above it.
         var constrained = new bool[n];
@@ -40,10 +44,10 @@ internal static class FrontierSolver
             bus[i] = null;
             if (parent < 0)
             {
-                return (ReadBack(problem, choices), own[b]);
+                return (ReadBack(problem, choices, tapChoices, out tapChoice), own[b]);
             }
 
-            var atInput = constrained[i] ? Transform(problem, i, own) : own;
+            var atInput = constrained[i] ? Transform(problem, i, own, out tapChoices[i]) : own;
             var h = problem.Options[i] is { } options
                 ? (constrained[i] ? BestChoice(atInput, options, out choices[i]) : Cheapest(atInput, options, out choices[i]))
                 : atInput;
@@ -90,8 +94,10 @@ internal static class FrontierSolver
 
     // From a node's bus to its input side (after its run): a transformer shifts the budget by its regulation,
     // or, at a new origin, gives its secondary the whole budget whatever is left above.
-    private static double[] Transform(SizingProblem problem, int node, double[] own)
+    // Where its tap is a choice, the best tap at every budget: the least of its cost plus the bus's at what is left.
+    private static double[] Transform(SizingProblem problem, int node, double[] own, out short[]? tapChoice)
     {
+        tapChoice = null;
         if (problem.Network.Nodes[node].Kind != Network.NodeKind.Transformer)
         {
             return own;
@@ -99,10 +105,29 @@ internal static class FrontierSolver
 
         var b = own.Length - 1;
         var shifted = new double[b + 1];
+        var taps = problem.Taps[node];
+        tapChoice = taps is null ? null : new short[b + 1];
         for (var k = 0; k <= b; k++)
         {
-            var at = problem.NewOrigin ? b : k - problem.TransformerSteps[node];
-            shifted[k] = at < 0 ? double.PositiveInfinity : own[Math.Min(at, b)];
+            if (taps is null)
+            {
+                var at = problem.NewOrigin ? b : k - problem.TransformerSteps[node];
+                shifted[k] = at < 0 ? double.PositiveInfinity : own[Math.Min(at, b)];
+                continue;
+            }
+
+            var best = double.PositiveInfinity;
+            for (short j = 0; j < taps.Length; j++)
+            {
+                var at = k - taps[j].Steps;
+                var cost = at < 0 ? double.PositiveInfinity : taps[j].Cost + own[Math.Min(at, b)];
+                if (cost < best)
+                {
+                    (best, tapChoice![k]) = (cost, j);
+                }
+            }
+
+            shifted[k] = best;
         }
 
         return shifted;
@@ -161,12 +186,14 @@ internal static class FrontierSolver
     }
 
     // Top-down: each node gets the steps left at its input; its run's choice uses some, a transformer more.
-    private static int[] ReadBack(SizingProblem problem, short[]?[] choices)
+    private static int[] ReadBack(SizingProblem problem, short[]?[] choices, short[]?[] tapChoices, out int[] tapChoice)
     {
         var nodes = problem.Network.Nodes;
         var left = new int[nodes.Count];
         var choice = new int[nodes.Count];
         Array.Fill(choice, -1);
+        tapChoice = new int[nodes.Count];
+        Array.Fill(tapChoice, -1);
         for (var i = 0; i < nodes.Count; i++)
         {
             var node = nodes[i];
@@ -179,9 +206,16 @@ internal static class FrontierSolver
                 afterRun = atInput - options[pick].Steps;
             }
 
-            // Bus steps left = budget − steps used; a transformer uses its regulation, a new origin restores the whole budget.
+            // Bus steps left = budget − steps used; a transformer uses its regulation at its tap, a new origin restores the whole budget.
+            var regulation = problem.TransformerSteps[i];
+            if (problem.Taps[i] is { } taps)
+            {
+                tapChoice[i] = tapChoices[i] is { } picked ? picked[Math.Clamp(afterRun, 0, problem.BudgetSteps)] : 0;
+                regulation = taps[tapChoice[i]].Steps;
+            }
+
             left[i] = node.Kind == Network.NodeKind.Transformer
-                ? (problem.NewOrigin ? problem.BudgetSteps : Math.Min(problem.BudgetSteps, afterRun - problem.TransformerSteps[i]))
+                ? (problem.NewOrigin ? problem.BudgetSteps : Math.Min(problem.BudgetSteps, afterRun - regulation))
                 : afterRun;
         }
 

@@ -6,10 +6,12 @@ namespace DistTree.Sizing;
 /// <summary>
 /// The naive fix, kept to measure what the optimiser saves: first every run that fails its own limits takes
 /// its cheapest choice that meets them; then each end point still over the total, worst first, upsizes its
-/// own branch circuit one choice at a time, then the feeders on its path, nearest first. Not optimal.
+/// own branch circuit one choice at a time, then the feeders on its path, nearest first. Every transformer whose tap is
+/// a choice is first set to its most raising allowed tap (at its cost). Not optimal.
 /// </summary>
 public static class GreedyBaseline
 {
+
     /// <summary>The material (or price) the greedy fix adds, in the plan's unit; +∞ where it cannot fix every fixable limit.</summary>
     public static double CostAdded(Solution before, ConductorCatalog catalog)
     {
@@ -23,9 +25,17 @@ public static class GreedyBaseline
         }
 
         var transformerDrop = new double[nodes.Count];
+        var tapCost = 0.0;
         foreach (var t in before.Runs.Where(r => r.Kind == RunResultKind.Transformer))
         {
-            transformerDrop[t.NodeIndex] = problem.NewOrigin ? double.NaN : t.DropPercent;
+            // Its regulation as the optimiser prices it (a raising tap at the safe end of what the drops above it may be).
+            transformerDrop[t.NodeIndex] = problem.NewOrigin ? double.NaN : problem.TransformerSteps[t.NodeIndex] * problem.ResolutionPercent;
+            if (!problem.NewOrigin && problem.Taps[t.NodeIndex] is { } taps)
+            {
+                var most = taps.MinBy(o => o.Steps);
+                transformerDrop[t.NodeIndex] = most.Steps * problem.ResolutionPercent;
+                tapCost += most.Cost;
+            }
         }
 
         foreach (var e in before.EndPoints.Where(e => !problem.Excluded[e.NodeIndex]).OrderByDescending(e => e.TotalDropPercent).ThenBy(e => e.Id, StringComparer.Ordinal))
@@ -46,7 +56,7 @@ public static class GreedyBaseline
             }
         }
 
-        return Enumerable.Range(0, nodes.Count).Where(i => pick[i] >= 0).Sum(i => problem.Options[i]![pick[i]].Cost);
+        return tapCost + Enumerable.Range(0, nodes.Count).Where(i => pick[i] >= 0).Sum(i => problem.Options[i]![pick[i]].Cost);
     }
 
     // The runs whose drops count in the end point's total, end point first, then upstream (nearest first).

@@ -15,7 +15,14 @@ namespace DistTree.Sizing;
 /// <param name="Steps">The drop on the optimiser's grid, rounded up: ceil(drop / resolution).</param>
 /// <param name="Cost">Cost added against the present choice (material in mm²·m, or priced).</param>
 /// <param name="MeetsRunLimits">True when the choice meets the run's own drop limit, ampacity and device rules.</param>
-internal readonly record struct RunOption(ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits);
+/// <param name="WithinTerminals">True when its device's terminals accept the choice (see <see cref="TerminalTable"/>), or it is the present one.</param>
+internal readonly record struct RunOption(ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits, bool WithinTerminals = true);
+
+/// <summary>One allowed tap of a transformer: its setting, the transformer's regulation there on the grid, and what setting it costs.</summary>
+/// <param name="TapPercent">The tap, percent (negative raises the secondary).</param>
+/// <param name="Steps">The transformer's regulation at this tap on the grid, rounded up (negative for a net raise).</param>
+/// <param name="Cost">What setting it costs (0 for the present tap).</param>
+internal readonly record struct TapOption(double TapPercent, int Steps, double Cost);
 
 /// <summary>
 /// The upsizing problem of a solved tree, on a budget grid: per node the choices of its incoming run (only
@@ -26,8 +33,9 @@ internal readonly record struct RunOption(ConductorSize Size, int Sets, double D
 internal sealed class SizingProblem
 {
     private SizingProblem(Solution solution, int budgetSteps, double resolution, RunOption[]?[] options, int[] transformerSteps,
-        bool[] excluded, List<UnresolvableLimit> unresolvable)
+        TapOption[]?[] taps, bool[] excluded, List<UnresolvableLimit> unresolvable)
     {
+        Taps = taps;
         Solution = solution;
         BudgetSteps = budgetSteps;
         ResolutionPercent = resolution;
@@ -52,6 +60,47 @@ internal sealed class SizingProblem
     /// <summary>Per node index, a transformer's regulation in grid steps (0 elsewhere).</summary>
     public int[] TransformerSteps { get; }
 
+    /// <summary>The rule set the choices were judged by (its catalogue prices their figures).</summary>
+    public CodeRules? Protection { get; private init; }
+
+    /// <summary>
+    /// The least rise, over the voltages its own drop is the worst of, of node <paramref name="node"/>'s run's drop from
+    /// <paramref name="toSets"/> × <paramref name="toSize"/> back to <paramref name="fromSets"/> × <paramref name="fromSize"/>,
+    /// percent, by the percent sum: what undoing the change raises every end point below it by at least (where no
+    /// transformer lies between).
+    /// </summary>
+    public double LeastRise(int node, ConductorSize fromSize, int fromSets, ConductorSize toSize, int toSets)
+    {
+        var row = Solution.IncomingRun(node)!.Value;
+        var conductors = Network.Nodes[node].Incoming!.Conductors;
+        var rules = Solution.Project.Rules;
+        Span<double> unitR = stackalloc double[Slots.Count];
+        Span<double> unitX = stackalloc double[Slots.Count];
+        var own = row.UnitDrops(unitR, unitX);
+        (double R, double X) At(ConductorSize size, int sets)
+        {
+            var f = RunElectrics.Compute(Protection!, rules, conductors, size, sets, Solution.Project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
+            var ratio = (double)conductors.Sets / sets;
+            return (f.ResistanceOhmPerKm * ratio, f.ReactanceOhmPerKm * ratio);
+        }
+
+        var (rFrom, xFrom) = At(fromSize, fromSets);
+        var (rTo, xTo) = At(toSize, toSets);
+        var least = double.PositiveInfinity;
+        for (var slot = 0; slot < Slots.Count; slot++)
+        {
+            if ((own & (1 << slot)) != 0)
+            {
+                least = Math.Min(least, ((rFrom - rTo) * unitR[slot]) + ((xFrom - xTo) * unitX[slot]));
+            }
+        }
+
+        return double.IsFinite(least) ? least : 0.0;
+    }
+
+    /// <summary>Per node index, a transformer's allowed taps (present tap first), or null where its tap is not a choice.</summary>
+    public TapOption[]?[] Taps { get; }
+
     /// <summary>Per node index, true for an end point left out of the budget (no choice fixes it).</summary>
     public bool[] Excluded { get; }
 
@@ -74,6 +123,7 @@ internal sealed class SizingProblem
         var transformerSteps = new int[nodes.Count];
         var unresolvable = new List<UnresolvableLimit>();
         var protection = CodeRules.For(project.Rules, catalog);
+        var terminals = sizing.TerminalTable ?? TerminalTable.Standard;
         foreach (var row in solution.Runs)
         {
             if (row.Kind == RunResultKind.Transformer)
@@ -84,14 +134,15 @@ internal sealed class SizingProblem
 
             var run = nodes[row.NodeIndex].Incoming!;
             var factor = dropFactors?.GetValueOrDefault(row.NodeIndex, 1.0) ?? 1.0;
-            var all = Candidates(run, row, project, catalog, protection, maxSteps, factor).ToArray();
-            var fitting = all.Where(o => o.MeetsRunLimits).ToArray();
+            var all = Candidates(run, row, project, catalog, protection, terminals, maxSteps, factor).ToArray();
+            var buildable = all.Where(o => o.WithinTerminals).ToArray();
+            var fitting = buildable.Where(o => o.MeetsRunLimits).ToArray();
             if (fitting.Length == 0)
             {
-                unresolvable.Add(new UnresolvableLimit(row.Id, UnfixableRun(row, run, all)));
+                unresolvable.Add(new UnresolvableLimit(row.Id, UnfixableRun(row, run, buildable, all, terminals)));
             }
 
-            options[row.NodeIndex] = Pareto(fitting.Length > 0 ? fitting : all);
+            options[row.NodeIndex] = Pareto(fitting.Length > 0 ? fitting : buildable);
         }
 
         // The budget is the largest end point's limit on the grid; an end point with a smaller limit (lighting, a
@@ -107,9 +158,35 @@ internal sealed class SizingProblem
             }
         }
 
-        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, new bool[nodes.Count], unresolvable);
+        var taps = new TapOption[]?[nodes.Count];
+        foreach (var row in solution.Runs.Where(r => r.Kind == RunResultKind.Transformer))
+        {
+            (taps[row.NodeIndex], transformerSteps[row.NodeIndex]) = TapChoices(row, nodes[row.NodeIndex].Equipment!.Transformer!, budget * resolution, resolution, sizing.TapCost, project.Rules);
+        }
+
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection };
         problem.ExcludeUnfixableEndPoints();
         return problem;
+    }
+
+    // A transformer's taps at or raising the secondary from its present one, within its range (none to choose at a new
+    // origin, where its regulation counts in no total), and its present regulation on the grid. A tap takes
+    // (100 − the shares above it)·tap/(1 + tap) off the voltage (see PathShares); the shares above are not known here, so a
+    // raise is priced as if they were the whole budget and a lowering as if they were none (the safe side either way).
+    private static (TapOption[]? Taps, int PresentSteps) TapChoices(RunResult row, TransformerData data, double budgetPercent, double resolution, double tapCost, Rules rules)
+    {
+        static double Share(double tapPercent) => tapPercent / (100.0 + tapPercent);
+        var winding = row.DropPercent - (100.0 * Share(data.TapPercent));
+        int StepsAt(double tap) => Steps(winding + ((Share(tap) < 0 ? 100.0 - budgetPercent : 100.0) * Share(tap)), resolution);
+        var present = new TapOption(data.TapPercent, StepsAt(data.TapPercent), 0.0);
+        if (rules.TransformerDrop == TransformerDropMode.NewOrigin)
+        {
+            return (null, Steps(row.DropPercent, resolution));
+        }
+
+        var raises = TransformerData.TapSteps.Where(t => t < data.TapPercent && Math.Abs(t) <= data.TapRangePercent + 1e-9).OrderByDescending(t => t);
+        TapOption[] all = [present, .. raises.Select(t => new TapOption(t, StepsAt(t), tapCost))];
+        return (all.Length > 1 ? all : null, present.Steps);
     }
 
     // A limit on the grid, rounded down (the safe side).
@@ -136,14 +213,14 @@ internal sealed class SizingProblem
             if (least[e.NodeIndex] > BudgetSteps)
             {
                 Excluded[e.NodeIndex] = true;
-                var best = least[e.NodeIndex] * ResolutionPercent;
+                var over = (least[e.NodeIndex] - BudgetSteps) * ResolutionPercent;
                 Unresolvable.Add(new UnresolvableLimit(e.Id, FormattableString.Invariant(
-                    $"end point {e.Id}: even with every run on its path at its largest allowed size and sets the total is about {best:0.00} % against the {e.LimitPercent:0.##} % limit; it would take more parallel sets (sizing: max_sets), a shorter run, or a panel nearer the load")));
+                    $"end point {e.Id}: even with every run on its path at its largest allowed size and sets (within its device's terminals) and every transformer above it at its most raising allowed tap, the total is about {e.LimitPercent + over:0.00} % against the {e.LimitPercent:0.##} % limit; {PathRemedies.Smallest(this, e.NodeIndex, over)}")));
             }
         }
     }
 
-    /// <summary>Steps used at a node's bus, given the steps used at its input plus its run: adds a transformer's regulation, or restarts at a new origin.</summary>
+    /// <summary>Steps used at a node's bus, given the steps used at its input plus its run: adds a transformer's least regulation (at its most raising allowed tap), or restarts at a new origin.</summary>
     public int BusSteps(int node, int stepsAtInputAfterRun)
     {
         if (Network.Nodes[node].Kind != NodeKind.Transformer)
@@ -151,11 +228,11 @@ internal sealed class SizingProblem
             return stepsAtInputAfterRun;
         }
 
-        return NewOrigin ? 0 : stepsAtInputAfterRun + TransformerSteps[node];
+        return NewOrigin ? 0 : stepsAtInputAfterRun + (Taps[node] is { } taps ? taps.Min(t => t.Steps) : TransformerSteps[node]);
     }
 
     private static IEnumerable<RunOption> Candidates(
-        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, CodeRules protection, int? maxSteps, double dropFactor)
+        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, CodeRules protection, TerminalTable terminals, int? maxSteps, double dropFactor)
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
@@ -196,7 +273,8 @@ internal sealed class SizingProblem
                 var ratio = (double)conductors.Sets / sets;
                 var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);
-                yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets);
+                var accepted = isPresent || conductors.OcpdA is not { } deviceA || terminals.Accepts(deviceA, s, sets);
+                yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets, accepted);
             }
         }
     }
@@ -244,7 +322,7 @@ internal sealed class SizingProblem
         return [.. kept];
     }
 
-    private static string UnfixableRun(RunResult row, NetworkRun run, RunOption[] all)
+    private static string UnfixableRun(RunResult row, NetworkRun run, RunOption[] buildable, RunOption[] all, TerminalTable terminals)
     {
         var what = Words.Noun(run.Kind);
         if (run.Conductors.Fixed)
@@ -252,7 +330,17 @@ internal sealed class SizingProblem
             return $"{what} {row.Id}: pinned (fixed: true) and over its limits at {row.Size}; unpin it, shorten it, or move the load";
         }
 
-        var best = all.MinBy(o => o.DropPercent);
+        // A size beyond its device's terminals would do: the plan proposes none, but says what it would take.
+        if (run.Conductors.OcpdA is { } deviceA && all.Where(o => o.MeetsRunLimits && !o.WithinTerminals).OrderBy(o => o.Cost).FirstOrDefault() is { Sets: > 0 } beyond)
+        {
+            var (_, largest) = terminals.LargestFor(deviceA, beyond.Sets, beyond.Size.Series);
+            var accepts = largest is { } most ? $"{beyond.Sets}×{most}" : $"no {beyond.Sets} conductors per terminal";
+            var band = terminals.SmallestBandAccepting(beyond.Size, beyond.Sets) is { } a ? FormattableString.Invariant($" (in the table, a device of {a:0.#} A takes it)") : "";
+            return FormattableString.Invariant(
+                $"{what} {row.Id}: the least choice that meets its own limits, {beyond.Sets}×{beyond.Size}, is beyond the terminal limit of its {deviceA:0.#} A device ({accepts}; {terminals.SourceName}); it needs a device whose terminals take it{band}, a splice to a size the terminals take, a shorter run, or the load nearer its panel");
+        }
+
+        var best = (buildable.Length > 0 ? buildable : all).MinBy(o => o.DropPercent);
         return FormattableString.Invariant(
             $"{what} {row.Id}: no allowed size meets its own limits; the best, {best.Sets}×{best.Size}, drops {best.DropPercent:0.00} % against {row.LimitPercent:0.##} %; it would take more parallel sets (sizing: max_sets), a shorter run, or a panel nearer the load");
     }

@@ -52,6 +52,31 @@ public sealed record UpsizeChange
     public SourceLocation SizeLocation { get; init; } = SourceLocation.None;
 }
 
+/// <summary>A transformer's tap in an upsize plan: set it from one position to another.</summary>
+public sealed record TapChange
+{
+    /// <summary>The transformer's id.</summary>
+    public required string TransformerId { get; init; }
+
+    /// <summary>The tap before, percent (<c>tap_percent</c>; negative raises the secondary).</summary>
+    public required double TapPercentBefore { get; init; }
+
+    /// <summary>The tap to set, percent.</summary>
+    public required double TapPercentAfter { get; init; }
+
+    /// <summary>The transformer's regulation before (its worst voltage, the tap's part included), percent.</summary>
+    public required double RegulationPercentBefore { get; init; }
+
+    /// <summary>The transformer's regulation at the new tap, percent.</summary>
+    public required double RegulationPercentAfter { get; init; }
+
+    /// <summary>What setting it costs (<c>sizing: tap_cost</c>), in the plan's unit; 0 by default.</summary>
+    public required double CostAdded { get; init; }
+
+    /// <summary>Where the transformer is in the project file.</summary>
+    public SourceLocation Location { get; init; } = SourceLocation.None;
+}
+
 /// <summary>A path or run that no allowed choice can bring within its limits, and what it would take.</summary>
 /// <param name="Subject">The end point or run id.</param>
 /// <param name="Message">What fails even at the largest choice, and what would fix it.</param>
@@ -63,7 +88,10 @@ public sealed record UpsizePlan
     /// <summary>The runs that change, in network order.</summary>
     public required IReadOnlyList<UpsizeChange> Changes { get; init; }
 
-    /// <summary>Total cost of the changes (material added, or priced).</summary>
+    /// <summary>The transformers whose taps the plan sets, in network order.</summary>
+    public IReadOnlyList<TapChange> TapChanges { get; init; } = [];
+
+    /// <summary>Total cost of the changes (material added, or priced; the taps' cost included).</summary>
     public required double TotalCostAdded { get; init; }
 
     /// <summary>

@@ -52,19 +52,28 @@ public sealed class Upsizer
             attempt = Attempt(before, maxSteps, factors, transformerOverloads);
         }
 
-        var (picks, unresolvable, after) = attempt;
+        var (picks, unresolvable, after, problem) = attempt;
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
-        var optimumCost = picks.Values.Sum(o => o.Cost);
-        (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, p => Analysis.Run(Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution);
-        var repairCost = picks.Values.Sum(o => o.Cost) - optimumCost;
+        Solution Solve(PlanPicks p) => Analysis.Run(PlanPicks.Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution;
+
+        // The far ends the optimum leaves too small to trip their devices, raised size by size; then every change the
+        // design does not need undone (a far end's repair is needed where undoing it brings its finding back).
+        var optimum = new Dictionary<int, RunOption>(picks.Runs);
+        (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
+        var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);
-        var changes = Changes(before, after, picks);
+        var screen = new UndoScreen(problem, picks.Runs);
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => MeetsAtStatedSize(problem, i), (key, proof) => repairedRuns.Contains(key) || screen.MayPass(key, proof), Solve);
+        var repairCost = picks.Runs.Where(p => repairedRuns.Contains(p.Key)).Sum(p => p.Value.Cost - (optimum.TryGetValue(p.Key, out var was) ? was.Cost : 0));
+        var changes = Changes(before, after, picks.Runs);
+        var taps = TapChanges(before, after, picks.Taps);
         unresolvable.AddRange(GroundsLeft(after, changes));
         unresolvable.AddRange(FaultsLeft(after));
         return new UpsizePlan
         {
             Changes = changes,
-            TotalCostAdded = changes.Sum(c => c.CostAdded),
+            TapChanges = taps,
+            TotalCostAdded = changes.Sum(c => c.CostAdded) + taps.Sum(t => t.CostAdded),
             FarEndRepairCostAdded = repairCost,
             CostUnit = before.Project.Sizing.Prices.Count == 0 ? "mm2·m" : (before.Project.Sizing.Currency.Length > 0 ? before.Project.Sizing.Currency : "price"),
             Unresolvable = unresolvable,
@@ -79,15 +88,70 @@ public sealed class Upsizer
         // The project's own catalogue, where it brings one, is the one its solve and this proof use (see DropSolver).
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
         var problem = SizingProblem.Build(before, catalog, maxSteps, factors);
-        var (choice, cost) = FrontierSolver.Solve(problem);
+        var (choice, cost) = FrontierSolver.Solve(problem, out var tapChoice);
         if (double.IsInfinity(cost))
         {
             throw new InvalidOperationException("the sizing problem has no solution although every end point was fixable on its own");
         }
 
-        var picks = Picks(problem, choice);
-        var after = Analysis.Run(Apply(before, picks), new AnalysisOptions { Catalog = catalog }).Solution;
-        return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after);
+        var picks = new PlanPicks(Picks(problem, choice), TapPicks(problem, tapChoice));
+        var after = Analysis.Run(PlanPicks.Apply(before, picks), new AnalysisOptions { Catalog = catalog }).Solution;
+        return new Attempted(picks, [.. problem.Unresolvable, .. transformerOverloads], after, problem);
+    }
+
+    /// <summary>
+    /// <paramref name="before"/>'s project with only <paramref name="changes"/> applied (each run's size and sets, and its stated
+    /// grounding conductor raised as the plan raises it), solved again: how a plan is proved, and how a test undoes part of it.
+    /// </summary>
+    internal Solution Resolve(Solution before, IEnumerable<UpsizeChange> changes, IEnumerable<TapChange> taps)
+    {
+        var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
+        var nodeOf = before.Runs.ToDictionary(r => (r.Kind == RunResultKind.Transformer, r.Id), r => r.NodeIndex);
+        var runs = changes.ToDictionary(c => nodeOf[(false, c.RunId)], c => new RunOption(ConductorSize.Parse(c.SizeAfter), c.SetsAfter, c.DropPercentAfter, 0, c.CostAdded, true));
+        var tapPicks = taps.ToDictionary(t => nodeOf[(true, t.TransformerId)], t => new TapOption(t.TapPercentAfter, 0, t.CostAdded));
+        return Analysis.Run(PlanPicks.Apply(before, new PlanPicks(runs, tapPicks)), new AnalysisOptions { Catalog = catalog }).Solution;
+    }
+
+    // The chosen tap per transformer, where it differs from the present one.
+    private static Dictionary<int, TapOption> TapPicks(SizingProblem problem, int[] tapChoice)
+    {
+        var picks = new Dictionary<int, TapOption>();
+        for (var i = 0; i < tapChoice.Length; i++)
+        {
+            if (tapChoice[i] > 0 && problem.Taps[i] is { } taps)
+            {
+                picks[i] = taps[tapChoice[i]];
+            }
+        }
+
+        return picks;
+    }
+
+    private static List<TapChange> TapChanges(Solution before, Solution after, Dictionary<int, TapOption> taps)
+    {
+        var beforeRows = before.Runs.Where(r => r.Kind == RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
+        var afterRows = after.Runs.Where(r => r.Kind == RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
+        return [.. taps.Keys.Order().Select(i =>
+        {
+            var node = before.Network.Nodes[i];
+            return new TapChange
+            {
+                TransformerId = node.Id,
+                TapPercentBefore = node.Equipment!.Transformer!.TapPercent,
+                TapPercentAfter = taps[i].TapPercent,
+                RegulationPercentBefore = beforeRows[i].DropPercent,
+                RegulationPercentAfter = afterRows[i].DropPercent,
+                CostAdded = taps[i].Cost,
+                Location = node.Equipment.Location,
+            };
+        })];
+    }
+
+    // True when node i's run meets its own limits at its stated size and sets (so undoing its change may pass).
+    private static bool MeetsAtStatedSize(SizingProblem problem, int i)
+    {
+        var present = problem.Network.Nodes[i].Incoming!.Conductors;
+        return problem.Options[i] is { } options && options.Any(o => o.MeetsRunLimits && o.Size == present.Size && o.Sets == present.Sets);
     }
 
     // The chosen size and sets per node, where they differ from the present ones.
@@ -111,40 +175,6 @@ public sealed class Upsizer
         }
 
         return picks;
-    }
-
-    /// <summary>
-    /// The project with the picked sizes and sets on their runs, and a stated grounding conductor the new size makes too
-    /// small raised to its minimum (the change says so); everything else as it was.
-    /// </summary>
-    private static Project Apply(Solution before, Dictionary<int, RunOption> picks)
-    {
-        var (project, network) = (before.Project, before.Network);
-        var rows = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex, r => (r.DesignCurrentA, r.CurrentCarryingConductors ?? 3));
-        var feeders = new Dictionary<string, (RunOption, double, int, CircuitDuty)>(StringComparer.Ordinal);
-        var branches = new Dictionary<string, (RunOption, double, int, CircuitDuty)>(StringComparer.Ordinal);
-        foreach (var (index, option) in picks)
-        {
-            var node = network.Nodes[index];
-            var (design, carrying) = rows[index];
-            (node.Circuit is not null ? branches : feeders)[node.Id] = (option, design, carrying, CircuitDuty.Of(node.Incoming!));
-        }
-
-        Run With(Run run, (RunOption Option, double DesignA, int Carrying, CircuitDuty Duty) pick)
-        {
-            var o = pick.Option;
-            var ground = run.GroundSize is { } stated && before.Code.MinimumGroundSize(run, o.Size, o.Sets, pick.DesignA, project.Rules, pick.Carrying, pick.Duty) is { } least && stated < least
-                ? least
-                : run.GroundSize;
-            return run with { Size = o.Size, Sets = o.Sets, GroundSize = ground };
-        }
-
-        var equipment = project.Equipment.Select(e => e with
-        {
-            Feeder = e.Feeder is { } f && feeders.TryGetValue(e.Id, out var fo) ? With(f, fo) : e.Feeder,
-            Circuits = e.Circuits.Select(c => branches.TryGetValue(c.FullId, out var co) ? c with { Run = With(c.Run, co) } : c).ToArray(),
-        }).ToArray();
-        return project with { Equipment = equipment };
     }
 
     // How many times a plan on the load flow is made again with the factors of its proof.
@@ -249,8 +279,8 @@ public sealed class Upsizer
         .Where(f => f.Kind is FindingKind.InterruptingRating or FindingKind.FaultClearing)
         .Select(f => new UnresolvableLimit(f.Subject, f.Kind == FindingKind.InterruptingRating
             ? $"{f.Message}: conductor sizes cannot fix this; it needs equipment of a higher rating"
-            : $"{f.Message}: the plan does not size for fault clearing; a larger grounding conductor or lines, a shorter run, or a device that trips lower would"));
+            : $"{f.Message}: no allowed size clears it (the lines go no larger within their device's terminals or the catalogue); a larger grounding conductor, a shorter run, or a device that trips lower would"));
 
     // A plan, what it reports as unfixable, and its proof.
-    private sealed record Attempted(Dictionary<int, RunOption> Picks, List<UnresolvableLimit> Unresolvable, Solution After);
+    private sealed record Attempted(PlanPicks Picks, List<UnresolvableLimit> Unresolvable, Solution After, SizingProblem Problem);
 }

@@ -27,7 +27,7 @@ public sealed class DisplayEscapingTests : IDisposable
         var name = OperatingSystem.IsWindows() ? "named.yaml" : "nam\u001B[2Jed.yaml";
         Path = _folder.File(name);
         ShownPath = DisplayText.Escape(Path);
-        File.WriteAllText(Path, Project(ProjectName, CircuitName, length: 120));
+        File.WriteAllText(Path, Project(ProjectName, CircuitName, length: 60));
     }
 
     private string Path { get; }

@@ -17,5 +17,19 @@ internal sealed class TempFolder : IDisposable
         return copy;
     }
 
+    /// <summary>
+    /// Gives the project file <paramref name="project"/> in the folder a terminal table of its own that limits no device
+    /// (its one band is below any device's rating: sizing: terminal_table; docs/project-file.md), so that a test of
+    /// --apply's edits sees the plan that conductor sizes alone give.
+    /// </summary>
+    public static void OpenTerminals(string project)
+    {
+        var table = System.IO.Path.Combine(System.IO.Path.GetDirectoryName(project)!, "open-terminals.tsv");
+        System.IO.File.WriteAllText(table, "# test only: no terminal limit (one band below any device's rating)\ndevice_a\tsets\tawg\tmm2\n0.001\t1\t2000 kcmil\t300 mm2\n");
+        var text = System.IO.File.ReadAllText(project);
+        Assert.Equal(1, text.Split("\nservice:").Length - 1);
+        System.IO.File.WriteAllText(project, text.Replace("\nservice:", "\nsizing: { terminal_table: open-terminals.tsv }\nservice:", StringComparison.Ordinal));
+    }
+
     public void Dispose() => Directory.Delete(Path, recursive: true);
 }

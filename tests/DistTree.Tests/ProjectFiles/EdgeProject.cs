@@ -29,6 +29,7 @@ internal static partial class EdgeProject
         ["sizing.max_sets"] = "4",
         ["sizing.resolution_percent"] = "0.01",
         ["sizing.prices"] = "3",
+        ["sizing.tap_cost"] = "0",
         ["service.frequency_hz"] = "60",
         ["service.available_fault_current_ka"] = "22",
         ["service.fault_x_r"] = "6",
@@ -40,6 +41,7 @@ internal static partial class EdgeProject
         ["equipment.impedance_percent"] = "5",
         ["equipment.x_r"] = "4",
         ["equipment.tap_percent"] = "2.5",
+        ["equipment.tap_range_percent"] = "5",
         ["run.length"] = "40",
         ["run.sets"] = "1",
         ["run.current_carrying"] = "4",
@@ -65,7 +67,7 @@ internal static partial class EdgeProject
         disttree: 1
         project: { name: Edges, units: metric }
         rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, lighting_limit_percent: {rules.lighting_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c}, fault_voltage_factor_max: {rules.fault_voltage_factor_max}, fault_voltage_factor_min: {rules.fault_voltage_factor_min} }
-        sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
+        sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, tap_cost: {sizing.tap_cost}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
         service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz}, available_fault_current_ka: {service.available_fault_current_ka}, fault_x_r: {service.fault_x_r} }
         equipment:
           - id: MSB
@@ -86,6 +88,7 @@ internal static partial class EdgeProject
             impedance_percent: {equipment.impedance_percent}
             x_r: {equipment.x_r}
             tap_percent: {equipment.tap_percent}
+            tap_range_percent: {equipment.tap_range_percent}
             feeder: { length: {run.length}, size: 1 AWG, sets: {run.sets}, ocpd: {run.ocpd}, limit_percent: {run.limit_percent}, trip: {run.trip} }
           - id: LP1
             kind: panelboard

@@ -222,6 +222,11 @@ public sealed class ValueRangesTests
             return [0.5, 200, 0.5];
         }
 
+        if (section == "equipment" && key == "tap_range_percent")
+        {
+            return [0, 5, 2.5]; // in 2.5 % steps (docs/project-file.md)
+        }
+
         var range = RangeOf(section, key);
         var low = range.MinExclusive ? Math.BitIncrement(range.Min) : range.Min;
         var high = range.MaxExclusive ? Math.BitDecrement(range.Max) : range.Max;

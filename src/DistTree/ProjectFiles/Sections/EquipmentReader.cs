@@ -8,7 +8,7 @@ namespace DistTree.ProjectFiles.Sections;
 internal sealed class EquipmentReader(SectionContext context, RunReader runs, CircuitReader circuits)
 {
     // Transformer taps in 2.5 % steps (common practice for dry-type distribution transformers).
-    private static readonly double[] TapSteps = [-5, -2.5, 0, 2.5, 5];
+    private static IReadOnlyList<double> TapSteps => TransformerData.TapSteps;
 
     private DiagnosticBag Bag => context.Bag;
 
@@ -132,6 +132,13 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             tap = null;
         }
 
+        var range = m.Optional("tap_range_percent") is { } rangeNode ? Values.InRange(rangeNode, $"'tap_range_percent' of '{name}'", ValueRanges.TapRangePercent) : 5;
+        if (range is { } r && !TapSteps.Contains(r))
+        {
+            Bag.Error(m.KeyLocation("tap_range_percent"), ProjectMessages.TapRangeNotAStep(name, r));
+            range = null;
+        }
+
         if (m.Optional("primary") is { } primaryNode)
         {
             draft.Primary = Values.SystemOf(primaryNode, $"'primary' of '{name}'");
@@ -139,9 +146,9 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
         }
 
         var primaryPhases = ReadPrimaryPhases(m, draft, name, secondary);
-        if (kva is not null && secondary is not null && impedance is not null && xr is not null && tap is not null && primaryPhases is not null)
+        if (kva is not null && secondary is not null && impedance is not null && xr is not null && tap is not null && primaryPhases is not null && range is not null)
         {
-            draft.Transformer = new TransformerData(kva.Value, secondary, impedance.Value, xr.Value, tap.Value) { PrimaryPhases = primaryPhases.Value };
+            draft.Transformer = new TransformerData(kva.Value, secondary, impedance.Value, xr.Value, tap.Value) { PrimaryPhases = primaryPhases.Value, TapRangePercent = range.Value };
         }
     }
 

@@ -33,6 +33,16 @@ internal sealed class SizingReader(SectionContext context)
             sizing = sizing with { ResolutionPercent = resolution };
         }
 
+        if (context.InRange(m, "tap_cost", ValueRanges.TapCost) is { } tapCost)
+        {
+            sizing = sizing with { TapCost = tapCost };
+        }
+
+        if (m.Optional("terminal_table") is { } tableNode && Values.Text(tableNode, "'terminal_table'") is { } tablePath)
+        {
+            context.Draft.TerminalTableFile = new IncludeEntry(tablePath.Trim(), m.KeyLocation("terminal_table"));
+        }
+
         if (m.Optional("prices") is { } pricesNode)
         {
             sizing = sizing with { Prices = ReadPrices(pricesNode) };

@@ -6,18 +6,21 @@ public sealed class UpsizeCommandTests
 {
     private static string Demo => Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml");
 
-    // The --apply round trip: the applied copy checks clean, and a line diff shows only size lines changed.
+    // The --apply round trip: the applied copy checks with only the two findings no allowed size fixes (a feeder and a
+    // branch circuit whose least fitting size is beyond their devices' terminals), and a line diff shows only size lines changed.
     [Fact]
-    public void Upsize_Apply_ThenCheckPasses_AndOnlySizeLinesChange()
+    public void Upsize_Apply_ThenCheckHasOnlyWhatNoAllowedSizeFixes_AndOnlySizeLinesChange()
     {
         var output = Path.Combine(Path.GetTempPath(), $"disttree-{Guid.NewGuid():N}.yaml");
         try
         {
             var before = File.ReadAllBytes(Demo);
             var result = CliRunner.Run("upsize", Demo, "--apply", output);
-            Assert.Equal(0, result.ExitCode);
+            Assert.Equal(1, result.ExitCode);
             Assert.Equal(before, File.ReadAllBytes(Demo));
-            Assert.Equal(0, CliRunner.Run("check", output).ExitCode);
+            var check = CliRunner.Run("check", output);
+            Assert.Equal(1, check.ExitCode);
+            Assert.Contains(", 3 findings,", check.Out, StringComparison.Ordinal); // HG's drop and far end, LP4/32's drop
             var old = File.ReadAllLines(Demo);
             var @new = File.ReadAllLines(output);
             Assert.Equal(old.Length, @new.Length);
@@ -32,6 +35,19 @@ public sealed class UpsizeCommandTests
         }
     }
 
+    // --apply writes conductor sizes only: a tap the plan sets is named on standard error, to be set by hand.
+    [Fact]
+    public void Upsize_ApplyAPlanWithATap_NamesTheTapToSetByHand()
+    {
+        using var folder = new TempFolder();
+        var project = folder.File("tap.yaml");
+        File.WriteAllText(project, Sizing.UpsizerRemedyTests.Transformer());
+        var result = CliRunner.Run("upsize", project, "--apply", folder.File("fixed.yaml"));
+        Assert.Equal(0, result.ExitCode);
+        Assert.Contains("not written: set tap_percent of 'T1' to -2.5 by hand (--apply writes conductor sizes only)", result.Error, StringComparison.Ordinal);
+        Assert.Equal(File.ReadAllBytes(project), File.ReadAllBytes(folder.File("fixed.yaml")));
+    }
+
     [Fact]
     public void Upsize_Json_HasThePlan()
     {
@@ -39,14 +55,19 @@ public sealed class UpsizeCommandTests
         using var doc = JsonDocument.Parse(result.Out);
         var plan = doc.RootElement.GetProperty("upsize_plan");
         Assert.True(plan.GetProperty("changes").GetArrayLength() > 0);
-        Assert.Equal(0, plan.GetProperty("findings_after").GetInt32());
+        Assert.Equal(3, plan.GetProperty("findings_after").GetInt32());
 
-        // The demo's feeder HG states a 10 AWG grounding conductor on 8 AWG lines under 50 A; the plan takes them to 2 AWG,
-        // which needs 10 AWG × 66,360 / 16,510 cmil = 41,720 cmil, 4 AWG (NEC 250.122(B), memory; ASTM B258 areas).
+        // The demo's feeder HG states a 10 AWG grounding conductor on 8 AWG lines under 50 A; its own limit would take 2 AWG,
+        // beyond the 4 AWG a 50 A device's terminals take (terminal-limits.tsv, recalled), so the plan takes it to 4 AWG and
+        // names it as unresolvable. 4 AWG needs 10 AWG × 41,740 / 16,510 cmil = 26,243 cmil, 6 AWG (26,240 cmil, within the
+        // tables' rounding; NEC 250.122(B), memory; ASTM B258 areas).
         var hg = plan.GetProperty("changes").EnumerateArray().Single(c => c.GetProperty("run").GetString() == "HG");
-        Assert.Equal("2 AWG", hg.GetProperty("size_after").GetString());
-        Assert.Equal(("4 AWG", "10 AWG", true), (hg.GetProperty("ground_min_size").GetString(), hg.GetProperty("ground_size").GetString(), hg.GetProperty("ground_must_increase").GetBoolean()));
-        Assert.Equal("at least 4 AWG (NEC 250.122); the stated 10 AWG is too small and must be increased too", hg.GetProperty("grounding_note").GetString());
+        Assert.Equal("4 AWG", hg.GetProperty("size_after").GetString());
+        Assert.Equal(("6 AWG", "10 AWG", true), (hg.GetProperty("ground_min_size").GetString(), hg.GetProperty("ground_size").GetString(), hg.GetProperty("ground_must_increase").GetBoolean()));
+        Assert.Equal("at least 6 AWG (NEC 250.122); the stated 10 AWG is too small and must be increased too", hg.GetProperty("grounding_note").GetString());
+        var left = plan.GetProperty("unresolvable").EnumerateArray().First(u => u.GetProperty("subject").GetString() == "HG");
+        Assert.Contains("beyond the terminal limit of its 50 A device (1×4 AWG", left.GetProperty("message").GetString(), StringComparison.Ordinal);
+        Assert.Equal(0, plan.GetProperty("tap_changes").GetArrayLength());
     }
 
     // Each more set is tried for every size of every feeder: a million took 54 s and 7.7 GB (docs/limits.md).

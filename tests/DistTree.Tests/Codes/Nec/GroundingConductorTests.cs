@@ -142,7 +142,7 @@ public sealed class GroundingConductorTests
     [Fact]
     public void Plan_VoltageDropUpsize_NamesTheProportionalGroundAndRaisesTheStatedOne()
     {
-        var before = SolverHarness.Solve(Feeder("3 AWG", 120, ", ocpd: 100, ground_size: 8 AWG"));
+        var before = SolverHarness.Solve(Feeder("3 AWG", 70, ", ocpd: 100, ground_size: 8 AWG"));
         Assert.DoesNotContain(before.Runs.Single(r => r.Id == "P").Findings, f => f.Code == "grounding_conductor");
         var plan = Upsizer.Standard.Plan(before);
         var change = Assert.Single(plan.Changes, c => c.RunId == "P");

@@ -1,0 +1,46 @@
+using DistTree.Conductors;
+using DistTree.Sizing;
+using DistTree.Solving;
+
+namespace DistTree.Benchmarks;
+
+/// <summary>What the greedy fix and the optimum add on one project, in the plan's cost unit, and what the plan holds.</summary>
+/// <param name="Label">The project.</param>
+/// <param name="Greedy">The greedy fix's cost (∞ where it cannot fix every fixable limit).</param>
+/// <param name="Optimum">The plan's cost.</param>
+/// <param name="Unit">The cost unit.</param>
+/// <param name="Changes">Runs the plan changes.</param>
+/// <param name="Taps">Taps the plan sets.</param>
+/// <param name="Unresolvable">Limits no allowed change meets.</param>
+internal sealed record Saving(string Label, double Greedy, double Optimum, string Unit, int Changes, int Taps, int Unresolvable);
+
+/// <summary>The plan's saving against the greedy fix (issues 5 and 21), for every example project and the generated ones.</summary>
+internal static class UpsizeSavings
+{
+    /// <summary>The saving on one solved project and its plan.</summary>
+    public static Saving Of(string label, Solution solution, UpsizePlan plan) =>
+        new(label, GreedyBaseline.CostAdded(solution, ConductorCatalog.Standard), plan.TotalCostAdded, plan.CostUnit, plan.Changes.Count, plan.TapChanges.Count, plan.Unresolvable.Count);
+
+    /// <summary>Every example of projects/ (each top-level file, and the campus), planned.</summary>
+    public static IEnumerable<Saving> Examples(string root)
+    {
+        var folder = Path.Combine(root, "projects");
+        var files = Directory.GetFiles(folder, "*.yaml").Append(Path.Combine(folder, "campus", "campus.yaml")).Order(StringComparer.Ordinal);
+        foreach (var file in files)
+        {
+            var solution = Analysis.Run(file).Solution;
+            yield return Of($"example {Path.GetRelativePath(folder, file)}", solution, Upsizer.Standard.Plan(solution));
+        }
+    }
+
+    /// <summary>Prints each saving, one a line.</summary>
+    public static void Print(IEnumerable<Saving> savings)
+    {
+        Console.WriteLine("Material (or price) the optimum saves against the greedy fix (issues 5 and 21; the greedy fix takes no taps):");
+        foreach (var s in savings)
+        {
+            var saved = s.Greedy > 0 && double.IsFinite(s.Greedy) ? $"{100 * (s.Greedy - s.Optimum) / s.Greedy,6:0.0} %" : "   n/a";
+            Console.WriteLine($"  {s.Label,-40} greedy {s.Greedy,14:N0}  optimum {s.Optimum,14:N0} {s.Unit}  saving {saved}  ({s.Changes:N0} runs changed, {s.Taps:N0} taps set, {s.Unresolvable:N0} unresolvable)");
+        }
+    }
+}
