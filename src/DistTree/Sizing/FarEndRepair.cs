@@ -31,7 +31,7 @@ internal static class FarEndRepair
             var raised = false;
             foreach (var r in after.Runs)
             {
-                if (r.Kind == RunResultKind.Transformer || !r.Findings.Any(f => f.Kind == FindingKind.FaultClearing))
+                if (r.Kind == RunResultKind.Transformer || r.Findings.FirstOrDefault(f => f.Kind == FindingKind.FaultClearing) is not { } finding)
                 {
                     continue;
                 }
@@ -39,7 +39,18 @@ internal static class FarEndRepair
                 var run = nodes[r.NodeIndex].Incoming!;
                 var conductors = run.Conductors;
                 var (size, sets) = picks.Runs.TryGetValue(r.NodeIndex, out var o) ? (o.Size, o.Sets) : (conductors.Size, conductors.Sets);
-                if (conductors.Fixed || Next(size, catalog) is not { } next
+
+                // No size of this run clears a far end whose source end itself draws less than the trip current; else its own
+                // loop must fall from 1/I_min − 1/I_source to 1/I_trip − 1/I_source (in units of the source voltage).
+                var source = after.Faults?.FarEndAt(r.NodeIndex)?.SourceEndA ?? double.PositiveInfinity;
+                var (minimum, trip) = (finding.Value, finding.Limit);
+                if (!(source > trip))
+                {
+                    continue;
+                }
+
+                var shortBy = ((1 / minimum) - (1 / source)) / ((1 / trip) - (1 / source));
+                if (conductors.Fixed || Next(size, catalog, conductors.Material, shortBy) is not { } next
                     || (conductors.OcpdA is { } ocpd && !terminals.Accepts(ocpd, next, sets))
                     || SizingProblem.Cost(conductors, next, sets, run.Supply, before.Project.Sizing) is not { } cost)
                 {
@@ -62,17 +73,29 @@ internal static class FarEndRepair
         return (picks, after);
     }
 
-    // The next larger size of the same series that the catalogue holds, or null.
-    private static ConductorSize? Next(ConductorSize size, ConductorCatalog catalog)
+    // The next larger size of the same series that the catalogue holds whose resistance is at most 1/short of the present
+    // one's (short: how many times the fault current falls short of the trip current); the largest held where none is;
+    // null at the largest. The run's own resistance must fall at least that much for its loop to (the reactance and the
+    // impedance above it fall less or not at all), so the jump never passes the size the far end needs, and a round or
+    // two reach it where one size a round would take many.
+    private static ConductorSize? Next(ConductorSize size, ConductorCatalog catalog, Material material, double shortBy)
     {
+        var target = catalog.DcResistance20OhmPerKm(size, material) / Math.Max(shortBy, 1);
+        ConductorSize? last = null;
         for (var s = size.NextLarger; s is { } larger; s = larger.NextLarger)
         {
-            if (catalog.Contains(larger))
+            if (!catalog.Contains(larger))
+            {
+                continue;
+            }
+
+            last = larger;
+            if (catalog.DcResistance20OhmPerKm(larger, material) <= target)
             {
                 return larger;
             }
         }
 
-        return null;
+        return last;
     }
 }

@@ -56,14 +56,14 @@ public sealed class Upsizer
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
         Solution Solve(PlanPicks p) => Analysis.Run(PlanPicks.Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution;
 
-        // The far ends the optimum leaves too small to trip their devices, raised size by size; then every change the
-        // design does not need undone (a far end's repair is needed where undoing it brings its finding back).
+        // The far ends the optimum leaves too small to trip their devices, raised size by size; then every other change the
+        // design does not need undone (a far end's repair was needed when it was made: it is not tried again).
         var optimum = new Dictionary<int, RunOption>(picks.Runs);
         (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);
         var screen = new UndoScreen(problem, picks.Runs);
-        (picks, after) = PlanPruner.Prune(before, picks, after, i => MeetsAtStatedSize(problem, i), (key, proof) => repairedRuns.Contains(key) || screen.MayPass(key, proof), Solve);
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), screen.MayPass, Solve);
         var repairCost = picks.Runs.Where(p => repairedRuns.Contains(p.Key)).Sum(p => p.Value.Cost - (optimum.TryGetValue(p.Key, out var was) ? was.Cost : 0));
         var changes = Changes(before, after, picks.Runs);
         var taps = TapChanges(before, after, picks.Taps);

@@ -163,6 +163,29 @@ public sealed class FaultStudyTests
     }
 
     [Fact]
+    public void FarEnd_SourceEnd_IsTheSameFaultAtThePanel()
+    {
+        // A branch circuit's source end is its panel's bus: the same line-to-ground fault there is the feeder's own far end
+        // (both line to ground, both at c_min with conductors hot), so no size of the branch circuit can give more.
+        var analysis = ReferenceHarness.Analyse(Head + """
+            service: { id: SVC, system: 208Y/120, available_fault_current_ka: 10, fault_x_r: 3 }
+            equipment:
+              - id: LP
+                kind: panelboard
+                from: SVC
+                feeder: { length: 60, size: 4 AWG, ground_size: 8 AWG, ocpd: 70 }
+                circuits:
+                  - { id: "1", poles: 1, ocpd: 20, load: { va: 500 }, run: { length: 30, size: 12 AWG } }
+            """);
+        var faults = analysis.Solution.Faults!;
+        var feeder = faults.FarEndAt(analysis.Run("LP").NodeIndex)!.Value;
+        var branch = faults.FarEndAt(analysis.Run("LP/1").NodeIndex)!.Value;
+        Assert.Equal((FaultKind.LineToGround, FaultKind.LineToGround), (feeder.Kind, branch.Kind));
+        Assert.Equal(feeder.MinimumCurrentA, branch.SourceEndA, 1e-9);
+        Assert.True(branch.MinimumCurrentA < branch.SourceEndA);
+    }
+
+    [Fact]
     public void UtilityTransformer_IsTheSourceOfFaultsAndOfTheDrop()
     {
         // A 500 kVA, 5 % utility transformer: at the service I = 500/(√3·0.48·0.05)·c_max/K_T (common practice with

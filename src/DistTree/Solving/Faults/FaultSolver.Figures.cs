@@ -37,8 +37,19 @@ internal static partial class FaultSolver
             return null;
         }
 
+        // The same fault at the run's source end (its own impedance nothing): the most any size of this run could give.
+        var p = node.ParentIndex;
+        var (p1, p0n, p0g) = (hot.Z1[p], hot.Z0n[p], hot.Z0g[p]);
+        var above = kind switch
+        {
+            FaultKind.LineToLine => factorMin * system.LineToLineV!.Value / (2 * p1).Magnitude,
+            FaultKind.LineToNeutral => factorMin * uLn / (((2 * p1) + p0n) / 3).Magnitude,
+            FaultKind.LineToGround => factorMin * uLn / (((2 * p1) + p0g) / 3).Magnitude,
+            FaultKind.ThreePhase => factorMin * uLn / p1.Magnitude,
+        };
+
         var (ground, groundBasis) = impedances.Ground(i, run);
-        return new FarEndFault(least, kind, code.InstantaneousTripA(run.Conductors), run.Conductors, code, ground, groundBasis);
+        return new FarEndFault(least, kind, code.InstantaneousTripA(run.Conductors), run.Conductors, code, ground, groundBasis) { SourceEndA = above };
     }
 
     private static void Consider(double currentA, FaultKind of, ref double least, ref FaultKind kind)

@@ -80,6 +80,7 @@ internal static partial class FaultSolver
                     farEnds[i] = new FarEndRow
                     {
                         MinimumA = end.MinimumCurrentA,
+                        SourceEndA = end.SourceEndA,
                         TripA = end.TripCurrentA ?? double.NaN,
                         GroundIndex = (short)ground.Index,
                         Kind = end.Kind,

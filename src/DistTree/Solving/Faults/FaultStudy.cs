@@ -106,6 +106,13 @@ public readonly record struct FarEndFault
     /// <summary>Whether that conductor is <c>stated</c>, the code's minimum, or the lines' size where neither is known.</summary>
     public string GroundBasis => GroundBases[_groundBasis];
 
+    /// <summary>
+    /// The same fault's minimum current at the run's source end, amperes (infinite on an infinite bus): the most any size
+    /// of this run could give its far end, so where it is below the trip current only a change above the run, a shorter
+    /// run's source or a lower trip clears it.
+    /// </summary>
+    public double SourceEndA { get; init; }
+
     /// <summary>True when the device is known and the minimum current trips it without delay, or the device is not known.</summary>
     public bool Clears => TripCurrentA is not { } trip || !(MinimumCurrentA < trip);
 }
@@ -153,7 +160,7 @@ public sealed class FaultStudy
     /// <summary>The far end of the run into the node at <paramref name="nodeIndex"/>, or null where no run comes into it.</summary>
     public FarEndFault? FarEndAt(int nodeIndex) =>
         _farEnds[nodeIndex] is { Present: true } row && _nodes[nodeIndex].Incoming is { } run
-            ? new FarEndFault(row.MinimumA, row.Kind, double.IsNaN(row.TripA) ? null : row.TripA, run.Conductors, _code, ConductorSize.All[row.GroundIndex], row.GroundBasis)
+            ? new FarEndFault(row.MinimumA, row.Kind, double.IsNaN(row.TripA) ? null : row.TripA, run.Conductors, _code, ConductorSize.All[row.GroundIndex], row.GroundBasis) { SourceEndA = row.SourceEndA }
             : null;
 
     /// <summary>The equipment at <paramref name="nodeIndex"/>, or null where that node is no equipment.</summary>
@@ -178,6 +185,7 @@ public sealed class FaultStudy
 internal struct FarEndRow
 {
     public double MinimumA;
+    public double SourceEndA;
     public double TripA; // NaN where the trip current is not known
     public short GroundIndex;
     public FaultKind Kind;
