@@ -40,6 +40,18 @@ internal static class MethodViewBuilder
             ? ConductorCatalog.Standard.Header.Select(Escape).ToArray()
             : s.Project.Rules.ConductorCatalog is { } own ? own.Header.Select(Escape).ToArray() : [];
 
+    /// <summary>
+    /// The columns of that catalogue with values recalled rather than read (see <see cref="CatalogNotes"/>), escaped: what
+    /// the page says once, in place of the header's notes.
+    /// </summary>
+    public static CatalogNotes.RecalledColumn[] CatalogRecalled(Solution s)
+    {
+        var header = string.Equals(s.CatalogName, ConductorCatalog.Standard.SourceName, StringComparison.Ordinal)
+            ? ConductorCatalog.Standard.Header
+            : s.Project.Rules.ConductorCatalog?.Header ?? [];
+        return [.. CatalogNotes.Recalled(header).Select(c => new CatalogNotes.RecalledColumn(Escape(c.Column), Escape(c.What)))];
+    }
+
     /// <summary>What the page says of the grounding table the project brings, or null where it brings none.</summary>
     public static GroundingTableView? GroundingTable(Solution s) => s.Project.Rules.GroundingTable is { } table
         ? new GroundingTableView(

@@ -51,6 +51,9 @@ internal sealed record ReportView
     public string? MotorsMore { get; init; }
     public required bool AnyPoints { get; init; }
     public required IReadOnlyList<string> CatalogHeader { get; init; }
+
+    /// <summary>The catalogue's columns with values recalled rather than read, and which (escaped).</summary>
+    public IReadOnlyList<CatalogNotes.RecalledColumn> CatalogRecalled { get; init; } = [];
     public string? OwnCatalogName { get; init; }
     public GroundingTableView? GroundingTable { get; init; }
     public required IReadOnlyList<RuleMeaning> RuleMeanings { get; init; }

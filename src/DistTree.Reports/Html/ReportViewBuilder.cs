@@ -77,6 +77,7 @@ internal static class ReportViewBuilder
             MotorLimit = Limit(rules.MotorStartLimitPercent),
             AnyPoints = s.Network.Nodes.Any(node => node.Circuit is { Points.Count: > 0 }),
             CatalogHeader = MethodViewBuilder.CatalogHeader(s),
+            CatalogRecalled = MethodViewBuilder.CatalogRecalled(s),
             OwnCatalogName = rules.ConductorCatalog is { } own ? Escape(own.SourceName) : null,
             GroundingTable = MethodViewBuilder.GroundingTable(s),
             RuleMeanings = MethodViewBuilder.Meanings(rules),
