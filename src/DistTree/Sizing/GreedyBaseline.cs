@@ -13,7 +13,14 @@ public static class GreedyBaseline
 {
 
     /// <summary>The material (or price) the greedy fix adds, in the plan's unit; +∞ where it cannot fix every fixable limit.</summary>
-    public static double CostAdded(Solution before, ConductorCatalog catalog)
+    public static double CostAdded(Solution before, ConductorCatalog catalog) => Fix(before, catalog).Cost;
+
+    /// <summary>
+    /// The greedy fix's choices (runs and taps, where they differ from the project) and what they add; the cost +∞ and
+    /// the choices null where it cannot fix every fixable limit. Applied with <see cref="PlanPicks.Apply"/>, they can be
+    /// solved again to see whether the fix holds.
+    /// </summary>
+    internal static (double Cost, PlanPicks? Picks) Fix(Solution before, ConductorCatalog catalog)
     {
         var problem = SizingProblem.Build(before, catalog);
         var nodes = problem.Network.Nodes;
@@ -52,11 +59,29 @@ public static class GreedyBaseline
 
             if (Total(problem, path, pick, transformerDrop, e.NodeIndex) > e.LimitPercent + 1e-9)
             {
-                return double.PositiveInfinity;
+                return (double.PositiveInfinity, null);
             }
         }
 
-        return tapCost + Enumerable.Range(0, nodes.Count).Where(i => pick[i] >= 0).Sum(i => problem.Options[i]![pick[i]].Cost);
+        var runs = new Dictionary<int, RunOption>();
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            if (pick[i] >= 0 && problem.Options[i]![pick[i]] is var o && (o.Size != nodes[i].Incoming!.Conductors.Size || o.Sets != nodes[i].Incoming!.Conductors.Sets))
+            {
+                runs[i] = o;
+            }
+        }
+
+        var tapPicks = new Dictionary<int, TapOption>();
+        foreach (var t in before.Runs.Where(r => r.Kind == RunResultKind.Transformer))
+        {
+            if (!problem.NewOrigin && problem.Taps[t.NodeIndex] is { } tapOptions)
+            {
+                tapPicks[t.NodeIndex] = tapOptions.MinBy(o => o.Steps);
+            }
+        }
+
+        return (tapCost + Enumerable.Range(0, nodes.Count).Where(i => pick[i] >= 0).Sum(i => problem.Options[i]![pick[i]].Cost), new PlanPicks(runs, tapPicks));
     }
 
     // The runs whose drops count in the end point's total, end point first, then upstream (nearest first).
