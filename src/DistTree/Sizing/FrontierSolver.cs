@@ -17,7 +17,12 @@ internal static class FrontierSolver
     {
         var nodes = problem.Network.Nodes;
         var n = nodes.Count;
+
+        // The service's budget is b steps; below a transformer whose tap raises its secondary by more than its windings
+        // drop, the end points may take more than b steps of their own (the raise counts against them). The tables reach
+        // as far as the most any path can be raised (the largest sum of raises along a path), so that no raise is cut off.
         var b = problem.BudgetSteps;
+        var top = b + MostRaise(problem);
         var bus = new double[]?[n];
         var choices = new short[]?[n];
         var tapChoices = new short[]?[n];
@@ -36,29 +41,51 @@ internal static class FrontierSolver
             var parent = node.ParentIndex;
             if (node.Circuit is not null)
             {
-                AddLeaf(ParentBus(bus, parent, b), problem.Options[i]!, problem.Excluded[i]);
+                AddLeaf(ParentBus(bus, parent, top), problem.Options[i]!, problem.Excluded[i]);
                 continue;
             }
 
-            var own = bus[i] ?? new double[b + 1];
+            var own = bus[i] ?? new double[top + 1];
             bus[i] = null;
             if (parent < 0)
             {
-                return (ReadBack(problem, choices, tapChoices, out tapChoice), own[b]);
+                return (ReadBack(problem, choices, tapChoices, top, out tapChoice), own[b]);
             }
 
             var atInput = constrained[i] ? Transform(problem, i, own, out tapChoices[i]) : own;
             var h = problem.Options[i] is { } options
                 ? (constrained[i] ? BestChoice(atInput, options, out choices[i]) : Cheapest(atInput, options, out choices[i]))
                 : atInput;
-            var target = ParentBus(bus, parent, b);
-            for (var k = 0; k <= b; k++)
+            var target = ParentBus(bus, parent, top);
+            for (var k = 0; k <= top; k++)
             {
                 target[k] += h[k];
             }
         }
 
         throw new InvalidOperationException("the network has no service node");
+    }
+
+    // The largest sum, along any path from the service, of the steps by which a transformer's most raising allowed tap
+    // (or its stated one, where its tap is no choice) raises its secondary beyond its windings' drop; zero at a new origin.
+    private static int MostRaise(SizingProblem problem)
+    {
+        if (problem.NewOrigin)
+        {
+            return 0;
+        }
+
+        var nodes = problem.Network.Nodes;
+        var raise = new int[nodes.Count];
+        var most = 0;
+        for (var i = 1; i < nodes.Count; i++)
+        {
+            var steps = problem.Taps[i] is { } taps ? taps.Min(t => t.Steps) : problem.TransformerSteps[i];
+            raise[i] = raise[nodes[i].ParentIndex] + (nodes[i].Kind == Network.NodeKind.Transformer ? Math.Max(0, -steps) : 0);
+            most = Math.Max(most, raise[i]);
+        }
+
+        return most;
     }
 
     private static double[] ParentBus(double[]?[] bus, int parent, int budget) => bus[parent] ??= new double[budget + 1];
@@ -103,16 +130,16 @@ internal static class FrontierSolver
             return own;
         }
 
-        var b = own.Length - 1;
-        var shifted = new double[b + 1];
+        var top = own.Length - 1;
+        var shifted = new double[top + 1];
         var taps = problem.Taps[node];
-        tapChoice = taps is null ? null : new short[b + 1];
-        for (var k = 0; k <= b; k++)
+        tapChoice = taps is null ? null : new short[top + 1];
+        for (var k = 0; k <= top; k++)
         {
             if (taps is null)
             {
-                var at = problem.NewOrigin ? b : k - problem.TransformerSteps[node];
-                shifted[k] = at < 0 ? double.PositiveInfinity : own[Math.Min(at, b)];
+                var at = problem.NewOrigin ? problem.BudgetSteps : k - problem.TransformerSteps[node];
+                shifted[k] = at < 0 ? double.PositiveInfinity : own[Math.Min(at, top)];
                 continue;
             }
 
@@ -120,7 +147,7 @@ internal static class FrontierSolver
             for (short j = 0; j < taps.Length; j++)
             {
                 var at = k - taps[j].Steps;
-                var cost = at < 0 ? double.PositiveInfinity : taps[j].Cost + own[Math.Min(at, b)];
+                var cost = at < 0 ? double.PositiveInfinity : taps[j].Cost + own[Math.Min(at, top)];
                 if (cost < best)
                 {
                     (best, tapChoice![k]) = (cost, j);
@@ -186,7 +213,7 @@ internal static class FrontierSolver
     }
 
     // Top-down: each node gets the steps left at its input; its run's choice uses some, a transformer more.
-    private static int[] ReadBack(SizingProblem problem, short[]?[] choices, short[]?[] tapChoices, out int[] tapChoice)
+    private static int[] ReadBack(SizingProblem problem, short[]?[] choices, short[]?[] tapChoices, int top, out int[] tapChoice)
     {
         var nodes = problem.Network.Nodes;
         var left = new int[nodes.Count];
@@ -201,7 +228,7 @@ internal static class FrontierSolver
             var afterRun = atInput;
             if (problem.Options[i] is { } options)
             {
-                var pick = node.Circuit is not null ? LeafChoice(options, atInput, problem.Excluded[i]) : choices[i]![Math.Clamp(atInput, 0, problem.BudgetSteps)];
+                var pick = node.Circuit is not null ? LeafChoice(options, atInput, problem.Excluded[i]) : choices[i]![Math.Clamp(atInput, 0, top)];
                 choice[i] = pick;
                 afterRun = atInput - options[pick].Steps;
             }
@@ -210,12 +237,12 @@ internal static class FrontierSolver
             var regulation = problem.TransformerSteps[i];
             if (problem.Taps[i] is { } taps)
             {
-                tapChoice[i] = tapChoices[i] is { } picked ? picked[Math.Clamp(afterRun, 0, problem.BudgetSteps)] : 0;
+                tapChoice[i] = tapChoices[i] is { } picked ? picked[Math.Clamp(afterRun, 0, top)] : 0;
                 regulation = taps[tapChoice[i]].Steps;
             }
 
             left[i] = node.Kind == Network.NodeKind.Transformer
-                ? (problem.NewOrigin ? problem.BudgetSteps : Math.Min(problem.BudgetSteps, afterRun - regulation))
+                ? (problem.NewOrigin ? problem.BudgetSteps : Math.Min(top, afterRun - regulation))
                 : afterRun;
         }
 

@@ -38,8 +38,8 @@ public sealed class HtmlReportSectionsTests
         Assert.Equal(plan.After.HasFindings ? "verdict verdict-fail" : "verdict verdict-pass", verdict.ClassName);
         // Every change of the plan has its row, with its sizes before and after.
         var rows = doc.QuerySelectorAll("#plan table.plan tr.plan-change").ToArray();
-        Assert.Equal(plan.Changes.Count, rows.Length);
-        for (var i = 0; i < rows.Length; i++)
+        Assert.Equal(plan.Changes.Count + plan.TapChanges.Count, rows.Length);
+        for (var i = 0; i < plan.Changes.Count; i++)
         {
             Assert.Equal(plan.Changes[i].RunId, rows[i].QuerySelector("td")!.TextContent);
             Assert.Contains($"{plan.Changes[i].SizeBefore} → {plan.Changes[i].SizeAfter}", rows[i].TextContent, StringComparison.Ordinal);

@@ -303,7 +303,7 @@ public sealed class HtmlReportTests
         Assert.NotEmpty(plan.Changes);
         var doc = ReportFixtures.RenderDemo(new HtmlReportOptions { Plan = plan });
         var runs = doc.QuerySelectorAll("#plan table.plan tbody tr.plan-change td:first-child").Select(td => td.TextContent).ToArray();
-        Assert.Equal(plan.Changes.Select(c => c.RunId), runs);
+        Assert.Equal(plan.Changes.Select(c => c.RunId).Concat(plan.TapChanges.Select(t => t.TransformerId)), runs);
         Assert.Equal(plan.Unresolvable.Count, doc.QuerySelectorAll("#plan .unresolvable li").Length);
     }
 
