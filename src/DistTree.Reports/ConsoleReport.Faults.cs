@@ -29,11 +29,7 @@ public static partial class ConsoleReport
     // The failing far ends of a path's runs: the minimum fault current against the current that trips the device.
     private static void WriteFarEnds(TextWriter o, Solution s, EndPointResult e)
     {
-        if (s.Faults is not { } faults)
-        {
-            return;
-        }
-
+        var faults = s.Faults;
         var failing = e.RunIndices
             .Select(r => s.Runs[r])
             .Where(r => r.Kind != RunResultKind.Transformer)

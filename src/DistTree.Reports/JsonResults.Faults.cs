@@ -9,13 +9,8 @@ public static partial class JsonResults
 {
     // The method and the source, then one entry per switchboard, panelboard, transformer (at its secondary terminals)
     // and splitter, in node order.
-    private static void WriteEquipment(Utf8JsonWriter w, FaultStudy? faults)
+    private static void WriteEquipment(Utf8JsonWriter w, FaultStudy faults)
     {
-        if (faults is null)
-        {
-            return;
-        }
-
         w.WriteStartObject("faults"u8);
         w.WriteString("method"u8, FaultText.Method);
         w.WriteString("source"u8, FaultText.SourceWord(faults.Source));

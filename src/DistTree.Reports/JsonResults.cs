@@ -56,7 +56,7 @@ public static partial class JsonResults
             w.WriteStartArray("runs"u8);
             foreach (var run in solution.Runs)
             {
-                WriteRun(w, run, run.Kind == RunResultKind.Transformer ? null : solution.Faults?.FarEndAt(run.NodeIndex));
+                WriteRun(w, run, run.Kind == RunResultKind.Transformer ? null : solution.Faults.FarEndAt(run.NodeIndex));
                 FlushEvery(w);
             }
 

@@ -31,7 +31,7 @@ internal static class FaultViewBuilder
 
     /// <summary>The equipment's study by node index (for the panels' headings).</summary>
     public static Dictionary<int, EquipmentFault> ByNode(Solution s) =>
-        s.Faults?.Equipment.ToDictionary(e => e.NodeIndex) ?? [];
+        s.Faults.Equipment.ToDictionary(e => e.NodeIndex);
 
     /// <summary>A panel heading's words: <c>available fault current 14.32 kA, L-G 12.10 kA</c>.</summary>
     public static string? Heading(EquipmentFault? e) => e is null

@@ -68,7 +68,7 @@ internal static class SummaryViewBuilder
             FindingKind.NeutralAmpacity => ("neutral's ampacity", t.WithNeutral, "–"),
             FindingKind.DeviceBelowLoad => ("device rating", t.WithOcpd, "–"),
             FindingKind.GroundingConductor => ("minimum for the device", t.WithGround, "–"),
-            FindingKind.InterruptingRating => ("stated rating", s.Faults?.Equipment.Count(e => e.InterruptingKa is not null) ?? 0, "–"),
+            FindingKind.InterruptingRating => ("stated rating", s.Faults.Equipment.Count(e => e.InterruptingKa is not null), "–"),
             FindingKind.FaultClearing => ("instantaneous trip", FarEndsChecked(s), "–"),
         };
         return LimitRowOf(FindingKinds.Of(kind).Check, limit, checkedCount, over, worst);
@@ -80,7 +80,7 @@ internal static class SummaryViewBuilder
         var count = 0;
         foreach (var r in s.Runs)
         {
-            if (r.Kind != RunResultKind.Transformer && s.Faults?.FarEndAt(r.NodeIndex) is { TripCurrentA: not null })
+            if (r.Kind != RunResultKind.Transformer && s.Faults.FarEndAt(r.NodeIndex) is { TripCurrentA: not null })
             {
                 count++;
             }

@@ -15,7 +15,11 @@ public abstract partial class CodeRules
     /// </summary>
     public const double DefaultTripMultiple = 10;
 
-    /// <summary>The current that trips <paramref name="conductors"/>' device without delay, amperes (see <see cref="InstantaneousTrip"/>), or null.</summary>
+    /// <summary>
+    /// The current that trips <paramref name="conductors"/>' device without delay, amperes; null where it is not known: no
+    /// device stated, or a fuse without a stated multiple (a fuse's clearing current is read from its own time-current
+    /// curve). <see cref="TripBasis"/> says how it was taken.
+    /// </summary>
     public double? InstantaneousTripA(Run conductors)
     {
         ArgumentNullException.ThrowIfNull(conductors);
@@ -28,25 +32,21 @@ public abstract partial class CodeRules
         };
     }
 
-    /// <summary>
-    /// The current that trips <paramref name="conductors"/>' device without delay, amperes, and how it was taken; null where
-    /// it is not known: no device stated, or a fuse without a stated multiple (a fuse's clearing current is read from its
-    /// own time-current curve).
-    /// </summary>
-    public (double? TripA, string Basis) InstantaneousTrip(Run conductors)
+    /// <summary>How <see cref="InstantaneousTripA"/> was taken for <paramref name="conductors"/>' device, in words.</summary>
+    public static string TripBasis(Run conductors)
     {
         ArgumentNullException.ThrowIfNull(conductors);
         if (conductors.OcpdA is not { } ocpd)
         {
-            return (null, "no device stated");
+            return "no device stated";
         }
 
         var device = Words.DeviceType.Of(conductors.DeviceType);
         return conductors.Trip switch
         {
-            { } trip => (trip.Multiple * ocpd, FormattableString.Invariant($"{trip.Name}: {trip.Multiple:0.##} × the {ocpd:0.#} A {device}")),
-            null when conductors.DeviceType == DeviceType.Fuse => (null, FormattableString.Invariant($"a {ocpd:0.#} A fuse: state 'trip' as the multiple of its rating that clears it in time")),
-            null => (DefaultTripMultiple * ocpd, FormattableString.Invariant($"default {DefaultTripMultiple:0} × the {ocpd:0.#} A {device} (state 'trip')")),
+            { } trip => FormattableString.Invariant($"{trip.Name}: {trip.Multiple:0.##} × the {ocpd:0.#} A {device}"),
+            null when conductors.DeviceType == DeviceType.Fuse => FormattableString.Invariant($"a {ocpd:0.#} A fuse: state 'trip' as the multiple of its rating that clears it in time"),
+            null => FormattableString.Invariant($"default {DefaultTripMultiple:0} × the {ocpd:0.#} A {device} (state 'trip')"),
         };
     }
 

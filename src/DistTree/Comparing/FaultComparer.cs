@@ -16,14 +16,14 @@ internal static class FaultComparer
     public static FaultDelta[] Compare(Solution before, Solution after)
     {
         var old = new Dictionary<string, EquipmentFault>(StringComparer.Ordinal);
-        foreach (var e in before.Faults?.Equipment ?? [])
+        foreach (var e in before.Faults.Equipment)
         {
             old[e.Id] = e;
         }
 
         var deltas = new List<FaultDelta>();
         var matched = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var a in after.Faults?.Equipment ?? [])
+        foreach (var a in after.Faults.Equipment)
         {
             var b = old.GetValueOrDefault(a.Id);
             if (b is not null)

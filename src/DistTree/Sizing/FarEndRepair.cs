@@ -5,25 +5,28 @@ namespace DistTree.Sizing;
 
 /// <summary>
 /// Makes a plan clear the far-end fault checks (issue 23): after the optimum on the drop grid, each run whose minimum
-/// far-end fault still does not trip its device without delay takes the next larger size of its lines (its grounding
-/// conductor following as the code sizes it: NEC 250.122(B)'s proportion, IEC Table 54.2, or a stated one raised to its
-/// minimum), round by round, each round proved by solving the tree again, until none is left or no larger size helps; never
-/// beyond what its device's terminals accept (<see cref="TerminalTable"/>).
+/// far-end fault still does not trip its device without delay takes a larger size of its lines (its grounding conductor
+/// following as the code sizes it: NEC 250.122(B)'s proportion, IEC Table 54.2, or a stated one raised to its minimum):
+/// the first whose resistance falls as much as its own loop must (see <see cref="Next"/>). Round by round, each proved by
+/// solving the tree again, until none is left or no larger size helps; never beyond what its device's terminals accept
+/// (<see cref="TerminalTable"/>), and not at all where the same fault at the run's source end is already too small.
 /// A larger conductor only lowers every loop impedance, so a round never undoes another's work. Greedy, not proven least:
-/// the plan is least on the drop grid, and then the smallest step up that each failing far end needs.
+/// the plan is least on the drop grid, and then the step up that each failing far end needs.
 /// </summary>
 internal static class FarEndRepair
 {
-    // Rounds at most: each takes every failing run one size up; the catalogue has about 40 sizes.
+    // Rounds at most: each takes every failing run at least one size up; the catalogue has about 40 sizes.
     private const int MaxRounds = 40;
 
     /// <summary>
-    /// The picks with every failing far end's run raised until it clears (or can go no larger), and their proof; the
-    /// picks and proof unchanged where no far end fails. <paramref name="solve"/> solves the project with picks applied.
+    /// New picks with every failing far end's run raised until it clears (or can go no larger), and their proof; the same
+    /// choices and proof where no far end fails. <paramref name="picks"/> is left as it is; <paramref name="solve"/> solves
+    /// the project with picks applied.
     /// </summary>
     public static (PlanPicks Picks, Solution After) Repair(
         Solution before, PlanPicks picks, Solution after, ConductorCatalog catalog, Func<PlanPicks, Solution> solve)
     {
+        picks = picks with { Runs = new Dictionary<int, RunOption>(picks.Runs) };
         var nodes = before.Network.Nodes;
         var terminals = before.Project.Sizing.TerminalTable ?? TerminalTable.Standard;
         for (var round = 0; round < MaxRounds; round++)
@@ -42,7 +45,7 @@ internal static class FarEndRepair
 
                 // No size of this run clears a far end whose source end itself draws less than the trip current; else its own
                 // loop must fall from 1/I_min − 1/I_source to 1/I_trip − 1/I_source (in units of the source voltage).
-                var source = after.Faults?.FarEndAt(r.NodeIndex)?.SourceEndA ?? double.PositiveInfinity;
+                var source = after.Faults.FarEndAt(r.NodeIndex)?.SourceEndA ?? double.PositiveInfinity;
                 var (minimum, trip) = (finding.Value, finding.Limit);
                 if (!(source > trip))
                 {

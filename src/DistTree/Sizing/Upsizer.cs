@@ -56,9 +56,9 @@ public sealed class Upsizer
         var catalog = before.Project.Rules.ConductorCatalog ?? _catalog;
         Solution Solve(PlanPicks p) => Analysis.Run(PlanPicks.Apply(before, p), new AnalysisOptions { Catalog = catalog }).Solution;
 
-        // The far ends the optimum leaves too small to trip their devices, raised size by size; then every other change the
-        // design does not need undone (a far end's repair was needed when it was made: it is not tried again).
-        var optimum = new Dictionary<int, RunOption>(picks.Runs);
+        // The far ends the optimum leaves too small to trip their devices, raised; then every other change the design does
+        // not need undone (a far end's repair was needed when it was made: it is not tried again).
+        var optimum = picks.Runs;
         (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);

@@ -66,7 +66,7 @@ public sealed class DropSolver
         // The short-circuit study on the same impedances: the maximum at every piece of equipment, the minimum at every
         // run's far end (its findings join the run's).
         var (faults, faultFindings) = FaultSolver.Solve(network, frame, solved, runs.IncomingRow, code);
-        return Result(network, solved, runs.Count, findings + points.Findings + faultFindings, points.Worst, flow, code) with { Faults = faults };
+        return Result(network, solved, runs.Count, findings + points.Findings + faultFindings, points.Worst, flow, code, faults);
     }
 
     // True when any load of the tree is continuous (its currents' continuous part is then worked out too).
@@ -84,7 +84,7 @@ public sealed class DropSolver
     }
 
     // The solution over the solved rows, with each panel's phase loads.
-    private Solution Result(DistributionNetwork network, SolvedRows solved, int runCount, int findings, int worstIndex, LoadFlowResult flow, CodeRules code)
+    private Solution Result(DistributionNetwork network, SolvedRows solved, int runCount, int findings, int worstIndex, LoadFlowResult flow, CodeRules code, FaultStudy faults)
     {
         var endPoints = new ViewList<EndPointResult>(solved.EndPoints.Length, e => new EndPointResult(solved, e));
         EndPointResult? worst = worstIndex < 0 ? null : endPoints[worstIndex];
@@ -99,6 +99,7 @@ public sealed class DropSolver
             Panels = Panels(network, solved.Phases, solved.Power),
             CatalogName = code.Catalog.SourceName,
             Code = code,
+            Faults = faults,
         };
     }
 

@@ -43,7 +43,7 @@ public sealed record Solution
     public required Codes.CodeRules Code { get; init; }
 
     /// <summary>The short-circuit study: the fault currents at every piece of equipment and at every run's far end.</summary>
-    public FaultStudy? Faults { get; init; }
+    public required FaultStudy Faults { get; init; }
 
     /// <summary>Every finding, runs' first, then end points', then equipment's, each in network order.</summary>
     public IEnumerable<Finding> AllFindings
@@ -67,12 +67,9 @@ public sealed record Solution
                 }
             }
 
-            if (Faults is not null)
+            foreach (var finding in Faults.Findings)
             {
-                foreach (var finding in Faults.Findings)
-                {
-                    yield return finding;
-                }
+                yield return finding;
             }
         }
     }

@@ -119,20 +119,21 @@ internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] inc
     private readonly Complex[] _ohms = Filled(ConductorSize.All.Count * 2 * 3 * 3 * 2);
 
     /// <summary>
-    /// Run <paramref name="run"/>'s impedances (into node <paramref name="i"/>) at <paramref name="temperatureC"/>, or each
-    /// conductor's rated temperature for null; its grounding conductor the code's minimum (<paramref name="exact"/>) or,
-    /// where the project states none, at first the table's size without the increase for large lines (see <see cref="Ground"/>).
+    /// Run <paramref name="run"/>'s impedances (into node <paramref name="i"/>), each conductor at its rated temperature
+    /// (<paramref name="hot"/>, for the minimum currents) or at 20 °C; its grounding conductor the code's minimum
+    /// (<paramref name="exact"/>) or, where the project states none, at first the table's size without the increase for
+    /// large lines (see <see cref="Ground"/>).
     /// </summary>
-    public RunZ Of(int i, NetworkRun run, double? temperatureC, bool exact)
+    public RunZ Of(int i, NetworkRun run, bool hot, bool exact)
     {
         var c = run.Conductors;
         var perSet = c.LengthM / 1000.0 / c.Sets;
         var hasNeutral = HasNeutral(run);
         var (ground, _) = Ground(i, run, exact);
         return new RunZ(
-            Ohms(c.Size, c, temperatureC) * perSet,
-            hasNeutral ? Ohms(c.NeutralSize ?? c.Size, c, temperatureC) * perSet : Complex.Zero,
-            Ohms(ground, c, temperatureC) * perSet,
+            Ohms(c.Size, c, hot) * perSet,
+            hasNeutral ? Ohms(c.NeutralSize ?? c.Size, c, hot) * perSet : Complex.Zero,
+            Ohms(ground, c, hot) * perSet,
             hasNeutral);
     }
 
@@ -182,7 +183,7 @@ internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] inc
         return least;
     }
 
-    private Complex Ohms(ConductorSize size, Run c, double? temperatureC)
+    private Complex Ohms(ConductorSize size, Run c, bool hot)
     {
         var rating = c.InsulationC switch
         {
@@ -191,15 +192,15 @@ internal sealed class RunImpedances(CodeRules code, SolvedRows solved, int[] inc
             90 => 2,
             _ => -1,
         };
-        var key = ((((((size.Index * 2) + (int)c.Material) * 3) + (int)c.Raceway) * 3) + rating) * 2 + (temperatureC is null ? 1 : 0);
-        if (rating >= 0 && (temperatureC is null || temperatureC == FaultSolver.ColdC) && !double.IsNaN(_ohms[key].Real))
+        var key = ((((((size.Index * 2) + (int)c.Material) * 3) + (int)c.Raceway) * 3) + rating) * 2 + (hot ? 1 : 0);
+        if (rating >= 0 && !double.IsNaN(_ohms[key].Real))
         {
             return _ohms[key];
         }
 
-        var t = temperatureC ?? ConductorCatalog.RatedTemperatureC(size, c.InsulationC);
+        var t = hot ? ConductorCatalog.RatedTemperatureC(size, c.InsulationC) : FaultSolver.ColdC;
         var ohms = new Complex(_catalog.AcResistanceOhmPerKm(size, c.Material, c.Raceway, t, frequencyHz), _catalog.ReactanceOhmPerKm(size, c.Raceway, frequencyHz));
-        if (rating >= 0 && (temperatureC is null || temperatureC == FaultSolver.ColdC))
+        if (rating >= 0)
         {
             _ohms[key] = ohms;
         }

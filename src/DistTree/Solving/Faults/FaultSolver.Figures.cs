@@ -49,7 +49,7 @@ internal static partial class FaultSolver
         };
 
         var (ground, groundBasis) = impedances.Ground(i, run);
-        return new FarEndFault(least, kind, code.InstantaneousTripA(run.Conductors), run.Conductors, code, ground, groundBasis) { SourceEndA = above };
+        return new FarEndFault(least, kind, code.InstantaneousTripA(run.Conductors), run.Conductors, ground, groundBasis) { SourceEndA = above };
     }
 
     private static void Consider(double currentA, FaultKind of, ref double least, ref FaultKind kind)

@@ -63,14 +63,14 @@ internal static partial class FaultSolver
             // A feeder's grounding conductor is the code's minimum at once (its figures reach the equipment below); an end
             // point's at first the table's, made exact only where its far end does not clear with it.
             var exact = node.Circuit is null;
-            cold.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, ColdC, exact), ExcludingOwn(cold.Z1[parent], below, parent, i));
-            hot.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, null, exact), hot.Z1[parent]);
+            cold.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, hot: false, exact), ExcludingOwn(cold.Z1[parent], below, parent, i));
+            hot.Through(parent, i, run is null ? RunZ.None : impedances.Of(i, run, hot: true, exact), hot.Z1[parent]);
             if (run is not null)
             {
                 var farEnd = FarEnd(node, run, hot, i, impedances, code, rules.FaultVoltageFactorMin);
                 if (farEnd is { Clears: false } && !impedances.GroundIsExact(i))
                 {
-                    hot.Through(parent, i, impedances.Of(i, run, null, exact: true), hot.Z1[parent]);
+                    hot.Through(parent, i, impedances.Of(i, run, hot: true, exact: true), hot.Z1[parent]);
                     farEnd = FarEnd(node, run, hot, i, impedances, code, rules.FaultVoltageFactorMin);
                 }
 
@@ -106,7 +106,7 @@ internal static partial class FaultSolver
         }
 
         var equipment = Equipment(network, cold, below, code, rules.FaultVoltageFactorMax, ref findings);
-        return (new FaultStudy(source.Kind, rules.FaultVoltageFactorMax, rules.FaultVoltageFactorMin, equipment, farEnds, MotorMultiple, nodes, code), findings);
+        return (new FaultStudy(source.Kind, rules.FaultVoltageFactorMax, rules.FaultVoltageFactorMin, equipment, farEnds, MotorMultiple, nodes), findings);
     }
 
     // K_T of IEC 60909-0 eq. (12a): 0.95·c_max/(1 + 0.6·x_T), x_T the transformer's reactance in per unit (recalled).
@@ -167,7 +167,7 @@ internal static partial class FaultSolver
 
             if (node.Incoming is { } incoming)
             {
-                into += impedances.Of(i, incoming, ColdC, exact: false).Line;
+                into += impedances.Of(i, incoming, hot: false, exact: false).Line;
             }
 
             var feeds = 1.0 / into;

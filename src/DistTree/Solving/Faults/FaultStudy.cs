@@ -73,17 +73,15 @@ public readonly record struct FarEndFault
     private static readonly string[] GroundBases = ["stated", "the code's minimum", "the lines' size: state ground_size"];
 
     private readonly Run _conductors;
-    private readonly Codes.CodeRules _code;
     private readonly ConductorSize _ground;
     private readonly byte _groundBasis;
 
-    internal FarEndFault(double minimumCurrentA, FaultKind kind, double? tripCurrentA, Run conductors, Codes.CodeRules code, ConductorSize ground, byte groundBasis)
+    internal FarEndFault(double minimumCurrentA, FaultKind kind, double? tripCurrentA, Run conductors, ConductorSize ground, byte groundBasis)
     {
         MinimumCurrentA = minimumCurrentA;
         Kind = kind;
         TripCurrentA = tripCurrentA;
         _conductors = conductors;
-        _code = code;
         _ground = ground;
         _groundBasis = groundBasis;
     }
@@ -98,7 +96,7 @@ public readonly record struct FarEndFault
     public double? TripCurrentA { get; }
 
     /// <summary>How the trip current was taken: <c>C: 10 × the 20 A breaker</c>, <c>default 10 × …</c>, or why there is none.</summary>
-    public string TripBasis => _code.InstantaneousTrip(_conductors).Basis;
+    public string TripBasis => Codes.CodeRules.TripBasis(_conductors);
 
     /// <summary>The grounding conductor the line-to-ground loop returns through, each set.</summary>
     public string GroundSize => _ground.Text;
@@ -125,12 +123,10 @@ public sealed class FaultStudy
 {
     private readonly FarEndRow[] _farEnds;
     private readonly Network.NetworkNode[] _nodes;
-    private readonly Codes.CodeRules _code;
 
-    internal FaultStudy(FaultSourceKind source, double factorMax, double factorMin, IReadOnlyList<EquipmentFault> equipment, FarEndRow[] farEnds, double motorMultiple, Network.NetworkNode[] nodes, Codes.CodeRules code)
+    internal FaultStudy(FaultSourceKind source, double factorMax, double factorMin, IReadOnlyList<EquipmentFault> equipment, FarEndRow[] farEnds, double motorMultiple, Network.NetworkNode[] nodes)
     {
         _nodes = nodes;
-        _code = code;
         Source = source;
         VoltageFactorMax = factorMax;
         VoltageFactorMin = factorMin;
@@ -160,22 +156,8 @@ public sealed class FaultStudy
     /// <summary>The far end of the run into the node at <paramref name="nodeIndex"/>, or null where no run comes into it.</summary>
     public FarEndFault? FarEndAt(int nodeIndex) =>
         _farEnds[nodeIndex] is { Present: true } row && _nodes[nodeIndex].Incoming is { } run
-            ? new FarEndFault(row.MinimumA, row.Kind, double.IsNaN(row.TripA) ? null : row.TripA, run.Conductors, _code, ConductorSize.All[row.GroundIndex], row.GroundBasis) { SourceEndA = row.SourceEndA }
+            ? new FarEndFault(row.MinimumA, row.Kind, double.IsNaN(row.TripA) ? null : row.TripA, run.Conductors, ConductorSize.All[row.GroundIndex], row.GroundBasis) { SourceEndA = row.SourceEndA }
             : null;
-
-    /// <summary>The equipment at <paramref name="nodeIndex"/>, or null where that node is no equipment.</summary>
-    public EquipmentFault? EquipmentAt(int nodeIndex)
-    {
-        foreach (var e in Equipment)
-        {
-            if (e.NodeIndex == nodeIndex)
-            {
-                return e;
-            }
-        }
-
-        return null;
-    }
 }
 
 /// <summary>
