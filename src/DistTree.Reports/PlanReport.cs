@@ -39,6 +39,11 @@ public static class PlanReport
                 {
                     o.WriteLine($"{"",-14} grounding conductor: {note}");
                 }
+
+                if (c.FaultClearingNote is { } fault)
+                {
+                    o.WriteLine($"{"",-14} fault at the far end: {fault}");
+                }
             }
 
             o.WriteLine(F($"Total added: {plan.TotalCostAdded:0.#} {plan.CostUnit} over {plan.Changes.Count} runs{(plan.TapChanges.Count > 0 ? " and the taps below" : "")}."));
@@ -111,6 +116,8 @@ public static class PlanReport
             NullableString(w, "ground_min_size", c.GroundMinSize);
             NullableString(w, "ground_size", c.GroundSize);
             w.WriteBoolean("ground_must_increase", c.GroundMustIncrease);
+            NullableString(w, "ground_size_after", c.GroundSizeAfter);
+            NullableString(w, "fault_clearing_note", c.FaultClearingNote);
 
             w.WriteNumber("line", c.SizeLocation.Line);
             w.WriteNumber("column", c.SizeLocation.Column);

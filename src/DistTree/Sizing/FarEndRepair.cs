@@ -1,17 +1,23 @@
+using DistTree.Codes;
 using DistTree.Conductors;
+using DistTree.Model;
+using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Sizing;
 
 /// <summary>
 /// Makes a plan clear the far-end fault checks (issue 23): after the optimum on the drop grid, each run whose minimum
-/// far-end fault still does not trip its device without delay takes a larger size of its lines (its grounding conductor
-/// following as the code sizes it: NEC 250.122(B)'s proportion, IEC Table 54.2, or a stated one raised to its minimum):
-/// the first whose resistance falls as much as its own loop must (see <see cref="Next"/>). Round by round, each proved by
-/// solving the tree again, until none is left or no larger size helps; never beyond what its device's terminals accept
-/// (<see cref="TerminalTable"/>), and not at all where the same fault at the run's source end is already too small.
-/// A larger conductor only lowers every loop impedance, so a round never undoes another's work. Greedy, not proven least:
-/// the plan is least on the drop grid, and then the step up that each failing far end needs.
+/// far-end fault still does not trip its device without delay takes the cheaper of two changes that its own loop needs
+/// (see <see cref="ShortBy"/>): where the least fault is the line-to-ground one through a grounding conductor smaller
+/// than the lines, that conductor alone raised (never past the lines' size); or a larger size of its lines (its grounding
+/// conductor following as the code sizes it: NEC 250.122(B)'s proportion, IEC Table 54.2, or a stated one raised to its
+/// minimum). Round by round, each proved by solving the tree again, until none is left or nothing larger helps; never
+/// beyond what its device's terminals accept (<see cref="TerminalTable"/>), and not at all where the same fault at the
+/// run's source end is already too small. A larger conductor only lowers every loop impedance, so a round never undoes
+/// another's work. Greedy, not proven least: the plan is least on the drop grid, and then the step up each failing far
+/// end needs. Each repaired run keeps what it drew before the repair, so that the plan can name the other remedy: a
+/// device that trips lower.
 /// </summary>
 internal static class FarEndRepair
 {
@@ -19,14 +25,16 @@ internal static class FarEndRepair
     private const int MaxRounds = 40;
 
     /// <summary>
-    /// New picks with every failing far end's run raised until it clears (or can go no larger), and their proof; the same
-    /// choices and proof where no far end fails. <paramref name="picks"/> is left as it is; <paramref name="solve"/> solves
-    /// the project with picks applied.
+    /// New picks with every failing far end's run (or its grounding conductor) raised until it clears (or can go no larger),
+    /// their proof, and per repaired node what its far end drew before the repair against its trip current. The same choices
+    /// and proof where no far end fails. <paramref name="picks"/> is left as it is; <paramref name="solve"/> solves the
+    /// project with picks applied.
     /// </summary>
-    public static (PlanPicks Picks, Solution After) Repair(
+    public static (PlanPicks Picks, Solution After, Dictionary<int, (double MinimumA, double TripA)> Short) Repair(
         Solution before, PlanPicks picks, Solution after, ConductorCatalog catalog, Func<PlanPicks, Solution> solve)
     {
-        picks = picks with { Runs = new Dictionary<int, RunOption>(picks.Runs) };
+        picks = picks with { Runs = new Dictionary<int, RunOption>(picks.Runs), Grounds = new Dictionary<int, ConductorSize>(picks.Grounds) };
+        var shortOf = new Dictionary<int, (double, double)>();
         var nodes = before.Network.Nodes;
         var terminals = before.Project.Sizing.TerminalTable ?? TerminalTable.Standard;
         for (var round = 0; round < MaxRounds; round++)
@@ -34,34 +42,58 @@ internal static class FarEndRepair
             var raised = false;
             foreach (var r in after.Runs)
             {
-                if (r.Kind == RunResultKind.Transformer || r.Findings.FirstOrDefault(f => f.Kind == FindingKind.FaultClearing) is not { } finding)
+                if (r.Kind == RunResultKind.Transformer || r.Findings.FirstOrDefault(f => f.Kind == FindingKind.FaultClearing) is not { } finding
+                    || after.Faults.FarEndAt(r.NodeIndex) is not { } far)
                 {
                     continue;
                 }
 
                 var run = nodes[r.NodeIndex].Incoming!;
                 var conductors = run.Conductors;
-                var (size, sets) = picks.Runs.TryGetValue(r.NodeIndex, out var o) ? (o.Size, o.Sets) : (conductors.Size, conductors.Sets);
+                var picked = picks.Runs.TryGetValue(r.NodeIndex, out var o) ? o : (RunOption?)null;
+                var (size, sets) = picked is { } p ? (p.Size, p.Sets) : (conductors.Size, conductors.Sets);
 
-                // No size of this run clears a far end whose source end itself draws less than the trip current; else its own
-                // loop must fall from 1/I_min − 1/I_source to 1/I_trip − 1/I_source (in units of the source voltage).
-                var source = after.Faults.FarEndAt(r.NodeIndex)?.SourceEndA ?? double.PositiveInfinity;
+                // No change of this run clears a far end whose source end itself draws less than the trip current.
                 var (minimum, trip) = (finding.Value, finding.Limit);
-                if (!(source > trip))
+                if (!(far.SourceEndA > trip) || conductors.Fixed)
                 {
-                    continue;
+                    continue; // pinned (fixed: true) or beyond any change of this run: left unresolved
                 }
 
-                var shortBy = ((1 / minimum) - (1 / source)) / ((1 / trip) - (1 / source));
-                if (conductors.Fixed || Next(size, catalog, conductors.Material, shortBy) is not { } next
-                    || (conductors.OcpdA is { } ocpd && !terminals.Accepts(ocpd, next, sets))
-                    || SizingProblem.Cost(conductors, next, sets, run.Supply, before.Project.Sizing) is not { } cost)
+                shortOf.TryAdd(r.NodeIndex, (minimum, trip));
+                var shortBy = ShortBy(minimum, far.SourceEndA, trip);
+                var sizing = before.Project.Sizing;
+                var present = SizingProblem.Cost(conductors, conductors.Size, conductors.Sets, run.Supply, sizing) ?? 0.0;
+                bool Buildable(ConductorSize s) => conductors.OcpdA is not { } ocpd || terminals.Accepts(ocpd, s, sets);
+                RunOption? LinesAt(ConductorSize s) => SizingProblem.Cost(conductors, s, sets, run.Supply, sizing) is { } cost
+                    ? new RunOption(s, sets, r.DropPercent, 0, cost - present, MeetsRunLimits: true)
+                    : null;
+
+                // Line to ground through a grounding conductor smaller than the lines: the cheapest pair of line size and
+                // grounding conductor whose loop falls as it must (the grounding conductor alone, the lines alone with the one
+                // that follows them, or both). Otherwise, or where no pair is enough, the lines alone, as far as they must go.
+                var pair = far.Kind == FaultKind.LineToGround && !far.GroundIsLinesSize
+                    ? CheapestPair(size, far.Ground, shortBy, catalog, conductors.Material, Buildable,
+                        s => s == size && picked is { } p ? p : LinesAt(s), o => GroundFollowing(before, r, run, o), (from, to) => GroundCost(conductors, from, to, sets, sizing))
+                    : null;
+                if (pair is ({ } _, _) or (_, { } _))
                 {
-                    continue; // pinned, the largest size, beyond its device's terminals, or unpriced: left unresolved
+                    var (lines, ground) = pair.Value;
+                    picks.Runs[r.NodeIndex] = lines ?? picked ?? new RunOption(size, sets, r.DropPercent, 0, 0.0, MeetsRunLimits: true);
+                    if (ground is { } g)
+                    {
+                        picks.Grounds[r.NodeIndex] = g;
+                    }
+                }
+                else if (Next(size, catalog, conductors.Material, shortBy) is { } next && Buildable(next) && LinesAt(next) is { } raise)
+                {
+                    picks.Runs[r.NodeIndex] = raise;
+                }
+                else
+                {
+                    continue; // the largest size, beyond its device's terminals, or unpriced: left unresolved
                 }
 
-                var present = SizingProblem.Cost(conductors, conductors.Size, conductors.Sets, run.Supply, before.Project.Sizing) ?? 0.0;
-                picks.Runs[r.NodeIndex] = new RunOption(next, sets, r.DropPercent, 0, cost - present, MeetsRunLimits: true);
                 raised = true;
             }
 
@@ -73,7 +105,76 @@ internal static class FarEndRepair
             after = solve(picks);
         }
 
-        return (picks, after);
+        return (picks, after, shortOf);
+    }
+
+    // The grounding conductor the code makes follow the lines at a new size (a stated one raised to it), or null.
+    private static ConductorSize? GroundFollowing(Solution before, RunResult row, NetworkRun run, RunOption lines)
+    {
+        var least = before.Code.MinimumGroundSize(run.Conductors, lines.Size, lines.Sets, row.DesignCurrentA, before.Project.Rules, row.CurrentCarryingConductors ?? 3, CircuitDuty.Of(run));
+        return run.Conductors.GroundSize is { } stated && (least is null || stated > least) ? stated : least;
+    }
+
+    /// <summary>
+    /// What a grounding conductor raised from <paramref name="from"/> to <paramref name="to"/> adds (one conductor in each of
+    /// <paramref name="sets"/> sets), priced as the lines are (material in mm²·m, or the price table); null where a size is unpriced.
+    /// </summary>
+    internal static double? GroundCost(Run conductors, ConductorSize from, ConductorSize to, int sets, SizingOptions sizing)
+    {
+        if (sizing.Prices.Count == 0)
+        {
+            return (to.AreaMm2 - from.AreaMm2) * conductors.LengthM * sets;
+        }
+
+        return sizing.Prices.TryGetValue(to, out var after) && sizing.Prices.TryGetValue(from, out var was) ? (after - was) * conductors.LengthM * sets : null;
+    }
+
+    // How many times the run's own loop impedance must fall for its far end to draw the trip current: from
+    // 1/I_min − 1/I_source to 1/I_trip − 1/I_source (loop impedances in units of the source voltage; the run's own part is
+    // the far end's loop less the source end's).
+    private static double ShortBy(double minimumA, double sourceEndA, double tripA) =>
+        ((1 / minimumA) - (1 / sourceEndA)) / ((1 / tripA) - (1 / sourceEndA));
+
+    // The cheapest line size (the present one or larger, within the terminals) and grounding conductor (at least the present
+    // one and the one the code makes follow that size, at most that size) whose resistances let the run's line-to-ground
+    // loop (line + grounding conductor, each set alike) fall as it must: R_line + R_ground ≤ (R_line + R_ground now) / short.
+    // The lines' pick is null where they stay as picked; the grounding conductor's where the code's own follows. Null where
+    // no pair is enough. Cost: the lines' added material and the grounding conductor's beyond the one that follows them.
+    private static (RunOption? Lines, ConductorSize? Ground)? CheapestPair(
+        ConductorSize size, ConductorSize ground, double shortBy, ConductorCatalog catalog, Material material, Func<ConductorSize, bool> buildable,
+        Func<ConductorSize, RunOption?> linesAt, Func<RunOption, ConductorSize?> follows, Func<ConductorSize, ConductorSize, double?> groundCost)
+    {
+        double R(ConductorSize s) => catalog.DcResistance20OhmPerKm(s, material);
+        var loop = (R(size) + R(ground)) / Math.Max(shortBy, 1);
+        var present = linesAt(size)?.Cost ?? 0.0;
+        (RunOption? Lines, ConductorSize? Ground)? best = null;
+        var bestCost = double.PositiveInfinity;
+        for (ConductorSize? l = size; l is { } line; l = line.NextLarger)
+        {
+            if (!catalog.Contains(line) || (line != size && !buildable(line)) || linesAt(line) is not { } option)
+            {
+                continue;
+            }
+
+            var least = follows(option) is { } f && f > ground ? f : ground;
+            for (ConductorSize? g = least; g is { } candidate && candidate <= line; g = candidate.NextLarger)
+            {
+                if (!catalog.Contains(candidate) || R(line) + R(candidate) > loop || groundCost(least, candidate) is not { } extra)
+                {
+                    continue;
+                }
+
+                var cost = option.Cost - present + extra;
+                if (cost < bestCost - 1e-9)
+                {
+                    (best, bestCost) = ((line == size ? null : option, candidate == least && least == follows(option) ? null : candidate), cost);
+                }
+
+                break; // a larger grounding conductor with this line size costs more
+            }
+        }
+
+        return best;
     }
 
     // The next larger size of the same series that the catalogue holds whose resistance is at most 1/short of the present

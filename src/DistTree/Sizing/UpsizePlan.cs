@@ -30,7 +30,11 @@ public sealed record UpsizeChange
     /// <summary>The run's drop after, percent.</summary>
     public required double DropPercentAfter { get; init; }
 
-    /// <summary>Conductor material added: Δ(area × length × current-carrying conductors × sets), in mm²·m (or the price table's unit).</summary>
+    /// <summary>
+    /// Conductor material added: Δ(area × length × current-carrying conductors × sets), in mm²·m (or the price table's unit),
+    /// and a grounding conductor the plan names (<see cref="GroundSizeAfter"/> beyond what the code makes follow the lines):
+    /// Δ(area × length × sets).
+    /// </summary>
     public required double CostAdded { get; init; }
 
     /// <summary>
@@ -47,6 +51,22 @@ public sealed record UpsizeChange
 
     /// <summary>True when the stated grounding conductor is smaller than the new size needs: it must be increased too.</summary>
     public bool GroundMustIncrease { get; init; }
+
+    /// <summary>
+    /// The grounding conductor the plan writes on the run (<c>ground_size</c>, each set), or null where it writes none: the
+    /// stated one raised to the new size's minimum, or one raised beyond the code's minimum so that a fault at the far end
+    /// trips the device (<see cref="FaultClearingNote"/>).
+    /// </summary>
+    public string? GroundSizeAfter { get; init; }
+
+    /// <summary>
+    /// Where the change goes beyond what the drops need so that a fault at the run's far end trips its device without delay:
+    /// what was changed, what the far end drew against the trip current, and the device that would clear it instead.
+    /// </summary>
+    public string? FaultClearingNote { get; init; }
+
+    /// <summary>The node the run feeds, in the tree the plan was made on.</summary>
+    internal int NodeIndex { get; init; }
 
     /// <summary>Where the run's size value is in the project file.</summary>
     public SourceLocation SizeLocation { get; init; } = SourceLocation.None;

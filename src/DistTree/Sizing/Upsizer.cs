@@ -2,6 +2,7 @@ using DistTree.Codes;
 using DistTree.Conductors;
 using DistTree.Diagnostics;
 using DistTree.Model;
+using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Sizing;
@@ -59,13 +60,13 @@ public sealed class Upsizer
         // The far ends the optimum leaves too small to trip their devices, raised; then every other change the design does
         // not need undone (a far end's repair was needed when it was made: it is not tried again).
         var optimum = picks.Runs;
-        (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
+        (picks, after, var shortOf) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);
         var screen = new UndoScreen(problem, picks.Runs);
         (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), screen.MayPass, Solve);
-        var repairCost = picks.Runs.Where(p => repairedRuns.Contains(p.Key)).Sum(p => p.Value.Cost - (optimum.TryGetValue(p.Key, out var was) ? was.Cost : 0));
-        var changes = Changes(before, after, picks.Runs);
+        var changes = Changes(before, after, picks, shortOf);
+        var repairCost = changes.Where(c => repairedRuns.Contains(c.NodeIndex)).Sum(c => c.CostAdded - (optimum.TryGetValue(c.NodeIndex, out var was) ? was.Cost : 0));
         var taps = TapChanges(before, after, picks.Taps);
         unresolvable.AddRange(GroundsLeft(after, changes));
         unresolvable.AddRange(FaultsLeft(after));
@@ -211,21 +212,27 @@ public sealed class Upsizer
         }
     }
 
-    private static List<UpsizeChange> Changes(Solution before, Solution after, Dictionary<int, RunOption> picks)
+    private static List<UpsizeChange> Changes(Solution before, Solution after, PlanPicks picks, Dictionary<int, (double MinimumA, double TripA)> shortOf)
     {
         var beforeRows = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
         var afterRows = after.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
         var changes = new List<UpsizeChange>();
-        foreach (var index in picks.Keys.Order())
+        foreach (var index in picks.Runs.Keys.Order())
         {
-            var option = picks[index];
+            var option = picks.Runs[index];
             var run = before.Network.Nodes[index].Incoming!;
             var was = beforeRows[index];
             var least = afterRows[index].GroundMinimum;
             var stated = run.Conductors.GroundSize;
             var increase = stated is { } g && least is { } l && g < l;
+
+            // A grounding conductor the repair names is written and priced beyond what the code makes follow the lines.
+            var named = picks.Grounds.TryGetValue(index, out var pickedGround) && (least is null || pickedGround > least) && (stated is null || pickedGround > stated) ? pickedGround : (ConductorSize?)null;
+            var follows = increase ? least : stated ?? least;
+            var groundCost = named is { } n && follows is { } f ? FarEndRepair.GroundCost(run.Conductors, f, n, option.Sets, before.Project.Sizing) ?? 0.0 : 0.0;
             changes.Add(new UpsizeChange
             {
+                NodeIndex = index,
                 RunId = was.Id,
                 Kind = was.Kind,
                 SizeBefore = run.Conductors.Size.Text,
@@ -234,11 +241,13 @@ public sealed class Upsizer
                 SetsAfter = option.Sets,
                 DropPercentBefore = was.DropPercent,
                 DropPercentAfter = afterRows[index].DropPercent,
-                CostAdded = option.Cost,
-                GroundingNote = GroundingNote(before.Code, run.Conductors.OcpdA is not null, option.Sets, least, stated, increase),
+                CostAdded = option.Cost + groundCost,
+                GroundingNote = GroundingNote(before.Code, run.Conductors.OcpdA is not null, option.Sets, least, stated, increase, named),
                 GroundMinSize = least?.Text,
                 GroundSize = stated?.Text,
                 GroundMustIncrease = increase,
+                GroundSizeAfter = (named ?? (increase ? least : null))?.Text,
+                FaultClearingNote = shortOf.TryGetValue(index, out var s) ? FaultClearingNote(run, option, s.MinimumA, s.TripA, named) : null,
                 SizeLocation = run.Conductors.SizeLocation,
             });
         }
@@ -248,9 +257,17 @@ public sealed class Upsizer
 
     // What the new size needs of the grounding conductor, with the clause the code in force cites: none without a device,
     // nor where the rule set does not hold the code's table (the CEC's Table 16).
-    private static string GroundingNote(CodeRules code, bool hasDevice, int sets, ConductorSize? least, ConductorSize? stated, bool increase)
+    private static string GroundingNote(CodeRules code, bool hasDevice, int sets, ConductorSize? least, ConductorSize? stated, bool increase, ConductorSize? named)
     {
         var clause = code.Cite(CodeCheck.GroundingConductor);
+        var each = sets > 1 ? " in each set" : "";
+        if (named is { } raised)
+        {
+            var codeLeast = least is { } m ? $"the code's minimum is {m.Text} ({clause})" : $"the code gives no minimum here ({clause})";
+            var replaces = stated is { } s ? $"; it replaces the stated {s.Text}" : "";
+            return $"{raised.Text}{each}, larger than it need be for the code alone, so that a fault at the far end trips the device ({code.Cite(CodeCheck.FaultClearing)}); {codeLeast}{replaces}";
+        }
+
         if (least is not { } minimum)
         {
             return hasDevice
@@ -258,10 +275,24 @@ public sealed class Upsizer
                 : $"no minimum without an overcurrent device ({clause})";
         }
 
-        var each = sets > 1 ? " in each set" : "";
         return increase
             ? $"at least {minimum.Text}{each} ({clause}); the stated {stated!.Value.Text} is too small and must be increased too"
             : $"at least {minimum.Text}{each} ({clause})";
+    }
+
+    // Why a run was raised beyond what its drops need, and the other remedy: a device that trips without delay at a lower current.
+    private static string FaultClearingNote(NetworkRun run, RunOption option, double minimumA, double tripA, ConductorSize? ground)
+    {
+        var lines = $"{(option.Sets > 1 ? $"{option.Sets}×" : "")}{option.Size.Text}";
+        var raised = option.Size != run.Conductors.Size || option.Sets != run.Conductors.Sets;
+        var what = (ground, raised) switch
+        {
+            ({ } g, true) => $"raised to {lines} with a {g.Text} grounding conductor",
+            ({ } g, false) => $"its grounding conductor alone raised to {g.Text}",
+            _ => $"raised to {lines}",
+        };
+        return FormattableString.Invariant(
+            $"{what} so that a fault at its far end trips its device without delay: it drew {minimumA:0} A against the {tripA:0} A trip; a device that trips without delay at or below {minimumA:0} A{(run.Conductors.OcpdA is { } a ? $" ({minimumA / a:0.#} × {a:0.#} A)" : "")} would clear it without the raise for the fault");
     }
 
     // The runs the plan leaves alone whose stated grounding conductor is below its minimum: no line size fixes that.

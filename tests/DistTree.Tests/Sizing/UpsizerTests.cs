@@ -23,8 +23,11 @@ public sealed class UpsizerTests
         Assert.Equal(["HG", "LP4/32"], plan.Unresolvable.Select(u => u.Subject).Distinct().Order(StringComparer.Ordinal));
         Assert.All(["HG", "LP4/32"], id => Assert.Contains(plan.Unresolvable, u => u.Subject == id && u.Message.Contains("beyond the terminal limit of its", StringComparison.Ordinal)));
 
-        // HG held to 4 AWG by its terminals also leaves its far end too small to trip its 50 A breaker, and says so.
-        Assert.Contains(plan.Unresolvable, u => u.Subject == "HG" && u.Message.Contains("no allowed size clears it", StringComparison.Ordinal));
+        // HG held to 4 AWG by its terminals would leave its far end too small to trip its 50 A breaker through the 6 AWG
+        // grounding conductor that follows; a 4 AWG grounding conductor clears it, and the plan names it.
+        var hg = Assert.Single(plan.Changes, c => c.RunId == "HG");
+        Assert.Equal(("4 AWG", "4 AWG"), (hg.SizeAfter, hg.GroundSizeAfter));
+        Assert.DoesNotContain(plan.After.AllFindings, f => f.Kind == FindingKind.FaultClearing);
         Assert.All(plan.After.AllFindings, f => Assert.Contains(f.Subject, plan.Unresolvable.Select(u => u.Subject)));
         Assert.NotEmpty(plan.Changes);
         Assert.All(plan.Changes, c => Assert.True(ConductorSize.Parse(c.SizeAfter) >= ConductorSize.Parse(c.SizeBefore) && c.SetsAfter >= c.SetsBefore));

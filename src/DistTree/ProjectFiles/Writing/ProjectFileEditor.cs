@@ -10,8 +10,8 @@ namespace DistTree.ProjectFiles.Writing;
 /// <summary>
 /// Applies an upsize plan to one project file, editing only the values that change: each changed run's
 /// <c>size</c> scalar in place, in the form it is written in (plain, single- or double-quoted, after a tag),
-/// its <c>sets</c> value (replaced where written, else added right after the size), and its stated
-/// <c>ground_size</c> where the new size needs a larger one (<see cref="UpsizeChange.GroundMustIncrease"/>). Every other byte stays
+/// its <c>sets</c> value (replaced where written, else added right after the size), and its <c>ground_size</c> where
+/// the plan names one (<see cref="UpsizeChange.GroundSizeAfter"/>: replaced where written, else added after the size). Every other byte stays
 /// as it was: comments, key order, line endings (LF, CR LF or CR, mixed as they are), characters such as NEL
 /// inside a value, and a UTF-8 byte-order mark. The file is read as the loader reads it, so each size is found
 /// as the loader found it; a size the editor cannot rewrite (a block scalar, a value over several lines) is a
@@ -100,36 +100,51 @@ public static partial class ProjectFileEditor
         }
 
         edits.Add(new Edit(size.Start, size.End - size.Start, size.Quote + change.SizeAfter + size.Quote));
-        if (change is { GroundMustIncrease: true, GroundMinSize: { } least } && entry.Mapping.Entries.Find(e => e.Key.Value == GroundKey).Value is SourceScalar ground)
+        var added = new List<(string Key, string Value)>();
+        if (change.SetsAfter != change.SetsBefore)
         {
-            // The loader read the stated size from this mapping, so it is here; only its value changes.
-            var span = ScalarSpan(text, lines, ground, change, GroundKey);
-            edits.Add(new Edit(span.Start, span.End - span.Start, span.Quote + least + span.Quote));
+            SetOrAdd(text, lines, change, entry, SetsKey, Number(change.SetsAfter), edits, added);
         }
 
-        if (change.SetsAfter == change.SetsBefore)
+        if (change.GroundSizeAfter is { } ground)
+        {
+            SetOrAdd(text, lines, change, entry, GroundKey, ground, edits, added);
+        }
+
+        if (added.Count == 0)
         {
             return;
         }
 
-        var sets = entry.Mapping.Entries.Find(e => e.Key.Value == SetsKey);
-        if (sets.Value is SourceScalar written)
+        if (text[Position(lines, entry.Mapping.Line, entry.Mapping.Column)] == '{')
         {
-            var span = ScalarSpan(text, lines, written, change, SetsKey);
-            edits.Add(new Edit(span.Start, span.End - span.Start, span.Quote + Number(change.SetsAfter) + span.Quote));
+            edits.Add(new Edit(size.End, 0, string.Concat(added.Select(a => $", {a.Key}: {a.Value}"))));
+            return;
         }
-        else if (text[Position(lines, entry.Mapping.Line, entry.Mapping.Column)] == '{')
+
+        // A block mapping: a line of its own for each, after the size's line, at the size key's indentation, ended as that line is.
+        var next = entry.Value.Line < lines.Count ? lines[entry.Value.Line] : text.Length;
+        var end = LineContentEnd(text, lines[entry.Value.Line - 1]);
+        var lineBreak = end < next ? text[end..next] : FirstLineBreak(text);
+        var indent = new string(' ', entry.Key.Column - 1);
+        var written = added.Select(a => $"{indent}{a.Key}: {a.Value}");
+        edits.Add(end < next
+            ? new Edit(next, 0, string.Concat(written.Select(w => w + lineBreak)))
+            : new Edit(next, 0, string.Concat(written.Select(w => lineBreak + w))));
+    }
+
+    // The value of key in the run's mapping replaced in place where written (the loader read it there); else the key is
+    // left to be added after the size.
+    private static void SetOrAdd(string text, List<int> lines, UpsizeChange change, SizeEntry entry, string key, string value, List<Edit> edits, List<(string, string)> added)
+    {
+        if (entry.Mapping.Entries.Find(e => e.Key.Value == key).Value is SourceScalar written)
         {
-            edits.Add(new Edit(size.End, 0, $", {SetsKey}: {Number(change.SetsAfter)}"));
+            var span = ScalarSpan(text, lines, written, change, key);
+            edits.Add(new Edit(span.Start, span.End - span.Start, span.Quote + value + span.Quote));
         }
         else
         {
-            // A block mapping: a line of its own after the size's line, at the size key's indentation, ended as that line is.
-            var next = entry.Value.Line < lines.Count ? lines[entry.Value.Line] : text.Length;
-            var end = LineContentEnd(text, lines[entry.Value.Line - 1]);
-            var lineBreak = end < next ? text[end..next] : FirstLineBreak(text);
-            var added = new string(' ', entry.Key.Column - 1) + $"{SetsKey}: {Number(change.SetsAfter)}";
-            edits.Add(end < next ? new Edit(next, 0, added + lineBreak) : new Edit(next, 0, lineBreak + added));
+            added.Add((key, value));
         }
     }
 

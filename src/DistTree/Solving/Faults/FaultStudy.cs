@@ -101,6 +101,12 @@ public readonly record struct FarEndFault
     /// <summary>The grounding conductor the line-to-ground loop returns through, each set.</summary>
     public string GroundSize => _ground.Text;
 
+    /// <summary>That conductor's size.</summary>
+    internal ConductorSize Ground => _ground;
+
+    /// <summary>True where that conductor is the lines' size for want of a stated one or a table (raising it alone means nothing).</summary>
+    internal bool GroundIsLinesSize => _groundBasis == 2;
+
     /// <summary>Whether that conductor is <c>stated</c>, the code's minimum, or the lines' size where neither is known.</summary>
     public string GroundBasis => GroundBases[_groundBasis];
 

@@ -20,8 +20,8 @@ public sealed class UpsizeCommandTests
             Assert.Equal(before, File.ReadAllBytes(Demo));
             var check = CliRunner.Run("check", output);
             Assert.Equal(1, check.ExitCode);
-            // HG's drop and far end, LP4/32's drop, and LP4/32's total: the plan's tap on T4 is not written (set by hand).
-            Assert.Contains(", 4 findings,", check.Out, StringComparison.Ordinal);
+            // HG's drop, LP4/32's drop, and LP4/32's total: the plan's tap on T4 is not written (set by hand).
+            Assert.Contains(", 3 findings,", check.Out, StringComparison.Ordinal);
             var old = File.ReadAllLines(Demo);
             var @new = File.ReadAllLines(output);
             Assert.Equal(old.Length, @new.Length);
@@ -49,6 +49,39 @@ public sealed class UpsizeCommandTests
         Assert.Equal(File.ReadAllBytes(project), File.ReadAllBytes(folder.File("fixed.yaml")));
     }
 
+    // A grounding conductor raised alone for the far-end fault is written as the run's ground_size, on the size's line, and
+    // the copy then checks clean; the JSON names it and why.
+    [Fact]
+    public void Upsize_ApplyAGroundRaise_WritesGroundSizeAndTheCopyPasses()
+    {
+        using var folder = new TempFolder();
+        var project = folder.File("ground.yaml");
+        File.WriteAllText(project, """
+            disttree: 1
+            project: { name: Far end, units: imperial }
+            service: { id: SVC, system: 208Y/120, available_fault_current_ka: 10, fault_x_r: 4 }
+            equipment:
+              - id: P
+                kind: panelboard
+                from: SVC
+                feeder: { length: 220, size: 1/0 AWG, ocpd: 150 }
+                circuits:
+                  - { id: "1", poles: 3, ocpd: 100, load: { amps: 80 }, run: { length: 10, size: 3 AWG } }
+            """);
+        var result = CliRunner.Run("upsize", project, "--apply", folder.File("fixed.yaml"), "--json", folder.File("plan.json"));
+        Assert.Equal(0, result.ExitCode);
+        using var doc = JsonDocument.Parse(File.ReadAllText(folder.File("plan.json")));
+        var change = Assert.Single(doc.RootElement.GetProperty("upsize_plan").GetProperty("changes").EnumerateArray());
+        var ground = change.GetProperty("ground_size_after").GetString()!;
+        Assert.StartsWith("its grounding conductor alone raised to " + ground, change.GetProperty("fault_clearing_note").GetString(), StringComparison.Ordinal);
+
+        var old = File.ReadAllLines(project);
+        var @new = File.ReadAllLines(folder.File("fixed.yaml"));
+        var changed = Assert.Single(old.Zip(@new), p => p.First != p.Second);
+        Assert.Equal(changed.First.Replace("ocpd: 150", $"ground_size: {ground}, ocpd: 150", StringComparison.Ordinal), changed.Second);
+        Assert.Equal(0, CliRunner.Run("check", folder.File("fixed.yaml")).ExitCode);
+    }
+
     [Fact]
     public void Upsize_Json_HasThePlan()
     {
@@ -56,7 +89,7 @@ public sealed class UpsizeCommandTests
         using var doc = JsonDocument.Parse(result.Out);
         var plan = doc.RootElement.GetProperty("upsize_plan");
         Assert.True(plan.GetProperty("changes").GetArrayLength() > 0);
-        Assert.Equal(3, plan.GetProperty("findings_after").GetInt32());
+        Assert.Equal(2, plan.GetProperty("findings_after").GetInt32());
 
         // The demo's feeder HG states a 10 AWG grounding conductor on 8 AWG lines under 50 A; its own limit would take 2 AWG,
         // beyond the 4 AWG a 50 A device's terminals take (terminal-limits.tsv, recalled), so the plan takes it to 4 AWG and
@@ -65,7 +98,10 @@ public sealed class UpsizeCommandTests
         var hg = plan.GetProperty("changes").EnumerateArray().Single(c => c.GetProperty("run").GetString() == "HG");
         Assert.Equal("4 AWG", hg.GetProperty("size_after").GetString());
         Assert.Equal(("6 AWG", "10 AWG", true), (hg.GetProperty("ground_min_size").GetString(), hg.GetProperty("ground_size").GetString(), hg.GetProperty("ground_must_increase").GetBoolean()));
-        Assert.Equal("at least 6 AWG (NEC 250.122); the stated 10 AWG is too small and must be increased too", hg.GetProperty("grounding_note").GetString());
+        // At 4 AWG its far end's line-to-ground fault through 6 AWG would not trip the 50 A breaker at 10 × (common practice):
+        // the plan names a 4 AWG grounding conductor in place of the stated 10 AWG.
+        Assert.Equal("4 AWG", hg.GetProperty("ground_size_after").GetString());
+        Assert.Equal("4 AWG, larger than it need be for the code alone, so that a fault at the far end trips the device (NEC 250.4(A)(5)); the code's minimum is 6 AWG (NEC 250.122); it replaces the stated 10 AWG", hg.GetProperty("grounding_note").GetString());
         var left = plan.GetProperty("unresolvable").EnumerateArray().First(u => u.GetProperty("subject").GetString() == "HG");
         Assert.Contains("beyond the terminal limit of its 50 A device (1×4 AWG", left.GetProperty("message").GetString(), StringComparison.Ordinal);
         // T4's most raising tap (−5 %, free) lets LP4/32 take 10 AWG for its total in place of more copper.
@@ -88,10 +124,11 @@ public sealed class UpsizeCommandTests
     [Fact]
     public void Upsize_ApplyOntoTheInput_IsRefused() => Assert.Equal(2, CliRunner.Run("upsize", Demo, "--apply", Demo).ExitCode);
 
-    // The line without the values of its 'size' and 'ground_size' (a stated grounding conductor the new size makes too
-    // small is raised with it).
+    // The line without the values of its 'size', and without its 'ground_size' entry (a stated grounding conductor the new size
+    // makes too small is raised with it; one the far-end fault needs is written where none was).
     private static string WithoutSizes(string line)
     {
+        line = System.Text.RegularExpressions.Regex.Replace(line, ", ground_size: [^,}]*", "");
         for (var at = line.IndexOf("size: ", StringComparison.Ordinal); at >= 0; at = line.IndexOf("size: ", at + 6, StringComparison.Ordinal))
         {
             var end = line.IndexOfAny([',', '}'], at + 6);

@@ -83,6 +83,24 @@ public sealed class ProjectFileEditorTests
         Assert.Equal("x:\n    feeder:\n      length: 40   # measured\n      size: \"1/0 AWG\"\n      sets: 2\n    demand_factor: 1\n", edited);
     }
 
+    // A grounding conductor the plan names (the far-end repair) is written where the run states one, else added after the
+    // size: in a flow mapping as an entry, in a block mapping as a line of its own below a sets line the change adds too.
+    [Fact]
+    public void Apply_GroundSizeAfter_ReplacedWhereWrittenElseAddedAfterTheSize()
+    {
+        var text = "f: { length: 220, size: 1/0 AWG, ocpd: 150 }\n";
+        var change = Change(text, "1/0", "1/0 AWG", "1/0 AWG") with { GroundSizeAfter = "1 AWG" };
+        Assert.Equal("f: { length: 220, size: 1/0 AWG, ground_size: 1 AWG, ocpd: 150 }\n", ProjectFileEditor.Apply(text, File, [change]));
+
+        text = "f: { size: 1/0 AWG, ground_size: '6 AWG' }\n";
+        change = Change(text, "1/0", "1/0 AWG", "2/0 AWG") with { GroundSizeAfter = "2/0 AWG" };
+        Assert.Equal("f: { size: 2/0 AWG, ground_size: '2/0 AWG' }\n", ProjectFileEditor.Apply(text, File, [change]));
+
+        text = "x:\r\n  feeder:\r\n    size: 250 kcmil # long\r\n    ocpd: 400\r\n";
+        change = Change(text, "250", "250 kcmil", "250 kcmil", 1, 2) with { GroundSizeAfter = "1/0 AWG" };
+        Assert.Equal("x:\r\n  feeder:\r\n    size: 250 kcmil # long\r\n    sets: 2\r\n    ground_size: 1/0 AWG\r\n    ocpd: 400\r\n", ProjectFileEditor.Apply(text, File, [change]));
+    }
+
     [Fact]
     public void Apply_SequenceItemMapping_AddsSetsAtTheKeysColumn()
     {
