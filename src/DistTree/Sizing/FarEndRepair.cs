@@ -21,6 +21,15 @@ namespace DistTree.Sizing;
 /// </summary>
 internal static class FarEndRepair
 {
+    /// <summary>What a repaired run's far end drew before the repair against the trip current asked of it, and the run whose device asks it (null: its own).</summary>
+    public readonly record struct ShortFall(double MinimumA, double TripA, string? ForRun);
+
+    // A run's far end and what it must draw.
+    private readonly record struct Need(FarEndFault Far, ShortFall Fall)
+    {
+        public double ShortBy => FarEndRepair.ShortBy(Fall.MinimumA, Far.SourceEndA, Fall.TripA);
+    }
+
     // Rounds at most: each takes every failing run at least one size up; the catalogue has about 40 sizes.
     private const int MaxRounds = 40;
 
@@ -30,38 +39,30 @@ internal static class FarEndRepair
     /// and proof where no far end fails. <paramref name="picks"/> is left as it is; <paramref name="solve"/> solves the
     /// project with picks applied.
     /// </summary>
-    public static (PlanPicks Picks, Solution After, Dictionary<int, (double MinimumA, double TripA)> Short) Repair(
+    public static (PlanPicks Picks, Solution After, Dictionary<int, ShortFall> Short) Repair(
         Solution before, PlanPicks picks, Solution after, ConductorCatalog catalog, Func<PlanPicks, Solution> solve)
     {
         picks = picks with { Runs = new Dictionary<int, RunOption>(picks.Runs), Grounds = new Dictionary<int, ConductorSize>(picks.Grounds) };
-        var shortOf = new Dictionary<int, (double, double)>();
+        var shortOf = new Dictionary<int, ShortFall>();
         var nodes = before.Network.Nodes;
         var terminals = before.Project.Sizing.TerminalTable ?? TerminalTable.Standard;
         for (var round = 0; round < MaxRounds; round++)
         {
             var raised = false;
-            foreach (var r in after.Runs)
+            foreach (var (node, need) in Needs(after, nodes))
             {
-                if (r.Kind == RunResultKind.Transformer || r.Findings.FirstOrDefault(f => f.Kind == FindingKind.FaultClearing) is not { } finding
-                    || after.Faults.FarEndAt(r.NodeIndex) is not { } far)
-                {
-                    continue;
-                }
-
-                var run = nodes[r.NodeIndex].Incoming!;
+                var r = after.IncomingRun(node)!.Value;
+                var run = nodes[node].Incoming!;
                 var conductors = run.Conductors;
-                var picked = picks.Runs.TryGetValue(r.NodeIndex, out var o) ? o : (RunOption?)null;
+                var picked = picks.Runs.TryGetValue(node, out var o) ? o : (RunOption?)null;
                 var (size, sets) = picked is { } p ? (p.Size, p.Sets) : (conductors.Size, conductors.Sets);
-
-                // No change of this run clears a far end whose source end itself draws less than the trip current.
-                var (minimum, trip) = (finding.Value, finding.Limit);
-                if (!(far.SourceEndA > trip) || conductors.Fixed)
+                if (conductors.Fixed)
                 {
-                    continue; // pinned (fixed: true) or beyond any change of this run: left unresolved
+                    continue; // pinned (fixed: true): left unresolved
                 }
 
-                shortOf.TryAdd(r.NodeIndex, (minimum, trip));
-                var shortBy = ShortBy(minimum, far.SourceEndA, trip);
+                shortOf.TryAdd(node, need.Fall);
+                var (far, shortBy) = (need.Far, ShortBy(need.Fall.MinimumA, need.Far.SourceEndA, need.Fall.TripA));
                 var sizing = before.Project.Sizing;
                 var present = SizingProblem.Cost(conductors, conductors.Size, conductors.Sets, run.Supply, sizing) ?? 0.0;
                 bool Buildable(ConductorSize s) => conductors.OcpdA is not { } ocpd || terminals.Accepts(ocpd, s, sets);
@@ -74,20 +75,20 @@ internal static class FarEndRepair
                 // that follows them, or both). Otherwise, or where no pair is enough, the lines alone, as far as they must go.
                 var pair = far.Kind == FaultKind.LineToGround && !far.GroundIsLinesSize
                     ? CheapestPair(size, far.Ground, shortBy, catalog, conductors.Material, Buildable,
-                        s => s == size && picked is { } p ? p : LinesAt(s), o => GroundFollowing(before, r, run, o), (from, to) => GroundCost(conductors, from, to, sets, sizing))
+                        s => s == size && picked is { } q ? q : LinesAt(s), o => GroundFollowing(before, r, run, o), (from, to) => GroundCost(conductors, from, to, sets, sizing))
                     : null;
                 if (pair is ({ } _, _) or (_, { } _))
                 {
                     var (lines, ground) = pair.Value;
-                    picks.Runs[r.NodeIndex] = lines ?? picked ?? new RunOption(size, sets, r.DropPercent, 0, 0.0, MeetsRunLimits: true);
+                    picks.Runs[node] = lines ?? picked ?? new RunOption(size, sets, r.DropPercent, 0, 0.0, MeetsRunLimits: true);
                     if (ground is { } g)
                     {
-                        picks.Grounds[r.NodeIndex] = g;
+                        picks.Grounds[node] = g;
                     }
                 }
                 else if (Next(size, catalog, conductors.Material, shortBy) is { } next && Buildable(next) && LinesAt(next) is { } raise)
                 {
-                    picks.Runs[r.NodeIndex] = raise;
+                    picks.Runs[node] = raise;
                 }
                 else
                 {
@@ -106,6 +107,53 @@ internal static class FarEndRepair
         }
 
         return (picks, after, shortOf);
+    }
+
+    // Per run to raise, what its far end must draw: a run whose far-end fault does not trip its own device, where the same
+    // fault at its source end does; else the nearest run above it (no transformer between) whose far end, the bus that
+    // source end is on, can be raised to the trip current: the most any run's device asks of it. In node order.
+    private static SortedDictionary<int, Need> Needs(Solution after, IReadOnlyList<NetworkNode> nodes)
+    {
+        var needs = new SortedDictionary<int, Need>();
+        void Add(int node, Need need)
+        {
+            if (!needs.TryGetValue(node, out var had) || need.ShortBy > had.ShortBy)
+            {
+                needs[node] = need;
+            }
+        }
+
+        foreach (var r in after.Runs)
+        {
+            if (r.Kind == RunResultKind.Transformer || r.Findings.FirstOrDefault(f => f.Kind == FindingKind.FaultClearing) is not { } finding
+                || after.Faults.FarEndAt(r.NodeIndex) is not { } far)
+            {
+                continue;
+            }
+
+            var trip = finding.Limit;
+            if (far.SourceEndA > trip)
+            {
+                Add(r.NodeIndex, new Need(far, new ShortFall(finding.Value, trip, null)));
+                continue;
+            }
+
+            // The source end is the far end of the run above: that run must bring its bus up to the trip current. Directly
+            // above, the same fault's current there is known exactly (this run's source end); further up, the least fault.
+            var minimum = far.SourceEndA;
+            for (var n = nodes[r.NodeIndex].ParentIndex; n > 0 && nodes[n].Kind != NodeKind.Transformer && after.Faults.FarEndAt(n) is { } above; n = nodes[n].ParentIndex)
+            {
+                if (above.SourceEndA > trip)
+                {
+                    Add(n, new Need(above, new ShortFall(Math.Min(minimum, above.MinimumCurrentA), trip, r.Id)));
+                    break;
+                }
+
+                minimum = above.SourceEndA;
+            }
+        }
+
+        return needs;
     }
 
     // The grounding conductor the code makes follow the lines at a new size (a stated one raised to it), or null.

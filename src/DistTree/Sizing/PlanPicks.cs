@@ -1,5 +1,5 @@
-using DistTree.Conductors;
 using DistTree.Codes;
+using DistTree.Conductors;
 using DistTree.Model;
 using DistTree.Solving;
 

@@ -212,7 +212,7 @@ public sealed class Upsizer
         }
     }
 
-    private static List<UpsizeChange> Changes(Solution before, Solution after, PlanPicks picks, Dictionary<int, (double MinimumA, double TripA)> shortOf)
+    private static List<UpsizeChange> Changes(Solution before, Solution after, PlanPicks picks, Dictionary<int, FarEndRepair.ShortFall> shortOf)
     {
         var beforeRows = before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
         var afterRows = after.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.NodeIndex);
@@ -247,7 +247,7 @@ public sealed class Upsizer
                 GroundSize = stated?.Text,
                 GroundMustIncrease = increase,
                 GroundSizeAfter = (named ?? (increase ? least : null))?.Text,
-                FaultClearingNote = shortOf.TryGetValue(index, out var s) ? FaultClearingNote(run, option, s.MinimumA, s.TripA, named) : null,
+                FaultClearingNote = shortOf.TryGetValue(index, out var s) ? FaultClearingNote(run, option, s, named) : null,
                 SizeLocation = run.Conductors.SizeLocation,
             });
         }
@@ -281,8 +281,9 @@ public sealed class Upsizer
     }
 
     // Why a run was raised beyond what its drops need, and the other remedy: a device that trips without delay at a lower current.
-    private static string FaultClearingNote(NetworkRun run, RunOption option, double minimumA, double tripA, ConductorSize? ground)
+    private static string FaultClearingNote(NetworkRun run, RunOption option, FarEndRepair.ShortFall fall, ConductorSize? ground)
     {
+        var (minimumA, tripA) = (fall.MinimumA, fall.TripA);
         var lines = $"{(option.Sets > 1 ? $"{option.Sets}×" : "")}{option.Size.Text}";
         var raised = option.Size != run.Conductors.Size || option.Sets != run.Conductors.Sets;
         var what = (ground, raised) switch
@@ -291,6 +292,12 @@ public sealed class Upsizer
             ({ } g, false) => $"its grounding conductor alone raised to {g.Text}",
             _ => $"raised to {lines}",
         };
+        if (fall.ForRun is { } below)
+        {
+            return FormattableString.Invariant(
+                $"{what} so that a fault at the source end of {below}, on its far end's bus, trips {below}'s device without delay: it drew {minimumA:0} A against the {tripA:0} A trip; a device on {below} that trips without delay at or below {minimumA:0} A would clear it without the raise for the fault");
+        }
+
         return FormattableString.Invariant(
             $"{what} so that a fault at its far end trips its device without delay: it drew {minimumA:0} A against the {tripA:0} A trip; a device that trips without delay at or below {minimumA:0} A{(run.Conductors.OcpdA is { } a ? $" ({minimumA / a:0.#} × {a:0.#} A)" : "")} would clear it without the raise for the fault");
     }
@@ -310,7 +317,7 @@ public sealed class Upsizer
         .Where(f => f.Kind is FindingKind.InterruptingRating or FindingKind.FaultClearing)
         .Select(f => new UnresolvableLimit(f.Subject, f.Kind == FindingKind.InterruptingRating
             ? $"{f.Message}: conductor sizes cannot fix this; it needs equipment of a higher rating"
-            : $"{f.Message}: no allowed size clears it (the lines go no larger within their device's terminals or the catalogue); a larger grounding conductor, a shorter run, or a device that trips lower would"));
+            : FormattableString.Invariant($"{f.Message}: no allowed size of its lines or grounding conductor clears it (pinned, no larger within its device's terminals or the catalogue, or the fault at its source end already too small); a shorter run, or a device that trips without delay at or below {f.Value:0} A, would")));
 
     // A plan, what it reports as unfixable, and its proof.
     private sealed record Attempted(PlanPicks Picks, List<UnresolvableLimit> Unresolvable, Solution After, SizingProblem Problem);

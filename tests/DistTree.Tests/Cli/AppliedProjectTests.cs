@@ -114,9 +114,10 @@ public sealed class AppliedProjectTests
             .Replace(forms[1], forms[1].Replace("'12 AWG'", "'6 AWG'", StringComparison.Ordinal), StringComparison.Ordinal)
             .Replace("run: { length: 250, size: 8 AWG, raceway: pvc }", "run: { length: 250, size: 4 AWG, raceway: pvc }", StringComparison.Ordinal)
 
-            // The far ends too small to trip their devices (issue 23), each raised a size.
+            // The far ends too small to trip their devices (issue 23): a branch circuit raised a size; a feeder's grounding
+            // conductor alone raised (written where none was), cheaper than its lines a size up.
             .Replace("run: { length: 600, size: 10 AWG, raceway: pvc }", "run: { length: 600, size: 8 AWG, raceway: pvc }", StringComparison.Ordinal)
-            .Replace("feeder: { length: 110, size: 3 AWG, ocpd: 100 }", "feeder: { length: 110, size: 2 AWG, ocpd: 100 }", StringComparison.Ordinal);
+            .Replace("feeder: { length: 110, size: 3 AWG, ocpd: 100 }", "feeder: { length: 110, size: 3 AWG, ground_size: 6 AWG, ocpd: 100 }", StringComparison.Ordinal);
         Assert.Equal([.. Bom, .. Encoding.UTF8.GetBytes(expected)], File.ReadAllBytes(output));
         Assert.Equal(before, File.ReadAllBytes(input));
         Assert.Equal(0, CliRunner.Run("check", output).ExitCode);

@@ -81,6 +81,24 @@ public sealed class FarEndRepairTests
         Assert.Contains(FormattableString.Invariant($"it drew {far.MinimumCurrentA:0} A against the 1500 A trip; a device that trips without delay at or below {far.MinimumCurrentA:0} A ({far.MinimumCurrentA / 150:0.#} × 150 A)"), change.FaultClearingNote, StringComparison.Ordinal);
     }
 
+    // A branch circuit whose fault at its source end (the panel's bus) already draws less than its breaker's trip current:
+    // no change of its own clears it, so the feeder above is raised until the bus draws enough. The feeder's own breaker
+    // trips at 5 × (a stated multiple), so its own far end clears as it is. (The branch circuit may then take a step of its own.)
+    [Fact]
+    public void Plan_BranchSourceEndShort_RaisesTheFeederAbove()
+    {
+        var before = SolverHarness.Solve(Feeder(300).Replace("ocpd: 150 }", "ocpd: 150, trip: 5 }", StringComparison.Ordinal));
+        var branch = before.Runs.Single(r => r.Id == "P/1");
+        var far = before.Faults.FarEndAt(branch.NodeIndex)!.Value;
+        Assert.True(far.SourceEndA < far.TripCurrentA);
+        Assert.DoesNotContain(before.Runs.Single(r => r.Id == "P").Findings, f => f.Kind == FindingKind.FaultClearing);
+
+        var plan = Upsizer.Standard.Plan(before);
+        Assert.False(plan.After.HasFindings);
+        var change = Assert.Single(plan.Changes, c => c.RunId == "P");
+        Assert.Contains("so that a fault at the source end of P/1", change.FaultClearingNote, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Plan_PinnedRun_NoGroundRaiseEither()
     {
