@@ -54,7 +54,7 @@ internal static class FarEndRepair
 
                 var shortBy = ((1 / minimum) - (1 / source)) / ((1 / trip) - (1 / source));
                 if (conductors.Fixed || Next(size, catalog, conductors.Material, shortBy) is not { } next
-                    || (conductors.OcpdA is { } ocpd && !terminals.Accepts(ocpd, next, sets))
+                    || !SizingProblem.AcceptsBothEnds(terminals, run, next, sets)
                     || SizingProblem.Cost(conductors, next, sets, run.Supply, before.Project.Sizing) is not { } cost)
                 {
                     continue; // pinned, the largest size, beyond its device's terminals, or unpriced: left unresolved

@@ -279,7 +279,7 @@ public sealed class Upsizer
         .Where(f => f.Kind is FindingKind.InterruptingRating or FindingKind.FaultClearing)
         .Select(f => new UnresolvableLimit(f.Subject, f.Kind == FindingKind.InterruptingRating
             ? $"{f.Message}: conductor sizes cannot fix this; it needs equipment of a higher rating"
-            : $"{f.Message}: no allowed size clears it (the lines go no larger within their device's terminals or the catalogue); a larger grounding conductor, a shorter run, or a device that trips lower would"));
+            : $"{f.Message}: no allowed size clears it (the lines go no larger within the terminals at their ends or the catalogue); a larger grounding conductor, a shorter run, or a device that trips lower would"));
 
     // A plan, what it reports as unfixable, and its proof.
     private sealed record Attempted(PlanPicks Picks, List<UnresolvableLimit> Unresolvable, Solution After, SizingProblem Problem);
