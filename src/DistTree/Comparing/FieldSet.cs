@@ -64,6 +64,11 @@ internal sealed class FieldSet
             set.Number("interrupting_ka", rating);
         }
 
+        if (e.MainA is { } main)
+        {
+            set.Number("main_a", main);
+        }
+
         if (e.Transformer is { } t)
         {
             set.Number("transformer.kva", t.Kva)
@@ -105,7 +110,7 @@ internal sealed class FieldSet
     public static bool SameDesign(Equipment a, Equipment b) =>
         a.Kind == b.Kind && string.Equals(a.From, b.From, StringComparison.Ordinal) && a.System == b.System &&
         SameRun(a.Feeder, b.Feeder) && a.DemandFactor.Equals(b.DemandFactor) && a.Transformer == b.Transformer &&
-        Nullable.Equals(a.InterruptingKa, b.InterruptingKa) &&
+        Nullable.Equals(a.InterruptingKa, b.InterruptingKa) && Nullable.Equals(a.MainA, b.MainA) &&
         a.Circuits.Count == b.Circuits.Count;
 
     /// <summary>True when two circuits hold exactly the same design (locations aside).</summary>

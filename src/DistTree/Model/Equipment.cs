@@ -78,6 +78,13 @@ public sealed record Equipment
     /// </summary>
     public double? InterruptingKa { get; init; }
 
+    /// <summary>
+    /// The rating of its main device, or of its main lugs (its bus) where it has none, A (<c>main_a</c>), or null where the
+    /// project states none; never on a transformer. Its feeder lands on the terminals of that rating, so the upsizer proposes
+    /// no feeder size they do not accept (see <see cref="Conductors.TerminalTable"/>).
+    /// </summary>
+    public double? MainA { get; init; }
+
     /// <summary>Where the equipment is in the project file.</summary>
     public SourceLocation Location { get; init; } = SourceLocation.None;
 

@@ -65,6 +65,8 @@ internal sealed class EquipmentDraft(SourceLocation location)
 
     public double? InterruptingKa { get; set; }
 
+    public double? MainA { get; set; }
+
     /// <summary>Transformer data; null when not a transformer or when it could not be read.</summary>
     public TransformerData? Transformer { get; set; }
 

@@ -29,7 +29,7 @@ internal static class ProjectKeys
     public static readonly string[] TransformerOnly = ["kva", "primary", "secondary", "impedance_percent", "x_r", "tap_percent", "tap_range_percent", "phase"];
 
     public static readonly string[] Equipment =
-        ["id", "kind", "from", "feeder", "demand_factor", "interrupting_ka", "circuits", .. TransformerOnly];
+        ["id", "kind", "from", "feeder", "demand_factor", "interrupting_ka", "main_a", "circuits", .. TransformerOnly];
 
     public static readonly string[] Run =
         ["length", "size", "neutral_size", "ground_size", "sets", "material", "insulation_c", "raceway", "raceway_id", "current_carrying", "ocpd", "device_type", "trip", "installation_method", "limit_percent", "fixed", "device_rated_continuous"];

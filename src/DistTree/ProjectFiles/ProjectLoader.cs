@@ -164,6 +164,7 @@ public static class ProjectLoader
                 Feeder = d.Feeder is { } feeder ? feeder with { LoadedConductors = PhaseRules.Lines(system) == 3 ? 3 : 2 } : null,
                 DemandFactor = d.DemandFactor,
                 InterruptingKa = d.InterruptingKa,
+                MainA = d.MainA,
                 Transformer = d.Transformer,
                 Circuits = circuits,
                 Location = d.Location,

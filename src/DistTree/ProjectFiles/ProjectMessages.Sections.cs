@@ -103,6 +103,10 @@ internal static partial class ProjectMessages
     public static string TransformerOnlyKey(string key, string name, EquipmentKind kind) =>
         $"'{key}' applies to transformers only; '{name}' is a {Words.EquipmentKind.Of(kind)}";
 
+    /// <summary>A main rating on a transformer, whose primary terminals are taken as its primary device's.</summary>
+    public static string MainOnTransformer(string name) =>
+        $"'main_a' is for a switchboard, panelboard or splitter (the rating of its main device or main lugs); transformer '{name}' has neither: its primary terminals are taken as those of its feeder's 'ocpd'";
+
     /// <summary>A tap between the 2.5 % steps.</summary>
     public static string TapNotAStep(string name, double tap) =>
         $"'tap_percent' of '{name}' is {Format(tap)}; taps come in 2.5 % steps: -5, -2.5, 0, 2.5 or 5";

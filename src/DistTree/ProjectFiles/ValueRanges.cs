@@ -183,6 +183,7 @@ public static class ValueRanges
             ("service", "utility_transformer_kva", UtilityKva),
             ("service", "utility_transformer_impedance_percent", ImpedancePercent),
             ("equipment", "interrupting_ka", InterruptingKa),
+            ("equipment", "main_a", OcpdA),
             ("equipment", "demand_factor", DemandFactor),
             ("equipment", "kva", Kva),
             ("equipment", "impedance_percent", ImpedancePercent),

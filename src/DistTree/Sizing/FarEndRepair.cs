@@ -65,7 +65,7 @@ internal static class FarEndRepair
                 var (far, shortBy) = (need.Far, ShortBy(need.Fall.MinimumA, need.Far.SourceEndA, need.Fall.TripA));
                 var sizing = before.Project.Sizing;
                 var present = SizingProblem.Cost(conductors, conductors.Size, conductors.Sets, run.Supply, sizing) ?? 0.0;
-                bool Buildable(ConductorSize s) => conductors.OcpdA is not { } ocpd || terminals.Accepts(ocpd, s, sets);
+                bool Buildable(ConductorSize s) => SizingProblem.AcceptsBothEnds(terminals, run, s, sets);
                 RunOption? LinesAt(ConductorSize s) => SizingProblem.Cost(conductors, s, sets, run.Supply, sizing) is { } cost
                     ? new RunOption(s, sets, r.DropPercent, 0, cost - present, MeetsRunLimits: true)
                     : null;

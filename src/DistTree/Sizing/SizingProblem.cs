@@ -4,7 +4,6 @@ using DistTree.Model;
 using DistTree.Network;
 using DistTree.Solving;
 using DistTree.Solving.Passes;
-using DistTree.Vocabulary;
 
 namespace DistTree.Sizing;
 
@@ -15,7 +14,7 @@ namespace DistTree.Sizing;
 /// <param name="Steps">The drop on the optimiser's grid, rounded up: ceil(drop / resolution).</param>
 /// <param name="Cost">Cost added against the present choice (material in mm²·m, or priced).</param>
 /// <param name="MeetsRunLimits">True when the choice meets the run's own drop limit, ampacity and device rules.</param>
-/// <param name="WithinTerminals">True when its device's terminals accept the choice (see <see cref="TerminalTable"/>), or it is the present one.</param>
+/// <param name="WithinTerminals">True when the terminals at both its ends accept the choice (its device's, and a feeder's far-end main, see <see cref="TerminalTable"/>), or it is the present one.</param>
 internal readonly record struct RunOption(ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits, bool WithinTerminals = true);
 
 /// <summary>One allowed tap of a transformer: its setting, the transformer's regulation there on the grid, and what setting it costs.</summary>
@@ -30,7 +29,7 @@ internal readonly record struct TapOption(double TapPercent, int Steps, double C
 /// and the end points whose total no choice can bring within the limit (left out of the budget and
 /// reported). Loads are fixed, so a run's drop depends on its own choice alone.
 /// </summary>
-internal sealed class SizingProblem
+internal sealed partial class SizingProblem
 {
     private SizingProblem(Solution solution, int budgetSteps, double resolution, RunOption[]?[] options, int[] transformerSteps,
         TapOption[]?[] taps, bool[] excluded, List<UnresolvableLimit> unresolvable)
@@ -215,7 +214,7 @@ internal sealed class SizingProblem
                 Excluded[e.NodeIndex] = true;
                 var over = (least[e.NodeIndex] - BudgetSteps) * ResolutionPercent;
                 Unresolvable.Add(new UnresolvableLimit(e.Id, FormattableString.Invariant(
-                    $"end point {e.Id}: even with every run on its path at its largest allowed size and sets (within its device's terminals) and every transformer above it at its most raising allowed tap, the total is about {e.LimitPercent + over:0.00} % against the {e.LimitPercent:0.##} % limit; {PathRemedies.Smallest(this, e.NodeIndex, over)}")));
+                    $"end point {e.Id}: even with every run on its path at its largest allowed size and sets (within the terminals at its ends) and every transformer above it at its most raising allowed tap, the total is about {e.LimitPercent + over:0.00} % against the {e.LimitPercent:0.##} % limit; {PathRemedies.Smallest(this, e.NodeIndex, over)}")));
             }
         }
     }
@@ -273,7 +272,7 @@ internal sealed class SizingProblem
                 var ratio = (double)conductors.Sets / sets;
                 var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);
-                var accepted = isPresent || conductors.OcpdA is not { } deviceA || terminals.Accepts(deviceA, s, sets);
+                var accepted = isPresent || AcceptsBothEnds(terminals, run, s, sets);
                 yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets, accepted);
             }
         }
@@ -320,28 +319,5 @@ internal sealed class SizingProblem
         }
 
         return [.. kept];
-    }
-
-    private static string UnfixableRun(RunResult row, NetworkRun run, RunOption[] buildable, RunOption[] all, TerminalTable terminals)
-    {
-        var what = Words.Noun(run.Kind);
-        if (run.Conductors.Fixed)
-        {
-            return $"{what} {row.Id}: pinned (fixed: true) and over its limits at {row.Size}; unpin it, shorten it, or move the load";
-        }
-
-        // A size beyond its device's terminals would do: the plan proposes none, but says what it would take.
-        if (run.Conductors.OcpdA is { } deviceA && all.Where(o => o.MeetsRunLimits && !o.WithinTerminals).OrderBy(o => o.Cost).FirstOrDefault() is { Sets: > 0 } beyond)
-        {
-            var (_, largest) = terminals.LargestFor(deviceA, beyond.Sets, beyond.Size.Series);
-            var accepts = largest is { } most ? $"{beyond.Sets}×{most}" : $"no {beyond.Sets} conductors per terminal";
-            var band = terminals.SmallestBandAccepting(beyond.Size, beyond.Sets) is { } a ? FormattableString.Invariant($" (in the table, a device of {a:0.#} A takes it)") : "";
-            return FormattableString.Invariant(
-                $"{what} {row.Id}: the least choice that meets its own limits, {beyond.Sets}×{beyond.Size}, is beyond the terminal limit of its {deviceA:0.#} A device ({accepts}; {terminals.SourceName}); it needs a device whose terminals take it{band}, a splice to a size the terminals take, a shorter run, or the load nearer its panel");
-        }
-
-        var best = (buildable.Length > 0 ? buildable : all).MinBy(o => o.DropPercent);
-        return FormattableString.Invariant(
-            $"{what} {row.Id}: no allowed size meets its own limits; the best, {best.Sets}×{best.Size}, drops {best.DropPercent:0.00} % against {row.LimitPercent:0.##} %; it would take more parallel sets (sizing: max_sets), a shorter run, or a panel nearer the load");
     }
 }

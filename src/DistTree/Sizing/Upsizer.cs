@@ -317,7 +317,7 @@ public sealed class Upsizer
         .Where(f => f.Kind is FindingKind.InterruptingRating or FindingKind.FaultClearing)
         .Select(f => new UnresolvableLimit(f.Subject, f.Kind == FindingKind.InterruptingRating
             ? $"{f.Message}: conductor sizes cannot fix this; it needs equipment of a higher rating"
-            : FormattableString.Invariant($"{f.Message}: no allowed size of its lines or grounding conductor clears it (pinned, no larger within its device's terminals or the catalogue, or the fault at its source end already too small); a shorter run, or a device that trips without delay at or below {f.Value:0} A, would")));
+            : FormattableString.Invariant($"{f.Message}: no allowed size of its lines or grounding conductor clears it (pinned, no larger within the terminals at its ends or the catalogue, or the fault at its source end already too small); a shorter run, or a device that trips without delay at or below {f.Value:0} A, would")));
 
     // A plan, what it reports as unfixable, and its proof.
     private sealed record Attempted(PlanPicks Picks, List<UnresolvableLimit> Unresolvable, Solution After, SizingProblem Problem);

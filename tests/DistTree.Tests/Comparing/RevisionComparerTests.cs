@@ -249,6 +249,17 @@ public sealed class RevisionComparerTests
     }
 
     [Fact]
+    public void Compare_MainRatingChanged_ListsTheField()
+    {
+        var before = ComparisonProjects.Shared().Replace("    from: MSB\n    feeder: { length: 40", "    from: MSB\n    main_a: 100\n    feeder: { length: 40", StringComparison.Ordinal);
+        Assert.NotEqual(ComparisonProjects.Shared(), before);
+
+        var c = Compare(before, before.Replace("main_a: 100", "main_a: 200", StringComparison.Ordinal));
+
+        Assert.Equal([new FieldChange("main_a", "100", "200")], Assert.Single(c.Equipment).Fields);
+    }
+
+    [Fact]
     public void Compare_TransformerPhaseChanged_ListsTheField()
     {
         var after = SinglePhaseTransformer.Replace("phase: BC", "phase: CA", StringComparison.Ordinal);

@@ -36,6 +36,7 @@ internal static partial class EdgeProject
         ["service.utility_transformer_kva"] = "1500",
         ["service.utility_transformer_impedance_percent"] = "5.75",
         ["equipment.interrupting_ka"] = "65",
+        ["equipment.main_a"] = "400",
         ["equipment.demand_factor"] = "1",
         ["equipment.kva"] = "75",
         ["equipment.impedance_percent"] = "5",
@@ -77,6 +78,7 @@ internal static partial class EdgeProject
           - id: MP
             kind: panelboard
             from: MSB
+            main_a: {equipment.main_a}
             feeder: { length: 3, size: 250 kcmil }
             circuits:
               - { id: "5", poles: 3, load: { hp: {load.hp}, pf: 0.85, lrc_multiple: {load.lrc_multiple}, starting_pf: {load.starting_pf} }, run: { length: 20, size: 10 AWG } }

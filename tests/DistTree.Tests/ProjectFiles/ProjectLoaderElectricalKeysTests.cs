@@ -294,6 +294,29 @@ public sealed class ProjectLoaderElectricalKeysTests
         ProjectText.AssertOneError(Project("480Y/277", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG, " + key + " }", Circuit1)), token, message);
     }
 
+    // --- main_a (the far-end terminals of a feeder, for the upsizer) ---
+
+    [Fact]
+    public void Parse_MainA_StoredOnTheEquipmentAndAbsentIsNull()
+    {
+        var project = ProjectLoader.Parse(
+            Project("208Y/120", Panel("LP1", "SVC", "{ length: 20, size: 2 AWG }", Circuit1).Replace("from: SVC,", "from: SVC, main_a: 100,", StringComparison.Ordinal)
+                + Panel("LP2", "SVC", "{ length: 20, size: 2 AWG }", Circuit1)),
+            "t.yaml");
+
+        Assert.Equal(100.0, project.Equipment[0].MainA);
+        Assert.Null(project.Equipment[1].MainA);
+    }
+
+    [Fact]
+    public void Parse_MainAOnATransformer_IsAnErrorAtTheKey()
+    {
+        ProjectText.AssertOneError(
+            Project("480Y/277", Transformer("T1", "SVC", "208Y/120", feeder: "{ length: 20, size: 2 AWG, ocpd: 100 }") + "    main_a: 100\n"),
+            "main_a",
+            "'main_a' is for a switchboard, panelboard or splitter (the rating of its main device or main lugs); transformer 'T1' has neither: its primary terminals are taken as those of its feeder's 'ocpd'");
+    }
+
     private static string Project(string system, string equipment, string serviceKeys = "") =>
         $"disttree: 1\nproject: {{ name: Keys }}\nservice: {{ id: SVC, system: {system}{serviceKeys} }}\nequipment:\n{equipment}";
 

@@ -95,6 +95,11 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
             draft.InterruptingKa = Values.InRange(ratingNode, quoted.Of("'interrupting_ka' of "), ValueRanges.InterruptingKa);
         }
 
+        if (m.Optional("main_a") is { } mainNode)
+        {
+            draft.MainA = Values.InRange(mainNode, quoted.Of("'main_a' of "), ValueRanges.OcpdA);
+        }
+
         ReadTransformer(m, draft, name);
         circuits.ReadList(m, draft, name);
         return draft;
@@ -105,6 +110,11 @@ internal sealed class EquipmentReader(SectionContext context, RunReader runs, Ci
         if (draft.Kind is null)
         {
             return;
+        }
+
+        if (draft.Kind == EquipmentKind.Transformer && m.Has("main_a"))
+        {
+            Bag.Error(m.KeyLocation("main_a"), ProjectMessages.MainOnTransformer(name));
         }
 
         if (draft.Kind != EquipmentKind.Transformer)
