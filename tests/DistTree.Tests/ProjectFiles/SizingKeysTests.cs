@@ -26,6 +26,19 @@ public sealed class SizingKeysTests : IDisposable
         Assert.Equal(["p.yaml", "tables/lugs.tsv"], project.Files.Select(f => f.PathInProject));
     }
 
+    // ANSI C84.1's Range A upper limit, +5 % (recalled): the default.
+    [Fact]
+    public void Load_NoLightLoadRise_FivePercent() =>
+        Assert.Equal(5.0, ProjectLoader.Load(_folder.Write("p.yaml", WithSizing("tap_cost: 1"))).Sizing.LightLoadRisePercent);
+
+    [Fact]
+    public void Load_LightLoadRiseOutOfRange_ErrorAtTheValue()
+    {
+        var main = _folder.Write("p.yaml", WithSizing("light_load_rise_percent: 12"));
+        var error = Assert.Single(Assert.Throws<ProjectException>(() => ProjectLoader.Load(main)).Diagnostics, d => d.Severity == Severity.Error);
+        Assert.StartsWith("'light_load_rise_percent' must be between 0 and 10 %", error.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Load_TerminalTableMissing_ErrorAtTheKey()
     {
