@@ -9,7 +9,7 @@ namespace DistTree.Cli;
 
 /// <summary>
 /// What <c>upsize --apply</c> writes: a copy of the project with each change made in the file that holds the run's
-/// size, and only there. To a file (<c>--apply fixed.yaml</c>): the project file, edited; a change in an included
+/// size (a tap: the transformer's entry), and only there. To a file (<c>--apply fixed.yaml</c>): the project file, edited; a change in an included
 /// file then needs a folder. To a folder (<c>--apply fixed/</c>, or a folder that exists): every file of the project
 /// at its place relative to the project file, each edited where its sizes are. The edits are made to the very
 /// bytes the plan was made on: each file is read again and must hold what was read at load time, or nothing is
@@ -22,15 +22,13 @@ internal sealed class AppliedProject
 
     private readonly int _editedFiles;
 
-    // The taps the plan sets: --apply writes conductor sizes only, so it names them to be set by hand.
-    private IReadOnlyList<TapChange> _taps = [];
-
-    private AppliedProject(string output, List<(string, SourceFile, byte[])> files, IReadOnlyList<SourceFile> inputs, int runs, int editedFiles)
+    private AppliedProject(string output, List<(string, SourceFile, byte[])> files, IReadOnlyList<SourceFile> inputs, int runs, int taps, int editedFiles)
     {
         Output = output;
         _files = files;
         _inputs = inputs;
         Runs = runs;
+        Taps = taps;
         _editedFiles = editedFiles;
     }
 
@@ -40,30 +38,33 @@ internal sealed class AppliedProject
     /// <summary>How many runs change.</summary>
     public int Runs { get; }
 
+    /// <summary>How many transformers' taps are set.</summary>
+    public int Taps { get; }
+
     /// <summary>Where each file goes, as (option, path) pairs for <see cref="OutputTarget.CheckAll"/>.</summary>
     public IEnumerable<(string Option, string? Path)> Targets => _files.Select(f => ("--apply", (string?)f.Target));
 
     /// <summary>Reads the project's files again, checks they are unchanged, and makes every edit; nothing is written yet.</summary>
     /// <exception cref="UsageException">A file changed since it was read; a change is in an included file and the output is not a folder.</exception>
-    /// <exception cref="Diagnostics.ProjectException">A size is written in a form that cannot be rewritten (located).</exception>
+    /// <exception cref="Diagnostics.ProjectException">A size or tap is written in a form that cannot be rewritten (located).</exception>
     public static AppliedProject Prepare(Project project, IReadOnlyList<UpsizeChange> changes, string output, IReadOnlyList<TapChange> taps)
-    {
-        var applied = Prepare(project, changes, output);
-        applied._taps = taps;
-        return applied;
-    }
-
-    /// <summary>As the overload with taps, for a plan that sets none.</summary>
-    public static AppliedProject Prepare(Project project, IReadOnlyList<UpsizeChange> changes, string output)
     {
         var main = project.Files[0];
         var byFile = changes.GroupBy(c => c.SizeLocation.File).ToDictionary(g => g.Key, g => g.ToList(), StringComparer.Ordinal);
+        var tapsByFile = taps.GroupBy(t => t.Location.File).ToDictionary(g => g.Key, g => g.ToList(), StringComparer.Ordinal);
         var toFolder = output != "-" && (Path.EndsInDirectorySeparator(output) || Directory.Exists(output));
         if (!toFolder && changes.FirstOrDefault(c => c.SizeLocation.File != main.Name) is { } elsewhere)
         {
             throw new UsageException(
                 $"the size of run '{elsewhere.RunId}' is in the included file '{elsewhere.SizeLocation.File}'; for a project with included files give --apply a folder " +
                 "(--apply fixed/): it writes a copy of every file of the project there, each edited where its sizes are");
+        }
+
+        if (!toFolder && taps.FirstOrDefault(t => t.Location.File != main.Name) is { } tapElsewhere)
+        {
+            throw new UsageException(
+                $"transformer '{tapElsewhere.TransformerId}', whose tap the plan sets, is in the included file '{tapElsewhere.Location.File}'; for a project with included files give --apply a folder " +
+                "(--apply fixed/): it writes a copy of every file of the project there, each edited where its sizes and taps are");
         }
 
         var files = new List<(string, SourceFile, byte[])>();
@@ -79,11 +80,16 @@ internal sealed class AppliedProject
 
             var bytes = Unchanged(file);
             var edits = byFile.GetValueOrDefault(file.Name);
-            files.Add((target, file, edits is null ? bytes : ProjectFileEditor.Apply(bytes, file.Name, edits)));
+            var tapEdits = tapsByFile.GetValueOrDefault(file.Name);
+            files.Add((target, file, edits is null && tapEdits is null ? bytes : ProjectFileEditor.Apply(bytes, file.Name, edits ?? [], tapEdits ?? [])));
         }
 
-        return new AppliedProject(output, files, project.Files, changes.Count, byFile.Count);
+        var edited = byFile.Keys.Union(tapsByFile.Keys, StringComparer.Ordinal).Count();
+        return new AppliedProject(output, files, project.Files, changes.Count, taps.Count, edited);
     }
+
+    /// <summary>As the overload with taps, for a plan that sets none.</summary>
+    public static AppliedProject Prepare(Project project, IReadOnlyList<UpsizeChange> changes, string output) => Prepare(project, changes, output, []);
 
     /// <summary>Writes every file, each checked once more to be unchanged just before; tells standard error what was written.</summary>
     public void Write(CliContext context)
@@ -99,12 +105,8 @@ internal sealed class AppliedProject
         }
 
         var files = _files.Count == 1 ? "" : $" in {_editedFiles} of its {_files.Count} files";
-        context.Error.WriteLine($"wrote {DisplayText.Escape(Output)}: {Runs} runs changed{files}");
-        foreach (var t in _taps)
-        {
-            context.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture,
-                $"not written: set tap_percent of '{DisplayText.Escape(t.TransformerId)}' to {t.TapPercentAfter:0.#} by hand (--apply writes conductor sizes only)"));
-        }
+        var taps = Taps == 0 ? "" : $", {Taps} transformer tap{(Taps == 1 ? "" : "s")} set";
+        context.Error.WriteLine($"wrote {DisplayText.Escape(Output)}: {Runs} runs changed{taps}{files}");
     }
 
     // The file's bytes now, when they are still the bytes read at load time.

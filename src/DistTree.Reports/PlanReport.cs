@@ -60,6 +60,16 @@ public static class PlanReport
             }
         }
 
+        if (plan.Cautions.Count > 0)
+        {
+            o.WriteLine();
+            o.WriteLine("Stated taps over the light-load limit (kept as stated):");
+            foreach (var c in plan.Cautions)
+            {
+                o.WriteLine($"  {c.Message}");
+            }
+        }
+
         o.WriteLine();
         o.WriteLine("The plan was proved by solving the tree again with it applied.");
         o.WriteLine($"Caution: {Caution.For(plan.After.Project.Rules.Code)}");
@@ -151,6 +161,22 @@ public static class PlanReport
         }
 
         w.WriteEndArray();
+
+        // Written only where a stated tap is over the light-load limit, so a plan without one reads as before.
+        if (plan.Cautions.Count > 0)
+        {
+            w.WriteStartArray("cautions");
+            foreach (var c in plan.Cautions)
+            {
+                w.WriteStartObject();
+                w.WriteString("subject", c.Subject);
+                w.WriteString("message", c.Message);
+                w.WriteEndObject();
+            }
+
+            w.WriteEndArray();
+        }
+
         w.WriteEndObject();
     }
 

@@ -23,7 +23,7 @@ internal static class UpsizeCommand
         };
         var schedules = ScheduleOutput.Create();
         var date = new Option<string?>("--date") { Description = "A date (any text) to show in the HTML report's header; without it the report carries no date.", HelpName = "TEXT" };
-        var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) values edited, to OUT.yaml; or to a folder (OUT/), a copy of every file of the project, each edited where its sizes are.", HelpName = "OUT.yaml|OUT/" };
+        var apply = new Option<string?>("--apply") { Description = "Write a copy of the project with only the changed size (and sets) and tap_percent values edited, to OUT.yaml; or to a folder (OUT/), a copy of every file of the project, each edited where its sizes and taps are.", HelpName = "OUT.yaml|OUT/" };
         var maxSets = new Option<int?>("--max-sets") { Description = "Let feeders take up to N parallel sets, 1 to 40 (overrides sizing: max_sets).", HelpName = "N" };
         var command = new Command("upsize", "Find the least-material conductor upsizes that bring every run and end point within its limits.\n" +
             "Example: disttree upsize projects/quillfeather-medical.yaml --apply fixed.yaml")

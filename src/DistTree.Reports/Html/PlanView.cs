@@ -16,6 +16,9 @@ internal sealed record PlanView(
 {
     /// <summary>The transformers whose taps the plan sets.</summary>
     public IReadOnlyList<TapRow> Taps { get; init; } = [];
+
+    /// <summary>The stated taps over the light-load limit, which the plan keeps.</summary>
+    public IReadOnlyList<LabelValue> Cautions { get; init; } = [];
 }
 
 /// <summary>One transformer's tap to set.</summary>

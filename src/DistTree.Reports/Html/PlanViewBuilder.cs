@@ -30,6 +30,7 @@ internal static class PlanViewBuilder
             Percent(t.RegulationPercentAfter),
             Metres(t.CostAdded),
             Escape(Where(t.Location))))],
+        Cautions = [.. plan.Cautions.Select(c => new LabelValue(Escape(c.Subject), Escape(c.Message)))],
     };
 
     private static string Tap(double percent) => percent.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);

@@ -26,6 +26,13 @@ public sealed record SizingOptions
     /// <summary>What setting a transformer's tap to another position costs, in the plan's cost unit (<c>sizing: tap_cost</c>); 0: free.</summary>
     public double TapCost { get; init; }
 
+    /// <summary>
+    /// How far above nominal a bus may stand at no load with the source at nominal, percent (<c>sizing:
+    /// light_load_rise_percent</c>): the upsizer takes no raising tap that would put any bus below it higher. 5 by default
+    /// (ANSI C84.1's Range A upper limit at the service and utilization points, +5 %: recalled, not read).
+    /// </summary>
+    public double LightLoadRisePercent { get; init; } = 5;
+
     /// <summary>The defaults: keep sets, minimise material, 0.001 percentage points.</summary>
     public static SizingOptions Default { get; } = new();
 }

@@ -22,7 +22,7 @@ internal static class ProjectKeys
 
     public static readonly string[] Defaults = ["material", "insulation_c", "raceway"];
 
-    public static readonly string[] Sizing = ["max_sets", "prices", "currency", "resolution_percent", "terminal_table", "tap_cost"];
+    public static readonly string[] Sizing = ["max_sets", "prices", "currency", "resolution_percent", "terminal_table", "tap_cost", "light_load_rise_percent"];
 
     public static readonly string[] Service = ["id", "system", "frequency_hz", "available_fault_current_ka", "fault_x_r", "utility_transformer_kva", "utility_transformer_impedance_percent"];
 

@@ -55,6 +55,12 @@ public static class ValueRanges
     /// <summary><c>sizing: tap_cost</c>: what setting a transformer's tap costs, in the plan's cost unit (0: free).</summary>
     public static readonly NumberRange TapCost = NumberRange.Closed(0, 1_000_000_000, "");
 
+    /// <summary>
+    /// <c>sizing: light_load_rise_percent</c>: how far above nominal a bus may stand at no load for a raising tap to be
+    /// taken, percent: 0 (no raise above nominal) to 10 (twice the +5 % of ANSI C84.1's Range A, recalled).
+    /// </summary>
+    public static readonly NumberRange LightLoadRisePercent = NumberRange.Closed(0, 10, "%");
+
     /// <summary>A transformer's <c>tap_range_percent</c>: how far from 0 the optimiser may set its tap, in 2.5 % steps.</summary>
     public static readonly NumberRange TapRangePercent = NumberRange.Closed(0, 5, "%");
 
@@ -177,6 +183,7 @@ public static class ValueRanges
             ("sizing", "resolution_percent", ResolutionPercent),
             ("sizing", "prices", Price),
             ("sizing", "tap_cost", TapCost),
+            ("sizing", "light_load_rise_percent", LightLoadRisePercent),
             ("service", "frequency_hz", FrequencyHz),
             ("service", "available_fault_current_ka", AvailableFaultCurrentKa),
             ("service", "fault_x_r", FaultXOverR),

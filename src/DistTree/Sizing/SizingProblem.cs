@@ -59,6 +59,12 @@ internal sealed partial class SizingProblem
     /// <summary>Per node index, a transformer's regulation in grid steps (0 elsewhere).</summary>
     public int[] TransformerSteps { get; }
 
+    /// <summary>
+    /// Per node index, the most its bus can stand above nominal at no load, as a ratio to nominal, with every transformer
+    /// at or above it at its most raising allowed tap (its stated one where its tap is no choice): see <see cref="LightLoadRise"/>.
+    /// </summary>
+    public double[] NoLoadMost { get; private init; } = [];
+
     /// <summary>The rule set the choices were judged by (its catalogue prices their figures).</summary>
     public CodeRules? Protection { get; private init; }
 
@@ -157,22 +163,35 @@ internal sealed partial class SizingProblem
             }
         }
 
+        // The light-load limit (see LightLoadRise), judged from the service down: a transformer's raises are judged with every
+        // transformer above it at its most raising allowed tap, so no combination of allowed taps puts a bus over the limit.
+        // The taps above have the first claim on the rise: a raise below that would fit only while those above stay put is
+        // refused (the safe side; PathRemedies says so where it was the only remedy).
         var taps = new TapOption[]?[nodes.Count];
-        foreach (var row in solution.Runs.Where(r => r.Kind == RunResultKind.Transformer))
+        var noLoadMost = new double[nodes.Count];
+        for (var i = 0; i < nodes.Count; i++)
         {
-            (taps[row.NodeIndex], transformerSteps[row.NodeIndex]) = TapChoices(row, nodes[row.NodeIndex].Equipment!.Transformer!, budget * resolution, resolution, sizing.TapCost, project.Rules);
+            var above = i == 0 ? 1.0 : noLoadMost[nodes[i].ParentIndex];
+            noLoadMost[i] = above;
+            if (solution.TransformerRun(i) is { } row)
+            {
+                var data = nodes[i].Equipment!.Transformer!;
+                (taps[i], transformerSteps[i]) = TapChoices(row, data, budget * resolution, resolution, sizing, project.Rules, above);
+                noLoadMost[i] = above * LightLoadRise.Factor(taps[i]?.Min(t => t.TapPercent) ?? data.TapPercent);
+            }
         }
 
-        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection };
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection, NoLoadMost = noLoadMost };
         problem.ExcludeUnfixableEndPoints();
         return problem;
     }
 
-    // A transformer's taps at or raising the secondary from its present one, within its range (none to choose at a new
-    // origin, where its regulation counts in no total), and its present regulation on the grid. A tap takes
-    // (100 − the shares above it)·tap/(1 + tap) off the voltage (see PathShares); the shares above are not known here, so a
-    // raise is priced as if they were the whole budget and a lowering as if they were none (the safe side either way).
-    private static (TapOption[]? Taps, int PresentSteps) TapChoices(RunResult row, TransformerData data, double budgetPercent, double resolution, double tapCost, Rules rules)
+    // A transformer's taps at or raising the secondary from its present one, within its range and within the light-load
+    // limit with its primary's bus at no-load ratio aboveFactor (none to choose at a new origin, where its regulation counts
+    // in no total), and its present regulation on the grid. A tap takes (100 − the shares above it)·tap/(1 + tap) off the
+    // voltage (see PathShares); the shares above are not known here, so a raise is priced as if they were the whole budget
+    // and a lowering as if they were none (the safe side either way).
+    private static (TapOption[]? Taps, int PresentSteps) TapChoices(RunResult row, TransformerData data, double budgetPercent, double resolution, SizingOptions sizing, Rules rules, double aboveFactor)
     {
         static double Share(double tapPercent) => tapPercent / (100.0 + tapPercent);
         var winding = row.DropPercent - (100.0 * Share(data.TapPercent));
@@ -183,8 +202,9 @@ internal sealed partial class SizingProblem
             return (null, Steps(row.DropPercent, resolution));
         }
 
-        var raises = TransformerData.TapSteps.Where(t => t < data.TapPercent && Math.Abs(t) <= data.TapRangePercent + 1e-9).OrderByDescending(t => t);
-        TapOption[] all = [present, .. raises.Select(t => new TapOption(t, StepsAt(t), tapCost))];
+        var raises = TransformerData.TapSteps.Where(t => t < data.TapPercent && Math.Abs(t) <= data.TapRangePercent + 1e-9
+            && LightLoadRise.Within(aboveFactor * LightLoadRise.Factor(t), sizing.LightLoadRisePercent)).OrderByDescending(t => t);
+        TapOption[] all = [present, .. raises.Select(t => new TapOption(t, StepsAt(t), sizing.TapCost))];
         return (all.Length > 1 ? all : null, present.Steps);
     }
 

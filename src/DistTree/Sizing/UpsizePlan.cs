@@ -102,6 +102,11 @@ public sealed record TapChange
 /// <param name="Message">What fails even at the largest choice, and what would fix it.</param>
 public sealed record UnresolvableLimit(string Subject, string Message);
 
+/// <summary>What the plan leaves as it is but a person should know: a stated tap that raises a bus over the light-load limit.</summary>
+/// <param name="Subject">The transformer's id.</param>
+/// <param name="Message">What is over the limit, and what the plan does about it.</param>
+public sealed record PlanCaution(string Subject, string Message);
+
 /// <summary>The least-material set of upsizes that brings the tree within its limits, proved by re-solving.</summary>
 public sealed record UpsizePlan
 {
@@ -125,6 +130,12 @@ public sealed record UpsizePlan
 
     /// <summary>Limits no allowed choice satisfies.</summary>
     public IReadOnlyList<UnresolvableLimit> Unresolvable { get; init; } = [];
+
+    /// <summary>
+    /// Each transformer whose stated tap already puts its secondary over the light-load limit
+    /// (<c>sizing: light_load_rise_percent</c>) at no load: the plan keeps the tap and raises none below it.
+    /// </summary>
+    public IReadOnlyList<PlanCaution> Cautions { get; init; } = [];
 
     /// <summary>The solution before the plan.</summary>
     public required Solution Before { get; init; }

@@ -78,6 +78,7 @@ public sealed class Upsizer
             FarEndRepairCostAdded = repairCost,
             CostUnit = before.Project.Sizing.Prices.Count == 0 ? "mm2·m" : (before.Project.Sizing.Currency.Length > 0 ? before.Project.Sizing.Currency : "price"),
             Unresolvable = unresolvable,
+            Cautions = LightLoadRise.Cautions(before.Network, before.Project.Sizing.LightLoadRisePercent),
             Before = before,
             After = after,
         };

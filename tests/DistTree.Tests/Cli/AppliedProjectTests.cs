@@ -175,6 +175,33 @@ public sealed class AppliedProjectTests
         Assert.False(File.Exists(folder.File("fixed.yaml")));
     }
 
+    // A tap follows the sizes' rule: in an included file it needs a folder, and there only that file's tap line is added.
+    [Fact]
+    public void Upsize_ApplyATapInAnIncludedFile_ToAFileRefusedToAFolderWritten()
+    {
+        using var folder = new TempFolder();
+        var main = folder.File("main.yaml");
+        var included = folder.File("t.yaml");
+        var transformer = Sizing.UpsizerRemedyTests.Transformer();
+        var equipment = transformer[transformer.IndexOf("equipment:", StringComparison.Ordinal)..];
+        File.WriteAllText(main, "disttree: 1\nproject: { name: Tap, units: imperial }\nservice: { id: SVC, system: 480Y/277 }\ninclude: [t.yaml]\n");
+        File.WriteAllText(included, equipment.ReplaceLineEndings("\r\n"));
+
+        var refused = CliRunner.Run("upsize", main, "--apply", folder.File("fixed.yaml"));
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains($"transformer 'T1', whose tap the plan sets, is in the included file '{included}'; for a project with included files give --apply a folder", refused.Error, StringComparison.Ordinal);
+        Assert.False(File.Exists(folder.File("fixed.yaml")));
+
+        var output = Path.Combine(folder.Path, "fixed") + "/";
+        var result = CliRunner.Run("upsize", main, "--apply", output);
+        Assert.Equal(0, result.ExitCode);
+        Assert.Equal($"wrote {output}: 0 runs changed, 1 transformer tap set in 1 of its 2 files\n", result.Error.ReplaceLineEndings("\n"));
+        Assert.Equal(File.ReadAllBytes(main), File.ReadAllBytes(Path.Combine(output, "main.yaml")));
+        var x = equipment.IndexOf("x_r: 2\n", StringComparison.Ordinal) + "x_r: 2\n".Length;
+        Assert.Equal(equipment.Insert(x, "    tap_percent: -2.5\n").ReplaceLineEndings("\r\n"), File.ReadAllText(Path.Combine(output, "t.yaml")));
+        Assert.Equal(0, CliRunner.Run("check", Path.Combine(output, "main.yaml")).ExitCode);
+    }
+
     [Fact]
     public void Write_FileChangedAfterThePreparation_RefusedBeforeAnyFileIsWritten()
     {

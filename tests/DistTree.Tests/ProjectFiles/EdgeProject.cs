@@ -30,6 +30,7 @@ internal static partial class EdgeProject
         ["sizing.resolution_percent"] = "0.01",
         ["sizing.prices"] = "3",
         ["sizing.tap_cost"] = "0",
+        ["sizing.light_load_rise_percent"] = "5",
         ["service.frequency_hz"] = "60",
         ["service.available_fault_current_ka"] = "22",
         ["service.fault_x_r"] = "6",
@@ -68,7 +69,7 @@ internal static partial class EdgeProject
         disttree: 1
         project: { name: Edges, units: metric }
         rules: { feeder_limit_percent: {rules.feeder_limit_percent}, branch_limit_percent: {rules.branch_limit_percent}, total_limit_percent: {rules.total_limit_percent}, lighting_limit_percent: {rules.lighting_limit_percent}, motor_start_limit_percent: {rules.motor_start_limit_percent}, conductor_temperature: {rules.conductor_temperature}, ambient_c: {rules.ambient_c}, fault_voltage_factor_max: {rules.fault_voltage_factor_max}, fault_voltage_factor_min: {rules.fault_voltage_factor_min} }
-        sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, tap_cost: {sizing.tap_cost}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
+        sizing: { max_sets: {sizing.max_sets}, resolution_percent: {sizing.resolution_percent}, tap_cost: {sizing.tap_cost}, light_load_rise_percent: {sizing.light_load_rise_percent}, prices: { 12 AWG: 0.5, 1 AWG: {sizing.prices} } }
         service: { id: SVC, system: 480Y/277, frequency_hz: {service.frequency_hz}, available_fault_current_ka: {service.available_fault_current_ka}, fault_x_r: {service.fault_x_r} }
         equipment:
           - id: MSB

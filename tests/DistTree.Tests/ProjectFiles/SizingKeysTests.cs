@@ -3,7 +3,7 @@ using DistTree.ProjectFiles;
 
 namespace DistTree.Tests.ProjectFiles;
 
-/// <summary>The sizing keys of issue 21: <c>sizing: terminal_table</c> (read as the rules' tables are), <c>sizing: tap_cost</c>, and a transformer's <c>tap_range_percent</c>.</summary>
+/// <summary>The sizing keys of issue 21: <c>sizing: terminal_table</c> (read as the rules' tables are), <c>sizing: tap_cost</c>, <c>sizing: light_load_rise_percent</c>, and a transformer's <c>tap_range_percent</c>.</summary>
 public sealed class SizingKeysTests : IDisposable
 {
     private const string Table = "# Invented test table, not a maker's.\ndevice_a\tsets\tawg\tmm2\n20\t1\t6 AWG\t16 mm2\n";
@@ -18,11 +18,25 @@ public sealed class SizingKeysTests : IDisposable
     public void Load_TerminalTable_HeldOnTheSizingAndAmongTheFiles()
     {
         _folder.Write("tables/lugs.tsv", Table);
-        var project = ProjectLoader.Load(_folder.Write("p.yaml", WithSizing("terminal_table: tables/lugs.tsv, tap_cost: 12.5")));
+        var project = ProjectLoader.Load(_folder.Write("p.yaml", WithSizing("terminal_table: tables/lugs.tsv, tap_cost: 12.5, light_load_rise_percent: 3.5")));
 
         Assert.EndsWith("tables/lugs.tsv", project.Sizing.TerminalTable!.SourceName, StringComparison.Ordinal);
         Assert.Equal(12.5, project.Sizing.TapCost);
+        Assert.Equal(3.5, project.Sizing.LightLoadRisePercent);
         Assert.Equal(["p.yaml", "tables/lugs.tsv"], project.Files.Select(f => f.PathInProject));
+    }
+
+    // ANSI C84.1's Range A upper limit, +5 % (recalled): the default.
+    [Fact]
+    public void Load_NoLightLoadRise_FivePercent() =>
+        Assert.Equal(5.0, ProjectLoader.Load(_folder.Write("p.yaml", WithSizing("tap_cost: 1"))).Sizing.LightLoadRisePercent);
+
+    [Fact]
+    public void Load_LightLoadRiseOutOfRange_ErrorAtTheValue()
+    {
+        var main = _folder.Write("p.yaml", WithSizing("light_load_rise_percent: 12"));
+        var error = Assert.Single(Assert.Throws<ProjectException>(() => ProjectLoader.Load(main)).Diagnostics, d => d.Severity == Severity.Error);
+        Assert.StartsWith("'light_load_rise_percent' must be between 0 and 10 %", error.Message, StringComparison.Ordinal);
     }
 
     [Fact]

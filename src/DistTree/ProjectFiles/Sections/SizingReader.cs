@@ -38,6 +38,11 @@ internal sealed class SizingReader(SectionContext context)
             sizing = sizing with { TapCost = tapCost };
         }
 
+        if (context.InRange(m, "light_load_rise_percent", ValueRanges.LightLoadRisePercent) is { } rise)
+        {
+            sizing = sizing with { LightLoadRisePercent = rise };
+        }
+
         if (m.Optional("terminal_table") is { } tableNode && Values.Text(tableNode, "'terminal_table'") is { } tablePath)
         {
             context.Draft.TerminalTableFile = new IncludeEntry(tablePath.Trim(), m.KeyLocation("terminal_table"));

@@ -12,11 +12,14 @@ public static partial class ProjectFileEditor
     /// to just past its last (its closing quote), and the quote it is written with ("" when plain).
     /// </summary>
     /// <exception cref="ProjectException">A block scalar, or a value written over several lines: it is not rewritten.</exception>
-    private static (int Start, int End, string Quote) ScalarSpan(string text, List<int> lines, SourceScalar scalar, UpsizeChange change, string key)
+    private static (int Start, int End, string Quote) ScalarSpan(string text, List<int> lines, SourceScalar scalar, UpsizeChange change, string key) =>
+        ScalarSpan(text, lines, scalar, change.SizeLocation.File, $"the {key} of run '{change.RunId}'",
+            $"'{key}: {key switch { SizeKey => change.SizeBefore, GroundKey => change.GroundSize, _ => Number(change.SetsBefore) }}'");
+
+    /// <summary>As the overload for a run's value, for <paramref name="what"/> in <paramref name="file"/>, written as <paramref name="example"/> on one line.</summary>
+    private static (int Start, int End, string Quote) ScalarSpan(string text, List<int> lines, SourceScalar scalar, string file, string what, string example)
     {
-        var at = new SourceLocation(change.SizeLocation.File, scalar.Line, scalar.Column);
-        var what = $"the {key} of run '{change.RunId}'";
-        var example = $"'{key}: {key switch { SizeKey => change.SizeBefore, GroundKey => change.GroundSize, _ => Number(change.SetsBefore) }}'";
+        var at = new SourceLocation(file, scalar.Line, scalar.Column);
         var start = Position(lines, scalar.Line, scalar.Column);
         if (start < text.Length && text[start] == '!')
         {

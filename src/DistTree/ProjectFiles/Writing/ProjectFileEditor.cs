@@ -30,7 +30,11 @@ public static partial class ProjectFileEditor
     /// A byte-order mark is kept.
     /// </summary>
     /// <exception cref="ProjectException">A size is not where the plan says, or is written in a form that cannot be rewritten.</exception>
-    public static byte[] Apply(byte[] bytes, string file, IEnumerable<UpsizeChange> changes)
+    public static byte[] Apply(byte[] bytes, string file, IEnumerable<UpsizeChange> changes) => Apply(bytes, file, changes, []);
+
+    /// <summary>As <see cref="Apply(byte[], string, IEnumerable{UpsizeChange})"/>, with the transformers' taps <paramref name="taps"/> set too (see <c>ProjectFileEditor.Taps.cs</c>).</summary>
+    /// <exception cref="ProjectException">A size or tap is not where the plan says, or is written in a form that cannot be rewritten.</exception>
+    public static byte[] Apply(byte[] bytes, string file, IEnumerable<UpsizeChange> changes, IEnumerable<TapChange> taps)
     {
         ArgumentNullException.ThrowIfNull(bytes);
         var bom = bytes is [0xEF, 0xBB, 0xBF, ..];
@@ -44,7 +48,7 @@ public static partial class ProjectFileEditor
             throw ProjectException.At(new SourceLocation(file, 1, 1), "the file is not UTF-8 text; nothing written");
         }
 
-        var edited = Encoding.UTF8.GetBytes(Apply(text, file, changes));
+        var edited = Encoding.UTF8.GetBytes(Apply(text, file, changes, taps));
         return bom ? [0xEF, 0xBB, 0xBF, .. edited] : edited;
     }
 
@@ -53,17 +57,22 @@ public static partial class ProjectFileEditor
     /// applied; each change's <see cref="UpsizeChange.SizeLocation"/> must be in it.
     /// </summary>
     /// <exception cref="ProjectException">A size is not where the plan says, or is written in a form that cannot be rewritten.</exception>
-    public static string Apply(string text, string file, IEnumerable<UpsizeChange> changes)
+    public static string Apply(string text, string file, IEnumerable<UpsizeChange> changes) => Apply(text, file, changes, []);
+
+    /// <summary>As <see cref="Apply(string, string, IEnumerable{UpsizeChange})"/>, with the transformers' taps <paramref name="taps"/> set too.</summary>
+    /// <exception cref="ProjectException">A size or tap is not where the plan says, or is written in a form that cannot be rewritten.</exception>
+    public static string Apply(string text, string file, IEnumerable<UpsizeChange> changes, IEnumerable<TapChange> taps)
     {
         ArgumentNullException.ThrowIfNull(text);
         ArgumentNullException.ThrowIfNull(changes);
+        var tapList = TapsIn(file, taps);
         var list = changes.ToList();
         if (list.Find(c => c.SizeLocation.File != file) is { } other)
         {
             throw new ArgumentException($"the size of run {other.RunId} is in {other.SizeLocation.File}, not in {file}", nameof(changes));
         }
 
-        if (list.Count == 0)
+        if (list.Count == 0 && tapList.Count == 0)
         {
             return text;
         }
@@ -80,6 +89,8 @@ public static partial class ProjectFileEditor
 
             PlanRun(text, lines, change, entry, edits);
         }
+
+        PlanTaps(text, file, lines, tapList, edits);
 
         var result = new StringBuilder(text);
         foreach (var edit in edits.OrderByDescending(e => e.Position))

@@ -7,7 +7,8 @@ public sealed class UpsizeCommandTests
     private static string Demo => Path.Combine(TestPaths.RepoRoot, "projects", "quillfeather-medical.yaml");
 
     // The --apply round trip: the applied copy checks with only the two findings no allowed size fixes (a feeder and a
-    // branch circuit whose least fitting size is beyond their devices' terminals), and a line diff shows only size lines changed.
+    // branch circuit whose least fitting size is beyond their devices' terminals), and a line diff shows only size lines
+    // changed and T4's tap line added below its last one-line value (x_r).
     [Fact]
     public void Upsize_Apply_ThenCheckHasOnlyWhatNoAllowedSizeFixes_AndOnlySizeLinesChange()
     {
@@ -20,10 +21,15 @@ public sealed class UpsizeCommandTests
             Assert.Equal(before, File.ReadAllBytes(Demo));
             var check = CliRunner.Run("check", output);
             Assert.Equal(1, check.ExitCode);
-            // HG's drop, LP4/32's drop, and LP4/32's total: the plan's tap on T4 is not written (set by hand).
-            Assert.Contains(", 3 findings,", check.Out, StringComparison.Ordinal);
+            // HG's drop and LP4/32's drop; T4's tap, written, clears LP4/32's total; HG's far end clears with its 4 AWG grounding conductor.
+            Assert.Contains(", 2 findings,", check.Out, StringComparison.Ordinal);
             var old = File.ReadAllLines(Demo);
-            var @new = File.ReadAllLines(output);
+            var written = File.ReadAllLines(output).ToList();
+            var added = written.IndexOf("    tap_percent: -2.5");
+            Assert.Equal("    x_r: 2.2", written[added - 1]);
+            Assert.Equal("  - id: T4", written[added - 7]);
+            written.RemoveAt(added);
+            var @new = written.ToArray();
             Assert.Equal(old.Length, @new.Length);
             var changed = old.Zip(@new).Where(p => p.First != p.Second).ToArray();
             Assert.NotEmpty(changed);
@@ -36,17 +42,20 @@ public sealed class UpsizeCommandTests
         }
     }
 
-    // --apply writes conductor sizes only: a tap the plan sets is named on standard error, to be set by hand.
+    // A plan that only sets a tap: the copy differs from the input by the one tap_percent line, and analyzes clean.
     [Fact]
-    public void Upsize_ApplyAPlanWithATap_NamesTheTapToSetByHand()
+    public void Upsize_ApplyAPlanWithATap_WritesTheTapLineOnly()
     {
         using var folder = new TempFolder();
         var project = folder.File("tap.yaml");
-        File.WriteAllText(project, Sizing.UpsizerRemedyTests.Transformer());
+        var text = Sizing.UpsizerRemedyTests.Transformer();
+        File.WriteAllText(project, text);
         var result = CliRunner.Run("upsize", project, "--apply", folder.File("fixed.yaml"));
         Assert.Equal(0, result.ExitCode);
-        Assert.Contains("not written: set tap_percent of 'T1' to -2.5 by hand (--apply writes conductor sizes only)", result.Error, StringComparison.Ordinal);
-        Assert.Equal(File.ReadAllBytes(project), File.ReadAllBytes(folder.File("fixed.yaml")));
+        Assert.Equal($"wrote {folder.File("fixed.yaml")}: 0 runs changed, 1 transformer tap set\n", result.Error.ReplaceLineEndings("\n"));
+        var x = text.IndexOf("x_r: 2\n", StringComparison.Ordinal) + "x_r: 2\n".Length;
+        Assert.Equal(text.Insert(x, "    tap_percent: -2.5\n"), File.ReadAllText(folder.File("fixed.yaml")));
+        Assert.Equal(0, CliRunner.Run("analyze", folder.File("fixed.yaml")).ExitCode);
     }
 
     // A grounding conductor raised alone for the far-end fault is written as the run's ground_size, on the size's line, and
@@ -104,9 +113,10 @@ public sealed class UpsizeCommandTests
         Assert.Equal("4 AWG, larger than it need be for the code alone, so that a fault at the far end trips the device (NEC 250.4(A)(5)); the code's minimum is 6 AWG (NEC 250.122); it replaces the stated 10 AWG", hg.GetProperty("grounding_note").GetString());
         var left = plan.GetProperty("unresolvable").EnumerateArray().First(u => u.GetProperty("subject").GetString() == "HG");
         Assert.Contains("beyond the terminal limit of its 50 A device (1×4 AWG", left.GetProperty("message").GetString(), StringComparison.Ordinal);
-        // T4's most raising tap (−5 %, free) lets LP4/32 take 10 AWG for its total in place of more copper.
+        // T4's −2.5 % tap (free) lets LP4/32 take 10 AWG for its total in place of more copper; −5 % would put T4's
+        // secondary 100/95 − 1 = 5.26 % above nominal at no load, over the default light-load limit of 5 % (ANSI C84.1, recalled).
         var tap = Assert.Single(plan.GetProperty("tap_changes").EnumerateArray());
-        Assert.Equal("T4", tap.GetProperty("transformer").GetString());
+        Assert.Equal(("T4", -2.5), (tap.GetProperty("transformer").GetString(), tap.GetProperty("tap_percent_after").GetDouble()));
     }
 
     // Each more set is tried for every size of every feeder: a million took 54 s and 7.7 GB (docs/limits.md).
