@@ -45,6 +45,6 @@ internal static class PlanViewBuilder
         Percent(c.DropPercentBefore),
         Percent(c.DropPercentAfter),
         Metres(c.CostAdded),
-        Escape(string.Join(" ", new[] { c.GroundingNote, c.FaultClearingNote is { } f ? $"Fault at the far end: {f}." : null }.OfType<string>())),
+        Escape(string.Join(". ", new[] { c.GroundingNote, c.FaultClearingNote is { } f ? $"Fault at the far end: {f}" : null }.OfType<string>())),
         Escape(Where(c.SizeLocation)));
 }
