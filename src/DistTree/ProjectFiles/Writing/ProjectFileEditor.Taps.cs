@@ -108,30 +108,9 @@ public static partial class ProjectFileEditor
     {
         var wanted = taps.Select(t => (t.Location.Line, t.Location.Column)).ToHashSet();
         var found = new Dictionary<(int Line, int Column), SourceMapping>();
-        var bag = new DiagnosticBag();
-        bag.AddFile(file);
-        var pending = new Stack<SourceNode>();
-        if (SourceTreeReader.Read(text, file, bag) is { } root)
+        foreach (var mapping in Mappings(text, file).Where(m => wanted.Contains((m.Line, m.Column))))
         {
-            pending.Push(root);
-        }
-
-        while (pending.Count > 0)
-        {
-            switch (pending.Pop())
-            {
-                case SourceMapping mapping:
-                    if (wanted.Contains((mapping.Line, mapping.Column)))
-                    {
-                        found.TryAdd((mapping.Line, mapping.Column), mapping);
-                    }
-
-                    mapping.Entries.ForEach(e => pending.Push(e.Value));
-                    break;
-                case SourceSequence sequence:
-                    sequence.Items.ForEach(pending.Push);
-                    break;
-            }
+            found.TryAdd((mapping.Line, mapping.Column), mapping);
         }
 
         return found;

@@ -166,6 +166,23 @@ public static partial class ProjectFileEditor
     {
         var wanted = changes.Select(c => (c.SizeLocation.Line, c.SizeLocation.Column)).ToHashSet();
         var found = new Dictionary<(int Line, int Column), SizeEntry>();
+        foreach (var mapping in Mappings(text, file))
+        {
+            foreach (var (key, value) in mapping.Entries)
+            {
+                if (key.Value == SizeKey && value is SourceScalar scalar && wanted.Contains((scalar.Line, scalar.Column)))
+                {
+                    found[(scalar.Line, scalar.Column)] = new SizeEntry(mapping, key, scalar);
+                }
+            }
+        }
+
+        return found;
+    }
+
+    // Every mapping of the file as the loader reads it, depth first (iterative: a deep file cannot overflow the stack).
+    private static IEnumerable<SourceMapping> Mappings(string text, string file)
+    {
         var bag = new DiagnosticBag();
         bag.AddFile(file);
         var pending = new Stack<SourceNode>();
@@ -179,24 +196,14 @@ public static partial class ProjectFileEditor
             switch (pending.Pop())
             {
                 case SourceMapping mapping:
-                    foreach (var (key, value) in mapping.Entries)
-                    {
-                        if (key.Value == SizeKey && value is SourceScalar scalar && wanted.Contains((scalar.Line, scalar.Column)))
-                        {
-                            found[(scalar.Line, scalar.Column)] = new SizeEntry(mapping, key, scalar);
-                        }
-
-                        pending.Push(value);
-                    }
-
+                    yield return mapping;
+                    mapping.Entries.ForEach(e => pending.Push(e.Value));
                     break;
                 case SourceSequence sequence:
                     sequence.Items.ForEach(pending.Push);
                     break;
             }
         }
-
-        return found;
     }
 
     // A size value found: the run's mapping, the size key, and the value.
