@@ -28,11 +28,6 @@ internal static class PlanPruner
     {
         var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
         var nodes = before.Network.Nodes;
-        var nodeOf = new Dictionary<string, int>(StringComparer.Ordinal);
-        for (var i = 0; i < nodes.Count; i++)
-        {
-            nodeOf.TryAdd(nodes[i].Id, i);
-        }
 
         bool Candidate(int key) => key < 0 || undoable(key);
 
@@ -50,15 +45,7 @@ internal static class PlanPruner
                 break;
             }
 
-            var implicated = new HashSet<int>();
-            foreach (var f in fresh)
-            {
-                for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
-                {
-                    implicated.UnionWith(new[] { PlanPicks.KeyOfRun(i), PlanPicks.KeyOfTap(i) }.Where(undone.Contains));
-                }
-            }
-
+            var implicated = Implicated(nodes, fresh, undone);
             if (implicated.Count == 0)
             {
                 undone.Clear(); // a finding no undone change lies above: keep them all
@@ -87,5 +74,27 @@ internal static class PlanPruner
         return (picks, after);
     }
 
-    private static string Key(Finding f) => $"{f.Code} {f.Subject}";
+    /// <summary>A finding's key: its code and subject (a finding the proof has keeps its key whatever its figures).</summary>
+    public static string Key(Finding f) => $"{f.Code} {f.Subject}";
+
+    /// <summary>The change keys of <paramref name="keys"/> (runs and taps) on the path from each finding's subject up to the service.</summary>
+    public static HashSet<int> Implicated(IReadOnlyList<Network.NetworkNode> nodes, List<Finding> fresh, HashSet<int> keys)
+    {
+        var nodeOf = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            nodeOf.TryAdd(nodes[i].Id, i);
+        }
+
+        var implicated = new HashSet<int>();
+        foreach (var f in fresh)
+        {
+            for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
+            {
+                implicated.UnionWith(new[] { PlanPicks.KeyOfRun(i), PlanPicks.KeyOfTap(i) }.Where(keys.Contains));
+            }
+        }
+
+        return implicated;
+    }
 }

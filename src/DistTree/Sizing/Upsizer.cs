@@ -62,9 +62,15 @@ public sealed class Upsizer
         (picks, after) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);
-        var screen = new UndoScreen(problem, picks.Runs);
-        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), screen.MayPass, Solve);
-        var repairCost = picks.Runs.Where(p => repairedRuns.Contains(p.Key)).Sum(p => p.Value.Cost - (optimum.TryGetValue(p.Key, out var was) ? was.Cost : 0));
+        var screen = new StepScreen(problem);
+
+        // Every change first one step down toward its stated choice as far as the solver's own figures allow (before any
+        // undo takes the slack a large step needs), then every change the design does not need undone.
+        (picks, after) = PlanStepDown.Refine(problem, catalog, picks, after, repairedRuns, screen, Solve);
+        var stepped = picks.Runs;
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), (k, a) => screen.MayUndo(k, stepped, a), Solve);
+        (picks, after) = PlanStepDown.StepTapsBack(problem, picks, after, screen, Solve);
+        var repairCost = picks.Runs.Where(p => repairedRuns.Contains(p.Key)).Sum(p => Math.Max(0, p.Value.Cost - (optimum.TryGetValue(p.Key, out var was) ? was.Cost : 0)));
         var changes = Changes(before, after, picks.Runs);
         var taps = TapChanges(before, after, picks.Taps);
         unresolvable.AddRange(GroundsLeft(after, changes));
