@@ -13,7 +13,7 @@ namespace DistTree.Sizing;
 /// such steps at once, restoring the ones above each new finding; then each step still open alone, the largest saving
 /// first; round after round until nothing steps down. A raising tap then steps back one position toward its stated one
 /// where that passes. A run the far-end repair raised steps down only while its far end still clears (any new finding
-/// rejects a step). Trials and rounds are bounded (<see cref="MaxSingleTrials"/>, <see cref="MaxRounds"/>).
+/// rejects a step); a step likely to leave a far end below its trip current is tried after the others. Trials and rounds are bounded (<see cref="MaxSingleTrials"/>, <see cref="MaxRounds"/>).
 /// </summary>
 internal static class PlanStepDown
 {
@@ -51,8 +51,10 @@ internal static class PlanStepDown
                 return null;
             }
 
-            // A run the far-end repair raised keeps its repair: it was the size its far end needed, on the repair's bound.
-            if (repaired.Contains(key))
+            // A run the far-end repair raised and could not clear keeps its repair (a smaller size only lowers its fault more);
+            // one it cleared may step down while its far end still clears (a new finding of any kind rejects a step).
+            var id = problem.Network.Nodes[key].Id;
+            if (repaired.Contains(key) && proof.AllFindings.Any(f => f.Kind == FindingKind.FaultClearing && f.Subject == id))
             {
                 return null;
             }
