@@ -9,7 +9,9 @@ namespace DistTree.Sizing;
 /// again by the real solver (per line, with the neutral and the transformer connections), has no finding the plan's proof
 /// did not have. First all such changes at once, restoring the ones above each new finding until none is left; then each
 /// change still kept alone, most costly first. Undoing a change only ever raises drops below it, so a change that cannot be
-/// undone alone cannot be undone with another either.
+/// undone alone cannot be undone with another either. It follows <see cref="PlanStepDown"/>, which takes changes one
+/// choice down first (where undoing them whole fails); together they make the plan minimal on the solver's figures, the
+/// optimum having been least only on its own grid.
 /// </summary>
 internal static class PlanPruner
 {
