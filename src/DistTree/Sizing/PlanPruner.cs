@@ -9,7 +9,9 @@ namespace DistTree.Sizing;
 /// again by the real solver (per line, with the neutral and the transformer connections), has no finding the plan's proof
 /// did not have. First all such changes at once, restoring the ones above each new finding until none is left; then each
 /// change still kept alone, most costly first. Undoing a change only ever raises drops below it, so a change that cannot be
-/// undone alone cannot be undone with another either.
+/// undone alone cannot be undone with another either. It follows <see cref="PlanStepDown"/>, which takes changes one
+/// choice down first (where undoing them whole fails); together they make the plan minimal on the solver's figures, the
+/// optimum having been least only on its own grid.
 /// </summary>
 internal static class PlanPruner
 {
@@ -28,11 +30,6 @@ internal static class PlanPruner
     {
         var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
         var nodes = before.Network.Nodes;
-        var nodeOf = new Dictionary<string, int>(StringComparer.Ordinal);
-        for (var i = 0; i < nodes.Count; i++)
-        {
-            nodeOf.TryAdd(nodes[i].Id, i);
-        }
 
         bool Candidate(int key) => key < 0 || undoable(key);
 
@@ -50,15 +47,7 @@ internal static class PlanPruner
                 break;
             }
 
-            var implicated = new HashSet<int>();
-            foreach (var f in fresh)
-            {
-                for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
-                {
-                    implicated.UnionWith(new[] { PlanPicks.KeyOfRun(i), PlanPicks.KeyOfTap(i) }.Where(undone.Contains));
-                }
-            }
-
+            var implicated = Implicated(nodes, fresh, undone);
             if (implicated.Count == 0)
             {
                 undone.Clear(); // a finding no undone change lies above: keep them all
@@ -87,5 +76,27 @@ internal static class PlanPruner
         return (picks, after);
     }
 
-    private static string Key(Finding f) => $"{f.Code} {f.Subject}";
+    /// <summary>A finding's key: its code and subject (a finding the proof has keeps its key whatever its figures).</summary>
+    public static string Key(Finding f) => $"{f.Code} {f.Subject}";
+
+    /// <summary>The change keys of <paramref name="keys"/> (runs and taps) on the path from each finding's subject up to the service.</summary>
+    public static HashSet<int> Implicated(IReadOnlyList<Network.NetworkNode> nodes, List<Finding> fresh, HashSet<int> keys)
+    {
+        var nodeOf = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (var i = 0; i < nodes.Count; i++)
+        {
+            nodeOf.TryAdd(nodes[i].Id, i);
+        }
+
+        var implicated = new HashSet<int>();
+        foreach (var f in fresh)
+        {
+            for (var i = nodeOf.GetValueOrDefault(f.Subject, -1); i >= 0; i = nodes[i].ParentIndex)
+            {
+                implicated.UnionWith(new[] { PlanPicks.KeyOfRun(i), PlanPicks.KeyOfTap(i) }.Where(keys.Contains));
+            }
+        }
+
+        return implicated;
+    }
 }

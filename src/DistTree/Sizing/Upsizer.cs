@@ -12,7 +12,12 @@ namespace DistTree.Sizing;
 /// within its limits, and proves it by re-solving the tree with the plan applied. Runs never get smaller;
 /// pinned runs (<c>fixed: true</c>) keep their size; feeders may take more parallel sets up to
 /// <c>sizing: max_sets</c>. Drops are budgeted on a grid of <c>sizing: resolution_percent</c> (0.001
-/// percentage points by default), each rounded up, so the plan is safe and optimal on that grid.
+/// percentage points by default), each rounded up, and a feeder at its worst line for every end point below it, so the
+/// optimum is safe and least on that grid. The proof is a full solve; after it, far ends too small to trip their devices
+/// are raised (<see cref="FarEndRepair"/>), every change steps down toward its stated choice where the solver's own figures
+/// allow (<see cref="PlanStepDown"/>), and every change the design does not need is undone (<see cref="PlanPruner"/>): the
+/// plan is then minimal on the solver's figures (no change can be undone, or stepped one allowed choice down, with the
+/// design still passing), not proved least on them.
 /// </summary>
 public sealed class Upsizer
 {
@@ -63,10 +68,16 @@ public sealed class Upsizer
         (picks, after, var shortOf) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
         Verify(after, unresolvable);
-        var screen = new UndoScreen(problem, picks.Runs);
-        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), screen.MayPass, Solve);
+        var screen = new StepScreen(problem);
+
+        // Every change first one step down toward its stated choice as far as the solver's own figures allow (before any
+        // undo takes the slack a large step needs), then every change the design does not need undone.
+        (picks, after) = PlanStepDown.Refine(problem, catalog, picks, after, repairedRuns, screen, Solve);
+        var stepped = picks.Runs;
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), (k, a) => screen.MayUndo(k, stepped, a), Solve);
+        (picks, after) = PlanStepDown.StepTapsBack(problem, picks, after, screen, Solve);
         var changes = Changes(before, after, picks, shortOf);
-        var repairCost = changes.Where(c => repairedRuns.Contains(c.NodeIndex)).Sum(c => c.CostAdded - (optimum.TryGetValue(c.NodeIndex, out var was) ? was.Cost : 0));
+        var repairCost = changes.Where(c => repairedRuns.Contains(c.NodeIndex)).Sum(c => Math.Max(0, c.CostAdded - (optimum.TryGetValue(c.NodeIndex, out var was) ? was.Cost : 0)));
         var taps = TapChanges(before, after, picks.Taps);
         unresolvable.AddRange(GroundsLeft(after, changes));
         unresolvable.AddRange(FaultsLeft(after));

@@ -1,3 +1,4 @@
+using DistTree.Conductors;
 using DistTree.Sizing;
 using DistTree.Solving;
 using DistTree.Tests.Solving;
@@ -25,6 +26,16 @@ public sealed class UpsizerMinimalityTests
         return (undoable is null).Label(undoable ?? "");
     });
 
+    // Nor can any change step one choice down alone: to the most costly of its run's allowed choices (within its device's
+    // terminals, meeting its own limits) that costs less, the tree solved again by the real solver.
+    [Property(MaxTest = 25)]
+    public Property Plan_RandomTree_NoChangeCanStepDownAlone() => Prop.ForAll(Trees, tree =>
+    {
+        var before = SolverHarness.Solve(tree.ToYaml(lengthScale: 4, rules: "conductor_temperature: estimated"));
+        var steppable = SteppableDown(Upsizer.Standard.Plan(before));
+        return (steppable is null).Label(steppable ?? "");
+    });
+
     public static TheoryData<string> Examples => new(
         "maple-hollow-library.yaml", "quillfeather-medical.yaml", "riverside-clinic-metric.yaml", "small-office.yaml", "campus/campus.yaml");
 
@@ -35,6 +46,41 @@ public sealed class UpsizerMinimalityTests
         var before = Analysis.Run(Path.Combine(TestPaths.RepoRoot, "projects", example)).Solution;
         var plan = Upsizer.Standard.Plan(before);
         Assert.Null(Undoable(plan, pairs: true));
+        Assert.Null(SteppableDown(plan));
+    }
+
+    /// <summary>
+    /// The first change of <paramref name="plan"/> that can step one allowed choice down alone with no new finding, in words,
+    /// or null. A run whose far end the plan leaves unable to trip its device is not stepped (no smaller size helps it).
+    /// </summary>
+    internal static string? SteppableDown(UpsizePlan plan)
+    {
+        var left = plan.After.AllFindings.Select(Key).ToHashSet(StringComparer.Ordinal);
+        var problem = SizingProblem.Build(plan.Before, ConductorCatalog.Standard);
+        var nodeOf = plan.Before.Runs.Where(r => r.Kind != RunResultKind.Transformer).ToDictionary(r => r.Id, r => r.NodeIndex, StringComparer.Ordinal);
+        foreach (var c in plan.Changes)
+        {
+            if (plan.After.AllFindings.Any(f => f.Kind == FindingKind.FaultClearing && f.Subject == c.RunId))
+            {
+                continue;
+            }
+
+            var lower = problem.Options[nodeOf[c.RunId]]!.Where(o => o.MeetsRunLimits && o.WithinTerminals && o.Cost < c.CostAdded - 1e-9).OrderByDescending(o => o.Cost).FirstOrDefault();
+            if (lower.Sets == 0)
+            {
+                continue;
+            }
+
+            var stated = lower.Size.Text == c.SizeBefore && lower.Sets == c.SetsBefore;
+            var others = plan.Changes.Where(o => o != c);
+            var changes = stated ? others : others.Append(c with { SizeAfter = lower.Size.Text, SetsAfter = lower.Sets, CostAdded = lower.Cost });
+            if (Upsizer.Standard.Resolve(plan.Before, changes, plan.TapChanges).AllFindings.All(f => left.Contains(Key(f))))
+            {
+                return $"{c.RunId} ({c.SetsAfter} × {c.SizeAfter}) can step down to {lower.Sets} × {lower.Size}";
+            }
+        }
+
+        return null;
     }
 
     /// <summary>
