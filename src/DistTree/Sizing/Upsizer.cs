@@ -66,7 +66,8 @@ public sealed class Upsizer
         // not need undone (a far end's repair was needed when it was made: it is not tried again).
         var optimum = picks.Runs;
         (picks, after, var shortOf) = FarEndRepair.Repair(before, picks, after, catalog, Solve);
-        var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k]).ToHashSet();
+        // A run is repaired where its lines changed, or where it was given a grounding conductor of its own (lines kept).
+        var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k] || picks.Grounds.ContainsKey(k)).ToHashSet();
         Verify(after, unresolvable);
         var screen = new StepScreen(problem);
 

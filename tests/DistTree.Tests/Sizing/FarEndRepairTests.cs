@@ -55,6 +55,9 @@ public sealed class FarEndRepairTests
 
         // Priced as one conductor of the run's length over the code's minimum: Δarea × 220 ft × 0.3048 m/ft.
         Assert.Equal((AreaMm2(ground) - AreaMm2(change.GroundMinSize!)) * 220 * 0.3048, change.CostAdded, 6);
+
+        // The drop limits needed no change: the whole cost is the repair's, though the lines kept their size.
+        Assert.Equal(change.CostAdded, plan.FarEndRepairCostAdded, 6);
     }
 
     [Fact]
