@@ -157,6 +157,10 @@ try
             savings.Add(SavingOf($"generated {size:N0} end points", solution, plan));
             if (!big)
             {
+                // The same plan with the step-down's and the pruner's trials solved one at a time (TrialGroups), for the ratio.
+                var alone = new Upsizer(DistTree.Conductors.ConductorCatalog.Standard) { SolvesTrialsTogether = false };
+                results.Add(Measurement.Of("upsize-alone", size, repeats, () => alone.Plan(solution)));
+
                 // Not timed: the same building with every feeder three times as long, where feeders and branch circuits compete.
                 var stressed = Analysis.Parse(RevisionEdit.Stress(text), path).Solution;
                 savings.Add(SavingOf($"  same, feeders 3 × as long", stressed, Upsizer.Standard.Plan(stressed)));
@@ -308,6 +312,10 @@ static void Summarise(List<Measurement> results, Dictionary<int, double> runsPer
             };
             var once = upsize.Seconds.Count == 1 ? " (measured once)" : "";
             Console.WriteLine($"  upsize {size,7:N0}: {Measurement.Format(upsize.Median),9}{once}, solve {Measurement.Format(solve.Median),9}, upsize / solve {upsize.Median / solve.Median,7:0.0}{target}");
+            if (Find("upsize-alone", size) is { } alone)
+            {
+                Console.WriteLine($"  upsize {size,7:N0} with every trial solved alone: {Measurement.Format(alone.Median),9}; together / alone {upsize.Median / alone.Median:0.00}");
+            }
         }
     }
 

@@ -23,10 +23,10 @@ internal static class PlanPruner
     /// which run changes' runs meet their own limits at their stated size (a tap may always be tried at its stated
     /// position); <paramref name="mayPass"/>, given a change's key and the proof at hand, is false only where undoing
     /// it certainly leaves a finding (so it is not solved again); <paramref name="solve"/> solves the project with the
-    /// picks given.
+    /// picks given; <paramref name="groups"/> solves the single trials of changes on subtrees apart together.
     /// </summary>
     public static (PlanPicks Picks, Solution After) Prune(
-        Solution before, PlanPicks picks, Solution after, Func<int, bool> undoable, Func<int, Solution, bool> mayPass, Func<PlanPicks, Solution> solve)
+        Solution before, PlanPicks picks, Solution after, Func<int, bool> undoable, Func<int, Solution, bool> mayPass, Func<PlanPicks, Solution> solve, TrialGroups groups)
     {
         var left = new HashSet<string>(after.AllFindings.Select(Key), StringComparer.Ordinal);
         var nodes = before.Network.Nodes;
@@ -56,22 +56,11 @@ internal static class PlanPruner
             undone.ExceptWith(implicated);
         }
 
-        // Then each change still kept alone, most costly first.
+        // Then each change still kept alone, most costly first (those on subtrees apart solved together, see TrialGroups).
         var single = picks.Keys.Where(k => Candidate(k.Key)).OrderByDescending(k => k.Cost).ThenBy(k => k.Key).Select(k => k.Key).Take(MaxSingleTrials).ToArray();
-        foreach (var key in single)
-        {
-            if (!mayPass(key, after))
-            {
-                continue;
-            }
-
-            var trial = picks.Without([key]);
-            var solved = solve(trial);
-            if (solved.AllFindings.All(f => left.Contains(Key(f))))
-            {
-                (picks, after) = (trial, solved);
-            }
-        }
+        (picks, after) = groups.Run(
+            [.. single.Select(PlanPicks.NodeOf)], picks, after, (at, p, proof) => mayPass(single[at], proof) ? p.Without([single[at]]) : null,
+            s => [.. s.AllFindings.Where(f => !left.Contains(Key(f)))], solve, () => true, _ => { });
 
         return (picks, after);
     }

@@ -27,7 +27,7 @@ internal static class PlanStepDown
     /// <summary>How many steps likely to leave a far end below its trip current are tried alone in one round, at most.</summary>
     public const int MaxLikelyFailTrials = 4;
 
-    /// <summary>How many tap steps are tried, at most (each a solve; a tap step saves no material); a fifth of the solve budget where less.</summary>
+    /// <summary>How many solves the tap steps take, at most (a tap step saves no material); a fifth of the solve budget where less.</summary>
     public const int MaxTapTrials = 4;
 
     /// <summary>How many solves one round's steps all at once take, at most, before the round goes on to single steps.</summary>
@@ -45,12 +45,13 @@ internal static class PlanStepDown
     /// names the nodes whose runs the far-end repair raised; <paramref name="solve"/> solves the project with the picks given.
     /// </summary>
     public static (PlanPicks Picks, Solution After) Refine(
-        SizingProblem problem, ConductorCatalog catalog, PlanPicks picks, Solution after, IReadOnlySet<int> repaired, StepScreen screen, Func<PlanPicks, Solution> solve)
+        SizingProblem problem, ConductorCatalog catalog, PlanPicks picks, Solution after, IReadOnlySet<int> repaired, StepScreen screen, Func<PlanPicks, Solution> solve,
+        TrialGroups groups)
     {
         var budget = SolveBudget(after.EndPoints.Count);
         var left = new HashSet<string>(after.AllFindings.Select(PlanPruner.Key), StringComparer.Ordinal);
         var rejected = new HashSet<int>();
-        bool Passes(Solution solved) => solved.AllFindings.All(f => left.Contains(PlanPruner.Key(f)));
+        List<Finding> Fresh(Solution solved) => [.. solved.AllFindings.Where(f => !left.Contains(PlanPruner.Key(f)))];
 
         // The runs whose far end does not trip its device in a proof (kept for the last proof asked about).
         (Solution? Of, HashSet<string> Ids) uncleared = (null, []);
@@ -64,10 +65,10 @@ internal static class PlanStepDown
             return uncleared.Ids;
         }
 
-        // A run's step: its next cheaper allowed choice (null where there is none, or the screen rules it out).
-        Step? StepOf(int key, Solution proof)
+        // A run's step from the picks at hand: its next cheaper allowed choice (null where there is none, or the screen rules it out).
+        Step? StepOf(int key, Solution proof, PlanPicks at)
         {
-            if (key < 0 || rejected.Contains(key) || !picks.Runs.TryGetValue(key, out var now) || problem.Options[key] is not { } options)
+            if (key < 0 || rejected.Contains(key) || !at.Runs.TryGetValue(key, out var now) || problem.Options[key] is not { } options)
             {
                 return null;
             }
@@ -76,7 +77,7 @@ internal static class PlanStepDown
             // one it cleared with its lines alone may step down while its far end still clears (a new finding of any kind rejects
             // a step).
             // One given a grounding conductor of its own keeps the pair the repair priced together.
-            if (repaired.Contains(key) && (picks.Grounds.ContainsKey(key) || Uncleared(proof).Contains(problem.Network.Nodes[key].Id)))
+            if (repaired.Contains(key) && (at.Grounds.ContainsKey(key) || Uncleared(proof).Contains(problem.Network.Nodes[key].Id)))
             {
                 return null;
             }
@@ -100,12 +101,12 @@ internal static class PlanStepDown
             var stepped = false;
 
             // All at once: the findings that come back name the steps above them, which are kept back.
-            var batch = picks.Runs.Keys.Select(k => StepOf(k, after)).OfType<Step>().ToDictionary(s => s.Key);
+            var batch = picks.Runs.Keys.Select(k => StepOf(k, after, picks)).OfType<Step>().ToDictionary(s => s.Key);
             for (var solves = 0; batch.Count > 0 && solves < MaxBatchSolves && budget-- > 0; solves++)
             {
                 var trial = With(problem, picks, batch.Values);
                 var solved = solve(trial);
-                var fresh = solved.AllFindings.Where(f => !left.Contains(PlanPruner.Key(f))).ToList();
+                var fresh = Fresh(solved);
                 if (fresh.Count == 0)
                 {
                     (picks, after, stepped) = (trial, solved, true);
@@ -124,31 +125,19 @@ internal static class PlanStepDown
                 }
             }
 
-            // Then each step still open alone, the largest saving first; one that fails alone fails with more steps too.
-            var open = picks.Runs.Keys.Select(k => StepOf(k, after)).OfType<Step>().OrderByDescending(s => s.Saving).ThenBy(s => s.Key).ToArray();
+            // Then each step still open alone, the largest saving first; one that fails alone fails with more steps too. Steps
+            // on subtrees apart are solved together (see TrialGroups).
+            var open = picks.Runs.Keys.Select(k => StepOf(k, after, picks)).OfType<Step>().OrderByDescending(s => s.Saving).ThenBy(s => s.Key).ToArray();
             var singles = open.Where(s => !s.LikelyFails).Take(MaxSingleTrials).Concat(open.Where(s => s.LikelyFails).Take(MaxLikelyFailTrials)).Select(s => s.Key).ToArray();
-            foreach (var key in singles)
+            var was = picks;
+            var spent = false;
+            (picks, after) = groups.Run(
+                singles, picks, after, (at, p, proof) => StepOf(singles[at], proof, p) is { } step ? With(problem, p, [step]) : null,
+                Fresh, solve, () => !(spent = budget-- <= 0), at => rejected.Add(singles[at]));
+            stepped |= !ReferenceEquals(was, picks);
+            if (spent)
             {
-                if (StepOf(key, after) is not { } step)
-                {
-                    continue;
-                }
-
-                if (budget-- <= 0)
-                {
-                    return (picks, after);
-                }
-
-                var trial = With(problem, picks, [step]);
-                var solved = solve(trial);
-                if (Passes(solved))
-                {
-                    (picks, after, stepped) = (trial, solved, true);
-                }
-                else
-                {
-                    rejected.Add(key);
-                }
+                return (picks, after);
             }
 
             if (!stepped || budget <= 0)
@@ -163,61 +152,46 @@ internal static class PlanStepDown
     /// <summary>
     /// Each raising tap one position back toward its stated one where the tree, solved again, has no finding the proof
     /// <paramref name="after"/> did not have; again while one steps (bounded). It saves no material, so it comes last.
+    /// Taps on subtrees apart are solved together (see <see cref="TrialGroups"/>).
     /// </summary>
     public static (PlanPicks Picks, Solution After) StepTapsBack(
-        SizingProblem problem, PlanPicks picks, Solution after, StepScreen screen, Func<PlanPicks, Solution> solve)
+        SizingProblem problem, PlanPicks picks, Solution after, StepScreen screen, Func<PlanPicks, Solution> solve, TrialGroups groups)
     {
         var left = new HashSet<string>(after.AllFindings.Select(PlanPruner.Key), StringComparer.Ordinal);
-        bool Passes(Solution solved) => solved.AllFindings.All(f => left.Contains(PlanPruner.Key(f)));
         var rejected = new HashSet<int>();
-        var trials = 0;
-        for (var round = 0; round < MaxRounds; round++)
+        var solves = Math.Min(MaxTapTrials, SolveBudget(after.EndPoints.Count) / 5);
+
+        // A transformer's tap one position back from the picks at hand (null where it is at its stated one, or the screen rules it out).
+        PlanPicks? Back(int node, PlanPicks at, Solution proof)
         {
-            var stepped = false;
-            foreach (var node in picks.Taps.Keys.Order().Where(n => !rejected.Contains(n)).ToArray())
+            var taps = problem.Taps[node]!;
+            var now = Array.FindIndex(taps, t => t.TapPercent == at.Taps[node].TapPercent);
+            if (now < 1 || !screen.MayStepTap(node, taps[now], taps[now - 1], proof))
             {
-                var taps = problem.Taps[node]!;
-                var at = Array.FindIndex(taps, t => t.TapPercent == picks.Taps[node].TapPercent);
-                if (at < 1)
-                {
-                    continue;
-                }
-
-                if (trials >= Math.Min(MaxTapTrials, SolveBudget(after.EndPoints.Count) / 5))
-                {
-                    return (picks, after);
-                }
-
-                if (!screen.MayStepTap(node, taps[at], taps[at - 1], after))
-                {
-                    rejected.Add(node);
-                    continue;
-                }
-
-                trials++;
-
-                var trial = picks with { Taps = new Dictionary<int, TapOption>(picks.Taps) };
-                if (at == 1)
-                {
-                    trial.Taps.Remove(node);
-                }
-                else
-                {
-                    trial.Taps[node] = taps[at - 1];
-                }
-
-                var solved = solve(trial);
-                if (Passes(solved))
-                {
-                    (picks, after, stepped) = (trial, solved, true);
-                }
-                else
-                {
-                    rejected.Add(node);
-                }
+                return null;
             }
 
-            if (!stepped)
+            var trial = at with { Taps = new Dictionary<int, TapOption>(at.Taps) };
+            if (now == 1)
+            {
+                trial.Taps.Remove(node);
+            }
+            else
+            {
+                trial.Taps[node] = taps[now - 1];
+            }
+
+            return trial;
+        }
+
+        for (var round = 0; round < MaxRounds && solves > 0; round++)
+        {
+            var nodes = picks.Taps.Keys.Order().Where(n => !rejected.Contains(n)).ToArray();
+            var was = picks;
+            (picks, after) = groups.Run(
+                nodes, picks, after, (at, p, proof) => Back(nodes[at], p, proof),
+                s => [.. s.AllFindings.Where(f => !left.Contains(PlanPruner.Key(f)))], solve, () => solves-- > 0, at => rejected.Add(nodes[at]));
+            if (ReferenceEquals(was, picks))
             {
                 break;
             }

@@ -26,6 +26,12 @@ public sealed class Upsizer
     /// <summary>Creates an upsizer on <paramref name="catalog"/>.</summary>
     public Upsizer(ConductorCatalog catalog) => _catalog = catalog;
 
+    /// <summary>
+    /// False to solve every trial of the step-down and the pruner alone (tests: the trials on subtrees apart, solved
+    /// together, must give the same plan; see <see cref="TrialGroups"/>).
+    /// </summary>
+    internal bool SolvesTrialsTogether { get; init; } = true;
+
     /// <summary>An upsizer on the embedded catalogue.</summary>
     public static Upsizer Standard { get; } = new(ConductorCatalog.Standard);
 
@@ -70,13 +76,14 @@ public sealed class Upsizer
         var repairedRuns = picks.Runs.Keys.Where(k => !optimum.TryGetValue(k, out var was) || was != picks.Runs[k] || picks.Grounds.ContainsKey(k)).ToHashSet();
         Verify(after, unresolvable);
         var screen = new StepScreen(problem);
+        var groups = new TrialGroups(before.Network, independent: !onLoadFlow && SolvesTrialsTogether);
 
         // Every change first one step down toward its stated choice as far as the solver's own figures allow (before any
         // undo takes the slack a large step needs), then every change the design does not need undone.
-        (picks, after) = PlanStepDown.Refine(problem, catalog, picks, after, repairedRuns, screen, Solve);
+        (picks, after) = PlanStepDown.Refine(problem, catalog, picks, after, repairedRuns, screen, Solve, groups);
         var stepped = picks.Runs;
-        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), (k, a) => screen.MayUndo(k, stepped, a), Solve);
-        (picks, after) = PlanStepDown.StepTapsBack(problem, picks, after, screen, Solve);
+        (picks, after) = PlanPruner.Prune(before, picks, after, i => !repairedRuns.Contains(i) && MeetsAtStatedSize(problem, i), (k, a) => screen.MayUndo(k, stepped, a), Solve, groups);
+        (picks, after) = PlanStepDown.StepTapsBack(problem, picks, after, screen, Solve, groups);
         var changes = Changes(before, after, picks, shortOf);
         var repairCost = changes.Where(c => repairedRuns.Contains(c.NodeIndex)).Sum(c => Math.Max(0, c.CostAdded - (optimum.TryGetValue(c.NodeIndex, out var was) ? was.Cost : 0)));
         var taps = TapChanges(before, after, picks.Taps);
