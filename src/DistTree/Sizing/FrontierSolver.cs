@@ -6,6 +6,9 @@ namespace DistTree.Sizing;
 /// at its input; a node's bus sums its children's H; a run takes the best choice
 /// H[b] = min over choices (cost + bus[b − steps]). Leaves need only a sorted sweep. The choices are then
 /// read back top-down from the service with the whole budget. Iterative over the parent-first node array.
+/// A feeder whose end points hang on its far bus is priced for them in their own voltages: its bus is kept as one sum
+/// per group of voltages, and H[b] = min over choices (cost + Σ groups bus_g[b − steps in g]) (see
+/// <see cref="SizingProblem.StepsBelow"/>); the end points further down see its worst voltage.
 /// </summary>
 internal static class FrontierSolver
 {
@@ -24,6 +27,8 @@ internal static class FrontierSolver
         var b = problem.BudgetSteps;
         var top = b + MostRaise(problem);
         var bus = new double[]?[n];
+        var slotBus = new Dictionary<int, double[]>?[n];
+        var binds = new bool[n]; // a node's bus holds a child that limits the budget (not only constants)
         var choices = new short[]?[n];
         var tapChoices = new short[]?[n];
 
@@ -41,26 +46,37 @@ internal static class FrontierSolver
             var parent = node.ParentIndex;
             if (node.Circuit is not null)
             {
-                AddLeaf(ParentBus(bus, parent, top), problem.Options[i]!, problem.Excluded[i]);
+                // Fed directly by a feeder whose drop is known per voltage: it joins the others on the same voltages.
+                // One left out of the budget adds a constant, and limits nothing.
+                var bySlot = problem.OwnSlots[i] != 0 && !problem.Excluded[i] && problem.Options[parent] is [{ SlotDrops: not null }, ..];
+                var target = bySlot ? SlotBus(slotBus, parent, problem.OwnSlots[i], top) : ParentBus(bus, parent, top);
+                AddLeaf(target, problem.Options[i]!, problem.Excluded[i]);
+                binds[parent] |= !bySlot && !problem.Excluded[i];
                 continue;
             }
 
+            var hasWorst = binds[i];
             var own = bus[i] ?? new double[top + 1];
-            bus[i] = null;
+            var slotted = slotBus[i];
+            (bus[i], slotBus[i]) = (null, null);
+            if (slotted is not null && !(constrained[i] && problem.Options[i] is not null))
+            {
+                Merge(own, slotted.Values);
+                slotted = null;
+            }
+
             if (parent < 0)
             {
                 return (ReadBack(problem, choices, tapChoices, top, out tapChoice), own[b]);
             }
 
             var atInput = constrained[i] ? Transform(problem, i, own, out tapChoices[i]) : own;
-            var h = problem.Options[i] is { } options
-                ? (constrained[i] ? BestChoice(atInput, options, out choices[i]) : Cheapest(atInput, options, out choices[i]))
-                : atInput;
-            var target = ParentBus(bus, parent, top);
-            for (var k = 0; k <= top; k++)
-            {
-                target[k] += h[k];
-            }
+            var h = problem.Options[i] is not { } options ? atInput
+                : !constrained[i] ? Cheapest(atInput, options, out choices[i])
+                : slotted is null ? BestChoice(atInput, options, out choices[i])
+                : BestChoiceBySlot(problem, options, own, hasWorst, slotted, out choices[i]);
+            Merge(ParentBus(bus, parent, top), [h]);
+            binds[parent] |= constrained[i];
         }
 
         throw new InvalidOperationException("the network has no service node");
@@ -89,6 +105,30 @@ internal static class FrontierSolver
     }
 
     private static double[] ParentBus(double[]?[] bus, int parent, int budget) => bus[parent] ??= new double[budget + 1];
+
+    // The bus of a feeder's end points on the voltages ownSlots.
+    private static double[] SlotBus(Dictionary<int, double[]>?[] slotBus, int parent, int ownSlots, int budget)
+    {
+        var buses = slotBus[parent] ??= [];
+        if (!buses.TryGetValue(ownSlots, out var b))
+        {
+            buses[ownSlots] = b = new double[budget + 1];
+        }
+
+        return b;
+    }
+
+    // Adds every one of the functions into target.
+    private static void Merge(double[] target, IEnumerable<double[]> functions)
+    {
+        foreach (var f in functions)
+        {
+            for (var k = 0; k < target.Length; k++)
+            {
+                target[k] += f[k];
+            }
+        }
+    }
 
     // A leaf adds the step function min{cost : steps ≤ k}; left out of the budget, its cheapest choice.
     private static void AddLeaf(double[] target, RunOption[] options, bool excluded)
@@ -212,6 +252,69 @@ internal static class FrontierSolver
         return h;
     }
 
+    // As BestChoice, for a feeder whose end points fed directly see its drop in their own voltages (see SizingProblem.StepsBelow):
+    // each group of voltages takes its own steps per choice from the budget. Groups whose steps are the same for every choice
+    // share one sum (the worst's bus, where they are its), so that a balanced feeder costs what BestChoice does.
+    private static double[] BestChoiceBySlot(SizingProblem problem, RunOption[] options, double[] worstBus, bool hasWorst, Dictionary<int, double[]> slotted, out short[] choice)
+    {
+        var worstSteps = Array.ConvertAll(options, o => o.Steps);
+        // A worst bus of constants only (children left out of the budget) adds its constant and limits nothing.
+        var worst = hasWorst ? worstBus : null;
+        var constant = hasWorst ? 0.0 : worstBus[0];
+        var groups = new List<(int[] Steps, double[] Bus)>();
+        foreach (var (slots, b) in slotted.OrderBy(p => p.Key))
+        {
+            var steps = Array.ConvertAll(options, o => problem.StepsIn(o, slots));
+            if (steps.AsSpan().SequenceEqual(worstSteps))
+            {
+                worst ??= worstBus;
+                Merge(worst, [b]);
+                constant = 0.0;
+            }
+            else if (groups.FindIndex(g => g.Steps.AsSpan().SequenceEqual(steps)) is var same and >= 0)
+            {
+                Merge(groups[same].Bus, [b]);
+            }
+            else
+            {
+                groups.Add((steps, b));
+            }
+        }
+
+        var top = worstBus.Length - 1;
+        var h = new double[top + 1];
+        choice = new short[top + 1];
+        for (var k = 0; k <= top; k++)
+        {
+            var best = double.PositiveInfinity;
+            short pick = 0;
+            for (short j = 0; j < options.Length; j++)
+            {
+                var cost = options[j].Cost + constant;
+                if (worst is not null)
+                {
+                    cost = k < worstSteps[j] ? double.PositiveInfinity : cost + worst[k - worstSteps[j]];
+                }
+
+                // A voltage the feeder's unbalance raises (a negative drop) leaves its end points more than k; the bus at the
+                // top of the table is then the safe side (a bus costs no more with more steps left).
+                foreach (var (steps, b) in groups)
+                {
+                    cost = k < steps[j] ? double.PositiveInfinity : cost + b[Math.Min(k - steps[j], top)];
+                }
+
+                if (cost < best)
+                {
+                    (best, pick) = (cost, j);
+                }
+            }
+
+            (h[k], choice[k]) = (best, pick);
+        }
+
+        return h;
+    }
+
     // Top-down: each node gets the steps left at its input; its run's choice uses some, a transformer more.
     private static int[] ReadBack(SizingProblem problem, short[]?[] choices, short[]?[] tapChoices, int top, out int[] tapChoice)
     {
@@ -225,6 +328,12 @@ internal static class FrontierSolver
         {
             var node = nodes[i];
             var atInput = node.ParentIndex < 0 ? problem.BudgetSteps : left[node.ParentIndex];
+            if (node.Circuit is not null && problem.OwnSlots[i] != 0 && choice[node.ParentIndex] >= 0
+                && problem.Options[node.ParentIndex]![choice[node.ParentIndex]] is { SlotDrops: not null } feeder)
+            {
+                atInput += feeder.Steps - problem.StepsIn(feeder, problem.OwnSlots[i]); // its own voltages' drop, not the worst
+            }
+
             var afterRun = atInput;
             if (problem.Options[i] is { } options)
             {

@@ -15,7 +15,12 @@ namespace DistTree.Sizing;
 /// <param name="Cost">Cost added against the present choice (material in mm²·m, or priced).</param>
 /// <param name="MeetsRunLimits">True when the choice meets the run's own drop limit, ampacity and device rules.</param>
 /// <param name="WithinTerminals">True when the terminals at both its ends accept the choice (its device's, and a feeder's far-end main, see <see cref="TerminalTable"/>), or it is the present one.</param>
-internal readonly record struct RunOption(ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits, bool WithinTerminals = true);
+/// <param name="SlotDrops">
+/// A feeder's drop in each voltage of its bus (<see cref="Slots"/>), percent, where the end points it feeds directly see
+/// them (see <see cref="SizingProblem.StepsBelow"/>); <see cref="DropPercent"/> in a voltage it does not have; null elsewhere.
+/// </param>
+internal readonly record struct RunOption(
+    ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits, bool WithinTerminals = true, double[]? SlotDrops = null);
 
 /// <summary>One allowed tap of a transformer: its setting, the transformer's regulation there on the grid, and what setting it costs.</summary>
 /// <param name="TapPercent">The tap, percent (negative raises the secondary).</param>
@@ -129,6 +134,9 @@ internal sealed partial class SizingProblem
         var unresolvable = new List<UnresolvableLimit>();
         var protection = CodeRules.For(project.Rules, catalog);
         var terminals = sizing.TerminalTable ?? TerminalTable.Standard;
+        var ownSlots = new int[nodes.Count];
+        var unitR = new double[Slots.Count];
+        var unitX = new double[Slots.Count];
         foreach (var row in solution.Runs)
         {
             if (row.Kind == RunResultKind.Transformer)
@@ -139,7 +147,10 @@ internal sealed partial class SizingProblem
 
             var run = nodes[row.NodeIndex].Incoming!;
             var factor = dropFactors?.GetValueOrDefault(row.NodeIndex, 1.0) ?? 1.0;
-            var all = Candidates(run, row, project, catalog, protection, terminals, maxSteps, factor).ToArray();
+            var own = row.UnitDrops(unitR, unitX);
+            var bySlot = run.Kind == RunKind.Feeder && nodes[row.NodeIndex].Kind != NodeKind.Transformer && run.System == nodes[row.NodeIndex].System;
+            ownSlots[row.NodeIndex] = run.Kind == RunKind.Branch ? own : 0;
+            var all = Candidates(run, row, (unitR, unitX, own, bySlot), project, catalog, protection, terminals, maxSteps, factor).ToArray();
             var buildable = all.Where(o => o.WithinTerminals).ToArray();
             var fitting = buildable.Where(o => o.MeetsRunLimits).ToArray();
             if (fitting.Length == 0)
@@ -181,7 +192,7 @@ internal sealed partial class SizingProblem
             }
         }
 
-        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection, NoLoadMost = noLoadMost };
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection, NoLoadMost = noLoadMost, OwnSlots = ownSlots };
         problem.ExcludeUnfixableEndPoints();
         return problem;
     }
@@ -224,6 +235,11 @@ internal sealed partial class SizingProblem
         {
             var parent = nodes[i].ParentIndex;
             var above = parent < 0 ? 0 : BusSteps(parent, least[parent]);
+            if (parent >= 0 && OwnSlots[i] != 0 && Options[parent] is { } feeder && feeder[0].SlotDrops is not null)
+            {
+                above += feeder.Min(x => StepsBelow(parent, x, i)) - feeder.Min(x => x.Steps); // its own voltages' drop, not the worst
+            }
+
             least[i] = above + (Options[i] is { } o ? o.Min(x => x.Steps) : 0);
         }
 
@@ -250,15 +266,16 @@ internal sealed partial class SizingProblem
         return NewOrigin ? 0 : stepsAtInputAfterRun + (Taps[node] is { } taps ? taps.Min(t => t.Steps) : TransformerSteps[node]);
     }
 
+    // Each choice of a run (its unit drops per voltage, the voltages its own drop is the worst of, and whether its choices
+    // carry their drop per voltage: a feeder to equipment of its own system, not a transformer).
     private static IEnumerable<RunOption> Candidates(
-        NetworkRun run, RunResult row, Project project, ConductorCatalog catalog, CodeRules protection, TerminalTable terminals, int? maxSteps, double dropFactor)
+        NetworkRun run, RunResult row, (double[] R, double[] X, int Own, bool BySlot) unit, Project project, ConductorCatalog catalog, CodeRules protection,
+        TerminalTable terminals, int? maxSteps, double dropFactor)
     {
         var conductors = run.Conductors;
         var maxSets = conductors.Fixed || run.Kind == RunKind.Branch ? conductors.Sets : Math.Max(conductors.Sets, project.Sizing.MaxSets ?? conductors.Sets);
         var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
-        var unitR = new double[Slots.Count];
-        var unitX = new double[Slots.Count];
-        var own = row.UnitDrops(unitR, unitX);
+        var (unitR, unitX, own) = (unit.R, unit.X, unit.Own);
         var steps = 0;
         for (ConductorSize? size = conductors.Size; size is { } s; size = conductors.Fixed ? null : s.NextLarger, steps++)
         {
@@ -290,10 +307,17 @@ internal sealed partial class SizingProblem
                 // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
                 var figures = RunElectrics.Compute(protection, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
                 var ratio = (double)conductors.Sets / sets;
-                var drop = RunDrops.OwnDrop(unitR, unitX, figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio, own) * dropFactor;
+                var (r, x) = (figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio);
+                var drop = RunDrops.OwnDrop(unitR, unitX, r, x, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);
                 var accepted = isPresent || AcceptsBothEnds(terminals, run, s, sets);
-                yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets, accepted);
+                var bySlot = unit.BySlot ? new double[Slots.Count] : null;
+                for (var slot = 0; bySlot is not null && slot < Slots.Count; slot++)
+                {
+                    bySlot[slot] = (own & (1 << slot)) != 0 ? ((r * unitR[slot]) + (x * unitX[slot])) * dropFactor : drop;
+                }
+
+                yield return new RunOption(s, sets, drop, Steps(drop, project.Sizing.ResolutionPercent), isPresent ? 0.0 : (cost ?? 0.0) - present, meets, accepted, bySlot);
             }
         }
     }

@@ -99,7 +99,10 @@ public sealed class UpsizerPropertyTests
             {
                 if (problem.Options[i] is { } o)
                 {
-                    used += exact ? o[pick[i]].DropPercent : o[pick[i]].Steps;
+                    // The feeder right above an end point: its drop in the end point's own voltages (on a three-phase
+                    // panel, a single-pole circuit sees its own line's), the worst of them; any other run its worst.
+                    var own = i == nodes[e.NodeIndex].ParentIndex ? problem.OwnSlots[e.NodeIndex] : 0;
+                    used += exact ? SizingProblem.DropIn(o[pick[i]], own) : problem.StepsIn(o[pick[i]], own);
                 }
 
                 if (i != e.NodeIndex && transformerDrop.TryGetValue(i, out var t))

@@ -5,9 +5,10 @@ using DistTree.Tests.Solving;
 namespace DistTree.Tests.Sizing;
 
 /// <summary>
-/// The step-down refinement: the optimiser prices a feeder at its worst line for every end point below it, so an end
-/// point on a lighter line can make the feeder larger than the solver's per-line figures need; the plan then steps the
-/// feeder down while the re-solved tree stays free of new findings.
+/// The optimiser prices a feeder in each end point's own voltage where the end point hangs on the feeder's far bus, and at
+/// its worst line for every end point further down; an end point on a lighter line below a sub-panel can then make the
+/// feeder larger than the solver's per-line figures need, and the step-down takes it back while the re-solved tree stays
+/// free of new findings.
 /// </summary>
 public sealed class UpsizerStepDownTests
 {
@@ -31,10 +32,42 @@ public sealed class UpsizerStepDownTests
               - { id: "4", poles: 1, phase: C, ocpd: 20, load: { amps: 12 }, run: { length: 26, size: 12 AWG, fixed: true } }
         """;
 
+    // The same loads one level down: P feeds a sub-panel S (1 m of pinned 4 AWG) that holds the circuits, so P's feeder is
+    // priced at its worst line for them.
+    private const string UnderSubPanel = """
+        disttree: 1
+        project: { name: Unbalanced, units: metric }
+        service: { id: SVC, system: 208Y/120 }
+        equipment:
+          - { id: P, kind: panelboard, from: SVC, feeder: { length: 12, size: 12 AWG } }
+          - id: S
+            kind: panelboard
+            from: P
+            feeder: { length: 1, size: 4 AWG, fixed: true }
+            circuits:
+              - { id: "1", poles: 1, phase: A, ocpd: 20, load: { amps: 16 }, run: { length: 3, size: 12 AWG } }
+              - { id: "2", poles: 1, phase: A, ocpd: 20, load: { amps: 16 }, run: { length: 3, size: 12 AWG } }
+              - { id: "3", poles: 1, phase: A, ocpd: 20, load: { amps: 16 }, run: { length: 3, size: 12 AWG } }
+              - { id: "4", poles: 1, phase: C, ocpd: 20, load: { amps: 12 }, run: { length: 26, size: 12 AWG, fixed: true } }
+        """;
+
+    // Fed directly, the circuits see the feeder's drop in their own voltages: the optimum itself takes 8 AWG.
+    [Fact]
+    public void Optimum_UnbalancedFeeder_PricedInEachEndPointsOwnVoltage()
+    {
+        var before = SolverHarness.Solve(Unbalanced);
+        var problem = SizingProblem.Build(before, ConductorCatalog.Standard);
+        var (choice, _) = FrontierSolver.Solve(problem);
+        var feeder = before.Network.Nodes.Single(n => n.Id == "P").Index;
+        Assert.Equal(ConductorSize.Parse("8 AWG"), problem.Options[feeder]![choice[feeder]].Size);
+        var change = Assert.Single(Upsizer.Standard.Plan(before).Changes);
+        Assert.Equal(("P", "8 AWG", 1), (change.RunId, change.SizeAfter, change.SetsAfter));
+    }
+
     [Fact]
     public void Plan_UnbalancedFeeder_StepsDownBelowTheWorstLineOptimumAndPasses()
     {
-        var before = SolverHarness.Solve(Unbalanced);
+        var before = SolverHarness.Solve(UnderSubPanel);
         var problem = SizingProblem.Build(before, ConductorCatalog.Standard);
         var (choice, worstLineCost) = FrontierSolver.Solve(problem);
         var feeder = before.Network.Nodes.Single(n => n.Id == "P").Index;
