@@ -1,3 +1,5 @@
+using System.Numerics.Tensors;
+
 namespace DistTree.Sizing;
 
 /// <summary>
@@ -123,10 +125,7 @@ internal static class FrontierSolver
     {
         foreach (var f in functions)
         {
-            for (var k = 0; k < target.Length; k++)
-            {
-                target[k] += f[k];
-            }
+            TensorPrimitives.Add(target, f, target);
         }
     }
 
@@ -135,19 +134,15 @@ internal static class FrontierSolver
     {
         if (excluded)
         {
-            var cheapest = options.Min(o => o.Cost);
-            for (var k = 0; k < target.Length; k++)
-            {
-                target[k] += cheapest;
-            }
-
+            TensorPrimitives.Add(target, options.Min(o => o.Cost), target);
             return;
         }
 
+        // One constant a stretch between the choices' steps, added a stretch at a time.
         var bySteps = options.OrderBy(o => o.Steps).ToArray();
         var best = double.PositiveInfinity;
         var j = 0;
-        for (var k = 0; k < target.Length; k++)
+        for (var k = 0; k < target.Length;)
         {
             while (j < bySteps.Length && bySteps[j].Steps <= k)
             {
@@ -155,7 +150,10 @@ internal static class FrontierSolver
                 j++;
             }
 
-            target[k] += best;
+            var end = j < bySteps.Length ? Math.Clamp(bySteps[j].Steps, k + 1, target.Length) : target.Length;
+            var stretch = target.AsSpan(k, end - k);
+            TensorPrimitives.Add(stretch, best, stretch);
+            k = end;
         }
     }
 
@@ -222,34 +220,51 @@ internal static class FrontierSolver
 
     private static double[] BestChoice(double[] below, RunOption[] options, out short[] choice)
     {
-        var b = below.Length - 1;
-        var h = new double[b + 1];
-        choice = new short[b + 1];
-        for (var k = 0; k <= b; k++)
+        var h = NewTable(below.Length, out choice, out var sum);
+        for (short j = 0; j < options.Length; j++)
         {
-            var best = double.PositiveInfinity;
-            short pick = 0;
-            for (short j = 0; j < options.Length; j++)
+            var from = Math.Max(options[j].Steps, 0);
+            if (from < below.Length)
             {
-                var rest = k - options[j].Steps;
-                if (rest < 0)
-                {
-                    continue;
-                }
-
-                var cost = options[j].Cost + below[rest];
-                if (cost < best)
-                {
-                    best = cost;
-                    pick = j;
-                }
+                var at = sum.AsSpan(from);
+                at.Fill(options[j].Cost);
+                AddShifted(at, below, from, options[j].Steps);
+                KeepLeast(h, choice, sum, from, j);
             }
-
-            h[k] = best;
-            choice[k] = pick;
         }
 
         return h;
+    }
+
+    // A table of least costs, every one +∞ to begin with, its choices, and a scratch row of one choice's costs.
+    private static double[] NewTable(int length, out short[] choice, out double[] sum)
+    {
+        var h = new double[length];
+        Array.Fill(h, double.PositiveInfinity);
+        (choice, sum) = (new short[length], new double[length]);
+        return h;
+    }
+
+    // target[i] += bus[from + i − shift], at most at the top of the bus (a bus costs no more with more steps left). The
+    // choices are taken one at a time over the whole table, so each sum is two runs of contiguous memory.
+    private static void AddShifted(Span<double> target, double[] bus, int from, int shift)
+    {
+        var start = from - shift;
+        var inRange = Math.Clamp(bus.Length - start, 0, target.Length);
+        TensorPrimitives.Add(target[..inRange], bus.AsSpan(start, inRange), target[..inRange]);
+        TensorPrimitives.Add(target[inRange..], bus[^1], target[inRange..]);
+    }
+
+    // Where choice j's cost is less than the least so far, from step from up: j (ties keep the earlier choice).
+    private static void KeepLeast(double[] h, short[] choice, double[] sum, int from, short j)
+    {
+        for (var k = from; k < h.Length; k++)
+        {
+            if (sum[k] < h[k])
+            {
+                (h[k], choice[k]) = (sum[k], j);
+            }
+        }
     }
 
     // As BestChoice, for a feeder whose end points fed directly see its drop in their own voltages (see SizingProblem.StepsBelow):
@@ -281,35 +296,35 @@ internal static class FrontierSolver
             }
         }
 
-        var top = worstBus.Length - 1;
-        var h = new double[top + 1];
-        choice = new short[top + 1];
-        for (var k = 0; k <= top; k++)
+        var h = NewTable(worstBus.Length, out choice, out var sum);
+        for (short j = 0; j < options.Length; j++)
         {
-            var best = double.PositiveInfinity;
-            short pick = 0;
-            for (short j = 0; j < options.Length; j++)
+            var from = Math.Max(worst is null ? 0 : worstSteps[j], 0);
+            foreach (var (steps, _) in groups)
             {
-                var cost = options[j].Cost + constant;
-                if (worst is not null)
-                {
-                    cost = k < worstSteps[j] ? double.PositiveInfinity : cost + worst[k - worstSteps[j]];
-                }
-
-                // A voltage the feeder's unbalance raises (a negative drop) leaves its end points more than k; the bus at the
-                // top of the table is then the safe side (a bus costs no more with more steps left).
-                foreach (var (steps, b) in groups)
-                {
-                    cost = k < steps[j] ? double.PositiveInfinity : cost + b[Math.Min(k - steps[j], top)];
-                }
-
-                if (cost < best)
-                {
-                    (best, pick) = (cost, j);
-                }
+                from = Math.Max(from, steps[j]);
             }
 
-            (h[k], choice[k]) = (best, pick);
+            if (from >= h.Length)
+            {
+                continue;
+            }
+
+            // A voltage the feeder's unbalance raises (a negative drop) leaves its end points more than the table holds;
+            // the bus at its top is then the safe side.
+            var at = sum.AsSpan(from);
+            at.Fill(options[j].Cost + constant);
+            if (worst is not null)
+            {
+                AddShifted(at, worst, from, worstSteps[j]);
+            }
+
+            foreach (var (steps, b) in groups)
+            {
+                AddShifted(at, b, from, steps[j]);
+            }
+
+            KeepLeast(h, choice, sum, from, j);
         }
 
         return h;

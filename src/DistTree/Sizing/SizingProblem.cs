@@ -277,7 +277,11 @@ internal sealed partial class SizingProblem
         var present = Cost(conductors, conductors.Size, conductors.Sets, run.Supply, project.Sizing) ?? 0.0;
         var (unitR, unitX, own) = (unit.R, unit.X, unit.Own);
         var steps = 0;
-        for (ConductorSize? size = conductors.Size; size is { } s; size = conductors.Fixed ? null : s.NextLarger, steps++)
+        // A terminal takes sizes up to its largest, so past the first size beyond the terminals that meets the run's limits (the
+        // least such one, which names what would do where no buildable one does) no larger size of the same sets is wanted.
+        var done = new bool[maxSets + 1];
+        var open = maxSets - conductors.Sets + 1;
+        for (ConductorSize? size = conductors.Size; size is { } s && open > 0; size = conductors.Fixed ? null : s.NextLarger, steps++)
         {
             if (maxSteps is { } limit && steps > limit)
             {
@@ -292,7 +296,7 @@ internal sealed partial class SizingProblem
             for (var sets = conductors.Sets; sets <= maxSets; sets++)
             {
                 var isPresent = s == conductors.Size && sets == conductors.Sets;
-                if (sets > 1 && !isPresent && !protection.ParallelSetsAllowed(s))
+                if (done[sets] || (sets > 1 && !isPresent && !protection.ParallelSetsAllowed(s)))
                 {
                     continue; // the code allows no parallel sets of a conductor this small: not a buildable choice
                 }
@@ -311,6 +315,11 @@ internal sealed partial class SizingProblem
                 var drop = RunDrops.OwnDrop(unitR, unitX, r, x, own) * dropFactor;
                 var meets = drop <= row.LimitPercent!.Value + 1e-9 && MeetsCurrentRules(protection, run, s, sets, row, figures.AmpacityA);
                 var accepted = isPresent || AcceptsBothEnds(terminals, run, s, sets);
+                if (!accepted && meets)
+                {
+                    (done[sets], open) = (true, open - 1);
+                }
+
                 var bySlot = unit.BySlot ? new double[Slots.Count] : null;
                 for (var slot = 0; bySlot is not null && slot < Slots.Count; slot++)
                 {
