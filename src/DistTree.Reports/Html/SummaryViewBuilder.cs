@@ -70,6 +70,7 @@ internal static class SummaryViewBuilder
             FindingKind.GroundingConductor => ("minimum for the device", t.WithGround, "–"),
             FindingKind.InterruptingRating => ("stated rating", s.Faults.Equipment.Count(e => e.InterruptingKa is not null), "–"),
             FindingKind.FaultClearing => ("instantaneous trip", FarEndsChecked(s), "–"),
+            FindingKind.NoLoadRise => (Limit(s.Project.Sizing.LightLoadRisePercent) + " % at no load", t.Transformers, "–"),
         };
         return LimitRowOf(FindingKinds.Of(kind).Check, limit, checkedCount, over, worst);
     }

@@ -65,4 +65,7 @@ public enum CodeCheck
 
     /// <summary>A far-end fault too small to trip the run's device without delay (automatic disconnection).</summary>
     FaultClearing,
+
+    /// <summary>A stated raising tap putting a transformer's secondary over the light-load limit at no load.</summary>
+    NoLoadRise,
 }

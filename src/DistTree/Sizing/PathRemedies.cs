@@ -1,5 +1,6 @@
 using DistTree.Model;
 using DistTree.Network;
+using DistTree.Solving;
 using DistTree.Vocabulary;
 
 namespace DistTree.Sizing;
@@ -77,9 +78,9 @@ internal static class PathRemedies
                 continue;
             }
 
-            var factor = above * LightLoadRise.Factor(tap);
+            var factor = above * NoLoadRise.Factor(tap);
             var range = Math.Abs(tap) > data.TapRangePercent + 1e-9 ? FormattableString.Invariant($"beyond its tap_range_percent of {data.TapRangePercent:0.#}") : "";
-            if (LightLoadRise.Within(factor, riseLimit))
+            if (NoLoadRise.Within(factor, riseLimit))
             {
                 taps.Add(FormattableString.Invariant($"transformer {node.Id}'s tap set to {tap:0.#} % ({range})"));
             }
@@ -87,7 +88,7 @@ internal static class PathRemedies
             {
                 var withAbove = Math.Abs(above - 1.0) > 1e-12 ? " with the taps above it at their most raising allowed" : "";
                 butForLightLoad.Add(FormattableString.Invariant(
-                    $"transformer {node.Id}'s tap set to {tap:0.#} %{(range.Length > 0 ? $" ({range})" : "")} would clear it, but its secondary would stand {LightLoadRise.RisePercent(factor):0.00} % above nominal at no load{withAbove}, over the {riseLimit:0.##} % of sizing: light_load_rise_percent"));
+                    $"transformer {node.Id}'s tap set to {tap:0.#} %{(range.Length > 0 ? $" ({range})" : "")} would clear it, but its secondary would stand {NoLoadRise.RisePercent(factor):0.00} % above nominal at no load{withAbove}, over the {riseLimit:0.##} % of sizing: light_load_rise_percent"));
             }
 
             return;

@@ -4,7 +4,8 @@ namespace DistTree.Sizing;
 
 /// <summary>
 /// Makes a proved plan minimal on the solver's own figures. The optimiser prices a feeder at the worst of its lines for
-/// every end point below it and rounds each drop up to its grid, both on the safe side, so its plan may hold a change the
+/// the end points below a sub-panel (and in their own voltages only for those on its far bus) and rounds each drop up
+/// to its grid, both on the safe side, so its plan may hold a change the
 /// design does not need. Each change whose run meets its own limits at its stated size is undone where the tree, solved
 /// again by the real solver (per line, with the neutral and the transformer connections), has no finding the plan's proof
 /// did not have. First all such changes at once, restoring the ones above each new finding until none is left; then each

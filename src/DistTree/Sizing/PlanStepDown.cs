@@ -5,7 +5,8 @@ namespace DistTree.Sizing;
 
 /// <summary>
 /// Takes a pruned plan's changes down toward their stated choices on the solver's own figures. The optimiser prices a
-/// feeder at the worst of its lines for every end point below it and rounds each run's drop up to its grid, so where an
+/// feeder at the worst of its lines for the end points below a sub-panel (in their own voltages only for those on its
+/// far bus) and rounds each run's drop up to its grid, so where an
 /// end point on a lighter line (or one grid step) is what made a run one size larger, undoing the change whole fails but
 /// one step down may pass. Each changed run steps to the most costly of its allowed choices (within its device's
 /// terminals, meeting its own limits, parallel sets only where the code allows them) that costs less than its pick, and

@@ -188,7 +188,7 @@ internal sealed partial class SizingProblem
             {
                 var data = nodes[i].Equipment!.Transformer!;
                 (taps[i], transformerSteps[i]) = TapChoices(row, data, budget * resolution, resolution, sizing, project.Rules, above);
-                noLoadMost[i] = above * LightLoadRise.Factor(taps[i]?.Min(t => t.TapPercent) ?? data.TapPercent);
+                noLoadMost[i] = above * NoLoadRise.Factor(taps[i]?.Min(t => t.TapPercent) ?? data.TapPercent);
             }
         }
 
@@ -214,7 +214,7 @@ internal sealed partial class SizingProblem
         }
 
         var raises = TransformerData.TapSteps.Where(t => t < data.TapPercent && Math.Abs(t) <= data.TapRangePercent + 1e-9
-            && LightLoadRise.Within(aboveFactor * LightLoadRise.Factor(t), sizing.LightLoadRisePercent)).OrderByDescending(t => t);
+            && NoLoadRise.Within(aboveFactor * NoLoadRise.Factor(t), sizing.LightLoadRisePercent)).OrderByDescending(t => t);
         TapOption[] all = [present, .. raises.Select(t => new TapOption(t, StepsAt(t), sizing.TapCost))];
         return (all.Length > 1 ? all : null, present.Steps);
     }
@@ -308,7 +308,8 @@ internal sealed partial class SizingProblem
                 }
 
                 // The drop is linear in R and X (per phase too): the run's unit responses price any size. A branch
-                // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below.
+                // circuit's own lines are what its end point sees; a feeder's worst line bounds every end point below, and
+                // its drop in each voltage is what the end points on its far bus see (SlotDrops).
                 var figures = RunElectrics.Compute(protection, project.Rules, conductors, s, sets, project.Service.FrequencyHz, row.CurrentA, row.CurrentCarryingConductors ?? 3);
                 var ratio = (double)conductors.Sets / sets;
                 var (r, x) = (figures.ResistanceOhmPerKm * ratio, figures.ReactanceOhmPerKm * ratio);

@@ -12,8 +12,8 @@ namespace DistTree.Sizing;
 /// within its limits, and proves it by re-solving the tree with the plan applied. Runs never get smaller;
 /// pinned runs (<c>fixed: true</c>) keep their size; feeders may take more parallel sets up to
 /// <c>sizing: max_sets</c>. Drops are budgeted on a grid of <c>sizing: resolution_percent</c> (0.001
-/// percentage points by default), each rounded up, and a feeder at its worst line for every end point below it, so the
-/// optimum is safe and least on that grid. The proof is a full solve; after it, far ends too small to trip their devices
+/// percentage points by default), each rounded up; a feeder in the own voltages of the end points on its far bus and at its worst line
+/// for those further down (<see cref="SizingProblem.StepsBelow"/>), so the optimum is safe and least on that grid. The proof is a full solve; after it, far ends too small to trip their devices
 /// are raised (<see cref="FarEndRepair"/>), every change steps down toward its stated choice where the solver's own figures
 /// allow (<see cref="PlanStepDown"/>), and every change the design does not need is undone (<see cref="PlanPruner"/>): the
 /// plan is then minimal on the solver's figures (no change can be undone, or stepped one allowed choice down, with the
@@ -214,11 +214,13 @@ public sealed class Upsizer
     }
 
     // A finding a conductor choice could fix that the re-solved plan still has, or null. A stated grounding conductor
-    // below its minimum is not one: the line sizes cannot fix it (the change says it must be increased).
+    // below its minimum is not one: the line sizes cannot fix it (the change says it must be increased); nor is a stated tap
+    // over the light-load limit (the plan keeps it, and says so in its cautions).
     private static Finding? LeftOver(Solution after, List<UnresolvableLimit> unresolvable)
     {
         var known = new HashSet<string>(unresolvable.Select(u => u.Subject), StringComparer.Ordinal);
-        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor or FindingKind.InterruptingRating or FindingKind.FaultClearing)
+        return after.AllFindings.FirstOrDefault(f => f.Kind is not (FindingKind.TransformerOverload or FindingKind.GroundingConductor or FindingKind.InterruptingRating or FindingKind.FaultClearing
+            or FindingKind.NoLoadRise)
             && !known.Contains(f.Subject));
     }
 

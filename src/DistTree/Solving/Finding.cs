@@ -41,6 +41,9 @@ public enum FindingKind
 
     /// <summary>A fault at a run's far end draws less current than trips its device without delay.</summary>
     FaultClearing,
+
+    /// <summary>A transformer's stated raising tap puts its secondary more than the light-load limit above nominal at no load.</summary>
+    NoLoadRise,
 }
 
 /// <summary>

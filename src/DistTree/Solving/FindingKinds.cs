@@ -70,5 +70,9 @@ public static class FindingKinds
             kind, "fault_clearing", "Far-end fault too small to trip the device without delay", "Fault clearing at the far end", "FaultClearing",
             "The minimum fault current at a run's far end is below the current that trips its overcurrent device without delay.", "A",
             "the minimum far-end fault current", "the device's instantaneous trip current"),
+        FindingKind.NoLoadRise => new(
+            kind, "no_load_rise", "Secondary over the light-load limit at no load", "No-load voltage under raising taps", "NoLoadRise",
+            "A transformer's stated raising tap, with the taps above it, puts its secondary more than the light-load limit above nominal at no load.", "%",
+            "the secondary's rise above nominal at no load", "the light-load limit"),
     };
 }

@@ -217,10 +217,10 @@ public sealed class HtmlReportTests
         Assert.Equal(s.Summary.Findings.ToString(CultureInfo.InvariantCulture), tiles["findings"]);
 
         var rows = doc.QuerySelectorAll("table.limits tbody tr").Select(r => r.QuerySelectorAll("td").Select(c => c.TextContent).ToArray()).ToArray();
-        Assert.Equal(12, rows.Length);
+        Assert.Equal(13, rows.Length);
         // The demo states no equipment rating (interrupting_ka): nothing to check there.
         Assert.Equal(["Interrupting rating", "stated rating", "0", "0", "–", "nothing to check"], rows.Single(r => r[0] == "Interrupting rating"));
-        foreach (var (name, kind) in new[] { ("Fault clearing at the far end", FindingKind.FaultClearing), ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad), ("Equipment grounding conductor", FindingKind.GroundingConductor) })
+        foreach (var (name, kind) in new[] { ("Fault clearing at the far end", FindingKind.FaultClearing), ("Feeder drop", FindingKind.FeederDrop), ("Branch-circuit drop", FindingKind.BranchDrop), ("Total drop to each point of use", FindingKind.TotalDrop), ("Ampacity (design current)", FindingKind.Ampacity), ("Overcurrent device", FindingKind.OcpdAboveAmpacity), ("Transformer loading", FindingKind.TransformerOverload), ("Motor starting dip at the terminals", FindingKind.MotorStart), ("Neutral ampacity", FindingKind.NeutralAmpacity), ("Overcurrent device rating (load)", FindingKind.DeviceBelowLoad), ("Equipment grounding conductor", FindingKind.GroundingConductor), ("No-load voltage under raising taps", FindingKind.NoLoadRise) })
         {
             var row = rows.Single(r => r[0] == name);
             var over = s.AllFindings.Count(f => f.Kind == kind);

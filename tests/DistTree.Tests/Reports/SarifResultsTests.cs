@@ -14,7 +14,7 @@ public sealed class SarifResultsTests
 {
     private const string Demo = "projects/quillfeather-medical.yaml";
 
-    private static readonly string[] RuleIds = ["feeder_drop", "branch_drop", "total_drop", "ampacity", "ocpd_above_ampacity", "transformer_overload", "motor_start", "neutral_ampacity", "device_below_load", "grounding_conductor", "interrupting_rating", "fault_clearing"];
+    private static readonly string[] RuleIds = ["feeder_drop", "branch_drop", "total_drop", "ampacity", "ocpd_above_ampacity", "transformer_overload", "motor_start", "neutral_ampacity", "device_below_load", "grounding_conductor", "interrupting_rating", "fault_clearing", "no_load_rise"];
 
     [Fact]
     public void Analyze_Demo_WritesAValidSarif210Log()

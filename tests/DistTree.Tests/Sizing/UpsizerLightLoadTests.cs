@@ -1,5 +1,6 @@
 using DistTree.Conductors;
 using DistTree.Sizing;
+using DistTree.Solving;
 using DistTree.Tests.Solving;
 
 namespace DistTree.Tests.Sizing;
@@ -63,8 +64,8 @@ public sealed class UpsizerLightLoadTests
     [InlineData(new[] { 2.5, -5.0 }, 2.6958)]
     public void RisePercent_TapsInSeries_TheProductOfTheirRatios(double[] taps, double risePercent)
     {
-        var factor = taps.Aggregate(1.0, (f, t) => f * LightLoadRise.Factor(t));
-        Assert.Equal(risePercent, LightLoadRise.RisePercent(factor), 4);
+        var factor = taps.Aggregate(1.0, (f, t) => f * NoLoadRise.Factor(t));
+        Assert.Equal(risePercent, NoLoadRise.RisePercent(factor), 4);
     }
 
     // One transformer: −2.5 % (2.564 %) is within 5 %, −5 % (5.263 %) is not, and is within 5.3 %.

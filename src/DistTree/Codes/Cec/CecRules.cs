@@ -141,6 +141,7 @@ public sealed class CecRules : NorthAmericanRules
         CodeCheck.GroundingConductor => "CEC Rule 10-616 and Table 16",
         CodeCheck.InterruptingRating => "CEC Rule 14-012(a)",
         CodeCheck.FaultClearing => "CEC Rule 14-010(a)",
+        CodeCheck.NoLoadRise => "CSA CAN3-C235 voltage ranges (recalled; no CEC rule)",
     };
 
     /// <inheritdoc/>

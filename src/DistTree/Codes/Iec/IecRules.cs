@@ -156,6 +156,7 @@ public sealed partial class IecRules : CodeRules
         CodeCheck.GroundingConductor => "IEC 60364-5-54 543.1.2, Table 54.2",
         CodeCheck.InterruptingRating => "IEC 60364-4-43 434.5.1",
         CodeCheck.FaultClearing => "IEC 60364-4-41 411.4.4",
+        CodeCheck.NoLoadRise => "IEC 60038 voltage ranges (recalled; no IEC 60364 clause)",
     };
 
     /// <summary>

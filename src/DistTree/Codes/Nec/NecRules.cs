@@ -120,6 +120,7 @@ public sealed class NecRules : NorthAmericanRules
         CodeCheck.GroundingConductor => "NEC 250.122",
         CodeCheck.InterruptingRating => "NEC 110.9 and 110.10",
         CodeCheck.FaultClearing => "NEC 250.4(A)(5)",
+        CodeCheck.NoLoadRise => "ANSI C84.1 Range A (recalled; no NEC clause)",
     };
 
     /// <inheritdoc/>

@@ -30,6 +30,8 @@ internal sealed class RunDrops
     private readonly double[]? _motors;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
+    private readonly double[] _noLoad;
+    private readonly double _riseLimitPercent;
     private int _findings;
 
     private RunDrops(ConductorCatalog catalog, CodeRules code, DistributionNetwork network, PowerSums sums, PhaseFlow phases, double[]? motors, RunRows runs)
@@ -48,6 +50,8 @@ internal sealed class RunDrops
         _phases = phases;
         _runs = runs;
         _findingsWithRuns = _rules.Method == SolutionMethod.PercentSum;
+        _noLoad = NoLoadRise.Stated(network);
+        _riseLimitPercent = network.Project.Sizing.LightLoadRisePercent;
     }
 
     /// <summary>
@@ -170,7 +174,7 @@ internal sealed class RunDrops
             if (node.Equipment?.Transformer is { } transformer)
             {
                 var r = transformerRow[i];
-                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, _code))?.Count ?? 0;
+                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, _code, _noLoad[i], _riseLimitPercent))?.Count ?? 0;
             }
         }
 
