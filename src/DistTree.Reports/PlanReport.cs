@@ -151,33 +151,30 @@ public static class PlanReport
         }
 
         w.WriteEndArray();
-        w.WriteStartArray("unresolvable");
-        foreach (var u in plan.Unresolvable)
-        {
-            w.WriteStartObject();
-            w.WriteString("subject", u.Subject);
-            w.WriteString("message", u.Message);
-            w.WriteEndObject();
-        }
-
-        w.WriteEndArray();
+        Notes(w, "unresolvable", plan.Unresolvable.Select(u => (u.Subject, u.Message)));
 
         // Written only where a stated tap is over the light-load limit, so a plan without one reads as before.
         if (plan.Cautions.Count > 0)
         {
-            w.WriteStartArray("cautions");
-            foreach (var c in plan.Cautions)
-            {
-                w.WriteStartObject();
-                w.WriteString("subject", c.Subject);
-                w.WriteString("message", c.Message);
-                w.WriteEndObject();
-            }
-
-            w.WriteEndArray();
+            Notes(w, "cautions", plan.Cautions.Select(c => (c.Subject, c.Message)));
         }
 
         w.WriteEndObject();
+    }
+
+    // An array of notes, each a subject and a message.
+    private static void Notes(Utf8JsonWriter w, string name, IEnumerable<(string Subject, string Message)> notes)
+    {
+        w.WriteStartArray(name);
+        foreach (var (subject, message) in notes)
+        {
+            w.WriteStartObject();
+            w.WriteString("subject", subject);
+            w.WriteString("message", message);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
     }
 
     private static void NullableString(Utf8JsonWriter w, string name, string? value)

@@ -160,7 +160,7 @@ internal static class FarEndRepair
     private static ConductorSize? GroundFollowing(Solution before, RunResult row, NetworkRun run, RunOption lines)
     {
         var least = before.Code.MinimumGroundSize(run.Conductors, lines.Size, lines.Sets, row.DesignCurrentA, before.Project.Rules, row.CurrentCarryingConductors ?? 3, CircuitDuty.Of(run));
-        return run.Conductors.GroundSize is { } stated && (least is null || stated > least) ? stated : least;
+        return PlanPicks.RaisedToMinimum(run.Conductors.GroundSize, least) ?? least;
     }
 
     /// <summary>

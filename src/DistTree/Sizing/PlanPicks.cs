@@ -73,8 +73,12 @@ internal sealed record PlanPicks(Dictionary<int, RunOption> Runs, Dictionary<int
     private static ConductorSize? GroundAfter(CodeRules code, Rules rules, Run run, Picked pick)
     {
         var least = code.MinimumGroundSize(run, pick.Option.Size, pick.Option.Sets, pick.DesignA, rules, pick.Carrying, pick.Duty);
-        return (pick.Ground ?? run.GroundSize) is { } ground && least is { } l && ground < l ? l : pick.Ground ?? run.GroundSize;
+        return RaisedToMinimum(pick.Ground ?? run.GroundSize, least);
     }
+
+    /// <summary><paramref name="ground"/> raised to <paramref name="least"/> where it is below it; as it is where either is null.</summary>
+    public static ConductorSize? RaisedToMinimum(ConductorSize? ground, ConductorSize? least) =>
+        ground is { } g && least is { } l && g < l ? l : ground;
 
     // One run's pick with what its grounding conductor's minimum depends on.
     private sealed record Picked(RunOption Option, double DesignA, int Carrying, CircuitDuty Duty, ConductorSize? Ground);
