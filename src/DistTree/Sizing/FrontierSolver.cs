@@ -251,7 +251,11 @@ internal static class FrontierSolver
     {
         var start = from - shift;
         var inRange = Math.Clamp(bus.Length - start, 0, target.Length);
-        TensorPrimitives.Add(target[..inRange], bus.AsSpan(start, inRange), target[..inRange]);
+        if (inRange > 0)
+        {
+            TensorPrimitives.Add(target[..inRange], bus.AsSpan(start, inRange), target[..inRange]);
+        }
+
         TensorPrimitives.Add(target[inRange..], bus[^1], target[inRange..]);
     }
 

@@ -17,7 +17,14 @@ public sealed class UpsizerPropertyTests
 
     // On the optimiser's own grid, the dynamic programme's optimum equals an exhaustive search's.
     [Property(MaxTest = 60)]
-    public Property Optimum_EqualsBruteForce_OnTheGrid() => Prop.ForAll(Trees, tree =>
+    public Property Optimum_EqualsBruteForce_OnTheGrid() => Prop.ForAll(Trees, EqualsBruteForce);
+
+    // A tree found by the property above whose feeder's unbalance raises one voltage of its far bus by more than the whole
+    // budget (a negative drop past the table's end), kept as a fixed case.
+    [Property(MaxTest = 1, Replay = "(16975731531325318892,16719598835864582391,72)")]
+    public Property Optimum_EqualsBruteForce_AVoltageRaisedPastTheBudget() => Prop.ForAll(Trees, EqualsBruteForce);
+
+    private static Property EqualsBruteForce(RandomTree tree)
     {
         var solution = SolverHarness.Solve(tree.ToYaml(lengthScale: 4, rules: "conductor_temperature: estimated"));
         var problem = SizingProblem.Build(solution, ConductorCatalog.Standard, MaxSteps);
@@ -25,7 +32,7 @@ public sealed class UpsizerPropertyTests
         var brute = BruteForce(problem, exact: false, limitPercent: 0);
         var steps = string.Join(" | ", problem.Options.Where(o => o is not null).Select(o => string.Join(",", o!.Select(x => $"{x.Steps}:{x.Cost:0}"))));
         return (Math.Abs(cost - brute) < 1e-6 || (double.IsInfinity(cost) && double.IsInfinity(brute))).Label($"dp {cost} brute {brute} options {steps}");
-    });
+    }
 
     // Against exact drops: the grid is on the safe side, so the optimum costs at least the exact optimum,
     // and no more than the exact optimum with the limit tightened by one grid step per run on a path.
