@@ -53,8 +53,9 @@ internal static class Scratch
     public static void Return<T>(T[] array, int length)
     {
         // An array from the pool is at least as long as it was asked for, so it is pooled by its own length too; the
-        // pool's lengths are powers of two (an array made while the tests pooled nothing is not given to the pool).
-        if (!Pooled<T>(array.Length) || !System.Numerics.BitOperations.IsPow2(array.Length))
+        // pool's lengths are powers of two from 16 up (an array made while the tests pooled nothing, shorter or of another
+        // length, is not given to the pool, which would refuse it).
+        if (!Pooled<T>(array.Length) || array.Length < SmallestPooledLength || !System.Numerics.BitOperations.IsPow2(array.Length))
         {
             return;
         }
@@ -66,6 +67,10 @@ internal static class Scratch
 
         ArrayPool<T>.Shared.Return(array);
     }
+
+    // The shortest array the shared pool hands out and takes back (System.Buffers.ArrayPool<T>.Shared: its buckets are the
+    // powers of two from 16 elements up).
+    private const int SmallestPooledLength = 16;
 
     private static bool Pooled<T>(int length) => (long)Unsafe.SizeOf<T>() * length >= PooledFromBytes;
 }

@@ -8,9 +8,15 @@ namespace DistTree.Tests.Solving;
 /// <summary>
 /// The solver's scratch arrays come from a shared pool: a solve that reuses them gives the same results. The test
 /// projects are small, so every array is pooled here (<see cref="Scratch.PooledFromBytes"/> 0), not only the large ones.
+/// That setting is the process's, so these tests run alone (a solve elsewhere would make arrays under one setting and
+/// give them back under the other).
 /// </summary>
+[Collection(Name)]
 public sealed class ScratchReuseTests : IDisposable
 {
+    /// <summary>The collection these tests run in, alone.</summary>
+    public const string Name = "scratch pool";
+
     private readonly long _pooledFromBytes = Scratch.PooledFromBytes;
 
     public ScratchReuseTests() => Scratch.PooledFromBytes = 0;
@@ -85,3 +91,7 @@ public sealed class ScratchReuseTests : IDisposable
     private static DistributionNetwork Build(string name) =>
         NetworkBuilder.Build(ProjectLoader.Load(Path.Combine(TestPaths.RepoRoot, "projects", name)));
 }
+
+/// <summary>The tests that change the scratch pool's setting for the whole process run in this collection, alone.</summary>
+[CollectionDefinition(ScratchReuseTests.Name, DisableParallelization = true)]
+public sealed class ScratchPoolCollection;
