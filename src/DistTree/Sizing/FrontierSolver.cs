@@ -50,8 +50,8 @@ internal static class FrontierSolver
             {
                 // Fed directly by a feeder whose drop is known per voltage: it joins the others on the same voltages.
                 // One left out of the budget adds a constant, and limits nothing.
-                var bySlot = problem.OwnSlots[i] != 0 && !problem.Excluded[i] && problem.Options[parent] is [{ SlotDrops: not null }, ..];
-                var target = bySlot ? SlotBus(slotBus, parent, problem.OwnSlots[i], top) : ParentBus(bus, parent, top);
+                var bySlot = !problem.Excluded[i] && BySlot(problem, i);
+                var target = bySlot ? SlotBus(slotBus, parent, problem.SlotsBelow[i], top) : ParentBus(bus, parent, top);
                 AddLeaf(target, problem.Options[i]!, problem.Excluded[i]);
                 binds[parent] |= !bySlot && !problem.Excluded[i];
                 continue;
@@ -77,8 +77,11 @@ internal static class FrontierSolver
                 : !constrained[i] ? Cheapest(atInput, options, out choices[i])
                 : slotted is null ? BestChoice(atInput, options, out choices[i])
                 : BestChoiceBySlot(problem, options, own, hasWorst, slotted, out choices[i]);
-            Merge(ParentBus(bus, parent, top), [h]);
-            binds[parent] |= constrained[i];
+            // Equipment of the same system joins the others on the voltages its end points read; a subtree with no end point
+            // in the budget adds a constant (limiting nothing).
+            var slottedUp = constrained[i] && BySlot(problem, i);
+            Merge(slottedUp ? SlotBus(slotBus, parent, problem.SlotsBelow[i], top) : ParentBus(bus, parent, top), [h]);
+            binds[parent] |= constrained[i] && !slottedUp;
         }
 
         throw new InvalidOperationException("the network has no service node");
@@ -107,6 +110,10 @@ internal static class FrontierSolver
     }
 
     private static double[] ParentBus(double[]?[] bus, int parent, int budget) => bus[parent] ??= new double[budget + 1];
+
+    // True where node i's parent's run carries its drop per voltage and i's end points read some of them (see SizingProblem.SlotsBelow).
+    private static bool BySlot(SizingProblem problem, int i) =>
+        problem.SlotsBelow[i] != 0 && problem.Options[problem.Network.Nodes[i].ParentIndex] is [{ SlotDrops: not null }, ..];
 
     // The bus of a feeder's end points on the voltages ownSlots.
     private static double[] SlotBus(Dictionary<int, double[]>?[] slotBus, int parent, int ownSlots, int budget)
@@ -347,10 +354,10 @@ internal static class FrontierSolver
         {
             var node = nodes[i];
             var atInput = node.ParentIndex < 0 ? problem.BudgetSteps : left[node.ParentIndex];
-            if (node.Circuit is not null && problem.OwnSlots[i] != 0 && choice[node.ParentIndex] >= 0
+            if (node.ParentIndex >= 0 && problem.SlotsBelow[i] != 0 && choice[node.ParentIndex] >= 0
                 && problem.Options[node.ParentIndex]![choice[node.ParentIndex]] is { SlotDrops: not null } feeder)
             {
-                atInput += feeder.Steps - problem.StepsIn(feeder, problem.OwnSlots[i]); // its own voltages' drop, not the worst
+                atInput += feeder.Steps - problem.StepsIn(feeder, problem.SlotsBelow[i]); // the drop in the voltages read below, not the worst
             }
 
             var afterRun = atInput;

@@ -23,7 +23,7 @@ internal static class PlanStepDown
     public const int MaxSingleTrials = 12;
 
     /// <summary>How many rounds of steps are made, at most.</summary>
-    public const int MaxRounds = 3;
+    public const int MaxRounds = 8;
 
     /// <summary>How many steps likely to leave a far end below its trip current are tried alone in one round, at most.</summary>
     public const int MaxLikelyFailTrials = 4;

@@ -1,3 +1,4 @@
+using DistTree.Network;
 using DistTree.Solving;
 
 namespace DistTree.Sizing;
@@ -9,15 +10,42 @@ internal sealed partial class SizingProblem
     public int[] OwnSlots { get; private init; } = [];
 
     /// <summary>
-    /// The steps <paramref name="option"/>, a choice of node <paramref name="node"/>'s run, takes from the budget of
-    /// <paramref name="child"/>, a node below it: an end point fed directly from the feeder's far bus sees the feeder's drop in
-    /// its own voltages only (a single-pole circuit on line A, line A's with the neutral's), the worst of them; any other
-    /// node the feeder's worst voltage. A load's current is its nominal one by the percent sum, so each voltage's drop is
-    /// the run's own on the solver's figures (see <c>RunDrops.UnitDrops</c>).
+    /// Per node index, the voltages of its parent's bus (<see cref="Slots"/>, as bits) that the end points at or below it
+    /// read: an end point's own; a panel's, splitter's or switchboard's of the same system as its parent's bus, those of
+    /// every end point below it (no transformer between, so each voltage below is the same voltage above); every voltage
+    /// for a transformer, or equipment of another system, with end points below; 0 with none.
     /// </summary>
-    public int StepsBelow(int node, in RunOption option, int child)
+    public int[] SlotsBelow { get; private init; } = [];
+
+    /// <summary>
+    /// The steps <paramref name="option"/>, a choice of node <paramref name="node"/>'s run, takes from the budget of
+    /// <paramref name="child"/>, one of the nodes it feeds: the feeder's drop in the voltages the end points at or below
+    /// the child read (<see cref="SlotsBelow"/>), the worst of them (a single-pole circuit on line A sees line A's drop with
+    /// the neutral's); the feeder's worst voltage where it carries no drop per voltage. A load's current is its nominal one
+    /// by the percent sum, so each voltage's drop is the run's own on the solver's figures (see <c>RunDrops.UnitDrops</c>),
+    /// and along a path without a transformer an end point's total is the sum of its own voltage's drops.
+    /// </summary>
+    public int StepsBelow(int node, in RunOption option, int child) =>
+        Network.Nodes[child].ParentIndex == node ? StepsIn(option, SlotsBelow[child]) : option.Steps;
+
+    // See SlotsBelow. Bottom-up over the parent-first array: each node's children are done before it.
+    private static int[] SlotsBelowOf(IReadOnlyList<NetworkNode> nodes, int[] ownSlots)
     {
-        return Network.Nodes[child].ParentIndex == node ? StepsIn(option, OwnSlots[child]) : option.Steps;
+        const int every = (1 << Slots.Count) - 1;
+        var under = new int[nodes.Count];
+        var below = new int[nodes.Count];
+        for (var i = nodes.Count - 1; i > 0; i--)
+        {
+            var node = nodes[i];
+            var parent = node.ParentIndex;
+            below[i] = node.Circuit is not null ? (ownSlots[i] != 0 ? ownSlots[i] : every)
+                : under[i] == 0 ? 0
+                : node.Kind == NodeKind.Transformer || node.System != nodes[parent].System ? every
+                : under[i];
+            under[parent] |= below[i];
+        }
+
+        return below;
     }
 
     /// <summary>The steps of <paramref name="option"/>, a feeder's choice, in the worst of the voltages <paramref name="ownSlots"/> (its worst where none, or where it carries no drop per voltage).</summary>

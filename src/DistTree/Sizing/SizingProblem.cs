@@ -192,7 +192,13 @@ internal sealed partial class SizingProblem
             }
         }
 
-        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable) { Protection = protection, NoLoadMost = noLoadMost, OwnSlots = ownSlots };
+        var problem = new SizingProblem(solution, budget, resolution, options, transformerSteps, taps, new bool[nodes.Count], unresolvable)
+        {
+            Protection = protection,
+            NoLoadMost = noLoadMost,
+            OwnSlots = ownSlots,
+            SlotsBelow = SlotsBelowOf(nodes, ownSlots),
+        };
         problem.ExcludeUnfixableEndPoints();
         return problem;
     }
@@ -235,7 +241,7 @@ internal sealed partial class SizingProblem
         {
             var parent = nodes[i].ParentIndex;
             var above = parent < 0 ? 0 : BusSteps(parent, least[parent]);
-            if (parent >= 0 && OwnSlots[i] != 0 && Options[parent] is { } feeder && feeder[0].SlotDrops is not null)
+            if (parent >= 0 && SlotsBelow[i] != 0 && Options[parent] is { } feeder && feeder[0].SlotDrops is not null)
             {
                 above += feeder.Min(x => StepsBelow(parent, x, i)) - feeder.Min(x => x.Steps); // its own voltages' drop, not the worst
             }

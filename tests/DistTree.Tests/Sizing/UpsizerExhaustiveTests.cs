@@ -21,7 +21,15 @@ public sealed class UpsizerExhaustiveTests
     private static Arbitrary<RandomTree> Trees => Arb.From(RandomTree.Arbitrary.Generator.Where(t => t.RunCount <= 6));
 
     [Property(MaxTest = 40)]
-    public Property Plan_SmallRandomTree_IsTheLeastOfEveryCombinationOnTheSolversFigures() => Prop.ForAll(Trees, tree =>
+    public Property Plan_SmallRandomTree_IsTheLeastOfEveryCombinationOnTheSolversFigures() => Prop.ForAll(Trees, IsTheLeast);
+
+    // A tree the property above found: a sub-panel's only circuit is two-pole, on a feeder whose worst voltage is a line
+    // its single-pole neighbour loads; priced at the feeder's worst line, the plan took the feeder two sizes up (20,119
+    // mm²·m) where upsizing the two branch circuits does (4,225 mm²·m). Kept as a fixed case.
+    [Property(MaxTest = 1, Replay = "(2912396354999880899,4607662692142293721,75)")]
+    public Property Plan_SubPanelOnALighterPair_IsTheLeastOfEveryCombination() => Prop.ForAll(Trees, IsTheLeast);
+
+    private static Property IsTheLeast(RandomTree tree)
     {
         var before = SolverHarness.Solve(tree.ToYaml(lengthScale: 4, rules: "conductor_temperature: estimated"));
         var plan = Upsizer.Standard.Plan(before, MaxSteps);
@@ -32,7 +40,7 @@ public sealed class UpsizerExhaustiveTests
 
         var least = LeastBySearch(plan);
         return (Math.Abs(plan.TotalCostAdded - least) <= 1e-6 * Math.Max(1, least)).Label($"plan {plan.TotalCostAdded} against the search's {least}");
-    });
+    }
 
     // The least cost of any combination of choices whose solve has no finding the plan's proof lacks.
     private static double LeastBySearch(UpsizePlan plan)

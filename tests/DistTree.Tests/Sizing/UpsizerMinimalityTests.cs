@@ -29,12 +29,19 @@ public sealed class UpsizerMinimalityTests
     // Nor can any change step one choice down alone: to the most costly of its run's allowed choices (within its device's
     // terminals, meeting its own limits) that costs less, the tree solved again by the real solver.
     [Property(MaxTest = 25)]
-    public Property Plan_RandomTree_NoChangeCanStepDownAlone() => Prop.ForAll(Trees, tree =>
+    public Property Plan_RandomTree_NoChangeCanStepDownAlone() => Prop.ForAll(Trees, NoStepDown);
+
+    // A tree the property above found: the optimum takes a 32 m branch circuit from 10 AWG to 3/0 AWG, which comes back
+    // to 4 AWG one choice a round; three rounds left it there, where 6 AWG passes. Kept as a fixed case.
+    [Property(MaxTest = 1, Replay = "(5395973555243264340,17069000226562840589,36)")]
+    public Property Plan_LongWayDown_NoChangeCanStepDownAlone() => Prop.ForAll(Trees, NoStepDown);
+
+    private static Property NoStepDown(RandomTree tree)
     {
         var before = SolverHarness.Solve(tree.ToYaml(lengthScale: 4, rules: "conductor_temperature: estimated"));
         var steppable = SteppableDown(Upsizer.Standard.Plan(before));
         return (steppable is null).Label(steppable ?? "");
-    });
+    }
 
     public static TheoryData<string> Examples => new(
         "maple-hollow-library.yaml", "quillfeather-medical.yaml", "riverside-clinic-metric.yaml", "small-office.yaml", "campus/campus.yaml");

@@ -102,14 +102,14 @@ public sealed class UpsizerPropertyTests
             }
 
             double used = 0;
-            for (var i = e.NodeIndex; i > 0; i = nodes[i].ParentIndex)
+            for (int i = e.NodeIndex, below = -1; i > 0; below = i, i = nodes[i].ParentIndex)
             {
                 if (problem.Options[i] is { } o)
                 {
-                    // The feeder right above an end point: its drop in the end point's own voltages (on a three-phase
-                    // panel, a single-pole circuit sees its own line's), the worst of them; any other run its worst.
-                    var own = i == nodes[e.NodeIndex].ParentIndex ? problem.OwnSlots[e.NodeIndex] : 0;
-                    used += exact ? SizingProblem.DropIn(o[pick[i]], own) : problem.StepsIn(o[pick[i]], own);
+                    // A feeder: its drop in the voltages read at or below the node on the path it feeds (on a three-phase
+                    // panel, a single-pole circuit sees its own line's), the worst of them; an end point's own run its worst.
+                    var read = below >= 0 ? problem.SlotsBelow[below] : 0;
+                    used += exact ? SizingProblem.DropIn(o[pick[i]], read) : problem.StepsIn(o[pick[i]], read);
                 }
 
                 if (i != e.NodeIndex && transformerDrop.TryGetValue(i, out var t))
