@@ -47,35 +47,23 @@ public sealed class UpsizerExhaustiveTests
     {
         var left = plan.After.AllFindings.Select(f => $"{f.Code} {f.Subject}").ToHashSet(StringComparer.Ordinal);
         var problem = SizingProblem.Build(plan.Before, ConductorCatalog.Standard, MaxSteps);
-        var runs = Enumerable.Range(0, problem.Network.Nodes.Count).Where(i => problem.Options[i] is not null).ToArray();
-        var pick = new int[problem.Network.Nodes.Count];
+        var stated = plan.Before.Network.Nodes;
         var least = double.PositiveInfinity;
-        while (true)
+        foreach (var (pick, cost) in UpsizerPropertyTests.EveryCombination(problem))
         {
             // Cheaper than the least found so far: solved again to see whether it passes.
-            var cost = runs.Sum(i => problem.Options[i]![pick[i]].Cost);
             if (cost < least - 1e-9)
             {
-                var stated = plan.Before.Network.Nodes;
-                var chosen = runs.Where(i => problem.Options[i]![pick[i]] is var o && (o.Size != stated[i].Incoming!.Conductors.Size || o.Sets != stated[i].Incoming!.Conductors.Sets));
+                var chosen = Enumerable.Range(0, stated.Count).Where(i => problem.Options[i] is { } o
+                    && (o[pick[i]].Size != stated[i].Incoming!.Conductors.Size || o[pick[i]].Sets != stated[i].Incoming!.Conductors.Sets));
                 var picks = new PlanPicks(chosen.ToDictionary(i => i, i => problem.Options[i]![pick[i]]), []);
                 if (Analysis.Run(PlanPicks.Apply(plan.Before, picks)).Solution.AllFindings.All(f => left.Contains($"{f.Code} {f.Subject}")))
                 {
                     least = cost;
                 }
             }
-
-            var k = 0;
-            while (k < runs.Length && ++pick[runs[k]] == problem.Options[runs[k]]!.Length)
-            {
-                pick[runs[k]] = 0;
-                k++;
-            }
-
-            if (k == runs.Length)
-            {
-                return least;
-            }
         }
+
+        return least;
     }
 }

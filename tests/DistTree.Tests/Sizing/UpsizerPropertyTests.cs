@@ -65,18 +65,31 @@ public sealed class UpsizerPropertyTests
     // in steps; exact: true compares exact drops with limitPercent. Left-out end points are not constrained.
     private static double BruteForce(SizingProblem problem, bool exact, double limitPercent)
     {
-        var nodes = problem.Network.Nodes;
-        var runs = Enumerable.Range(0, nodes.Count).Where(i => problem.Options[i] is not null).ToArray();
-        var pick = new int[nodes.Count];
         var best = double.PositiveInfinity;
         var transformerDrop = problem.Solution.Runs.Where(r => r.Kind == global::DistTree.Solving.RunResultKind.Transformer).ToDictionary(r => r.NodeIndex, r => r.DropPercent);
-        while (true)
+        foreach (var (pick, cost) in EveryCombination(problem))
         {
             if (Feasible(problem, pick, exact, limitPercent, transformerDrop))
             {
-                best = Math.Min(best, runs.Sum(i => problem.Options[i]![pick[i]].Cost));
+                best = Math.Min(best, cost);
             }
+        }
 
+        return best;
+    }
+
+    /// <summary>
+    /// Every combination of the runs' choices, as the option index per node (one array, changed in place between
+    /// combinations), with its cost: an odometer over the runs.
+    /// </summary>
+    internal static IEnumerable<(int[] Pick, double Cost)> EveryCombination(SizingProblem problem)
+    {
+        var nodes = problem.Network.Nodes;
+        var runs = Enumerable.Range(0, nodes.Count).Where(i => problem.Options[i] is not null).ToArray();
+        var pick = new int[nodes.Count];
+        while (true)
+        {
+            yield return (pick, runs.Sum(i => problem.Options[i]![pick[i]].Cost));
             var k = 0;
             while (k < runs.Length && ++pick[runs[k]] == problem.Options[runs[k]]!.Length)
             {
@@ -86,7 +99,7 @@ public sealed class UpsizerPropertyTests
 
             if (k == runs.Length)
             {
-                return best;
+                yield break;
             }
         }
     }
