@@ -83,7 +83,9 @@ internal static class PlanStepDown
                 return null;
             }
 
-            var lower = options.Where(o => o.MeetsRunLimits && o.WithinTerminals && o.Cost < now.Cost - 1e-9).OrderByDescending(o => o.Cost).FirstOrDefault();
+            // A run no allowed choice fits (its own finding stays whatever it takes) may step among all its choices.
+            var unfit = options.All(o => !o.MeetsRunLimits);
+            var lower = options.Where(o => (o.MeetsRunLimits || unfit) && o.WithinTerminals && o.Cost < now.Cost - 1e-9).OrderByDescending(o => o.Cost).FirstOrDefault();
             if (lower.Sets == 0 || !screen.MayStep(key, now, lower.Size, lower.Sets, proof))
             {
                 return null;

@@ -168,11 +168,14 @@ public sealed class Upsizer
         })];
     }
 
-    // True when node i's run meets its own limits at its stated size and sets (so undoing its change may pass).
+    // True when node i's run meets its own limits at its stated size and sets, or no allowed choice meets them (so undoing
+    // its change may pass).
     private static bool MeetsAtStatedSize(SizingProblem problem, int i)
     {
+        // A run no allowed choice fits keeps its own finding whatever it takes: its stated size is no worse in kind.
         var present = problem.Network.Nodes[i].Incoming!.Conductors;
-        return problem.Options[i] is { } options && options.Any(o => o.MeetsRunLimits && o.Size == present.Size && o.Sets == present.Sets);
+        return problem.Options[i] is { } options
+            && (options.Any(o => o.MeetsRunLimits && o.Size == present.Size && o.Sets == present.Sets) || options.All(o => !o.MeetsRunLimits));
     }
 
     // The chosen size and sets per node, where they differ from the present ones.

@@ -72,7 +72,10 @@ public sealed class UpsizerMinimalityTests
                 continue;
             }
 
-            var lower = problem.Options[nodeOf[c.RunId]]!.Where(o => o.MeetsRunLimits && o.WithinTerminals && o.Cost < c.CostAdded - 1e-9).OrderByDescending(o => o.Cost).FirstOrDefault();
+            // A run no allowed choice fits keeps its own finding whatever it takes: any of its choices is a step.
+            var options = problem.Options[nodeOf[c.RunId]]!;
+            var unfit = options.All(o => !o.MeetsRunLimits);
+            var lower = options.Where(o => (o.MeetsRunLimits || unfit) && o.WithinTerminals && o.Cost < c.CostAdded - 1e-9).OrderByDescending(o => o.Cost).FirstOrDefault();
             if (lower.Sets == 0)
             {
                 continue;
