@@ -8,9 +8,9 @@ namespace DistTree.Sizing;
 /// at its input; a node's bus sums its children's H; a run takes the best choice
 /// H[b] = min over choices (cost + bus[b − steps]). Leaves need only a sorted sweep. The choices are then
 /// read back top-down from the service with the whole budget. Iterative over the parent-first node array.
-/// A feeder whose end points hang on its far bus is priced for them in their own voltages: its bus is kept as one sum
-/// per group of voltages, and H[b] = min over choices (cost + Σ groups bus_g[b − steps in g]) (see
-/// <see cref="SizingProblem.StepsBelow"/>); the end points further down see its worst voltage.
+/// A feeder is priced for each node it feeds in the voltages the end points at or below that node read: its bus is kept
+/// as one sum per group of voltages, and H[b] = min over choices (cost + Σ groups bus_g[b − steps in g]) (see
+/// <see cref="SizingProblem.StepsIn"/>, <see cref="SizingProblem.SlotsBelow"/>); a transformer's is priced at its worst.
 /// </summary>
 internal static class FrontierSolver
 {
@@ -278,7 +278,7 @@ internal static class FrontierSolver
         }
     }
 
-    // As BestChoice, for a feeder whose end points fed directly see its drop in their own voltages (see SizingProblem.StepsBelow):
+    // As BestChoice, for a feeder whose nodes below read its drop in some voltages only (see SizingProblem.StepsIn):
     // each group of voltages takes its own steps per choice from the budget. Groups whose steps are the same for every choice
     // share one sum (the worst's bus, where they are its), so that a balanced feeder costs what BestChoice does.
     private static double[] BestChoiceBySlot(SizingProblem problem, RunOption[] options, double[] worstBus, bool hasWorst, Dictionary<int, double[]> slotted, out short[] choice)

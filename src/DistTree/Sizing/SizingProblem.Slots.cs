@@ -3,12 +3,9 @@ using DistTree.Solving;
 
 namespace DistTree.Sizing;
 
-/// <summary>The problem's drops per voltage: what a feeder's choice takes from the budget of the end points it feeds directly.</summary>
+/// <summary>The problem's drops per voltage: what a feeder's choice takes from the budget of the nodes it feeds.</summary>
 internal sealed partial class SizingProblem
 {
-    /// <summary>Per node index, an end point's own voltages (<see cref="Slots"/>, as bits) on its panel's bus; 0 elsewhere.</summary>
-    public int[] OwnSlots { get; private init; } = [];
-
     /// <summary>
     /// Per node index, the voltages of its parent's bus (<see cref="Slots"/>, as bits) that the end points at or below it
     /// read: an end point's own; a panel's, splitter's or switchboard's of the same system as its parent's bus, those of
@@ -17,16 +14,6 @@ internal sealed partial class SizingProblem
     /// </summary>
     public int[] SlotsBelow { get; private init; } = [];
 
-    /// <summary>
-    /// The steps <paramref name="option"/>, a choice of node <paramref name="node"/>'s run, takes from the budget of
-    /// <paramref name="child"/>, one of the nodes it feeds: the feeder's drop in the voltages the end points at or below
-    /// the child read (<see cref="SlotsBelow"/>), the worst of them (a single-pole circuit on line A sees line A's drop with
-    /// the neutral's); the feeder's worst voltage where it carries no drop per voltage. A load's current is its nominal one
-    /// by the percent sum, so each voltage's drop is the run's own on the solver's figures (see <c>RunDrops.UnitDrops</c>),
-    /// and along a path without a transformer an end point's total is the sum of its own voltage's drops.
-    /// </summary>
-    public int StepsBelow(int node, in RunOption option, int child) =>
-        Network.Nodes[child].ParentIndex == node ? StepsIn(option, SlotsBelow[child]) : option.Steps;
 
     // See SlotsBelow. Bottom-up over the parent-first array: each node's children are done before it.
     private static int[] SlotsBelowOf(IReadOnlyList<NetworkNode> nodes, int[] ownSlots)
@@ -48,7 +35,14 @@ internal sealed partial class SizingProblem
         return below;
     }
 
-    /// <summary>The steps of <paramref name="option"/>, a feeder's choice, in the worst of the voltages <paramref name="ownSlots"/> (its worst where none, or where it carries no drop per voltage).</summary>
+    /// <summary>
+    /// The steps <paramref name="option"/>, a feeder's choice, takes from the budget of a node it feeds whose end points read
+    /// the voltages <paramref name="ownSlots"/> (its <see cref="SlotsBelow"/>): the feeder's drop in the worst of them (a
+    /// single-pole circuit on line A sees line A's drop with the neutral's); its worst voltage's where none is given or it
+    /// carries no drop per voltage. A load's current is its nominal one by the percent sum, so each voltage's drop is the
+    /// run's own on the solver's figures (see <c>RunDrops.UnitDrops</c>), and along a path without a transformer an end
+    /// point's total is the sum of its own voltage's drops.
+    /// </summary>
     public int StepsIn(in RunOption option, int ownSlots) =>
         option.SlotDrops is null || ownSlots == 0 ? option.Steps : Steps(DropIn(option, ownSlots), ResolutionPercent);
 

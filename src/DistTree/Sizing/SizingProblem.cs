@@ -17,7 +17,7 @@ namespace DistTree.Sizing;
 /// <param name="WithinTerminals">True when the terminals at both its ends accept the choice (its device's, and a feeder's far-end main, see <see cref="TerminalTable"/>), or it is the present one.</param>
 /// <param name="SlotDrops">
 /// A feeder's drop in each voltage of its bus (<see cref="Slots"/>), percent, where the end points it feeds directly see
-/// them (see <see cref="SizingProblem.StepsBelow"/>); <see cref="DropPercent"/> in a voltage it does not have; null elsewhere.
+/// them (see <see cref="SizingProblem.StepsIn"/>); <see cref="DropPercent"/> in a voltage it does not have; null elsewhere.
 /// </param>
 internal readonly record struct RunOption(
     ConductorSize Size, int Sets, double DropPercent, int Steps, double Cost, bool MeetsRunLimits, bool WithinTerminals = true, double[]? SlotDrops = null);
@@ -196,7 +196,6 @@ internal sealed partial class SizingProblem
         {
             Protection = protection,
             NoLoadMost = noLoadMost,
-            OwnSlots = ownSlots,
             SlotsBelow = SlotsBelowOf(nodes, ownSlots),
         };
         problem.ExcludeUnfixableEndPoints();
@@ -243,7 +242,7 @@ internal sealed partial class SizingProblem
             var above = parent < 0 ? 0 : BusSteps(parent, least[parent]);
             if (parent >= 0 && SlotsBelow[i] != 0 && Options[parent] is { } feeder && feeder[0].SlotDrops is not null)
             {
-                above += feeder.Min(x => StepsBelow(parent, x, i)) - feeder.Min(x => x.Steps); // its own voltages' drop, not the worst
+                above += feeder.Min(x => StepsIn(x, SlotsBelow[i])) - feeder.Min(x => x.Steps); // the drop in the voltages read below, not the worst
             }
 
             least[i] = above + (Options[i] is { } o ? o.Min(x => x.Steps) : 0);

@@ -12,8 +12,8 @@ namespace DistTree.Sizing;
 /// within its limits, and proves it by re-solving the tree with the plan applied. Runs never get smaller;
 /// pinned runs (<c>fixed: true</c>) keep their size; feeders may take more parallel sets up to
 /// <c>sizing: max_sets</c>. Drops are budgeted on a grid of <c>sizing: resolution_percent</c> (0.001
-/// percentage points by default), each rounded up; a feeder in the own voltages of the end points on its far bus and at its worst line
-/// for those further down (<see cref="SizingProblem.StepsBelow"/>), so the optimum is safe and least on that grid. The proof is a full solve; after it, far ends too small to trip their devices
+/// percentage points by default), each rounded up; a feeder in the voltages the end points below it read, the worst of
+/// those under each node it feeds (<see cref="SizingProblem.StepsIn"/>), so the optimum is safe and least on that grid. The proof is a full solve; after it, far ends too small to trip their devices
 /// are raised (<see cref="FarEndRepair"/>), every change steps down toward its stated choice where the solver's own figures
 /// allow (<see cref="PlanStepDown"/>), and every change the design does not need is undone (<see cref="PlanPruner"/>): the
 /// plan is then minimal on the solver's figures (no change can be undone, or stepped one allowed choice down, with the

@@ -16,7 +16,7 @@ public sealed class FarEndRepairTests
     // A 150 A feeder of 1/0 AWG copper to a 208Y/120 panel on a 10 kA, X/R 4 service (invented, demo-like data). Its breaker
     // trips without delay at the default 10 × 150 A = 1,500 A (common practice); the grounding conductor is the code's
     // minimum. Long enough, the line-to-ground fault at its far end falls below that.
-    private static string Feeder(double lengthFt, string? ground = null, string size = "1/0 AWG") => $$"""
+    internal static string Feeder(double lengthFt, string? ground = null, string size = "1/0 AWG") => $$"""
         disttree: 1
         project: { name: Far end, units: imperial }
         service: { id: SVC, system: 208Y/120, available_fault_current_ka: 10, fault_x_r: 4 }

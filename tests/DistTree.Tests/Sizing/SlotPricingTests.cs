@@ -10,7 +10,7 @@ namespace DistTree.Tests.Sizing;
 
 /// <summary>
 /// The optimiser prices a feeder, for the end points hung on its far bus, in each end point's own voltage (SizingProblem.
-/// StepsBelow). Checked against the solver's own reading of the same drop by another road: the share of that feeder in
+/// StepsIn). Checked against the solver's own reading of the same drop by another road: the share of that feeder in
 /// each such end point's total (PathShares, which reads the end point's voltage on the feeder's line and neutral
 /// currents). By the percent sum the two must agree for an end point on one voltage (a line to neutral, or one pair), and
 /// the price must be at least the share for one on three pairs (the worst of them).
@@ -56,7 +56,7 @@ public sealed class SlotPricingTests
                 continue;
             }
 
-            var own = problem.OwnSlots[e.NodeIndex];
+            var own = problem.SlotsBelow[e.NodeIndex];
             var price = SizingProblem.DropIn(present[0], own);
             var share = e.RunSharesPercent[at];
             var single = (own & (own - 1)) == 0;

@@ -22,14 +22,14 @@ public sealed class UpsizerLightLoadTests
     }
 
     // T1 (480Y/277 → 208Y/120, stated tap and range given) feeding T2 (208Y/120 → 120/240) feeding a small panel. Invented.
-    private static string Series(string t1Keys, string limit = "5") => $$"""
+    internal static string Series(string t1Keys, string limit = "5", string t2Keys = "tap_percent: 0") => $$"""
         disttree: 1
         project: { name: Series, units: imperial }
         sizing: { light_load_rise_percent: {{limit}} }
         service: { id: SVC, system: 480Y/277 }
         equipment:
           - { id: T1, kind: transformer, from: SVC, kva: 75, secondary: 208Y/120, impedance_percent: 4, x_r: 2, {{t1Keys}}, feeder: { length: 20, size: 1 AWG, ocpd: 100 } }
-          - { id: T2, kind: transformer, from: T1, kva: 25, secondary: 120/240, impedance_percent: 4, x_r: 2, feeder: { length: 20, size: 2 AWG, ocpd: 100 } }
+          - { id: T2, kind: transformer, from: T1, kva: 25, secondary: 120/240, impedance_percent: 4, x_r: 2, {{t2Keys}}, feeder: { length: 20, size: 2 AWG, ocpd: 100 } }
           - id: P
             kind: panelboard
             from: T2
@@ -134,7 +134,7 @@ public sealed class UpsizerLightLoadTests
     [Fact]
     public void Plan_StatedTapsInSeriesOverTheLimit_CautionOnTheLowerNamesTheTapsAbove()
     {
-        var yaml = Series("tap_percent: -2.5, tap_range_percent: 0").Replace("kva: 25,", "kva: 25, tap_percent: -2.5,", StringComparison.Ordinal);
+        var yaml = Series("tap_percent: -2.5, tap_range_percent: 0", t2Keys: "tap_percent: -2.5");
         var caution = Assert.Single(Upsizer.Standard.Plan(SolverHarness.Solve(yaml)).Cautions);
         Assert.Equal("T2", caution.Subject);
         Assert.StartsWith("transformer T2: at its stated tap_percent -2.5 and the taps above it, its secondary stands 5.19 % above nominal", caution.Message, StringComparison.Ordinal);

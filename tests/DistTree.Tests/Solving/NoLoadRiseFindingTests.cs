@@ -1,4 +1,5 @@
 using DistTree.Solving;
+using DistTree.Tests.Sizing;
 
 namespace DistTree.Tests.Solving;
 
@@ -10,22 +11,9 @@ namespace DistTree.Tests.Solving;
 /// </summary>
 public sealed class NoLoadRiseFindingTests
 {
-    // T1 (480Y/277 → 208Y/120) feeding T2 (208Y/120 → 120/240) feeding a small panel, both taps stated. Invented.
-    private static string Series(double t1Tap, double t2Tap, string sizing = "") => FormattableString.Invariant($$"""
-        disttree: 1
-        project: { name: Series, units: imperial }
-        {{sizing}}
-        service: { id: SVC, system: 480Y/277 }
-        equipment:
-          - { id: T1, kind: transformer, from: SVC, kva: 75, secondary: 208Y/120, impedance_percent: 4, x_r: 2, tap_percent: {{t1Tap}}, tap_range_percent: 5, feeder: { length: 20, size: 1 AWG, ocpd: 100 } }
-          - { id: T2, kind: transformer, from: T1, kva: 25, secondary: 120/240, impedance_percent: 4, x_r: 2, tap_percent: {{t2Tap}}, tap_range_percent: 5, feeder: { length: 20, size: 2 AWG, ocpd: 100 } }
-          - id: P
-            kind: panelboard
-            from: T2
-            feeder: { length: 10, size: 1/0 AWG, ocpd: 100 }
-            circuits:
-              - { id: "1", poles: 1, ocpd: 20, load: { amps: 12 }, run: { length: 50, size: 12 AWG } }
-        """);
+    // The two transformers in series of the light-load tests (UpsizerLightLoadTests), both taps stated. Invented.
+    private static string Series(double t1Tap, double t2Tap, string limit = "5") => UpsizerLightLoadTests.Series(
+        FormattableString.Invariant($"tap_percent: {t1Tap}, tap_range_percent: 5"), limit, FormattableString.Invariant($"tap_percent: {t2Tap}, tap_range_percent: 5"));
 
     private static List<Finding> RiseFindings(string yaml) => [.. SolverHarness.Solve(yaml).AllFindings.Where(f => f.Kind == FindingKind.NoLoadRise)];
 
@@ -51,9 +39,9 @@ public sealed class NoLoadRiseFindingTests
     }
 
     [Theory]
-    [InlineData(-2.5, 0, "")] // 2.564 %
-    [InlineData(2.5, -5, "")] // a lowering tap above: 100/102.5 × 100/95 − 1 = 2.696 %
-    [InlineData(-5, 0, "sizing: { light_load_rise_percent: 6 }")] // 5.263 % against 6 %
-    public void Analyze_WithinTheLimit_NoFinding(double t1Tap, double t2Tap, string sizing) =>
-        Assert.Empty(RiseFindings(Series(t1Tap, t2Tap, sizing)));
+    [InlineData(-2.5, 0, "5")] // 2.564 %
+    [InlineData(2.5, -5, "5")] // a lowering tap above: 100/102.5 × 100/95 − 1 = 2.696 %
+    [InlineData(-5, 0, "6")] // 5.263 % against 6 %
+    public void Analyze_WithinTheLimit_NoFinding(double t1Tap, double t2Tap, string limit) =>
+        Assert.Empty(RiseFindings(Series(t1Tap, t2Tap, limit)));
 }

@@ -30,7 +30,7 @@ internal sealed class RunDrops
     private readonly double[]? _motors;
     private readonly RunRows _runs;
     private readonly bool _findingsWithRuns;
-    private readonly double[] _noLoad;
+    private readonly double[]? _noLoad; // null where no stated tap raises (every bus at nominal at no load)
     private readonly double _riseLimitPercent;
     private int _findings;
 
@@ -50,7 +50,7 @@ internal sealed class RunDrops
         _phases = phases;
         _runs = runs;
         _findingsWithRuns = _rules.Method == SolutionMethod.PercentSum;
-        _noLoad = NoLoadRise.Stated(network);
+        _noLoad = _nodes.Any(n => n.Equipment?.Transformer is { TapPercent: < 0 }) ? NoLoadRise.Stated(network) : null;
         _riseLimitPercent = network.Project.Sizing.LightLoadRisePercent;
     }
 
@@ -174,7 +174,7 @@ internal sealed class RunDrops
             if (node.Equipment?.Transformer is { } transformer)
             {
                 var r = transformerRow[i];
-                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, _code, _noLoad[i], _riseLimitPercent))?.Count ?? 0;
+                found += (findings[r] = TransformerRegulation.Solve(ref rows[r], node, transformer, power[i], _phases, _code, _noLoad?[i] ?? 1.0, _riseLimitPercent))?.Count ?? 0;
             }
         }
 

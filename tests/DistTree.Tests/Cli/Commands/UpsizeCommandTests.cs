@@ -1,4 +1,5 @@
 using System.Text.Json;
+using DistTree.Tests.Sizing;
 
 namespace DistTree.Tests.Cli.Commands;
 
@@ -65,18 +66,7 @@ public sealed class UpsizeCommandTests
     {
         using var folder = new TempFolder();
         var project = folder.File("ground.yaml");
-        File.WriteAllText(project, """
-            disttree: 1
-            project: { name: Far end, units: imperial }
-            service: { id: SVC, system: 208Y/120, available_fault_current_ka: 10, fault_x_r: 4 }
-            equipment:
-              - id: P
-                kind: panelboard
-                from: SVC
-                feeder: { length: 220, size: 1/0 AWG, ocpd: 150 }
-                circuits:
-                  - { id: "1", poles: 3, ocpd: 100, load: { amps: 80 }, run: { length: 10, size: 3 AWG } }
-            """);
+        File.WriteAllText(project, FarEndRepairTests.Feeder(220));
         var result = CliRunner.Run("upsize", project, "--apply", folder.File("fixed.yaml"), "--json", folder.File("plan.json"));
         Assert.Equal(0, result.ExitCode);
         using var doc = JsonDocument.Parse(File.ReadAllText(folder.File("plan.json")));
